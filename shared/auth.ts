@@ -1,0 +1,74 @@
+import { z } from 'zod';
+
+/**
+ * Account schemas shared by the sign-up/sign-in forms and the server's
+ * validate() middleware. Imports only zod.
+ *
+ * Example: signInSchema.parse({ email: ' Ada@Example.org ', password: 'x' })
+ *   → { email: 'ada@example.org', password: 'x' }
+ */
+
+/** Shortest password accepted at sign-up, in characters. */
+export const passwordMinLength = 10;
+/** Longest password accepted, in characters (bounds hashing cost). */
+export const passwordMaxLength = 200;
+/** Longest display name, in characters. */
+export const nameMaxLength = 80;
+/** Longest e-mail address, in characters (RFC 5321 path limit). */
+export const emailMaxLength = 254;
+
+/** E-mail: trimmed, lower-cased, valid, at most 254 characters. */
+export const emailSchema = z
+  .string({ required_error: 'Enter your e-mail address', invalid_type_error: 'Enter your e-mail address' })
+  .trim()
+  .toLowerCase()
+  .min(1, 'Enter your e-mail address')
+  .max(emailMaxLength, `E-mail address must be at most ${emailMaxLength} characters`)
+  .email('Enter a valid e-mail address');
+
+/** New account: name 1–80 characters, e-mail, password 10+ characters. */
+export const signUpSchema = z.object({
+  name: z
+    .string({ required_error: 'Enter your name', invalid_type_error: 'Enter your name' })
+    .trim()
+    .min(1, 'Enter your name')
+    .max(nameMaxLength, `Name must be at most ${nameMaxLength} characters`),
+  email: emailSchema,
+  password: z
+    .string({ required_error: 'Enter a password', invalid_type_error: 'Enter a password' })
+    .min(passwordMinLength, `Password must be at least ${passwordMinLength} characters`)
+    .max(passwordMaxLength, `Password must be at most ${passwordMaxLength} characters`),
+});
+
+/** Sign-in: e-mail and any non-empty password (length rules apply at sign-up only). */
+export const signInSchema = z.object({
+  email: emailSchema,
+  password: z
+    .string({ required_error: 'Enter your password', invalid_type_error: 'Enter your password' })
+    .min(1, 'Enter your password')
+    .max(passwordMaxLength, `Password must be at most ${passwordMaxLength} characters`),
+});
+
+/** Account roles: archer owns bows, tech reads shared bows, admin runs the service. */
+export const roleSchema = z.enum(['archer', 'tech', 'admin']);
+/** Preferred distance unit: yards or metres. */
+export const distanceUnitSchema = z.enum(['yd', 'm']);
+/** Preferred length unit: millimetres or inches. */
+export const lengthUnitSchema = z.enum(['mm', 'in']);
+
+/** The signed-in user as the API returns it (never the password hash). */
+export const userSchema = z.object({
+  id: z.number().int().positive(),
+  name: z.string(),
+  email: z.string(),
+  role: roleSchema,
+  distanceUnit: distanceUnitSchema,
+  lengthUnit: lengthUnitSchema,
+});
+
+export type SignUpInput = z.infer<typeof signUpSchema>;
+export type SignInInput = z.infer<typeof signInSchema>;
+export type User = z.infer<typeof userSchema>;
+export type Role = z.infer<typeof roleSchema>;
+export type DistanceUnit = z.infer<typeof distanceUnitSchema>;
+export type LengthUnit = z.infer<typeof lengthUnitSchema>;
