@@ -1,0 +1,18 @@
+import { Router } from 'express';
+import { accountSearchSchema, accountUpdateSchema, idParamSchema } from '@/shared/admin';
+import { validate } from '@/server/middleware/validate';
+import { currentUser, requireRole, requireUser } from '@/server/middleware/auth';
+import * as accounts from '@/server/services/account-service';
+
+export function adminRoutes() {
+  const router = Router();
+  router.use(requireUser, requireRole('admin'));
+  router.get('/accounts', validate({ query: accountSearchSchema }), async (req, res) => {
+    res.json(await accounts.listAccounts(req.query as never));
+  });
+  router.patch('/accounts/:id', validate({ params: idParamSchema, body: accountUpdateSchema }), async (req, res) => {
+    const { id } = req.params as unknown as { id: number };
+    res.json({ account: await accounts.updateAccount(currentUser(req), id, req.body) });
+  });
+  return router;
+}

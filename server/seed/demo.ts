@@ -1,0 +1,33 @@
+/**
+ * The invented demo scenario (people, places and bows are made up). Safe to
+ * run on every start: it only adds what is missing.
+ */
+import { User } from '@/server/models';
+import { hashPassword } from '@/server/services/auth-service';
+
+export const demoAccounts = [
+  { role: 'archer', name: 'Marit Oakhollow', email: 'marit@demo.pinwright.test', password: 'pinwright-archer' },
+  { role: 'tech', name: 'Desmond Tull (Kettle Creek bow bench)', email: 'desmond@demo.pinwright.test', password: 'pinwright-tech-01' },
+  { role: 'admin', name: 'Pinwright Admin', email: 'admin@demo.pinwright.test', password: 'pinwright-admin-01' },
+] as const;
+
+/** Extra seeding steps registered by features (bows, checks, …); each must be idempotent. */
+export type SeedStep = (accounts: Record<(typeof demoAccounts)[number]['role'], User>) => Promise<void>;
+export const seedSteps: SeedStep[] = [];
+
+export async function seedDemo(): Promise<void> {
+  const accounts = {} as Record<(typeof demoAccounts)[number]['role'], User>;
+  for (const account of demoAccounts) {
+    let user = await User.findOne({ where: { email: account.email } });
+    if (!user) {
+      user = await User.create({
+        name: account.name,
+        email: account.email,
+        role: account.role,
+        passwordHash: await hashPassword(account.password),
+      });
+    }
+    accounts[account.role] = user;
+  }
+  for (const step of seedSteps) await step(accounts);
+}
