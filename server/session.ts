@@ -19,11 +19,11 @@ export function createSessionMiddleware(sequelize: Sequelize, { expiryTimer = tr
     expiration: maxAgeMs,
     // Sweep expired rows hourly; tests turn the timer off.
     checkExpirationInterval: expiryTimer ? 3600 * 1000 : 0,
-    extendDefaultFields: (defaults: Record<string, unknown>, data: { userId?: number }) => ({
+    extendDefaultFields: (defaults: { data: string; expires: Date }, data: { userId?: number }) => ({
       ...defaults,
       userId: data.userId ?? null,
     }),
-  } as ConstructorParameters<typeof SequelizeStore>[0]);
+  } as ConstructorParameters<typeof SequelizeStore>[0] & { disableTouch: boolean });
   if (!config.session.secret) throw new Error('SESSION_SECRET must be set in production');
   const middleware = session({
     name: 'pinwright.sid',
