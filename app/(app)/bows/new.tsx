@@ -1,0 +1,5 @@
+import { NewBowScreen } from '@/components/bows/new-bow-screen';
+
+export default function NewBow() {
+  return <NewBowScreen />;
+}

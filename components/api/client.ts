@@ -1,0 +1,107 @@
+import type { ZodType, ZodTypeDef } from 'zod';
+
+import { ApiError } from '@/components/api/api-error';
+
+export { ApiError, isApiError } from '@/components/api/api-error';
+
+export type ApiMethod = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+
+export interface ApiFetchOptions<T> {
+  method?: ApiMethod;
+  /** Sent as JSON. */
+  body?: unknown;
+  /** When given, the response body is parsed with it (a mismatch throws ApiError "bad_response"). */
+  schema?: ZodType<T, ZodTypeDef, unknown>;
+  signal?: AbortSignal;
+}
+
+/** Header the server requires on every state-changing request (its CSRF defence). */
+export const csrfHeader = 'X-Pinwright-Csrf';
+
+const statusCodes: Record<number, string> = {
+  400: 'validation_failed',
+  401: 'unauthorized',
+  403: 'forbidden',
+  404: 'not_found',
+  409: 'conflict',
+  429: 'rate_limited',
+};
+
+const statusMessages: Record<string, string> = {
+  validation_failed: 'Some of what you entered needs another look.',
+  unauthorized: 'Please sign in.',
+  forbidden: 'You do not have access to that.',
+  not_found: 'That was not found.',
+  conflict: 'That clashes with something already saved.',
+  rate_limited: 'Too many tries. Wait a minute, then try again.',
+  server_error: 'Something went wrong on our side. Try again in a moment.',
+};
+
+function stringRecord(value: unknown): Record<string, string> {
+  if (!value || typeof value !== 'object') return {};
+  const out: Record<string, string> = {};
+  for (const [key, message] of Object.entries(value)) {
+    if (typeof message === 'string') out[key] = message;
+  }
+  return out;
+}
+
+/** Builds an ApiError from a failed response's status and (maybe) JSON body. */
+function errorFrom(status: number, payload: unknown): ApiError {
+  const error = (payload as { error?: { code?: unknown; message?: unknown; fields?: unknown } } | null)?.error;
+  const code =
+    typeof error?.code === 'string' ? error.code : (statusCodes[status] ?? (status >= 500 ? 'server_error' : 'error'));
+  const message =
+    typeof error?.message === 'string' && error.message
+      ? error.message
+      : (statusMessages[code] ?? `The request failed (HTTP ${status}).`);
+  return new ApiError(status, code, message, stringRecord(error?.fields));
+}
+
+/**
+ * The one way the web client talks to the API: JSON in and out, same-origin
+ * cookies, the CSRF header on every non-GET request, and an ApiError on any
+ * failure. A 204 resolves to undefined.
+ *
+ * Example: `await apiFetch('/api/auth/sign-in', { method: 'POST', body: { email, password } })`
+ *   → `{ user: {...} }`, or throws ApiError(401, 'unauthorized', 'E-mail or password is wrong')
+ */
+export async function apiFetch<T = unknown>(path: string, options: ApiFetchOptions<T> = {}): Promise<T> {
+  const method = options.method ?? 'GET';
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (method !== 'GET') headers[csrfHeader] = '1';
+
+  let res: Response;
+  try {
+    res = await fetch(path, {
+      method,
+      headers,
+      credentials: 'same-origin',
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      signal: options.signal,
+    });
+  } catch (cause) {
+    if ((cause as { name?: string } | null)?.name === 'AbortError') throw cause;
+    throw new ApiError(0, 'network', 'Cannot reach Pinwright. Check your connection and try again.');
+  }
+
+  const isJson = (res.headers.get('content-type') ?? '').includes('json');
+  let payload: unknown = undefined;
+  if (res.status !== 204 && isJson) {
+    try {
+      payload = await res.json();
+    } catch {
+      payload = undefined;
+    }
+  }
+
+  if (!res.ok) throw errorFrom(res.status, payload);
+  if (res.status === 204) return undefined as T;
+  if (!isJson) throw new ApiError(res.status, 'bad_response', 'The server sent an answer we could not read.');
+  if (!options.schema) return payload as T;
+
+  const parsed = options.schema.safeParse(payload);
+  if (!parsed.success) throw new ApiError(res.status, 'bad_response', 'The server sent an answer we could not read.');
+  return parsed.data;
+}

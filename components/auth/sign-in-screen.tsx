@@ -1,0 +1,27 @@
+import { Stack } from 'expo-router';
+
+import { AuthFrame } from '@/components/auth/auth-frame';
+import { SignInForm } from '@/components/auth/sign-in-form';
+import { TextLink } from '@/components/ui/text-link';
+import { screenTitle } from '@/components/ui/screen-title';
+
+/** The sign-in page. Once signed in, the (auth) layout sends the archer to the Bench. */
+export function SignInScreen() {
+  return (
+    <>
+      <Stack.Screen options={{ title: screenTitle('Sign in') }} />
+      <AuthFrame
+        title="Sign in"
+        lead="Welcome back to your bench."
+        footer={
+          <>
+            <TextLink href="/sign-up" label="New here? Create an account" />
+            <TextLink href="/try" label="Try a tape without an account" />
+          </>
+        }
+      >
+        <SignInForm />
+      </AuthFrame>
+    </>
+  );
+}

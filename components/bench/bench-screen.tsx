@@ -1,0 +1,83 @@
+import { Stack } from 'expo-router';
+import { StyleSheet, View } from 'react-native';
+
+import { useBows } from '@/components/bench/api';
+import { BenchArt } from '@/components/bench/bench-art';
+import { BowCard } from '@/components/bench/bow-card';
+import { Button } from '@/components/ui/button';
+import { EmptyState } from '@/components/ui/empty-state';
+import { ErrorView } from '@/components/ui/error-view';
+import { PlusIcon } from '@/components/ui/icons';
+import { LoadingView } from '@/components/ui/loading-view';
+import { Screen } from '@/components/ui/screen';
+import { screenTitle } from '@/components/ui/screen-title';
+import { SectionHeading } from '@/components/ui/section-heading';
+import { useWide } from '@/components/ui/use-wide';
+import { space } from '@/components/theme';
+
+const title = <Stack.Screen options={{ title: screenTitle('Bench') }} />;
+
+/** The home: the archer's bows with their readiness, or the first step when there are none. */
+export function BenchScreen() {
+  const bows = useBows();
+  const wide = useWide();
+
+  if (bows.isPending) {
+    return (
+      <>
+        {title}
+        <LoadingView label="Loading your bench…" />
+      </>
+    );
+  }
+  if (bows.isError) {
+    return (
+      <>
+        {title}
+        <ErrorView
+          title="Your bench could not be loaded"
+          error={bows.error}
+          onRetry={() => bows.refetch()}
+          retrying={bows.isFetching}
+        />
+      </>
+    );
+  }
+
+  const list = bows.data;
+  return (
+    <Screen>
+      {title}
+      <SectionHeading
+        level={1}
+        title="Bench"
+        description={list.length ? 'Your bows and whether each is ready to shoot.' : undefined}
+        action={list.length ? <Button label="Add a bow" icon={PlusIcon} variant="secondary" href="/bows/new" /> : null}
+      />
+      {list.length === 0 ? (
+        <EmptyState
+          testID="bench-empty"
+          art={<BenchArt />}
+          title="No bows on your bench yet"
+          message="Add a bow with its draw, sight and peep measurements. Then record an arrow build and sight in a few distances to fit a tape."
+          action={<Button label="Add your first bow" icon={PlusIcon} href="/bows/new" />}
+        />
+      ) : (
+        <View style={[styles.grid, wide && styles.gridWide]}>
+          {list.map((bow) => (
+            <View key={bow.id} style={wide ? styles.cellWide : styles.cell}>
+              <BowCard bow={bow} />
+            </View>
+          ))}
+        </View>
+      )}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  grid: { gap: space.md },
+  gridWide: { flexDirection: 'row', flexWrap: 'wrap' },
+  cell: { alignSelf: 'stretch' },
+  cellWide: { flexBasis: '48%', flexGrow: 1 },
+});

@@ -1,0 +1,74 @@
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { useFonts } from 'expo-font';
+import { ThemeProvider, type Theme as NavigationTheme, DefaultTheme } from 'expo-router';
+import { useState, type ReactNode } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { isApiError } from '@/components/api/client';
+import { colors, fonts } from '@/components/theme';
+
+const fontFiles = {
+  AtkinsonHyperlegible_400Regular: require('@/assets/fonts/AtkinsonHyperlegible_400Regular.ttf'),
+  AtkinsonHyperlegible_700Bold: require('@/assets/fonts/AtkinsonHyperlegible_700Bold.ttf'),
+  BarlowCondensed_500Medium: require('@/assets/fonts/BarlowCondensed_500Medium.ttf'),
+  BarlowCondensed_600SemiBold: require('@/assets/fonts/BarlowCondensed_600SemiBold.ttf'),
+};
+
+const navigationTheme: NavigationTheme = {
+  ...DefaultTheme,
+  colors: {
+    ...DefaultTheme.colors,
+    primary: colors.signal,
+    background: colors.paper,
+    card: colors.surface,
+    text: colors.ink,
+    border: colors.line,
+    notification: colors.signal,
+  },
+  fonts: {
+    regular: { fontFamily: fonts.body, fontWeight: 'normal' },
+    medium: { fontFamily: fonts.body, fontWeight: 'normal' },
+    bold: { fontFamily: fonts.bold, fontWeight: 'normal' },
+    heavy: { fontFamily: fonts.bold, fontWeight: 'normal' },
+  },
+};
+
+/** Retry network and server failures twice; never retry a 4xx (it will fail the same way). */
+function shouldRetry(failureCount: number, error: unknown): boolean {
+  if (isApiError(error) && error.status >= 400 && error.status < 500) return false;
+  if (isApiError(error) && error.code === 'bad_response') return false;
+  return failureCount < 2;
+}
+
+/** Builds the app's QueryClient (exported for tests that need the same defaults). */
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    defaultOptions: {
+      queries: { retry: shouldRetry, staleTime: 30_000, refetchOnWindowFocus: false },
+      mutations: { retry: false },
+    },
+  });
+}
+
+/**
+ * Everything the app needs above the router's screens: one QueryClient, the
+ * fonts, and the navigation theme in Pinwright's colours. Renders a plain
+ * paper-coloured view until the fonts are ready (or have failed: then the
+ * CSS fallback faces are used).
+ */
+export function Providers({ children }: { children: ReactNode }) {
+  const [queryClient] = useState(createQueryClient);
+  const [fontsLoaded, fontError] = useFonts(fontFiles);
+
+  return (
+    <QueryClientProvider client={queryClient}>
+      <ThemeProvider value={navigationTheme}>
+        <View style={styles.root}>{fontsLoaded || fontError ? children : null}</View>
+      </ThemeProvider>
+    </QueryClientProvider>
+  );
+}
+
+const styles = StyleSheet.create({
+  root: { flex: 1, backgroundColor: colors.paper },
+});
