@@ -1,0 +1,94 @@
+import { z } from 'zod';
+import { distanceUnitSchema, measureSchema, textSchema, timestampsSchema } from './common';
+
+/**
+ * Tape schemas: a saved print layout for a session's fit, and the query options
+ * of the tape/sheet downloads. A printed tape is an estimate until every
+ * distance you will shoot has been confirmed at the range.
+ *
+ * Example: tapeLayoutSchema.parse({ fromDistance: 20, toDistance: 80 })
+ *   → { fromDistance: 20, toDistance: 80, step: 1, unit: 'yd', orientation: 'down',
+ *       widthMm: 8, mirror: false, paper: 'letter', label: '' }
+ */
+
+/** Longest span of ticks on one tape, in distance units. */
+export const maxTapeSpan = 150;
+
+/** Which way the numbers run along the printed tape: growing downward or upward. */
+export const tapeOrientationSchema = z.enum(['down', 'up'], {
+  errorMap: () => ({ message: 'Choose whether the numbers run down or up the tape' }),
+});
+/** Paper size of the print sheet. */
+export const paperSchema = z.enum(['a4', 'letter'], { errorMap: () => ({ message: 'Choose A4 or Letter paper' }) });
+
+const layoutFields = z.object({
+  fromDistance: measureSchema('From distance', '', 1, 150),
+  toDistance: measureSchema('To distance', '', 1, 150),
+  /** Distance between ticks, in `unit`. */
+  step: measureSchema('Tick step', '', 1, 10).int('Tick step must be a whole number').default(1),
+  unit: distanceUnitSchema.default('yd'),
+  orientation: tapeOrientationSchema.default('down'),
+  widthMm: measureSchema('Tape width', 'mm', 3, 40).default(8),
+  mirror: z.boolean({ invalid_type_error: 'Mirror must be true or false' }).default(false),
+  paper: paperSchema.default('letter'),
+  label: textSchema('Label', 60),
+});
+
+type LayoutFields = z.infer<typeof layoutFields>;
+
+function checkRange(value: Partial<LayoutFields>, ctx: z.RefinementCtx) {
+  if (value.fromDistance === undefined || value.toDistance === undefined) return;
+  if (value.toDistance <= value.fromDistance) {
+    ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['toDistance'], message: 'To distance must be beyond the from distance' });
+  }
+}
+
+/** Body of POST /api/sessions/:sessionId/tapes (and the layout part of the try routes). */
+export const tapeLayoutSchema = layoutFields.superRefine(checkRange);
+/** Body of PATCH /api/tapes/:id: any subset; the server re-checks the merged layout. */
+export const tapeUpdateSchema = layoutFields.partial().superRefine(checkRange);
+
+/** A saved tape as the API returns it. */
+export const tapeSchema = layoutFields
+  .extend({ id: z.number().int(), sessionId: z.number().int(), bowId: z.number().int() })
+  .merge(timestampsSchema);
+
+const queryNumber = (schema: z.ZodNumber) =>
+  z.preprocess((raw) => (raw === '' || raw === undefined ? undefined : Number(raw)), schema.optional());
+const queryBoolean = z.preprocess(
+  (raw) => (raw === undefined || raw === '' ? undefined : raw === 'true' || raw === '1' ? true : raw === 'false' || raw === '0' ? false : raw),
+  z.boolean({ invalid_type_error: 'Mirror must be true or false' }).optional(),
+);
+
+/**
+ * Query of GET /api/sessions/:id/tape.svg, sheet.svg and sheet.pdf: either
+ * `tape=<saved tape id>` or any layout options (the rest default from the fit:
+ * the sighted range, 1 yd steps, the bow's tape width).
+ * Example: ?from=20&to=80&unit=yd&orientation=up&mirror=1
+ */
+export const tapeQuerySchema = z
+  .object({
+    tape: queryNumber(z.number({ invalid_type_error: 'The tape id must be a number' }).int('The tape id must be a whole number').positive('The tape id must be a positive number')),
+    from: queryNumber(measureSchema('From distance', '', 1, 150)),
+    to: queryNumber(measureSchema('To distance', '', 1, 150)),
+    step: queryNumber(measureSchema('Tick step', '', 1, 10).int('Tick step must be a whole number')),
+    unit: distanceUnitSchema.optional(),
+    orientation: tapeOrientationSchema.optional(),
+    width: queryNumber(measureSchema('Tape width', 'mm', 3, 40)),
+    mirror: queryBoolean,
+    paper: paperSchema.optional(),
+    label: z.string().trim().max(60, 'Label must be at most 60 characters').optional(),
+  })
+  .superRefine((value, ctx) => {
+    if (value.from !== undefined && value.to !== undefined && value.to <= value.from) {
+      ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['to'], message: 'To distance must be beyond the from distance' });
+    }
+  });
+
+export type TapeOrientation = z.infer<typeof tapeOrientationSchema>;
+export type Paper = z.infer<typeof paperSchema>;
+export type TapeLayout = z.infer<typeof tapeLayoutSchema>;
+export type TapeLayoutFormValues = z.input<typeof tapeLayoutSchema>;
+export type TapeUpdate = z.infer<typeof tapeUpdateSchema>;
+export type Tape = z.infer<typeof tapeSchema>;
+export type TapeQuery = z.infer<typeof tapeQuerySchema>;
