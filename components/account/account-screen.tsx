@@ -1,4 +1,3 @@
-import { Stack } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { AccountDetails } from '@/components/account/account-details';
@@ -9,7 +8,7 @@ import { Card } from '@/components/ui/card';
 import { SignOutIcon } from '@/components/ui/icons';
 import { LoadingView } from '@/components/ui/loading-view';
 import { Screen } from '@/components/ui/screen';
-import { screenTitle } from '@/components/ui/screen-title';
+import { ScreenTitle } from '@/components/ui/screen-title';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { space } from '@/components/theme';
 
@@ -23,7 +22,7 @@ export function AccountScreen() {
 
   return (
     <Screen>
-      <Stack.Screen options={{ title: screenTitle('Account') }} />
+      <ScreenTitle name="Account" />
       <SectionHeading level={1} title="Account" description="Who is signed in on this device." />
       <Card>
         <AccountDetails user={me.data} />

@@ -1,15 +1,14 @@
-import { Stack } from 'expo-router';
 
 import { AuthFrame } from '@/components/auth/auth-frame';
 import { SignInForm } from '@/components/auth/sign-in-form';
 import { TextLink } from '@/components/ui/text-link';
-import { screenTitle } from '@/components/ui/screen-title';
+import { ScreenTitle } from '@/components/ui/screen-title';
 
 /** The sign-in page. Once signed in, the (auth) layout sends the archer to the Bench. */
 export function SignInScreen() {
   return (
     <>
-      <Stack.Screen options={{ title: screenTitle('Sign in') }} />
+      <ScreenTitle name="Sign in" />
       <AuthFrame
         title="Sign in"
         lead="Welcome back to your bench."

@@ -1,4 +1,3 @@
-import { Stack } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 
 import { useBows } from '@/components/bench/api';
@@ -10,12 +9,12 @@ import { ErrorView } from '@/components/ui/error-view';
 import { PlusIcon } from '@/components/ui/icons';
 import { LoadingView } from '@/components/ui/loading-view';
 import { Screen } from '@/components/ui/screen';
-import { screenTitle } from '@/components/ui/screen-title';
+import { ScreenTitle } from '@/components/ui/screen-title';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { useWide } from '@/components/ui/use-wide';
 import { space } from '@/components/theme';
 
-const title = <Stack.Screen options={{ title: screenTitle('Bench') }} />;
+const title = <ScreenTitle name="Bench" />;
 
 /** The home: the archer's bows with their readiness, or the first step when there are none. */
 export function BenchScreen() {

@@ -1,10 +1,11 @@
-import { Link, usePathname } from 'expo-router';
+import { usePathname } from 'expo-router';
 import type { ReactNode } from 'react';
-import { Pressable, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
 import { navItems, type NavItem } from '@/components/shell/nav-items';
 import { Wordmark } from '@/components/shell/wordmark';
+import { LinkPressable, type PressState } from '@/components/ui/link-pressable';
 import { Text } from '@/components/ui/text';
 import { useWide } from '@/components/ui/use-wide';
 import { borders, colors, layout, space } from '@/components/theme';
@@ -17,51 +18,45 @@ export interface AppShellProps {
 
 const roleWords: Record<User['role'], string> = { archer: 'Archer', tech: 'Technician', admin: 'Administrator' };
 
-type PressState = { pressed: boolean; hovered?: boolean; focused?: boolean };
-
 function RailLink({ item, active }: { item: NavItem; active: boolean }) {
   const Icon = item.icon;
   return (
-    <Link href={item.href} asChild>
-      <Pressable
-        role="link"
-        aria-current={active ? 'page' : undefined}
-        style={({ pressed, hovered, focused }: PressState) => [
-          styles.railLink,
-          (active || pressed || hovered) && styles.railLinkActive,
-          focused && styles.focused,
-        ]}
-      >
-        <View style={[styles.railIndicator, active && styles.railIndicatorActive]} />
-        <Icon size={24} color={active ? colors.onSlate : colors.onSlateMuted} />
-        <Text variant="label" tone={active ? 'onSlate' : 'onSlateMuted'}>
-          {item.label}
-        </Text>
-      </Pressable>
-    </Link>
+    <LinkPressable
+      href={item.href}
+      aria-current={active ? 'page' : undefined}
+      style={({ pressed, hovered, focused }: PressState) => [
+        styles.railLink,
+        (active || pressed || hovered) && styles.railLinkActive,
+        focused && styles.focused,
+      ]}
+    >
+      <View style={[styles.railIndicator, active && styles.railIndicatorActive]} />
+      <Icon size={24} color={active ? colors.onSlate : colors.onSlateMuted} />
+      <Text variant="label" tone={active ? 'onSlate' : 'onSlateMuted'}>
+        {item.label}
+      </Text>
+    </LinkPressable>
   );
 }
 
 function TabLink({ item, active }: { item: NavItem; active: boolean }) {
   const Icon = item.icon;
   return (
-    <Link href={item.href} asChild>
-      <Pressable
-        role="link"
-        aria-current={active ? 'page' : undefined}
-        style={({ pressed, focused }: PressState) => [
-          styles.tab,
-          pressed && styles.tabPressed,
-          focused && styles.focused,
-        ]}
-      >
-        <View style={[styles.tabIndicator, active && styles.tabIndicatorActive]} />
-        <Icon size={26} color={active ? colors.signal : colors.inkSoft} />
-        <Text variant={active ? 'label' : 'small'} tone={active ? 'signal' : 'soft'} style={styles.tabLabel}>
-          {item.label}
-        </Text>
-      </Pressable>
-    </Link>
+    <LinkPressable
+      href={item.href}
+      aria-current={active ? 'page' : undefined}
+      style={({ pressed, focused }: PressState) => [
+        styles.tab,
+        pressed && styles.tabPressed,
+        focused && styles.focused,
+      ]}
+    >
+      <View style={[styles.tabIndicator, active && styles.tabIndicatorActive]} />
+      <Icon size={26} color={active ? colors.signal : colors.inkSoft} />
+      <Text variant={active ? 'label' : 'small'} tone={active ? 'signal' : 'soft'} style={styles.tabLabel}>
+        {item.label}
+      </Text>
+    </LinkPressable>
   );
 }
 
@@ -79,11 +74,9 @@ export function AppShell({ user, children }: AppShellProps) {
     return (
       <View style={styles.wideRoot}>
         <View style={styles.rail} role="navigation" aria-label="Main">
-          <Link href="/" asChild>
-            <Pressable role="link" accessibilityLabel="Pinwright, go to Bench" style={styles.railBrand}>
-              <Wordmark size={30} />
-            </Pressable>
-          </Link>
+          <LinkPressable href="/" accessibilityLabel="Pinwright, go to Bench" style={() => styles.railBrand}>
+            <Wordmark size={30} />
+          </LinkPressable>
           <View style={styles.railLinks}>
             {navItems.map((item) => (
               <RailLink key={item.href} item={item} active={item.matches(pathname)} />

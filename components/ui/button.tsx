@@ -1,8 +1,9 @@
-import { Link, type Href } from 'expo-router';
+import type { Href } from 'expo-router';
 import type { ReactElement } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, View, type StyleProp, type ViewStyle } from 'react-native';
 
 import type { IconProps } from '@/components/ui/icons';
+import { LinkPressable, type PressState } from '@/components/ui/link-pressable';
 import { Text } from '@/components/ui/text';
 import { borders, colors, layout, radii, space } from '@/components/theme';
 
@@ -59,48 +60,51 @@ export function Button({
   const inactive = disabled || pending;
   const shown = pending ? (pendingLabel ?? label) : label;
 
-  const pressable = (
+  const look = ({ pressed, focused, hovered }: PressState): StyleProp<ViewStyle> => [
+    styles.base,
+    fullWidth && styles.fullWidth,
+    {
+      backgroundColor: (pressed || hovered) && !inactive ? colorsFor.pressed : colorsFor.ground,
+      borderColor: colorsFor.border,
+    },
+    inactive && styles.inactive,
+    focused && styles.focused,
+    style,
+  ];
+  const content = (
+    <View style={styles.content}>
+      {pending ? (
+        <ActivityIndicator size="small" color={colorsFor.text} />
+      ) : Icon ? (
+        <Icon size={22} color={colorsFor.text} />
+      ) : null}
+      <Text variant="label" style={{ color: colorsFor.text }}>
+        {shown}
+      </Text>
+    </View>
+  );
+
+  if (href && !inactive) {
+    return (
+      <LinkPressable href={href} accessibilityLabel={accessibilityLabel} testID={testID} style={look}>
+        {content}
+      </LinkPressable>
+    );
+  }
+  return (
     <Pressable
-      role={href ? 'link' : 'button'}
+      role="button"
       accessibilityLabel={accessibilityLabel}
       aria-disabled={inactive}
       aria-busy={pending}
       disabled={inactive}
       onPress={inactive ? undefined : onPress}
       testID={testID}
-      style={({ pressed, focused, hovered }: { pressed: boolean; focused?: boolean; hovered?: boolean }) => [
-        styles.base,
-        fullWidth && styles.fullWidth,
-        {
-          backgroundColor: pressed || hovered ? colorsFor.pressed : colorsFor.ground,
-          borderColor: colorsFor.border,
-        },
-        inactive && styles.inactive,
-        focused && styles.focused,
-        style,
-      ]}
+      style={(state) => look(state as PressState)}
     >
-      <View style={styles.content}>
-        {pending ? (
-          <ActivityIndicator size="small" color={colorsFor.text} />
-        ) : Icon ? (
-          <Icon size={22} color={colorsFor.text} />
-        ) : null}
-        <Text variant="label" style={{ color: colorsFor.text }}>
-          {shown}
-        </Text>
-      </View>
+      {content}
     </Pressable>
   );
-
-  if (href && !inactive) {
-    return (
-      <Link href={href} asChild>
-        {pressable}
-      </Link>
-    );
-  }
-  return pressable;
 }
 
 const styles = StyleSheet.create({

@@ -1,7 +1,8 @@
-import { Link, type Href } from 'expo-router';
+import type { Href } from 'expo-router';
 import type { ReactNode } from 'react';
-import { Pressable, StyleSheet, View, type StyleProp, type ViewStyle } from 'react-native';
+import { StyleSheet, View, type StyleProp, type ViewStyle } from 'react-native';
 
+import { LinkPressable, type PressState } from '@/components/ui/link-pressable';
 import { borders, colors, radii, space } from '@/components/theme';
 
 export interface CardProps {
@@ -30,20 +31,18 @@ export function Card({ children, href, accessibilityLabel, tone = 'raised', test
     );
   }
   return (
-    <Link href={href} asChild>
-      <Pressable
-        role="link"
-        accessibilityLabel={accessibilityLabel}
-        testID={testID}
-        style={({ pressed, hovered, focused }: { pressed: boolean; hovered?: boolean; focused?: boolean }) => [
-          ...look,
-          (pressed || hovered) && styles.hovered,
-          focused && styles.focused,
-        ]}
-      >
-        {children}
-      </Pressable>
-    </Link>
+    <LinkPressable
+      href={href}
+      accessibilityLabel={accessibilityLabel}
+      testID={testID}
+      style={({ pressed, hovered, focused }: PressState) => [
+        ...look,
+        (pressed || hovered) && styles.hovered,
+        focused && styles.focused,
+      ]}
+    >
+      {children}
+    </LinkPressable>
   );
 }
 

@@ -1,9 +1,8 @@
-import { Stack } from 'expo-router';
 
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';
-import { screenTitle } from '@/components/ui/screen-title';
+import { ScreenTitle } from '@/components/ui/screen-title';
 import { SectionHeading } from '@/components/ui/section-heading';
 
 export interface ComingSoonProps {
@@ -20,7 +19,7 @@ export interface ComingSoonProps {
 export function ComingSoon({ title, message, backHref = '/', backLabel = 'Back to the bench' }: ComingSoonProps) {
   return (
     <Screen>
-      <Stack.Screen options={{ title: screenTitle(title) }} />
+      <ScreenTitle name={title} />
       <SectionHeading level={1} title={title} />
       <Banner tone="info" title="Coming soon">
         {message}

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, View, type StyleProp, type ViewStyle } from 'react-native';
 
+import { useWide } from '@/components/ui/use-wide';
 import { layout, space } from '@/components/theme';
 
 export interface ScreenProps {
@@ -20,6 +21,8 @@ export interface ScreenProps {
  * Example: `<Screen><SectionHeading level={1} title="Account" /></Screen>`
  */
 export function Screen({ children, width = 'content', scroll = true, centered = false, testID, style }: ScreenProps) {
+  const wide = useWide();
+  const padded = [styles.padded, wide && styles.paddedWide];
   const column = (
     <View style={[styles.column, { maxWidth: width === 'form' ? layout.formMax : layout.contentMax }, style]}>
       {children}
@@ -27,7 +30,7 @@ export function Screen({ children, width = 'content', scroll = true, centered = 
   );
   if (!scroll) {
     return (
-      <View testID={testID} style={[styles.fill, styles.padded, centered && styles.centered]}>
+      <View testID={testID} style={[styles.fill, ...padded, centered && styles.centered]}>
         {column}
       </View>
     );
@@ -36,7 +39,7 @@ export function Screen({ children, width = 'content', scroll = true, centered = 
     <ScrollView
       testID={testID}
       style={styles.fill}
-      contentContainerStyle={[styles.padded, centered && styles.centered, centered && styles.grow]}
+      contentContainerStyle={[...padded, centered && styles.centered, centered && styles.grow]}
       keyboardShouldPersistTaps="handled"
     >
       {column}
@@ -48,6 +51,7 @@ const styles = StyleSheet.create({
   fill: { flex: 1 },
   grow: { flexGrow: 1 },
   padded: { paddingHorizontal: space.lg, paddingTop: space.xl, paddingBottom: space.xxxl, alignItems: 'center' },
+  paddedWide: { paddingHorizontal: space.xxl, paddingTop: space.xxl },
   centered: { justifyContent: 'center' },
   column: { width: '100%', gap: space.xl },
 });

@@ -1,5 +1,7 @@
-import { Link, type Href } from 'expo-router';
-import { Pressable, StyleSheet } from 'react-native';
+import type { Href } from 'expo-router';
+import { StyleSheet } from 'react-native';
+
+import { LinkPressable, type PressState } from '@/components/ui/link-pressable';
 
 import { Text } from '@/components/ui/text';
 import { borders, colors, layout } from '@/components/theme';
@@ -16,19 +18,17 @@ export interface TextLinkProps {
  */
 export function TextLink({ label, href, testID }: TextLinkProps) {
   return (
-    <Link href={href} asChild>
-      <Pressable
-        role="link"
-        testID={testID}
-        style={({ focused }: { pressed: boolean; focused?: boolean }) => [styles.tap, focused && styles.focused]}
-      >
-        {({ hovered }: { pressed: boolean; hovered?: boolean }) => (
-          <Text variant="label" tone="signal" style={[styles.text, hovered && styles.hovered]}>
-            {label}
-          </Text>
-        )}
-      </Pressable>
-    </Link>
+    <LinkPressable
+      href={href}
+      testID={testID}
+      style={({ focused }: PressState) => [styles.tap, focused && styles.focused]}
+    >
+      {({ hovered }: PressState) => (
+        <Text variant="label" tone="signal" style={[styles.text, hovered && styles.hovered]}>
+          {label}
+        </Text>
+      )}
+    </LinkPressable>
   );
 }
 
