@@ -1,0 +1,80 @@
+import { ApiError, apiFetch, isApiError } from '@/components/api/client';
+import { userSchema } from '@/shared/auth';
+import { z } from 'zod';
+
+import { jsonResponse, mockFetch } from './helpers';
+
+describe('apiFetch', () => {
+  it('sends a GET without the CSRF header or a body, with same-origin credentials', async () => {
+    const fetchMock = mockFetch();
+    fetchMock.mockResolvedValue(jsonResponse(200, { status: 'ok', db: 'up' }));
+    await expect(apiFetch('/api/health')).resolves.toEqual({ status: 'ok', db: 'up' });
+    const [path, init] = fetchMock.mock.calls[0];
+    expect(path).toBe('/api/health');
+    expect(init.method).toBe('GET');
+    expect(init.credentials).toBe('same-origin');
+    expect(init.body).toBeUndefined();
+    expect(init.headers['X-Pinwright-Csrf']).toBeUndefined();
+  });
+
+  it.each(['POST', 'PUT', 'PATCH', 'DELETE'] as const)('adds X-Pinwright-Csrf: 1 to a %s', async (method) => {
+    const fetchMock = mockFetch();
+    fetchMock.mockResolvedValue(jsonResponse(204));
+    await expect(apiFetch('/api/things/1', { method })).resolves.toBeUndefined();
+    expect(fetchMock.mock.calls[0][1].headers['X-Pinwright-Csrf']).toBe('1');
+  });
+
+  it("turns the server's error shape into an ApiError with status, code, message and fields", async () => {
+    const fetchMock = mockFetch();
+    fetchMock.mockResolvedValue(
+      jsonResponse(400, {
+        error: { code: 'validation_failed', message: 'Check the form', fields: { email: 'Enter a valid e-mail address' } },
+      }),
+    );
+    const error = await apiFetch('/api/auth/sign-up', { method: 'POST', body: {} }).catch((caught) => caught);
+    expect(isApiError(error)).toBe(true);
+    expect(error).toBeInstanceOf(ApiError);
+    expect(error.status).toBe(400);
+    expect(error.code).toBe('validation_failed');
+    expect(error.message).toBe('Check the form');
+    expect(error.fields).toEqual({ email: 'Enter a valid e-mail address' });
+  });
+
+  it('names a failure without a JSON body by its status', async () => {
+    const fetchMock = mockFetch();
+    fetchMock.mockResolvedValue(jsonResponse(429));
+    const error = await apiFetch('/api/auth/sign-in', { method: 'POST', body: {} }).catch((caught) => caught);
+    expect(isApiError(error, 429)).toBe(true);
+    expect(error.code).toBe('rate_limited');
+    expect(error.message.length).toBeGreaterThan(0);
+  });
+
+  it('reports an unreachable server as status 0, code "network"', async () => {
+    const fetchMock = mockFetch();
+    fetchMock.mockRejectedValue(new TypeError('Failed to fetch'));
+    const error = await apiFetch('/api/me').catch((caught) => caught);
+    expect(isApiError(error, 0)).toBe(true);
+    expect(error.code).toBe('network');
+  });
+
+  it('parses the answer with a schema and refuses one that does not match', async () => {
+    const fetchMock = mockFetch();
+    const schema = z.object({ user: userSchema });
+    fetchMock.mockResolvedValueOnce(
+      jsonResponse(200, { user: { id: 1, name: 'Ned Arlow', email: 'ned@example.org', role: 'tech', distanceUnit: 'm', lengthUnit: 'in' } }),
+    );
+    await expect(apiFetch('/api/me', { schema })).resolves.toMatchObject({ user: { role: 'tech' } });
+
+    fetchMock.mockResolvedValueOnce(jsonResponse(200, { user: { id: 'one' } }));
+    const error = await apiFetch('/api/me', { schema }).catch((caught) => caught);
+    expect(isApiError(error)).toBe(true);
+    expect(error.code).toBe('bad_response');
+  });
+
+  it('refuses an HTML page where JSON was expected (a static server answering /api)', async () => {
+    const fetchMock = mockFetch();
+    fetchMock.mockResolvedValue({ ok: true, status: 200, headers: { get: () => 'text/html' }, json: async () => ({}) });
+    const error = await apiFetch('/api/me').catch((caught) => caught);
+    expect(error.code).toBe('bad_response');
+  });
+});
