@@ -1,0 +1,423 @@
+import zlib from 'node:zlib';
+import request from 'supertest';
+import { CSRF, closeDb, signedInAgent, testApp } from '@/tests/helpers/api';
+import { Bow } from '@/server/models';
+
+const app = testApp();
+type Agent = Awaited<ReturnType<typeof signedInAgent>>['agent'];
+
+/** A real PNG (solid colour), built by hand: signature, IHDR, one IDAT, IEND (PNG spec, ISO/IEC 15948). */
+function png(width = 4, height = 3): Buffer {
+  const chunk = (type: string, data: Buffer) => {
+    const body = Buffer.concat([Buffer.from(type, 'ascii'), data]);
+    const length = Buffer.alloc(4);
+    length.writeUInt32BE(data.length);
+    const crc = Buffer.alloc(4);
+    crc.writeUInt32BE(zlib.crc32(body));
+    return Buffer.concat([length, body, crc]);
+  };
+  const header = Buffer.alloc(13);
+  header.writeUInt32BE(width, 0);
+  header.writeUInt32BE(height, 4);
+  header[8] = 8; // bit depth
+  header[9] = 2; // colour type: RGB
+  const row = Buffer.concat([Buffer.from([0]), Buffer.alloc(width * 3, 0x80)]);
+  const pixels = zlib.deflateSync(Buffer.concat(Array.from({ length: height }, () => row)));
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk('IHDR', header),
+    chunk('IDAT', pixels),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
+}
+
+/** A bow for `userId`, written straight to the bows table (the bows API has its own tests). */
+async function makeBow(userId: number, nickname = 'Test slider') {
+  const bow = await Bow.create({
+    userId,
+    nickname,
+    hand: 'right',
+    drawWeightLb: 60,
+    drawLengthMm: 711,
+    letOffPct: 80,
+    ratedSpeedFps: null,
+    sightDescription: 'Single-pin slider, 2nd and 3rd axis adjustable',
+    sightKind: 'single-pin-slider',
+    sightRadiusMm: 840,
+    peepHeightMm: 110,
+    scaleDirection: 'down',
+    tapeWidthMm: 8,
+    pinDistances: [],
+    pinDistanceUnit: 'yd',
+    notes: '',
+  } as never);
+  return bow.id as number;
+}
+
+const allPass = ['setup', 'first-axis', 'second-axis', 'third-axis', 'range'].map((step) => ({ step, result: 'pass' }));
+
+let owner: { agent: Agent; user: { id: number } };
+let stranger: { agent: Agent; user: { id: number } };
+let bowId: number;
+
+beforeAll(async () => {
+  owner = await signedInAgent(app, { name: 'Level Owner' });
+  stranger = await signedInAgent(app, { name: 'Someone Else' });
+  bowId = await makeBow(owner.user.id);
+});
+
+afterAll(closeDb);
+
+describe('level checks: start, work, resume, complete', () => {
+  let checkId: number;
+
+  it('starts with a bow that was never checked', async () => {
+    const res = await owner.agent.get(`/api/bows/${bowId}/level`);
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ state: 'none', reason: 'Never checked.', lastCheck: null, changesSince: [], openCheckId: null });
+  });
+
+  it('starts a check with five unworked steps', async () => {
+    const res = await owner.agent.post(`/api/bows/${bowId}/checks`).set(CSRF).send({ place: 'bench' });
+    expect(res.status).toBe(201);
+    checkId = res.body.check.id;
+    expect(res.body.check).toMatchObject({ bowId, place: 'bench', status: 'open', completedAt: null, performedBy: { id: owner.user.id, name: 'Level Owner' } });
+    expect(res.body.check.steps.map((s: { step: string }) => s.step)).toEqual(['setup', 'first-axis', 'second-axis', 'third-axis', 'range']);
+    expect(res.body.check.steps.every((s: { result: unknown }) => s.result === null)).toBe(true);
+  });
+
+  it('refuses a second open check on the same bow (resume instead)', async () => {
+    const res = await owner.agent.post(`/api/bows/${bowId}/checks`).set(CSRF).send({ place: 'range' });
+    expect(res.status).toBe(409);
+    expect(res.body.error.fields.openCheckId).toBe(String(checkId));
+  });
+
+  it('saves steps one at a time and resumes where it was left', async () => {
+    const first = await owner.agent
+      .patch(`/api/checks/${checkId}`)
+      .set(CSRF)
+      .send({ steps: [{ step: 'setup', result: 'pass' }] });
+    expect(first.status).toBe(200);
+    const second = await owner.agent
+      .patch(`/api/checks/${checkId}`)
+      .set(CSRF)
+      .send({ steps: [{ step: 'first-axis', result: 'adjusted', reading: 1.5, readingUnit: 'deg', adjustment: ' Turned the mount a little ' }] });
+    expect(second.status).toBe(200);
+
+    // Resume: the open check is found from the bow, and reads back as saved.
+    const level = await owner.agent.get(`/api/bows/${bowId}/level`);
+    expect(level.body.openCheckId).toBe(checkId);
+    expect(level.body.state).toBe('none');
+    const resumed = await owner.agent.get(`/api/checks/${checkId}`);
+    expect(resumed.status).toBe(200);
+    const steps = resumed.body.check.steps;
+    expect(steps[0]).toMatchObject({ step: 'setup', result: 'pass' });
+    expect(steps[1]).toMatchObject({ step: 'first-axis', result: 'adjusted', readingUnit: 'deg', adjustment: 'Turned the mount a little' });
+    expect(steps[1].reading).toBeCloseTo(1.5, 9);
+    expect(steps[2].result).toBeNull();
+    const list = await owner.agent.get(`/api/bows/${bowId}/checks`);
+    expect(list.body.checks.map((c: { id: number }) => c.id)).toContain(checkId);
+  });
+
+  it('refuses to complete while steps have no result, naming them', async () => {
+    const res = await owner.agent.patch(`/api/checks/${checkId}`).set(CSRF).send({ complete: true });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields).sort()).toEqual(['steps.range', 'steps.second-axis', 'steps.third-axis']);
+    expect(res.body.error.message).toMatch(/second axis/);
+  });
+
+  it('completes with the last steps, and the bow is verified', async () => {
+    const res = await owner.agent
+      .patch(`/api/checks/${checkId}`)
+      .set(CSRF)
+      .send({
+        steps: [
+          { step: 'second-axis', result: 'pass', reading: 0, readingUnit: 'bubble' },
+          { step: 'third-axis', result: 'pass' },
+          { step: 'range', result: 'skipped' },
+        ],
+        note: 'Bench in the garage',
+        complete: true,
+      });
+    expect(res.status).toBe(200);
+    expect(res.body.check.status).toBe('complete');
+    expect(res.body.check.completedAt).toEqual(expect.any(String));
+    const level = await owner.agent.get(`/api/bows/${bowId}/level`);
+    expect(level.body.state).toBe('verified');
+    expect(level.body.reason).toMatch(/range confirmation .* recommended/);
+    expect(level.body.lastCheck).toMatchObject({ id: checkId, place: 'bench' });
+    expect(level.body.openCheckId).toBeNull();
+    expect(level.body.maxAgeDays).toBe(90);
+  });
+
+  it('keeps a completed check as a record', async () => {
+    const res = await owner.agent.patch(`/api/checks/${checkId}`).set(CSRF).send({ steps: [{ step: 'setup', result: 'fail' }] });
+    expect(res.status).toBe(409);
+    const discard = await owner.agent.delete(`/api/checks/${checkId}`).set(CSRF);
+    expect(discard.status).toBe(409);
+  });
+
+  it('makes the bow due when a new string is logged after the check, and verified again when it is deleted', async () => {
+    const logged = await owner.agent
+      .post(`/api/bows/${bowId}/changes`)
+      .set(CSRF)
+      .send({ kind: 'string', changedAt: new Date().toISOString(), note: 'New string, 18 twists' });
+    expect(logged.status).toBe(201);
+    expect(logged.body.change).toMatchObject({ kind: 'string', note: 'New string, 18 twists', loggedBy: { id: owner.user.id } });
+    expect(logged.body.level.state).toBe('due');
+    expect(logged.body.level.reason).toBe('New string the same day as, and after, the last check.');
+    const level = await owner.agent.get(`/api/bows/${bowId}/level`);
+    expect(level.body.changesSince.map((c: { id: number }) => c.id)).toEqual([logged.body.change.id]);
+
+    const list = await owner.agent.get(`/api/bows/${bowId}/changes`);
+    expect(list.body.changes[0].id).toBe(logged.body.change.id);
+
+    const removed = await owner.agent.delete(`/api/changes/${logged.body.change.id}`).set(CSRF);
+    expect(removed.status).toBe(204);
+    expect((await owner.agent.get(`/api/bows/${bowId}/level`)).body.state).toBe('verified');
+  });
+
+  it('does not count a change logged before the check', async () => {
+    const res = await owner.agent
+      .post(`/api/bows/${bowId}/changes`)
+      .set(CSRF)
+      .send({ kind: 'peep', changedAt: '2020-01-02T10:00:00Z' });
+    expect(res.status).toBe(201);
+    expect(res.body.level.state).toBe('verified');
+  });
+
+  it('is failed when a later check leaves an axis failing', async () => {
+    const started = await owner.agent.post(`/api/bows/${bowId}/checks`).set(CSRF).send({ place: 'range' });
+    expect(started.status).toBe(201);
+    const steps = allPass.map((s) => (s.step === 'third-axis' ? { step: s.step, result: 'fail' } : s));
+    const done = await owner.agent.patch(`/api/checks/${started.body.check.id}`).set(CSRF).send({ steps, complete: true });
+    expect(done.status).toBe(200);
+    const level = await owner.agent.get(`/api/bows/${bowId}/level`);
+    expect(level.body).toMatchObject({ state: 'failed', reason: 'The last check left the third axis failing.' });
+    expect(level.body.lastCheck.id).toBe(started.body.check.id);
+  });
+
+  it('discards an open check', async () => {
+    const started = await owner.agent.post(`/api/bows/${bowId}/checks`).set(CSRF).send({});
+    expect(started.status).toBe(201);
+    expect(started.body.check.place).toBe('bench');
+    const gone = await owner.agent.delete(`/api/checks/${started.body.check.id}`).set(CSRF);
+    expect(gone.status).toBe(204);
+    expect((await owner.agent.get(`/api/checks/${started.body.check.id}`)).status).toBe(404);
+  });
+});
+
+describe('level checks: validation', () => {
+  let checkId: number;
+  beforeAll(async () => {
+    const otherBow = await makeBow(owner.user.id, 'Validation bow');
+    const res = await owner.agent.post(`/api/bows/${otherBow}/checks`).set(CSRF).send({ place: 'bench' });
+    checkId = res.body.check.id;
+  });
+
+  const patch = (body: unknown) => owner.agent.patch(`/api/checks/${checkId}`).set(CSRF).send(body as object);
+
+  it('refuses an unknown place and a bad bow id', async () => {
+    const place = await owner.agent.post(`/api/bows/${bowId}/checks`).set(CSRF).send({ place: 'garage' });
+    expect(place.status).toBe(400);
+    expect(place.body.error.fields.place).toBe('Choose bench or range');
+    const id = await owner.agent.get('/api/bows/abc/level');
+    expect(id.status).toBe(400);
+    expect(id.body.error.fields['params.bowId']).toMatch(/bow id must be a number/);
+  });
+
+  it('refuses an unknown result and step', async () => {
+    const res = await patch({ steps: [{ step: 'fourth-axis', result: 'maybe' }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields['steps.0.step']).toMatch(/Choose one of the steps/);
+    expect(res.body.error.fields['steps.0.result']).toBe('Choose pass, adjusted, fail or skipped');
+  });
+
+  it('asks what was adjusted', async () => {
+    const res = await patch({ steps: [{ step: 'second-axis', result: 'adjusted', adjustment: '  ' }] });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields['steps.0.adjustment']).toBe('Say what you adjusted');
+  });
+
+  it('asks the unit of a reading and bounds it', async () => {
+    const unitless = await patch({ steps: [{ step: 'second-axis', result: 'pass', reading: 2 }] });
+    expect(unitless.body.error.fields['steps.0.readingUnit']).toBe('Choose the unit of the reading');
+    const wild = await patch({ steps: [{ step: 'second-axis', result: 'pass', reading: 60, readingUnit: 'deg' }] });
+    expect(wild.status).toBe(400);
+    expect(wild.body.error.fields['steps.0.reading']).toBe('Reading must be between -45 and 45 degrees');
+    const text = await patch({ steps: [{ step: 'second-axis', result: 'pass', reading: 'level', readingUnit: 'deg' }] });
+    expect(text.body.error.fields['steps.0.reading']).toBe('Reading must be a number');
+  });
+
+  it('refuses a step listed twice, an empty update and complete: false', async () => {
+    const twice = await patch({ steps: [{ step: 'setup', result: 'pass' }, { step: 'setup', result: 'fail' }] });
+    expect(twice.body.error.fields['steps.1.step']).toBe('The set-up is listed twice');
+    const empty = await patch({});
+    expect(empty.status).toBe(400);
+    expect(empty.body.error.message).toBe('Give step results, a note, a place or complete');
+    const notTrue = await patch({ complete: false });
+    expect(notTrue.body.error.fields.complete).toBe('Complete may only be true');
+  });
+
+  it('refuses a change without a valid kind or time, or in the future', async () => {
+    const kind = await owner.agent.post(`/api/bows/${bowId}/changes`).set(CSRF).send({ kind: 'paint', changedAt: new Date().toISOString() });
+    expect(kind.status).toBe(400);
+    expect(kind.body.error.fields.kind).toMatch(/^Choose what changed/);
+    const when = await owner.agent.post(`/api/bows/${bowId}/changes`).set(CSRF).send({ kind: 'rest', changedAt: 'last Tuesday' });
+    expect(when.body.error.fields.changedAt).toBe('Enter when it changed as a date and time');
+    const missing = await owner.agent.post(`/api/bows/${bowId}/changes`).set(CSRF).send({ kind: 'rest' });
+    expect(missing.body.error.fields.changedAt).toBe('Enter when it changed');
+    const future = await owner.agent
+      .post(`/api/bows/${bowId}/changes`)
+      .set(CSRF)
+      .send({ kind: 'rest', changedAt: new Date(Date.now() + 24 * 3600_000).toISOString() });
+    expect(future.status).toBe(400);
+    expect(future.body.error.fields.changedAt).toBe('The change cannot be in the future');
+  });
+
+  it('needs a signed-in user and the CSRF header', async () => {
+    expect((await request(app).get(`/api/bows/${bowId}/level`)).status).toBe(401);
+    const noCsrf = await owner.agent.post(`/api/bows/${bowId}/changes`).send({ kind: 'rest', changedAt: new Date().toISOString() });
+    expect(noCsrf.status).toBe(403);
+  });
+});
+
+describe('photos', () => {
+  let checkId: number;
+  let photoId: number;
+  const image = png();
+
+  beforeAll(async () => {
+    const photoBow = await makeBow(owner.user.id, 'Photo bow');
+    const res = await owner.agent.post(`/api/bows/${photoBow}/checks`).set(CSRF).send({ place: 'bench' });
+    checkId = res.body.check.id;
+  });
+
+  it('accepts a PNG for a step and serves it back to the owner', async () => {
+    const res = await owner.agent
+      .post(`/api/checks/${checkId}/steps/second-axis/photo`)
+      .set(CSRF)
+      .attach('photo', image, { filename: 'bubble.png', contentType: 'image/png' });
+    expect(res.status).toBe(201);
+    photoId = res.body.photo.id;
+    expect(res.body.photo).toMatchObject({ url: `/api/photos/${photoId}`, mimeType: 'image/png', sizeBytes: image.length });
+    const check = await owner.agent.get(`/api/checks/${checkId}`);
+    expect(check.body.check.steps[2].photo.id).toBe(photoId);
+
+    const served = await owner.agent.get(`/api/photos/${photoId}`).buffer(true).parse((r, done) => {
+      const parts: Buffer[] = [];
+      r.on('data', (part: Buffer) => parts.push(part));
+      r.on('end', () => done(null, Buffer.concat(parts)));
+    });
+    expect(served.status).toBe(200);
+    expect(served.headers['content-type']).toBe('image/png');
+    expect(Buffer.compare(served.body as Buffer, image)).toBe(0);
+  });
+
+  it('refuses a text file renamed .jpg, whatever type it claims', async () => {
+    const res = await owner.agent
+      .post(`/api/checks/${checkId}/steps/first-axis/photo`)
+      .set(CSRF)
+      .attach('photo', Buffer.from('not a picture at all, just words\n'.repeat(20)), { filename: 'sight.jpg', contentType: 'image/jpeg' });
+    expect(res.status).toBe(415);
+    expect(res.body.error.message).toMatch(/JPEG, PNG or WebP/);
+  });
+
+  it('refuses a photo over 5 MB with a plain 413', async () => {
+    const big = Buffer.concat([image, Buffer.alloc(5 * 1024 * 1024 + 1 - image.length)]);
+    expect(big.length).toBe(5 * 1024 * 1024 + 1);
+    const res = await owner.agent
+      .post(`/api/checks/${checkId}/steps/first-axis/photo`)
+      .set(CSRF)
+      .attach('photo', big, { filename: 'big.png', contentType: 'image/png' });
+    expect(res.status).toBe(413);
+    expect(res.body.error.message).toBe('The photo is larger than 5 MB; send a smaller one.');
+  });
+
+  it('asks for a file when none is sent', async () => {
+    const res = await owner.agent.post(`/api/checks/${checkId}/steps/first-axis/photo`).set(CSRF).field('note', 'x');
+    expect(res.status).toBe(400);
+  });
+
+  it('serves nobody else the photo (404)', async () => {
+    expect((await stranger.agent.get(`/api/photos/${photoId}`)).status).toBe(404);
+    expect((await request(app).get(`/api/photos/${photoId}`)).status).toBe(401);
+  });
+
+  it('replaces and removes a step photo', async () => {
+    const again = await owner.agent
+      .post(`/api/checks/${checkId}/steps/second-axis/photo`)
+      .set(CSRF)
+      .attach('photo', png(2, 2), { filename: 'again.png', contentType: 'image/png' });
+    expect(again.status).toBe(201);
+    expect((await owner.agent.get(`/api/photos/${photoId}`)).status).toBe(404);
+    const removed = await owner.agent.delete(`/api/checks/${checkId}/steps/second-axis/photo`).set(CSRF);
+    expect(removed.status).toBe(204);
+    expect((await owner.agent.get(`/api/photos/${again.body.photo.id}`)).status).toBe(404);
+  });
+});
+
+describe('another account sees nothing (404 everywhere)', () => {
+  let checkId: number;
+  let changeId: number;
+  let photoId: number;
+
+  beforeAll(async () => {
+    const res = await owner.agent.post(`/api/bows/${bowId}/checks`).set(CSRF).send({ place: 'bench' });
+    checkId = res.body.check.id;
+    const change = await owner.agent.post(`/api/bows/${bowId}/changes`).set(CSRF).send({ kind: 'rest', changedAt: '2021-03-04T05:06:07Z' });
+    changeId = change.body.change.id;
+    const photo = await owner.agent
+      .post(`/api/checks/${checkId}/steps/setup/photo`)
+      .set(CSRF)
+      .attach('photo', png(), { filename: 'vise.png', contentType: 'image/png' });
+    photoId = photo.body.photo.id;
+  });
+
+  it.each([
+    ['GET', '/api/bows/:bowId/level', () => `/api/bows/${bowId}/level`],
+    ['GET', '/api/bows/:bowId/readiness', () => `/api/bows/${bowId}/readiness`],
+    ['GET', '/api/bows/:bowId/checks', () => `/api/bows/${bowId}/checks`],
+    ['POST', '/api/bows/:bowId/checks', () => `/api/bows/${bowId}/checks`],
+    ['GET', '/api/checks/:checkId', () => `/api/checks/${checkId}`],
+    ['PATCH', '/api/checks/:checkId', () => `/api/checks/${checkId}`],
+    ['DELETE', '/api/checks/:checkId', () => `/api/checks/${checkId}`],
+    ['GET', '/api/bows/:bowId/changes', () => `/api/bows/${bowId}/changes`],
+    ['POST', '/api/bows/:bowId/changes', () => `/api/bows/${bowId}/changes`],
+    ['DELETE', '/api/changes/:changeId', () => `/api/changes/${changeId}`],
+    ['POST', '/api/checks/:checkId/steps/setup/photo', () => `/api/checks/${checkId}/steps/setup/photo`],
+    ['DELETE', '/api/checks/:checkId/steps/setup/photo', () => `/api/checks/${checkId}/steps/setup/photo`],
+    ['GET', '/api/photos/:photoId', () => `/api/photos/${photoId}`],
+  ])('%s %s', async (method, _label, path) => {
+    const url = path();
+    const agent = stranger.agent;
+    const body: Record<string, object> = {
+      POST: url.endsWith('/changes') ? { kind: 'rest', changedAt: new Date().toISOString() } : { place: 'bench' },
+      PATCH: { steps: [{ step: 'setup', result: 'pass' }] },
+    };
+    let res;
+    if (method === 'GET') res = await agent.get(url);
+    else if (method === 'DELETE') res = await agent.delete(url).set(CSRF);
+    else if (url.endsWith('/photo')) res = await agent.post(url).set(CSRF).attach('photo', png(), { filename: 'x.png', contentType: 'image/png' });
+    else res = await (method === 'POST' ? agent.post(url) : agent.patch(url)).set(CSRF).send(body[method]);
+    expect(res.status).toBe(404);
+    expect(res.body.error.code).toBe('not_found');
+  });
+
+  it('left the owner’s records untouched', async () => {
+    const check = await owner.agent.get(`/api/checks/${checkId}`);
+    expect(check.body.check.steps[0]).toMatchObject({ result: null, photo: { id: photoId } });
+    const changes = await owner.agent.get(`/api/bows/${bowId}/changes`);
+    expect(changes.body.changes.map((c: { id: number }) => c.id)).toContain(changeId);
+  });
+});
+
+describe('readiness', () => {
+  it('summarises a bow without sessions', async () => {
+    const fresh = await makeBow(owner.user.id, 'Readiness bow');
+    const res = await owner.agent.get(`/api/bows/${fresh}/readiness`);
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ bow: { id: fresh, nickname: 'Readiness bow' }, level: { state: 'none' }, marks: null, tape: null });
+    expect(res.body.warnings).toEqual(['Level: Never checked.', 'No sight-in session yet: there are no confirmed marks for this bow.']);
+  });
+});
