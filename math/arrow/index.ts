@@ -1,0 +1,3 @@
+export * from '@/math/arrow/total-grains';
+export * from '@/math/arrow/foc';
+export * from '@/math/arrow/kinetic-energy';

@@ -1,0 +1,2 @@
+export * from '@/math/numeric/brent-root';
+export * from '@/math/numeric/symmetric-matrix';

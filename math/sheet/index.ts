@@ -1,0 +1,3 @@
+export * from '@/math/sheet/paper';
+export * from '@/math/sheet/wrap-text';
+export * from '@/math/sheet/print-sheet-svg';

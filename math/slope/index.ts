@@ -1,0 +1,1 @@
+export * from '@/math/slope/slope-shot';

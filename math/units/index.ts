@@ -1,0 +1,2 @@
+export * from '@/math/units/constants';
+export * from '@/math/units/convert';
