@@ -54,7 +54,15 @@ export const config = {
     user: process.env.SMTP_USER || '',
     password: process.env.SMTP_PASSWORD || '',
     from: process.env.MAIL_FROM || 'Pinwright <no-reply@pinwright.invalid>',
+    /** SMTPS on connect (port 465); otherwise STARTTLS when the server offers it. */
+    secure: bool('SMTP_SECURE', false),
+    /** Start the local fake SMTP service (server/mail/fake-smtp.ts); default: in development when no SMTP_HOST is set. */
+    fake: bool('FAKE_SMTP', !production && !process.env.SMTP_HOST),
   },
+  /** Where the fake SMTP service stores received messages (one JSON file each). */
+  mailDir: path.resolve(root, process.env.MAIL_DIR || '.data/mail'),
+  /** The development mail reader (GET /api/dev/mail); never in production. */
+  devMail: !production,
 };
 
 export type Config = typeof config;

@@ -5,6 +5,27 @@ import { roleSchema } from './auth';
 export const accountSearchSchema = z.object({
   q: z.string().trim().max(100, 'Search text must be at most 100 characters').optional(),
   page: z.coerce.number({ invalid_type_error: 'Page must be a number' }).int().min(1, 'Page starts at 1').default(1),
+  /** Only accounts with this role. */
+  role: z.enum(['archer', 'tech', 'admin'], { errorMap: () => ({ message: 'Role must be archer, tech or admin' }) }).optional(),
+});
+
+/** An account as the admin list shows it. */
+export const adminAccountSchema = z.object({
+  id: z.number().int().positive(),
+  name: z.string(),
+  email: z.string(),
+  role: roleSchema,
+  distanceUnit: z.string(),
+  lengthUnit: z.string(),
+  disabled: z.boolean(),
+  createdAt: z.string().optional(),
+});
+
+export const accountListResponseSchema = z.object({
+  accounts: z.array(adminAccountSchema),
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
 });
 
 export const accountUpdateSchema = z
@@ -22,3 +43,5 @@ export const idParamSchema = z.object({
 
 export type AccountSearch = z.infer<typeof accountSearchSchema>;
 export type AccountUpdate = z.infer<typeof accountUpdateSchema>;
+export type AdminAccount = z.infer<typeof adminAccountSchema>;
+export type AccountList = z.infer<typeof accountListResponseSchema>;

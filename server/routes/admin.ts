@@ -3,6 +3,8 @@ import { accountSearchSchema, accountUpdateSchema, idParamSchema } from '@/share
 import { validate } from '@/server/middleware/validate';
 import { currentUser, requireRole, requireUser } from '@/server/middleware/auth';
 import * as accounts from '@/server/services/account-service';
+import * as audit from '@/server/services/audit-service';
+import { auditQuerySchema } from '@/shared/audit';
 
 export function adminRoutes() {
   const router = Router();
@@ -13,6 +15,9 @@ export function adminRoutes() {
   router.patch('/accounts/:id', validate({ params: idParamSchema, body: accountUpdateSchema }), async (req, res) => {
     const { id } = req.params as unknown as { id: number };
     res.json({ account: await accounts.updateAccount(currentUser(req), id, req.body) });
+  });
+  router.get('/audit', validate({ query: auditQuerySchema }), async (req, res) => {
+    res.json(await audit.listAllAudit((req.query as unknown as { page: number }).page));
   });
   return router;
 }

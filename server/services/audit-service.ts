@@ -1,0 +1,232 @@
+/**
+ * The audit log. Two ways in:
+ *  - `recordAudit` — explicit entries (share invited/accepted/revoked, admin
+ *    role changes and disables);
+ *  - the audit trail — Sequelize hooks on every record that hangs off a bow
+ *    (bow, build, session, mark, tape, level check, step, photo, change):
+ *    whenever someone who is not the bow's owner (a technician working on a
+ *    shared bow) creates, changes or deletes one during an API request, an
+ *    entry is written in the same transaction. Services need not remember to
+ *    log their writes, and a write that rolls back leaves no entry.
+ *
+ * Example: api.use(auditTrail());   // once, before the routers
+ *          await listBowAudit(marit, 12, 1)  → { entries: [{ action: 'created', recordType: 'level-check', … }], … }
+ */
+import type { Model, ModelStatic, Sequelize, Transaction } from 'sequelize';
+import { ApiError } from '@/server/errors';
+import { AuditEntry, Bow, LevelCheck, SightSession, User } from '@/server/models';
+import { bowFor } from '@/server/services/bow-access';
+import type { AuditEntry as AuditEntryJson, AuditList } from '@/shared/audit';
+import { auditContext, currentActor } from './audit-context';
+
+const PAGE_SIZE = 50;
+const SUMMARY_MAX = 300;
+
+export type AuditInput = {
+  actorId: number | null;
+  action: string;
+  bowId: number | null;
+  recordType: string;
+  recordId: number | null;
+  summary: string;
+};
+
+/** Writes one entry (inside `transaction` when given). */
+export async function recordAudit(input: AuditInput, transaction?: Transaction | null): Promise<void> {
+  const summary = input.summary.length > SUMMARY_MAX ? `${input.summary.slice(0, SUMMARY_MAX - 1)}…` : input.summary;
+  await AuditEntry.create({ ...input, summary }, { transaction: transaction ?? undefined });
+}
+
+function entryJson(entry: AuditEntry): AuditEntryJson {
+  return {
+    id: entry.id,
+    actor: entry.actor ? { id: entry.actor.id, name: entry.actor.name, role: entry.actor.role } : null,
+    action: entry.action,
+    bowId: entry.bowId,
+    recordType: entry.recordType,
+    recordId: entry.recordId,
+    summary: entry.summary,
+    at: entry.at.toISOString(),
+  };
+}
+
+async function page(where: Record<string, unknown>, pageNumber: number): Promise<AuditList> {
+  const { rows, count } = await AuditEntry.findAndCountAll({
+    where,
+    include: [{ model: User, as: 'actor', attributes: ['id', 'name', 'role'] }],
+    order: [['id', 'DESC']],
+    limit: PAGE_SIZE,
+    offset: (pageNumber - 1) * PAGE_SIZE,
+  });
+  return { entries: rows.map(entryJson), total: count, page: pageNumber, pageSize: PAGE_SIZE };
+}
+
+/** GET /api/bows/:id/audit — for the bow's archer: every entry about the bow, newest first. */
+export async function listBowAudit(user: User, bowId: number, pageNumber = 1): Promise<AuditList> {
+  const access = await bowFor(user, bowId, 'read');
+  if (!access.owner) throw ApiError.forbidden('Only the bow’s archer reads its audit log.');
+  return page({ bowId }, pageNumber);
+}
+
+/** GET /api/admin/audit — every entry, newest first. */
+export async function listAllAudit(pageNumber = 1): Promise<AuditList> {
+  return page({}, pageNumber);
+}
+
+// ---- The audit trail: hooks on the records that hang off a bow ----
+
+type Values = Record<string, unknown>;
+
+type Audited = {
+  /** Record type as stored, e.g. "session-mark". */
+  type: string;
+  /** Words for the record, e.g. "a session mark". */
+  noun: string;
+  /** A few words about this record for the summary. */
+  describe: (values: Values) => string;
+  /** The bow the record belongs to. */
+  bowOf: (values: Values, transaction?: Transaction | null) => Promise<number | null>;
+};
+
+const direct = async (values: Values) => (typeof values.bowId === 'number' ? values.bowId : null);
+const viaSession = async (values: Values, transaction?: Transaction | null) => {
+  if (typeof values.sessionId !== 'number') return null;
+  const session = await SightSession.findByPk(values.sessionId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
+  return session?.bowId ?? null;
+};
+const viaCheck = async (values: Values, transaction?: Transaction | null) => {
+  if (typeof values.checkId !== 'number') return null;
+  const check = await LevelCheck.findByPk(values.checkId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
+  return check?.bowId ?? null;
+};
+const text = (value: unknown) => (value === null || value === undefined || value === '' ? '' : String(value));
+const number = (value: unknown) => (typeof value === 'number' ? String(Math.round(value * 100) / 100) : text(value));
+
+/** The models the trail watches, by model name. Models not listed here are not audited. */
+const audited: Record<string, Audited> = {
+  Bow: { type: 'bow', noun: 'the bow', describe: (v) => text(v.nickname), bowOf: async (v) => (typeof v.id === 'number' ? v.id : null) },
+  ArrowBuild: { type: 'arrow-build', noun: 'an arrow build', describe: (v) => text(v.name), bowOf: direct },
+  SightSession: {
+    type: 'sight-session',
+    noun: 'a sight-in session',
+    describe: (v) => [text(v.date), text(v.placeLabel)].filter(Boolean).join(', '),
+    bowOf: direct,
+  },
+  SessionMark: {
+    type: 'session-mark',
+    noun: 'a mark',
+    describe: (v) => (v.distance !== undefined ? `${number(v.distance)} ${text(v.unit)} at ${number(v.scaleMm)} mm` : ''),
+    bowOf: viaSession,
+  },
+  Tape: { type: 'tape', noun: 'a tape layout', describe: () => '', bowOf: viaSession },
+  LevelCheck: { type: 'level-check', noun: 'a level check', describe: (v) => (v.place ? `at the ${text(v.place)}` : ''), bowOf: direct },
+  LevelStep: {
+    type: 'level-step',
+    noun: 'a level-check step',
+    describe: (v) => [text(v.step), text(v.result)].filter(Boolean).join(': '),
+    bowOf: viaCheck,
+  },
+  Photo: { type: 'photo', noun: 'a photo', describe: () => '', bowOf: direct },
+  BowChange: {
+    type: 'bow-change',
+    noun: 'a change to the bow',
+    describe: (v) => [text(v.kind), text(v.note)].filter(Boolean).join(': '),
+    bowOf: direct,
+  },
+};
+
+const verbs = { created: 'Added', updated: 'Changed', deleted: 'Deleted' } as const;
+type TrailAction = keyof typeof verbs;
+
+function valuesOf(instance: Model): Values {
+  return instance.get({ plain: true }) as Values;
+}
+
+/** Writes the entry when the actor of this request is not the bow's owner. */
+async function trail(
+  modelName: string,
+  action: TrailAction,
+  rows: Values[],
+  transaction: Transaction | null | undefined,
+  changedFields: string[] = [],
+): Promise<void> {
+  const actor = currentActor();
+  const spec = audited[modelName];
+  if (!actor || !spec || rows.length === 0) return;
+  // One entry per bow touched (a bulk write of 12 marks is one entry).
+  const byBow = new Map<number, Values[]>();
+  for (const row of rows) {
+    const bowId = await spec.bowOf(row, transaction);
+    if (bowId === null) continue;
+    byBow.set(bowId, [...(byBow.get(bowId) ?? []), row]);
+  }
+  for (const [bowId, bowRows] of byBow) {
+    const bow = await Bow.findByPk(bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined });
+    if (!bow || bow.userId === actor.id) continue;
+    const first = bowRows[0];
+    const what = bowRows.length === 1 ? spec.noun : `${bowRows.length} ${spec.type.replace(/-/g, ' ')}s`;
+    const detail = bowRows.length === 1 ? spec.describe(first) : '';
+    const fields = action === 'updated' && changedFields.length ? ` (${changedFields.join(', ')})` : '';
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action,
+        bowId,
+        recordType: spec.type,
+        recordId: bowRows.length === 1 && typeof first.id === 'number' ? first.id : null,
+        summary: `${verbs[action]} ${what}${detail ? `: ${detail}` : ''}${fields}`,
+      },
+      transaction,
+    );
+  }
+}
+
+// Loose on purpose: one shape for the create, update and destroy hooks' options.
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+type HookOptions = { transaction?: Transaction | null; model?: ModelStatic<Model>; where?: any; attributes?: any; fields?: any };
+const stash = Symbol('audit rows');
+
+/** Adds the trail's hooks to every model of `sequelize` (universal hooks). */
+function installAuditHooks(sequelize: Sequelize): void {
+  const nameOf = (instance: Model) => (instance.constructor as ModelStatic<Model>).name;
+  sequelize.addHook('afterCreate', 'audit-trail', async (instance: Model, options: HookOptions) => {
+    await trail(nameOf(instance), 'created', [valuesOf(instance)], options.transaction);
+  });
+  sequelize.addHook('afterBulkCreate', 'audit-trail', async (instances: Model[], options: HookOptions) => {
+    if (instances.length) await trail(nameOf(instances[0]), 'created', instances.map(valuesOf), options.transaction);
+  });
+  sequelize.addHook('beforeUpdate', 'audit-trail', (instance: Model) => {
+    (instance as unknown as Record<symbol, string[]>)[stash] = (instance.changed() || []).filter((f) => f !== 'updatedAt');
+  });
+  sequelize.addHook('afterUpdate', 'audit-trail', async (instance: Model, options: HookOptions) => {
+    const fields = (instance as unknown as Record<symbol, string[]>)[stash] ?? [];
+    if (fields.length) await trail(nameOf(instance), 'updated', [valuesOf(instance)], options.transaction, fields);
+  });
+  sequelize.addHook('afterBulkUpdate', 'audit-trail', async (options: HookOptions) => {
+    if (!options.model || !audited[options.model.name] || !currentActor()) return;
+    const fields = Object.keys(options.attributes ?? {}).filter((f) => f !== 'updatedAt');
+    const rows = await options.model.findAll({ where: options.where as never, transaction: options.transaction ?? undefined });
+    await trail(options.model.name, 'updated', rows.map(valuesOf), options.transaction, fields);
+  });
+  sequelize.addHook('afterDestroy', 'audit-trail', async (instance: Model, options: HookOptions) => {
+    await trail(nameOf(instance), 'deleted', [valuesOf(instance)], options.transaction);
+  });
+  sequelize.addHook('beforeBulkDestroy', 'audit-trail', async (options: HookOptions) => {
+    if (!options.model || !audited[options.model.name] || !currentActor()) return;
+    const rows = await options.model.findAll({ where: options.where as never, transaction: options.transaction ?? undefined });
+    (options as Record<symbol, Values[]>)[stash] = rows.map(valuesOf);
+  });
+  sequelize.addHook('afterBulkDestroy', 'audit-trail', async (options: HookOptions) => {
+    const rows = (options as Record<symbol, Values[]>)[stash];
+    if (options.model && rows) await trail(options.model.name, 'deleted', rows, options.transaction);
+  });
+}
+
+/**
+ * The middleware that gives the trail its actor (the signed-in user of each
+ * API request); installs the hooks once per Sequelize instance.
+ */
+export function auditTrail() {
+  // The hooks go on the instance the models are bound to (server/db.ts).
+  return auditContext(AuditEntry.sequelize as Sequelize, installAuditHooks);
+}
