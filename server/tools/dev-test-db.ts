@@ -3,6 +3,8 @@
  * scratch database (migrated, dropped after), without building the web app.
  *   npx tsx server/tools/dev-test-db.ts -- --selectProjects api tests/api/bows.test.ts
  */
+import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { spawn } from 'node:child_process';
 
@@ -14,8 +16,14 @@ async function main() {
   const { startLocalDatabase, createDatabase, dropDatabase } = await import('./database');
   const db = await startLocalDatabase(() => {});
   let code = 1;
+  let smtp: { close: () => Promise<void> } | undefined;
   try {
     await createDatabase(db, dbName);
+    // Fake SMTP on a free port; its mailbox is a fresh folder the test workers read (MAIL_DIR).
+    process.env.MAIL_DIR ||= fs.mkdtempSync(path.join(os.tmpdir(), 'pinwright-mail-'));
+    const fake = await (await import('@/server/mail/fake-smtp')).startFakeSmtp({ port: 0, dir: process.env.MAIL_DIR! });
+    smtp = fake;
+    process.env.SMTP_PORT = String(fake.port);
     const { sequelize } = await import('@/server/db');
     const { migrate } = await import('@/server/migrations');
     await migrate(sequelize);
@@ -27,6 +35,7 @@ async function main() {
     });
   } finally {
     await dropDatabase(db, dbName).catch(() => {});
+    await smtp?.close();
     // Leave a shared server running if someone else started it; stop ours.
     await db.stop();
   }

@@ -25,6 +25,8 @@ async function main() {
     if (applied.length) console.log(`Applied migrations: ${applied.join(', ')}`);
     const { seedDemo, demoAccounts } = await import('@/server/seed/demo');
     await seedDemo();
+    // Development: a local fake SMTP service keeps every e-mail (read them at /dev-mail).
+    const smtp = config.smtp.fake ? await (await import('@/server/mail/fake-smtp')).startFakeSmtp({ port: config.smtp.port, dir: config.mailDir }) : null;
     await exportWebIfStale(root);
     const { startServer } = await import('@/server/index');
     const { close } = await startServer();
@@ -35,6 +37,7 @@ async function main() {
     const shutdown = async () => {
       console.log('\nStopping…');
       await close().catch(() => {});
+      await smtp?.close();
       await stopDb();
       process.exit(0);
     };

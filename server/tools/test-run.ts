@@ -2,6 +2,8 @@
  * `npm test`: the local database with a throwaway database for this run
  * (dropped at the end), the web build, then every Jest project.
  */
+import fs from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { spawn } from 'node:child_process';
 
@@ -14,8 +16,14 @@ async function main() {
   const { exportWebIfStale } = await import('./web-export');
   const db = await startLocalDatabase();
   let code = 1;
+  let smtp: { close: () => Promise<void> } | undefined;
   try {
     await createDatabase(db, dbName);
+    // Fake SMTP on a free port; its mailbox is a fresh folder the test workers read (MAIL_DIR).
+    process.env.MAIL_DIR ||= fs.mkdtempSync(path.join(os.tmpdir(), 'pinwright-mail-'));
+    const fake = await (await import('@/server/mail/fake-smtp')).startFakeSmtp({ port: 0, dir: process.env.MAIL_DIR! });
+    smtp = fake;
+    process.env.SMTP_PORT = String(fake.port);
     const { sequelize } = await import('@/server/db');
     const { migrate } = await import('@/server/migrations');
     await migrate(sequelize);
@@ -30,6 +38,7 @@ async function main() {
     console.error(err instanceof Error ? err.message : err);
   } finally {
     await dropDatabase(db, dbName).catch(() => {});
+    await smtp?.close();
     await db.stop();
   }
   process.exit(code);
