@@ -1,35 +1,21 @@
 import { useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
 
 import { apiFetch, ApiError, isApiError } from '@/components/api/client';
-
-/** Query keys for the bench (the list of the archer's bows). */
-export const benchKeys = {
-  bows: ['bows'] as const,
-};
+import { bowListResponseSchema, type BowSummary } from '@/shared/bow';
 
 /**
- * The few bow fields the bench list reads. Interim: once the bows API lands with
- * its schema in shared/, replace this with that schema (types are never written twice).
- * Unknown fields pass through untouched.
+ * Query key of the archer's bow list. The same key and schema as the bows
+ * feature's list (components/bows/api.ts), so both read one cache entry and
+ * invalidating ['bows'] refreshes the bench.
  */
-export const benchBowSchema = z
-  .object({
-    id: z.number().int(),
-    nickname: z.string(),
-    /** Level readiness, when the server reports it. */
-    levelStatus: z.enum(['verified', 'due', 'failed', 'none']).optional(),
-  })
-  .passthrough();
+export const benchKeys = {
+  bows: ['bows', 'list'] as const,
+};
 
-export type BenchBow = z.infer<typeof benchBowSchema>;
-
-const bowsResponse = z.object({ bows: z.array(benchBowSchema) });
-
-/** Fetches the signed-in archer's bows. Until the bows API exists, its 404 counts as no bows. */
-export async function fetchBows(): Promise<BenchBow[]> {
+/** Fetches the signed-in archer's bows with their readiness. A 404 (no bows API on this server yet) counts as no bows. */
+export async function fetchBenchBows(): Promise<BowSummary[]> {
   try {
-    const { bows } = await apiFetch('/api/bows', { schema: bowsResponse });
+    const { bows } = await apiFetch('/api/bows', { schema: bowListResponseSchema });
     return bows;
   } catch (error) {
     if (isApiError(error, 404)) return [];
@@ -39,8 +25,8 @@ export async function fetchBows(): Promise<BenchBow[]> {
 
 /**
  * The archer's bows for the bench.
- * Example: `const bows = useBows(); bows.data?.length`
+ * Example: `const bows = useBenchBows(); bows.data?.length`
  */
-export function useBows() {
-  return useQuery<BenchBow[], ApiError>({ queryKey: benchKeys.bows, queryFn: fetchBows });
+export function useBenchBows() {
+  return useQuery<BowSummary[], ApiError>({ queryKey: benchKeys.bows, queryFn: fetchBenchBows });
 }

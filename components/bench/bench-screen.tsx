@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
-import { useBows } from '@/components/bench/api';
+import { useBenchBows } from '@/components/bench/api';
 import { BenchArt } from '@/components/bench/bench-art';
 import { BowCard } from '@/components/bench/bow-card';
 import { Button } from '@/components/ui/button';
@@ -18,7 +18,7 @@ const title = <ScreenTitle name="Bench" />;
 
 /** The home: the archer's bows with their readiness, or the first step when there are none. */
 export function BenchScreen() {
-  const bows = useBows();
+  const bows = useBenchBows();
   const wide = useWide();
 
   if (bows.isPending) {

@@ -1,17 +1,28 @@
 import { StyleSheet, View } from 'react-native';
 
-import type { BenchBow } from '@/components/bench/api';
 import { Card } from '@/components/ui/card';
 import { ChevronRightIcon } from '@/components/ui/icons';
 import { ReadinessBadge } from '@/components/ui/readiness-badge';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/theme';
+import type { BowSummary } from '@/shared/bow';
+import { levelSummarySchema } from '@/shared/level';
+
+const count = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
 /**
- * One bow on the bench: its nickname and level readiness; opens the bow.
- * Example: `<BowCard bow={{ id: 3, nickname: 'Ridge Runner', levelStatus: 'due' }} />`
+ * One bow on the bench: nickname, level readiness in words, and how far its
+ * records go (builds, sight-in sessions, a saved tape). Opens the bow.
+ * Example: `<BowCard bow={summary} />`
  */
-export function BowCard({ bow }: { bow: BenchBow }) {
+export function BowCard({ bow }: { bow: BowSummary }) {
+  const level = levelSummarySchema.safeParse(bow.readiness.level);
+  const state = level.success ? level.data.state : 'none';
+  const records = [
+    count(bow.readiness.buildCount, 'build', 'builds'),
+    count(bow.readiness.sessionCount, 'sight-in', 'sight-ins'),
+    bow.readiness.hasTape ? 'tape saved' : 'no tape yet',
+  ].join(' · ');
   return (
     <Card href={`/bows/${bow.id}`} accessibilityLabel={`Open ${bow.nickname}`} testID={`bow-card-${bow.id}`}>
       <View style={styles.row}>
@@ -19,7 +30,10 @@ export function BowCard({ bow }: { bow: BenchBow }) {
           <Text variant="title" numberOfLines={1}>
             {bow.nickname}
           </Text>
-          <ReadinessBadge state={bow.levelStatus ?? 'none'} subject="Level" />
+          <ReadinessBadge state={state} subject="Level" />
+          <Text variant="small" tone="soft">
+            {records}
+          </Text>
         </View>
         <ChevronRightIcon size={28} color={colors.inkSoft} />
       </View>

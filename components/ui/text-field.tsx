@@ -47,8 +47,8 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
       <View
         style={[
           styles.box,
-          error ? styles.boxError : null,
           focused ? styles.boxFocused : null,
+          error ? styles.boxError : null,
           disabled ? styles.boxDisabled : null,
         ]}
       >
@@ -100,7 +100,8 @@ const styles = StyleSheet.create({
     marginTop: space.xxs,
   },
   boxError: { borderColor: colors.failed, borderWidth: borders.focus },
-  boxFocused: { borderColor: colors.focus, borderWidth: borders.focus },
+  // Focus draws an outer ring, so an error's red border stays visible while typing.
+  boxFocused: { outlineColor: colors.focus, outlineStyle: 'solid', outlineWidth: borders.focus, outlineOffset: 1 },
   boxDisabled: { backgroundColor: colors.sunken },
   input: {
     ...type.body,

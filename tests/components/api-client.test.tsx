@@ -4,6 +4,16 @@ import { z } from 'zod';
 
 import { jsonResponse, mockFetch } from './helpers';
 
+/** The ApiError a call rejects with (fails the test if it resolves or rejects with something else). */
+async function failure(call: Promise<unknown>): Promise<ApiError> {
+  const caught = await call.then(
+    () => new Error('expected the call to fail'),
+    (error: unknown) => error,
+  );
+  if (!(caught instanceof ApiError)) throw caught;
+  return caught;
+}
+
 describe('apiFetch', () => {
   it('sends a GET without the CSRF header or a body, with same-origin credentials', async () => {
     const fetchMock = mockFetch();
@@ -31,7 +41,7 @@ describe('apiFetch', () => {
         error: { code: 'validation_failed', message: 'Check the form', fields: { email: 'Enter a valid e-mail address' } },
       }),
     );
-    const error = await apiFetch('/api/auth/sign-up', { method: 'POST', body: {} }).catch((caught) => caught);
+    const error = await failure(apiFetch('/api/auth/sign-up', { method: 'POST', body: {} }));
     expect(isApiError(error)).toBe(true);
     expect(error).toBeInstanceOf(ApiError);
     expect(error.status).toBe(400);
@@ -43,7 +53,7 @@ describe('apiFetch', () => {
   it('names a failure without a JSON body by its status', async () => {
     const fetchMock = mockFetch();
     fetchMock.mockResolvedValue(jsonResponse(429));
-    const error = await apiFetch('/api/auth/sign-in', { method: 'POST', body: {} }).catch((caught) => caught);
+    const error = await failure(apiFetch('/api/auth/sign-in', { method: 'POST', body: {} }));
     expect(isApiError(error, 429)).toBe(true);
     expect(error.code).toBe('rate_limited');
     expect(error.message.length).toBeGreaterThan(0);
@@ -52,7 +62,7 @@ describe('apiFetch', () => {
   it('reports an unreachable server as status 0, code "network"', async () => {
     const fetchMock = mockFetch();
     fetchMock.mockRejectedValue(new TypeError('Failed to fetch'));
-    const error = await apiFetch('/api/me').catch((caught) => caught);
+    const error = await failure(apiFetch('/api/me'));
     expect(isApiError(error, 0)).toBe(true);
     expect(error.code).toBe('network');
   });
@@ -66,7 +76,7 @@ describe('apiFetch', () => {
     await expect(apiFetch('/api/me', { schema })).resolves.toMatchObject({ user: { role: 'tech' } });
 
     fetchMock.mockResolvedValueOnce(jsonResponse(200, { user: { id: 'one' } }));
-    const error = await apiFetch('/api/me', { schema }).catch((caught) => caught);
+    const error = await failure(apiFetch('/api/me', { schema }));
     expect(isApiError(error)).toBe(true);
     expect(error.code).toBe('bad_response');
   });
@@ -74,7 +84,7 @@ describe('apiFetch', () => {
   it('refuses an HTML page where JSON was expected (a static server answering /api)', async () => {
     const fetchMock = mockFetch();
     fetchMock.mockResolvedValue({ ok: true, status: 200, headers: { get: () => 'text/html' }, json: async () => ({}) });
-    const error = await apiFetch('/api/me').catch((caught) => caught);
+    const error = await failure(apiFetch('/api/me'));
     expect(error.code).toBe('bad_response');
   });
 });
