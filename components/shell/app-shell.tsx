@@ -3,7 +3,7 @@ import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
-import { navItems, type NavItem } from '@/components/shell/nav-items';
+import { navItemsFor, type NavItem } from '@/components/shell/nav-items';
 import { Wordmark } from '@/components/shell/wordmark';
 import { LinkPressable, type PressState } from '@/components/ui/link-pressable';
 import { Text } from '@/components/ui/text';
@@ -69,6 +69,7 @@ export function AppShell({ user, children }: AppShellProps) {
   const wide = useWide();
   const pathname = usePathname();
   const insets = useSafeAreaInsets();
+  const items = navItemsFor(user.role);
 
   if (wide) {
     return (
@@ -78,8 +79,8 @@ export function AppShell({ user, children }: AppShellProps) {
             <Wordmark size={30} />
           </LinkPressable>
           <View style={styles.railLinks}>
-            {navItems.map((item) => (
-              <RailLink key={item.href} item={item} active={item.matches(pathname)} />
+            {items.map((item) => (
+              <RailLink key={item.label} item={item} active={item.matches(pathname)} />
             ))}
           </View>
           <View style={styles.railUser}>
@@ -111,8 +112,8 @@ export function AppShell({ user, children }: AppShellProps) {
         role="navigation"
         aria-label="Main"
       >
-        {navItems.map((item) => (
-          <TabLink key={item.href} item={item} active={item.matches(pathname)} />
+        {items.map((item) => (
+          <TabLink key={item.label} item={item} active={item.matches(pathname)} />
         ))}
       </View>
     </View>

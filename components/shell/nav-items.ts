@@ -1,16 +1,24 @@
+import type { Href } from 'expo-router';
 import type { ReactElement } from 'react';
 
 import { BenchIcon, PersonIcon, type IconProps } from '@/components/ui/icons';
+import type { Role } from '@/shared/auth';
 
 export interface NavItem {
   label: string;
-  href: '/' | '/account';
+  href: Href;
   icon: (props: IconProps) => ReactElement;
   /** True when the current path belongs to this item. */
   matches: (pathname: string) => boolean;
+  /** Roles that see this item; all roles when omitted. */
+  roles?: Role[];
 }
 
-/** The signed-in area's main destinations, in order. */
+/**
+ * The signed-in area's main destinations, in order (the rail and the bottom bar
+ * both read this list). Add a destination here, e.g. a technician's clients with
+ * `roles: ['tech']`; keep it to a handful so the phone bar stays readable.
+ */
 export const navItems: NavItem[] = [
   {
     label: 'Bench',
@@ -25,3 +33,8 @@ export const navItems: NavItem[] = [
     matches: (pathname) => pathname.startsWith('/account'),
   },
 ];
+
+/** The items a user with `role` sees. */
+export function navItemsFor(role: Role): NavItem[] {
+  return navItems.filter((item) => !item.roles || item.roles.includes(role));
+}
