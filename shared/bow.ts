@@ -57,7 +57,7 @@ const bowFields = z.object({
   peepHeightMm: measureSchema('Peep height', 'mm', 50, 200),
   scaleDirection: scaleDirectionSchema.default('down'),
   /** Width of the printed tape that fits the sight's window, mm. */
-  tapeWidthMm: measureSchema('Tape width', 'mm', 3, 40).default(8),
+  tapeWidthMm: measureSchema('Tape width', 'mm', 6, 40).default(12),
   pinDistances: z
     .array(pinDistanceSchema, { invalid_type_error: 'Pin distances must be a list of numbers' })
     .max(maxPins, `List at most ${maxPins} pin distances`)

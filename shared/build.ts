@@ -34,7 +34,7 @@ const buildFields = z.object({
   /** Chronographed speed from this bow, fps; null if not measured. */
   speedFps: optionalMeasureSchema('Chronographed speed', 'fps', 120, 450),
   /** Drag coefficient referenced to the shaft cross-section; null to use the default. */
-  dragCoefficient: optionalMeasureSchema('Drag coefficient', '', 0.3, 5),
+  dragCoefficient: optionalMeasureSchema('Drag coefficient', '', 0.5, 5),
 });
 
 type BuildFields = z.infer<typeof buildFields>;

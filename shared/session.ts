@@ -8,6 +8,7 @@ import {
   textSchema,
   timestampsSchema,
 } from './common';
+import { distanceLimits } from './fit';
 
 /**
  * Sight-in session schemas: a session (bow + build, date, place, air) with its
@@ -25,7 +26,7 @@ export const maxMarks = 30;
 
 /** One sighted mark: the scale reading where the arrows grouped at a distance. */
 export const markInputSchema = z.object({
-  distance: measureSchema('Distance', '', 1, 150),
+  distance: measureSchema('Distance', '', distanceLimits.min, distanceLimits.max),
   unit: distanceUnitSchema.default('yd'),
   /** Reading on the sight's scale, mm. */
   scaleMm: measureSchema('Scale reading', 'mm', 0, 200),
@@ -83,10 +84,54 @@ export const sessionUpdateSchema = sessionFields.partial().superRefine(checkDist
 export const markSchema = markInputSchema.extend({ id: z.number().int(), position: z.number().int() });
 
 /**
- * The stored fit (math's fit result). Its exact shape is the math core's
- * `FitResult`; see shared/fit.ts.
+ * The fit stored with a session: the math core's fit result (see math/README.md),
+ * with readings expressed as the archer reads the scale (for an upward-growing
+ * scale the server maps the math's downward-positive readings back), plus
+ * `scaleDirection`. `model` is the math core's own serialisable sight model
+ * (downward-positive readings); the server evaluates it for tapes and sheets.
+ * Distances are in `distanceUnit` (the unit of the session's first mark);
+ * a predicted mark the arrow cannot reach has markMm null.
  */
-export const storedFitSchema = z.unknown();
+export const storedFitSchema = z
+  .object({
+    distanceUnit: distanceUnitSchema,
+    scaleDirection: z.enum(['down', 'up']),
+    speedFps: z.number(),
+    dragCoefficient: z.number(),
+    peepHeightMm: z.number(),
+    sightRadiusMm: z.number(),
+    scaleZeroMm: z.number(),
+    /** RMS of the residuals, mm (0 for an exact two-mark fit). */
+    rmsMm: z.number(),
+    method: z.enum(['two-mark', 'least-squares']),
+    airDensityKgM3: z.number(),
+    /** Predicted marks with one-sigma bands (mm, and in distance); `verify`: confirm at the range. */
+    marks: z.array(
+      z.object({
+        distance: z.number(),
+        markMm: z.number().nullable(),
+        sigmaMm: z.number().nullable(),
+        sigmaDistance: z.number().nullable(),
+        verify: z.boolean(),
+      }),
+    ),
+    /** One per sighted mark, nearest first: residual = entered − fitted, mm. */
+    residuals: z.array(
+      z.object({
+        distance: z.number(),
+        markMm: z.number(),
+        fittedMm: z.number(),
+        residualMm: z.number(),
+        standardised: z.number(),
+        outlier: z.boolean(),
+      }),
+    ),
+    /** The distance whose next mark would shrink the bands most, or null. */
+    nextDistance: z.number().nullable(),
+    warnings: z.array(z.object({ code: z.string(), message: z.string(), distance: z.number().optional() })),
+    model: z.record(z.unknown()),
+  })
+  .passthrough();
 
 /** A session as the API returns it, with its marks (in entry order) and its fit. */
 export const sessionSchema = sessionFields
@@ -120,5 +165,6 @@ export type SessionFormValues = z.input<typeof sessionInputSchema>;
 export type SessionUpdate = z.infer<typeof sessionUpdateSchema>;
 export type Mark = z.infer<typeof markSchema>;
 export type Session = z.infer<typeof sessionSchema>;
+export type StoredFit = z.infer<typeof storedFitSchema>;
 export type SessionFitSummary = z.infer<typeof sessionFitSummarySchema>;
 export type SessionListItem = z.infer<typeof sessionListItemSchema>;

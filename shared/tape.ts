@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { distanceUnitSchema, measureSchema, textSchema, timestampsSchema } from './common';
+import { distanceLimits } from './fit';
 
 /**
  * Tape schemas: a saved print layout for a session's fit, and the query options
@@ -8,7 +9,7 @@ import { distanceUnitSchema, measureSchema, textSchema, timestampsSchema } from 
  *
  * Example: tapeLayoutSchema.parse({ fromDistance: 20, toDistance: 80 })
  *   → { fromDistance: 20, toDistance: 80, step: 1, unit: 'yd', orientation: 'down',
- *       widthMm: 8, mirror: false, paper: 'letter', label: '' }
+ *       widthMm: 12, mirror: false, paper: 'letter', label: '' }
  */
 
 /** Longest span of ticks on one tape, in distance units. */
@@ -21,14 +22,20 @@ export const tapeOrientationSchema = z.enum(['down', 'up'], {
 /** Paper size of the print sheet. */
 export const paperSchema = z.enum(['a4', 'letter'], { errorMap: () => ({ message: 'Choose A4 or Letter paper' }) });
 
+/** Tick steps that divide 5 evenly, so the long ticks at every 5 and 10 fall on ticks. */
+export const tickSteps = [0.5, 1, 2.5, 5] as const;
+const tickStepSchema = z
+  .number({ invalid_type_error: 'Tick step must be a number' })
+  .refine((step) => tickSteps.some((allowed) => Math.abs(allowed - step) < 1e-9), 'Tick step must be 0.5, 1, 2.5 or 5');
+
 const layoutFields = z.object({
-  fromDistance: measureSchema('From distance', '', 1, 150),
-  toDistance: measureSchema('To distance', '', 1, 150),
-  /** Distance between ticks, in `unit`. */
-  step: measureSchema('Tick step', '', 1, 10).int('Tick step must be a whole number').default(1),
+  fromDistance: measureSchema('From distance', '', distanceLimits.min, distanceLimits.max),
+  toDistance: measureSchema('To distance', '', distanceLimits.min, distanceLimits.max),
+  /** Distance between ticks, in `unit`: 0.5, 1, 2.5 or 5 (a step that divides 5, so every 5 gets a tick). */
+  step: tickStepSchema.default(1),
   unit: distanceUnitSchema.default('yd'),
   orientation: tapeOrientationSchema.default('down'),
-  widthMm: measureSchema('Tape width', 'mm', 3, 40).default(8),
+  widthMm: measureSchema('Tape width', 'mm', 6, 40).default(12),
   mirror: z.boolean({ invalid_type_error: 'Mirror must be true or false' }).default(false),
   paper: paperSchema.default('letter'),
   label: textSchema('Label', 60),
@@ -53,7 +60,7 @@ export const tapeSchema = layoutFields
   .extend({ id: z.number().int(), sessionId: z.number().int(), bowId: z.number().int() })
   .merge(timestampsSchema);
 
-const queryNumber = (schema: z.ZodNumber) =>
+const queryNumber = (schema: z.ZodTypeAny) =>
   z.preprocess((raw) => (raw === '' || raw === undefined ? undefined : Number(raw)), schema.optional());
 const queryBoolean = z.preprocess(
   (raw) => (raw === undefined || raw === '' ? undefined : raw === 'true' || raw === '1' ? true : raw === 'false' || raw === '0' ? false : raw),
@@ -69,12 +76,12 @@ const queryBoolean = z.preprocess(
 export const tapeQuerySchema = z
   .object({
     tape: queryNumber(z.number({ invalid_type_error: 'The tape id must be a number' }).int('The tape id must be a whole number').positive('The tape id must be a positive number')),
-    from: queryNumber(measureSchema('From distance', '', 1, 150)),
-    to: queryNumber(measureSchema('To distance', '', 1, 150)),
-    step: queryNumber(measureSchema('Tick step', '', 1, 10).int('Tick step must be a whole number')),
+    from: queryNumber(measureSchema('From distance', '', distanceLimits.min, distanceLimits.max)),
+    to: queryNumber(measureSchema('To distance', '', distanceLimits.min, distanceLimits.max)),
+    step: queryNumber(tickStepSchema),
     unit: distanceUnitSchema.optional(),
     orientation: tapeOrientationSchema.optional(),
-    width: queryNumber(measureSchema('Tape width', 'mm', 3, 40)),
+    width: queryNumber(measureSchema('Tape width', 'mm', 6, 40)),
     mirror: queryBoolean,
     paper: paperSchema.optional(),
     label: z.string().trim().max(60, 'Label must be at most 60 characters').optional(),

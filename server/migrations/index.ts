@@ -7,12 +7,22 @@ import { Umzug, SequelizeStorage } from 'umzug';
 import type { QueryInterface, Sequelize } from 'sequelize';
 import * as m0001 from './0001-users';
 import * as m0002 from './0002-web-sessions';
+import * as m0010 from './0010-bows';
+import * as m0011 from './0011-arrow-builds';
+import * as m0012 from './0012-sight-sessions';
+import * as m0013 from './0013-session-marks';
+import * as m0014 from './0014-tapes';
 
 type Step = { up: (p: { context: QueryInterface }) => Promise<void>; down: (p: { context: QueryInterface }) => Promise<void> };
 
 export const migrations: Array<[string, Step]> = [
   ['0001-users', m0001],
   ['0002-web-sessions', m0002],
+  ['0010-bows', m0010],
+  ['0011-arrow-builds', m0011],
+  ['0012-sight-sessions', m0012],
+  ['0013-session-marks', m0013],
+  ['0014-tapes', m0014],
 ];
 
 export function migrator(sequelize: Sequelize) {

@@ -7,6 +7,11 @@ import type { Sequelize } from 'sequelize';
 import { authRoutes, meRoutes } from './auth';
 import { healthRoutes } from './health';
 import { adminRoutes } from './admin';
+import { bowRoutes } from './bows';
+import { buildRoutes } from './builds';
+import { sessionRoutes } from './sessions';
+import { tapeRoutes } from './tapes';
+import { tryRoutes } from './try';
 
 export function apiRoutes(sequelize: Sequelize) {
   const api = Router();
@@ -14,5 +19,10 @@ export function apiRoutes(sequelize: Sequelize) {
   api.use('/auth', authRoutes());
   api.use('/me', meRoutes());
   api.use('/admin', adminRoutes());
+  api.use(bowRoutes()); // /bows, /bows/:id
+  api.use(buildRoutes()); // /bows/:bowId/builds, /builds/:id
+  api.use(sessionRoutes()); // /bows/:bowId/sessions, /sessions/:id
+  api.use(tapeRoutes()); // /sessions/:sessionId/tapes, /tapes/:id, /sessions/:id/{tape.svg,sheet.svg,sheet.pdf}
+  api.use(tryRoutes()); // public, rate-limited: /try/fit, /try/tape.svg, /try/sheet.svg, /try/sheet.pdf
   return api;
 }

@@ -4,6 +4,8 @@
  */
 import { User } from '@/server/models';
 import { hashPassword } from '@/server/services/auth-service';
+import { seedBowsStep } from './bows'; // bows.ts imports only the SeedStep type from here, so no import cycle
+import { seedLevelStep } from './level'; // likewise; runs after the bows it checks
 
 export const demoAccounts = [
   { role: 'archer', name: 'Marit Oakhollow', email: 'marit@demo.pinwright.test', password: 'pinwright-archer' },
@@ -14,6 +16,8 @@ export const demoAccounts = [
 /** Extra seeding steps registered by features (bows, checks, …); each must be idempotent. */
 export type SeedStep = (accounts: Record<(typeof demoAccounts)[number]['role'], User>) => Promise<void>;
 export const seedSteps: SeedStep[] = [];
+seedSteps.push(seedBowsStep);
+seedSteps.push(seedLevelStep);
 
 export async function seedDemo(): Promise<void> {
   const accounts = {} as Record<(typeof demoAccounts)[number]['role'], User>;

@@ -1,0 +1,39 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+} from 'sequelize';
+import { sequelize } from '@/server/db';
+
+/** One sighted mark of a session: distance (yd or m), scale reading (mm), arrows shot, note. */
+export class SessionMark extends Model<InferAttributes<SessionMark>, InferCreationAttributes<SessionMark>> {
+  declare id: CreationOptional<number>;
+  declare sessionId: ForeignKey<number>;
+  /** Entry order within the session, from 0. */
+  declare position: number;
+  declare distance: number;
+  declare unit: 'yd' | 'm';
+  declare scaleMm: number;
+  declare arrowsShot: number | null;
+  declare note: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+SessionMark.init(
+  {
+    id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+    position: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false },
+    distance: { type: DataTypes.DOUBLE, allowNull: false },
+    unit: { type: DataTypes.ENUM('yd', 'm'), allowNull: false },
+    scaleMm: { type: DataTypes.DOUBLE, allowNull: false },
+    arrowsShot: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: true },
+    note: { type: DataTypes.STRING(200), allowNull: false, defaultValue: '' },
+    createdAt: DataTypes.DATE(3),
+    updatedAt: DataTypes.DATE(3),
+  },
+  { sequelize, tableName: 'session_marks' },
+);

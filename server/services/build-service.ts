@@ -1,0 +1,136 @@
+/**
+ * Arrow builds on a bow. The derived quantities (total grains, FOC, kinetic
+ * energy, momentum) come from the math core through fit-service and are
+ * stored with the build, recomputed on every save.
+ *
+ * Deleting a build that has sight-in sessions is refused (409) rather than
+ * cascading: a session's marks are only meaningful with the arrow they were
+ * shot with, and they cost an afternoon at the range to make, so losing them
+ * should take a deliberate step (delete the sessions first). Deleting the
+ * whole bow still takes everything with it.
+ */
+import { Op, fn, col, type Transaction } from 'sequelize';
+import { sequelize } from '@/server/db';
+import { ApiError, validationError } from '@/server/errors';
+import { ArrowBuild, Bow, SightSession, type User } from '@/server/models';
+import { buildInputSchema, type Build, type BuildInput, type BuildUpdate } from '@/shared/build';
+import { findBow, findOwnBow } from './bow-service';
+import { bowFor, type BowCapability } from './bow-access';
+import { arrowQuantities } from './fit-service';
+
+/** The build with this id if `user` may use `capability` on its bow (default: owns it); otherwise 404 (403 for a technician asking to change it). */
+export async function findOwnBuild(user: User, id: number, transaction?: Transaction, capability: BowCapability = 'delete'): Promise<ArrowBuild> {
+  const build = await ArrowBuild.findOne({
+    where: { id },
+    include: [{ model: Bow, as: 'bow', attributes: ['id'] }],
+    transaction,
+    lock: transaction ? transaction.LOCK.UPDATE : undefined,
+  });
+  if (!build) throw ApiError.notFound('That arrow build');
+  await bowFor(user, build.bowId, capability, 'That arrow build');
+  return build;
+}
+
+export function buildOut(build: ArrowBuild, sessionCount: number): Build {
+  return {
+    id: build.id,
+    bowId: build.bowId,
+    name: build.name,
+    shaftLabel: build.shaftLabel,
+    spine: build.spine,
+    grainsPerInch: build.grainsPerInch,
+    cutLengthMm: build.cutLengthMm,
+    diameterMm: build.diameterMm,
+    pointGr: build.pointGr,
+    insertGr: build.insertGr,
+    collarGr: build.collarGr,
+    nockGr: build.nockGr,
+    vaneCount: build.vaneCount,
+    vaneWeightGr: build.vaneWeightGr,
+    wrapGr: build.wrapGr,
+    balancePointMm: build.balancePointMm,
+    speedFps: build.speedFps,
+    dragCoefficient: build.dragCoefficient,
+    derived: {
+      totalGr: build.totalGr,
+      focPct: build.focPct,
+      kineticEnergyFtLb: build.kineticEnergyFtLb,
+      kineticEnergyJ: build.kineticEnergyJ,
+      momentumSlugFtPerS: build.momentumSlugFtPerS,
+      momentumKgMPerS: build.momentumKgMPerS,
+    },
+    sessionCount,
+    createdAt: build.createdAt.toISOString(),
+    updatedAt: build.updatedAt.toISOString(),
+  };
+}
+
+/** Number of sessions shot with each build. */
+export async function sessionCounts(buildIds: number[], transaction?: Transaction): Promise<Map<number, number>> {
+  const counts = new Map<number, number>();
+  if (buildIds.length === 0) return counts;
+  const rows = (await SightSession.findAll({
+    attributes: ['buildId', [fn('COUNT', col('id')), 'count']],
+    where: { buildId: { [Op.in]: buildIds } },
+    group: ['buildId'],
+    raw: true,
+    transaction,
+  })) as unknown as Array<{ buildId: number; count: number | string }>;
+  for (const row of rows) counts.set(Number(row.buildId), Number(row.count));
+  return counts;
+}
+
+/** Input fields plus the derived columns, ready to store. */
+function withDerived(input: BuildInput) {
+  const derived = arrowQuantities(input);
+  return { ...input, ...derived };
+}
+
+export async function listBuilds(user: User, bowId: number): Promise<Build[]> {
+  const bow = await findBow(user, bowId, 'read');
+  const builds = await ArrowBuild.findAll({ where: { bowId: bow.id }, order: [['id', 'ASC']] });
+  const counts = await sessionCounts(builds.map((build) => build.id));
+  return builds.map((build) => buildOut(build, counts.get(build.id) ?? 0));
+}
+
+export async function getBuild(user: User, id: number): Promise<Build> {
+  const build = await findOwnBuild(user, id, undefined, 'read');
+  const counts = await sessionCounts([build.id]);
+  return buildOut(build, counts.get(build.id) ?? 0);
+}
+
+export async function createBuild(user: User, bowId: number, input: BuildInput): Promise<Build> {
+  const bow = await findOwnBow(user, bowId);
+  const build = await ArrowBuild.create({ ...withDerived(input), bowId: bow.id });
+  return buildOut(build, 0);
+}
+
+/**
+ * PATCH: merge, re-check the whole build, recompute the derived quantities.
+ * Sessions already saved keep the fit they were saved with.
+ */
+export async function updateBuild(user: User, id: number, update: BuildUpdate): Promise<Build> {
+  return sequelize.transaction(async (transaction) => {
+    const build = await findOwnBuild(user, id, transaction);
+    const current = buildOut(build, 0);
+    const merged = buildInputSchema.safeParse({ ...current, ...update });
+    if (!merged.success) throw validationError(merged.error);
+    build.set(withDerived(merged.data));
+    await build.save({ transaction });
+    const counts = await sessionCounts([build.id], transaction);
+    return buildOut(build, counts.get(build.id) ?? 0);
+  });
+}
+
+/** Refused with 409 while sessions use the build (see the module comment). */
+export async function deleteBuild(user: User, id: number): Promise<void> {
+  await sequelize.transaction(async (transaction) => {
+    const build = await findOwnBuild(user, id, transaction);
+    const count = (await sessionCounts([build.id], transaction)).get(build.id) ?? 0;
+    if (count > 0) {
+      const sessions = count === 1 ? '1 sight-in session uses' : `${count} sight-in sessions use`;
+      throw ApiError.conflict(`${sessions} this arrow build. Delete ${count === 1 ? 'that session' : 'those sessions'} first, or keep the build.`);
+    }
+    await build.destroy({ transaction });
+  });
+}

@@ -1,0 +1,235 @@
+import request from 'supertest';
+import { Op } from 'sequelize';
+import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
+import { ArrowBuild, Bow, SessionMark, SightSession, Tape, User } from '@/server/models';
+import { bowListResponseSchema, bowDetailSchema } from '@/shared/bow';
+import { seedBows, demoBows } from '@/server/seed/bows';
+import { bowBody, bowWithSession } from './bow-fixtures';
+
+const app = testApp();
+afterAll(closeDb);
+
+describe('POST /api/bows', () => {
+  it('names each field problem in plain words and writes nothing', async () => {
+    const { agent, user } = await signedInAgent(app);
+    const res = await agent
+      .post('/api/bows')
+      .set(CSRF)
+      .send(bowBody({ nickname: ' ', hand: 'both', drawWeightLb: 12, sightRadiusMm: 1500, peepHeightMm: 'tall', tapeWidthMm: 2 }));
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('validation_failed');
+    expect(res.body.error.fields).toEqual({
+      nickname: 'Enter the nickname',
+      hand: 'Choose right or left hand',
+      drawWeightLb: 'Draw weight must be at least 20 lb',
+      sightRadiusMm: 'Sight radius must be at most 1200 mm',
+      peepHeightMm: 'Peep height must be a number',
+      tapeWidthMm: 'Tape width must be at least 6 mm',
+    });
+    expect(await Bow.count({ where: { userId: user.id } })).toBe(0);
+  });
+
+  it('asks a fixed multi-pin sight for its pin distances, each once', async () => {
+    const { agent } = await signedInAgent(app);
+    const none = await agent.post('/api/bows').set(CSRF).send(bowBody({ sightKind: 'fixed-multi-pin', pinDistances: [] }));
+    expect(none.status).toBe(400);
+    expect(none.body.error.fields).toEqual({ pinDistances: 'List the distance of each fixed pin' });
+    const twice = await agent.post('/api/bows').set(CSRF).send(bowBody({ sightKind: 'fixed-multi-pin', pinDistances: [20, 30, 30] }));
+    expect(twice.body.error.fields).toEqual({ 'pinDistances.2': 'Pin distance 30 is listed twice' });
+  });
+
+  it('creates a bow with lengths in mm and the defaults filled in', async () => {
+    const { agent, user } = await signedInAgent(app);
+    const res = await agent
+      .post('/api/bows')
+      .set(CSRF)
+      .send({ nickname: 'Fern gap', hand: 'left', drawWeightLb: 55, drawLengthMm: 698.5, sightKind: 'fixed-multi-pin', sightRadiusMm: 790, peepHeightMm: 104, pinDistances: [20, 30, 40, 50, 60] });
+    expect(res.status).toBe(201);
+    expect(res.body.bow).toMatchObject({
+      nickname: 'Fern gap',
+      hand: 'left',
+      userId: user.id,
+      letOffPct: null,
+      ratedSpeedFps: null,
+      scaleDirection: 'down',
+      tapeWidthMm: 12,
+      pinDistances: [20, 30, 40, 50, 60],
+      pinDistanceUnit: 'yd',
+      notes: '',
+    });
+    const stored = await Bow.findByPk(res.body.bow.id);
+    expect(stored!.drawLengthMm).toBeCloseTo(698.5, 9);
+    expect(stored!.pinDistances).toEqual([20, 30, 40, 50, 60]);
+  });
+
+  it('needs a signed-in account', async () => {
+    expect((await request(app).get('/api/bows')).status).toBe(401);
+    expect((await request(app).post('/api/bows').set(CSRF).send(bowBody())).status).toBe(401);
+  });
+});
+
+describe('GET /api/bows (the Bench)', () => {
+  it('lists only the account’s bows, each with its readiness', async () => {
+    const { agent } = await signedInAgent(app);
+    const empty = await agent.post('/api/bows').set(CSRF).send(bowBody({ nickname: 'Bare bow' }));
+    const { bow, session } = await bowWithSession(agent, [20, 35, 50]);
+    const tapeRes = await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, label: 'Bench tape' });
+    expect(tapeRes.status).toBe(201);
+    // A newer session with two marks becomes the latest.
+    const newer = await agent
+      .post(`/api/bows/${bow.id}/sessions`)
+      .set(CSRF)
+      .send({ buildId: session.buildId, date: '2026-11-20', marks: session.marks.slice(0, 2).map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })) });
+    expect(newer.status).toBe(201);
+
+    const other = await signedInAgent(app);
+    await other.agent.post('/api/bows').set(CSRF).send(bowBody({ nickname: 'Not yours' }));
+
+    const res = await agent.get('/api/bows');
+    expect(res.status).toBe(200);
+    const parsed = bowListResponseSchema.parse(res.body);
+    expect(parsed.bows.map((b) => b.nickname)).toEqual(['Bare bow', 'Test slider']);
+    expect(parsed.bows[0]).toMatchObject({ id: empty.body.bow.id, readiness: { latestSession: null, buildCount: 0, sessionCount: 0, hasTape: false } });
+    // `level` is filled in by the level-check feature; the Bench reads it from here.
+    expect(parsed.bows[0].readiness).toHaveProperty('level');
+    const readiness = parsed.bows[1].readiness;
+    expect(readiness).toMatchObject({ buildCount: 1, sessionCount: 2, hasTape: true });
+    expect(readiness.latestSession).toMatchObject({ id: newer.body.session.id, date: '2026-11-20', markCount: 2, longestDistance: 35, longestUnit: 'yd' });
+    expect(readiness.latestSession!.rmsMm).toBeCloseTo(newer.body.session.fit.rmsMm, 9);
+  });
+});
+
+describe('GET /api/bows/:id', () => {
+  it('returns the bow with its builds, sessions (newest first, with fit summaries) and tapes', async () => {
+    const { agent } = await signedInAgent(app);
+    const { bow, build, session } = await bowWithSession(agent, [20, 40, 60]);
+    const older = await agent
+      .post(`/api/bows/${bow.id}/sessions`)
+      .set(CSRF)
+      .send({ buildId: build.id, date: '2026-08-01', marks: session.marks.map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })) });
+    await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 70, label: 'Detail tape' });
+
+    const res = await agent.get(`/api/bows/${bow.id}`);
+    expect(res.status).toBe(200);
+    const detail = bowDetailSchema.parse(res.body.bow);
+    expect(detail.builds.map((b) => [b.id, b.sessionCount])).toEqual([[build.id, 2]]);
+    expect(detail.sessions.map((s) => s.id)).toEqual([session.id, older.body.session.id]);
+    expect(detail.sessions[0].summary).toMatchObject({ markCount: 3, longestDistance: 60, longestUnit: 'yd' });
+    expect(detail.sessions[0].summary.speedFps).toBeCloseTo(session.fit.speedFps, 9);
+    expect(detail.tapes).toEqual([expect.objectContaining({ sessionId: session.id, bowId: bow.id, label: 'Detail tape', fromDistance: 20, toDistance: 70 })]);
+  });
+});
+
+describe('PATCH /api/bows/:id', () => {
+  it('changes only the fields sent and re-checks the whole bow', async () => {
+    const { agent } = await signedInAgent(app);
+    const made = await agent.post('/api/bows').set(CSRF).send(bowBody());
+    const id = made.body.bow.id;
+    const res = await agent.patch(`/api/bows/${id}`).set(CSRF).send({ peepHeightMm: 118.5, notes: 'New peep' });
+    expect(res.status).toBe(200);
+    expect(res.body.bow).toMatchObject({ peepHeightMm: 118.5, notes: 'New peep', nickname: 'Test slider', sightRadiusMm: 838 });
+
+    const bad = await agent.patch(`/api/bows/${id}`).set(CSRF).send({ peepHeightMm: 30 });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields).toEqual({ peepHeightMm: 'Peep height must be at least 50 mm' });
+    // Cross-field rule on the merged bow: a fixed multi-pin needs its pins.
+    const kind = await agent.patch(`/api/bows/${id}`).set(CSRF).send({ sightKind: 'fixed-multi-pin' });
+    expect(kind.status).toBe(400);
+    expect(kind.body.error.fields).toEqual({ pinDistances: 'List the distance of each fixed pin' });
+    expect((await Bow.findByPk(id))!.sightKind).toBe('single-pin-slider');
+  });
+});
+
+describe('DELETE /api/bows/:id', () => {
+  it('deletes the bow with its builds, sessions, marks and tapes', async () => {
+    const { agent } = await signedInAgent(app);
+    const { bow, build, session } = await bowWithSession(agent, [20, 40, 60]);
+    await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 });
+    expect(await SessionMark.count({ where: { sessionId: session.id } })).toBe(3);
+
+    const res = await agent.delete(`/api/bows/${bow.id}`).set(CSRF);
+    expect(res.status).toBe(204);
+    expect(await Bow.count({ where: { id: bow.id } })).toBe(0);
+    expect(await ArrowBuild.count({ where: { id: build.id } })).toBe(0);
+    expect(await SightSession.count({ where: { id: session.id } })).toBe(0);
+    expect(await SessionMark.count({ where: { sessionId: session.id } })).toBe(0);
+    expect(await Tape.count({ where: { sessionId: session.id } })).toBe(0);
+    expect((await agent.get(`/api/bows/${bow.id}`)).status).toBe(404);
+  });
+});
+
+describe('ownership', () => {
+  it('gives another account a 404 on every bow route, and changes nothing', async () => {
+    const owner = await signedInAgent(app);
+    const made = await owner.agent.post('/api/bows').set(CSRF).send(bowBody({ nickname: 'Private bow' }));
+    const id = made.body.bow.id;
+    const stranger = await signedInAgent(app);
+    const responses = [
+      await stranger.agent.get(`/api/bows/${id}`),
+      await stranger.agent.patch(`/api/bows/${id}`).set(CSRF).send({ nickname: 'Mine now' }),
+      await stranger.agent.delete(`/api/bows/${id}`).set(CSRF),
+    ];
+    for (const res of responses) {
+      expect(res.status).toBe(404);
+      expect(res.body).toEqual({ error: { code: 'not_found', message: 'That bow was not found.' } });
+    }
+    expect((await stranger.agent.get('/api/bows')).body.bows).toEqual([]);
+    expect((await Bow.findByPk(id))!.nickname).toBe('Private bow');
+  });
+
+  it('answers a malformed id with a field message', async () => {
+    const { agent } = await signedInAgent(app);
+    const res = await agent.get('/api/bows/abc');
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toEqual({ 'params.id': 'The record id must be a number' });
+  });
+});
+
+describe('demo scenario (server/seed/bows.ts)', () => {
+  it('seeds Marit’s bows once: running it twice adds nothing', async () => {
+    const { user } = await signedInAgent(app, { name: 'Seed Twin' });
+    const archer = (await User.findByPk(user.id))!;
+    const counts = async () => {
+      const bows = await Bow.findAll({ where: { userId: archer.id } });
+      const bowIds = bows.map((bow) => bow.id);
+      const sessions = await SightSession.findAll({ where: { bowId: { [Op.in]: bowIds } } });
+      const sessionIds = sessions.map((session) => session.id);
+      return {
+        bows: bows.length,
+        builds: await ArrowBuild.count({ where: { bowId: { [Op.in]: bowIds } } }),
+        sessions: sessions.length,
+        marks: await SessionMark.count({ where: { sessionId: { [Op.in]: sessionIds } } }),
+        tapes: await Tape.count({ where: { sessionId: { [Op.in]: sessionIds } } }),
+      };
+    };
+    await seedBows(archer);
+    const first = await counts();
+    const expected = {
+      bows: demoBows.length,
+      builds: demoBows.flatMap((bow) => bow.builds).length,
+      sessions: demoBows.flatMap((bow) => bow.builds.flatMap((build) => build.sessions)).length,
+      marks: demoBows.flatMap((bow) => bow.builds.flatMap((build) => build.sessions.flatMap((session) => session.distances))).length,
+      tapes: demoBows.flatMap((bow) => bow.builds.flatMap((build) => build.sessions.flatMap((session) => session.tapes))).length,
+    };
+    expect(first).toEqual(expected);
+    expect(expected).toMatchObject({ bows: 2, builds: 3 });
+    await seedBows(archer);
+    expect(await counts()).toEqual(first);
+  });
+
+  it('has sessions with 2, 3 and 5 marks whose fits agree with the marks to a few tenths of a mm', async () => {
+    const { user } = await signedInAgent(app, { name: 'Seed Check' });
+    const archer = (await User.findByPk(user.id))!;
+    await seedBows(archer);
+    const bows = await Bow.findAll({ where: { userId: archer.id } });
+    const sessions = await SightSession.findAll({ where: { bowId: { [Op.in]: bows.map((bow) => bow.id) } }, include: [{ model: SessionMark, as: 'marks' }] });
+    expect(new Set(sessions.map((session) => session.marks!.length))).toEqual(new Set([2, 3, 5]));
+    for (const session of sessions) {
+      const fit = session.fit as { rmsMm: number; speedFps: number };
+      // Scatter is at most 0.1 mm plus 0.05 mm of rounding (the scenario's own construction).
+      expect(fit.rmsMm).toBeLessThan(0.2);
+      expect(fit.speedFps).toBeGreaterThan(250);
+      expect(fit.speedFps).toBeLessThan(330);
+    }
+  });
+});
