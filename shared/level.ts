@@ -90,6 +90,12 @@ export const stepUpdateSchema = z
     }
   });
 
+/** One step as the guided check saves it: like stepUpdateSchema, but a result must be chosen. */
+export const stepEntrySchema = stepUpdateSchema.refine((value) => value.result !== null, {
+  path: ['result'],
+  message: 'Choose a result: pass, adjusted, fail or skipped',
+});
+
 /**
  * Body of PATCH /api/checks/:id: results for some steps, the check's note or
  * place, and/or `complete: true` to finish it (every step must then have a
@@ -282,7 +288,7 @@ export type LevelPlace = z.infer<typeof levelPlaceSchema>;
 export type ReadingUnit = z.infer<typeof readingUnitSchema>;
 export type CheckStart = z.infer<typeof checkStartSchema>;
 export type StepUpdate = z.infer<typeof stepUpdateSchema>;
-export type StepFormValues = z.input<typeof stepUpdateSchema>;
+export type StepEntry = z.infer<typeof stepEntrySchema>;
 export type CheckUpdate = z.infer<typeof checkUpdateSchema>;
 export type BowChangeInput = z.infer<typeof bowChangeInputSchema>;
 export type BowChangeFormValues = z.input<typeof bowChangeFormSchema>;

@@ -1,7 +1,9 @@
 import zlib from 'node:zlib';
 import request from 'supertest';
 import { CSRF, closeDb, signedInAgent, testApp } from '@/tests/helpers/api';
-import { Bow } from '@/server/models';
+import { Bow, BowChange, LevelCheck, User } from '@/server/models';
+import { seedBows } from '@/server/seed/bows';
+import { seedLevel } from '@/server/seed/level';
 
 const app = testApp();
 type Agent = Awaited<ReturnType<typeof signedInAgent>>['agent'];
@@ -419,5 +421,52 @@ describe('readiness', () => {
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ bow: { id: fresh, nickname: 'Readiness bow' }, level: { state: 'none' }, marks: null, tape: null });
     expect(res.body.warnings).toEqual(['Level: Never checked.', 'No sight-in session yet: there are no confirmed marks for this bow.']);
+  });
+});
+
+describe('demo seed and the bows list', () => {
+  it('gives one bow verified and one due, shown in GET /api/bows, and seeds only once', async () => {
+    const seeded = await signedInAgent(app, { name: 'Seed Archer' });
+    const archer = (await User.findByPk(seeded.user.id))!;
+    await seedBows(archer);
+    await seedLevel(archer);
+    const bowIds = (await Bow.findAll({ where: { userId: archer.id } })).map((bow) => bow.id);
+    const counts = async () => ({
+      checks: await LevelCheck.count({ where: { bowId: bowIds } }),
+      changes: await BowChange.count({ where: { bowId: bowIds } }),
+    });
+    const first = await counts();
+    expect(first).toEqual({ checks: 2, changes: 1 });
+    await seedLevel(archer);
+    expect(await counts()).toEqual(first);
+
+    const list = await seeded.agent.get('/api/bows');
+    expect(list.status).toBe(200);
+    const byName = Object.fromEntries(
+      list.body.bows.map((bow: { nickname: string; readiness: { level: { state: string; reason: string } } }) => [bow.nickname, bow.readiness.level]),
+    );
+    expect(byName['Timberline slider']).toMatchObject({ state: 'verified', reason: 'Verified 9 days ago, on the bench and at the range.' });
+    expect(byName['Cedar five-pin']).toMatchObject({ state: 'due', reason: 'New string 12 days after the last check.' });
+
+    const cedar = list.body.bows.find((bow: { nickname: string }) => bow.nickname === 'Cedar five-pin');
+    const detail = await seeded.agent.get(`/api/bows/${cedar.id}`);
+    expect(detail.body.bow.readiness.level.state).toBe('due');
+  });
+
+  it('builds the trip readiness from the seeded sessions and tapes', async () => {
+    const seeded = await signedInAgent(app, { name: 'Trip Archer' });
+    const archer = (await User.findByPk(seeded.user.id))!;
+    await seedBows(archer);
+    await seedLevel(archer);
+    const cedar = (await Bow.findOne({ where: { userId: archer.id, nickname: 'Cedar five-pin' } }))!;
+    const res = await seeded.agent.get(`/api/bows/${cedar.id}/readiness`);
+    expect(res.status).toBe(200);
+    expect(res.body.level.state).toBe('due');
+    expect(res.body.marks.marks.length).toBeGreaterThanOrEqual(2);
+    // The longest confirmed mark is the largest distance of the latest session's marks.
+    const longest = Math.max(...res.body.marks.marks.map((m: { distance: number }) => m.distance));
+    expect(res.body.marks.longestDistance).toBe(longest);
+    expect(res.body.tape).not.toBeNull();
+    expect(res.body.warnings[0]).toBe('Level: New string 12 days after the last check.');
   });
 });

@@ -1,0 +1,207 @@
+import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { z } from 'zod';
+
+import { ApiError, apiFetch, csrfHeader } from '@/components/api/client';
+import { bowKeys } from '@/components/bows/api';
+import {
+  changeListResponseSchema,
+  changeResponseSchema,
+  checkListResponseSchema,
+  checkResponseSchema,
+  levelSummarySchema,
+  photoResponseSchema,
+  tripReadinessSchema,
+  type BowChange,
+  type BowChangeInput,
+  type CheckUpdate,
+  type LevelCheck,
+  type LevelPlace,
+  type LevelStepKey,
+  type LevelSummary,
+  type Photo,
+  type TripReadiness,
+} from '@/shared/level';
+
+/** Query keys of the level feature; every key starts with 'level'. */
+export const levelKeys = {
+  all: ['level'] as const,
+  summary: (bowId: number) => ['level', 'summary', bowId] as const,
+  checks: (bowId: number) => ['level', 'checks', bowId] as const,
+  check: (id: number) => ['level', 'check', id] as const,
+  changes: (bowId: number) => ['level', 'changes', bowId] as const,
+  readiness: (bowId: number) => ['level', 'readiness', bowId] as const,
+};
+
+const validId = (id: number | undefined): id is number => typeof id === 'number' && Number.isInteger(id) && id > 0;
+
+/** After any level write: refresh the level feature and every bow (the Bench shows the level state). */
+function refreshAfterWrite(queryClient: QueryClient) {
+  return Promise.all([
+    queryClient.invalidateQueries({ queryKey: levelKeys.all }),
+    queryClient.invalidateQueries({ queryKey: bowKeys.all }),
+  ]);
+}
+
+/**
+ * A bow's level state and why.
+ * Example: `const level = useLevel(3); level.data?.state` → 'due'
+ */
+export function useLevel(bowId: number | undefined) {
+  return useQuery<LevelSummary, ApiError>({
+    queryKey: levelKeys.summary(bowId ?? 0),
+    queryFn: () => apiFetch(`/api/bows/${bowId}/level`, { schema: levelSummarySchema }),
+    enabled: validId(bowId),
+  });
+}
+
+/** A bow's level checks, newest first (open ones included). */
+export function useChecks(bowId: number | undefined) {
+  return useQuery<LevelCheck[], ApiError>({
+    queryKey: levelKeys.checks(bowId ?? 0),
+    queryFn: async () => (await apiFetch(`/api/bows/${bowId}/checks`, { schema: checkListResponseSchema })).checks,
+    enabled: validId(bowId),
+  });
+}
+
+/** One level check with its steps (for resuming or reading back). */
+export function useCheck(id: number | undefined) {
+  return useQuery<LevelCheck, ApiError>({
+    queryKey: levelKeys.check(id ?? 0),
+    queryFn: async () => (await apiFetch(`/api/checks/${id}`, { schema: checkResponseSchema })).check,
+    enabled: validId(id),
+  });
+}
+
+/**
+ * Starts a check on the bow; resolves to the new check.
+ * Example: `useStartCheck(3).mutate('bench', { onSuccess: (check) => router.push(`/checks/${check.id}`) })`
+ */
+export function useStartCheck(bowId: number) {
+  const queryClient = useQueryClient();
+  return useMutation<LevelCheck, ApiError, LevelPlace>({
+    mutationFn: async (place) =>
+      (await apiFetch(`/api/bows/${bowId}/checks`, { method: 'POST', body: { place }, schema: checkResponseSchema })).check,
+    onSuccess: (check) => {
+      queryClient.setQueryData(levelKeys.check(check.id), check);
+      return refreshAfterWrite(queryClient);
+    },
+  });
+}
+
+/**
+ * Saves step results / note / completion of a check (PATCH /api/checks/:id).
+ * Example: `useSaveCheck(12).mutate({ steps: [{ step: 'setup', result: 'pass', … }] })`
+ */
+export function useSaveCheck(id: number) {
+  const queryClient = useQueryClient();
+  return useMutation<LevelCheck, ApiError, CheckUpdate>({
+    mutationFn: async (update) =>
+      (await apiFetch(`/api/checks/${id}`, { method: 'PATCH', body: update, schema: checkResponseSchema })).check,
+    onSuccess: (check) => {
+      queryClient.setQueryData(levelKeys.check(check.id), check);
+      return refreshAfterWrite(queryClient);
+    },
+  });
+}
+
+/** Discards an open check. */
+export function useDiscardCheck() {
+  const queryClient = useQueryClient();
+  return useMutation<void, ApiError, number>({
+    mutationFn: (id) => apiFetch<void>(`/api/checks/${id}`, { method: 'DELETE' }),
+    onSuccess: (_nothing, id) => {
+      queryClient.removeQueries({ queryKey: levelKeys.check(id) });
+      return refreshAfterWrite(queryClient);
+    },
+  });
+}
+
+/** A bow's change log, newest first. */
+export function useChanges(bowId: number | undefined) {
+  return useQuery<BowChange[], ApiError>({
+    queryKey: levelKeys.changes(bowId ?? 0),
+    queryFn: async () => (await apiFetch(`/api/bows/${bowId}/changes`, { schema: changeListResponseSchema })).changes,
+    enabled: validId(bowId),
+  });
+}
+
+/**
+ * Logs a change on the bow; resolves to the change and the bow's new level state.
+ * Example: `useLogChange(3).mutate({ kind: 'string', changedAt: new Date().toISOString(), note: '' })`
+ */
+export function useLogChange(bowId: number) {
+  const queryClient = useQueryClient();
+  return useMutation<z.infer<typeof changeResponseSchema>, ApiError, BowChangeInput>({
+    mutationFn: (input) => apiFetch(`/api/bows/${bowId}/changes`, { method: 'POST', body: input, schema: changeResponseSchema }),
+    onSuccess: (result) => {
+      queryClient.setQueryData(levelKeys.summary(bowId), result.level);
+      return refreshAfterWrite(queryClient);
+    },
+  });
+}
+
+/** Deletes a change the user logged. */
+export function useDeleteChange() {
+  const queryClient = useQueryClient();
+  return useMutation<void, ApiError, number>({
+    mutationFn: (id) => apiFetch<void>(`/api/changes/${id}`, { method: 'DELETE' }),
+    onSuccess: () => refreshAfterWrite(queryClient),
+  });
+}
+
+/** The before-a-trip summary of a bow. */
+export function useReadiness(bowId: number | undefined) {
+  return useQuery<TripReadiness, ApiError>({
+    queryKey: levelKeys.readiness(bowId ?? 0),
+    queryFn: () => apiFetch(`/api/bows/${bowId}/readiness`, { schema: tripReadinessSchema }),
+    enabled: validId(bowId),
+    staleTime: 0,
+  });
+}
+
+/**
+ * Uploads a step's photo as multipart form data (apiFetch sends JSON only),
+ * with the CSRF header and the server's error shape turned into an ApiError.
+ * Example: `await uploadStepPhoto(12, 'second-axis', file)` → { id, url, mimeType, sizeBytes }
+ */
+export async function uploadStepPhoto(checkId: number, step: LevelStepKey, file: Blob, fileName = 'photo'): Promise<Photo> {
+  const body = new FormData();
+  body.append('photo', file, fileName);
+  let res: Response;
+  try {
+    res = await fetch(`/api/checks/${checkId}/steps/${step}/photo`, {
+      method: 'POST',
+      body,
+      credentials: 'same-origin',
+      headers: { Accept: 'application/json', [csrfHeader]: '1' },
+    });
+  } catch {
+    throw new ApiError(0, 'network', 'Cannot reach Pinwright. Check your connection and try again.');
+  }
+  const payload = (await res.json().catch(() => null)) as { error?: { code?: string; message?: string } } | null;
+  if (!res.ok) {
+    const message = payload?.error?.message ?? (res.status === 413 ? 'The photo is larger than 5 MB.' : `The upload failed (HTTP ${res.status}).`);
+    throw new ApiError(res.status, payload?.error?.code ?? 'error', message);
+  }
+  const parsed = photoResponseSchema.safeParse(payload);
+  if (!parsed.success) throw new ApiError(res.status, 'bad_response', 'The server sent an answer we could not read.');
+  return parsed.data.photo;
+}
+
+/** Uploads (or replaces) a step's photo and refreshes the check. */
+export function useUploadStepPhoto(checkId: number) {
+  const queryClient = useQueryClient();
+  return useMutation<Photo, ApiError, { step: LevelStepKey; file: Blob; fileName?: string }>({
+    mutationFn: ({ step, file, fileName }) => uploadStepPhoto(checkId, step, file, fileName),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: levelKeys.check(checkId) }),
+  });
+}
+
+/** Removes a step's photo. */
+export function useRemoveStepPhoto(checkId: number) {
+  const queryClient = useQueryClient();
+  return useMutation<void, ApiError, LevelStepKey>({
+    mutationFn: (step) => apiFetch<void>(`/api/checks/${checkId}/steps/${step}/photo`, { method: 'DELETE' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: levelKeys.check(checkId) }),
+  });
+}
