@@ -12,6 +12,10 @@ import * as m0011 from './0011-arrow-builds';
 import * as m0012 from './0012-sight-sessions';
 import * as m0013 from './0013-session-marks';
 import * as m0014 from './0014-tapes';
+import * as m0020 from './0020-photos';
+import * as m0021 from './0021-level-checks';
+import * as m0022 from './0022-level-steps';
+import * as m0023 from './0023-bow-changes';
 
 type Step = { up: (p: { context: QueryInterface }) => Promise<void>; down: (p: { context: QueryInterface }) => Promise<void> };
 
@@ -23,6 +27,10 @@ export const migrations: Array<[string, Step]> = [
   ['0012-sight-sessions', m0012],
   ['0013-session-marks', m0013],
   ['0014-tapes', m0014],
+  ['0020-photos', m0020],
+  ['0021-level-checks', m0021],
+  ['0022-level-steps', m0022],
+  ['0023-bow-changes', m0023],
 ];
 
 export function migrator(sequelize: Sequelize) {

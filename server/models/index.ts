@@ -9,6 +9,10 @@ import { ArrowBuild } from './arrow-build';
 import { SightSession } from './sight-session';
 import { SessionMark } from './session-mark';
 import { Tape } from './tape';
+import { Photo } from './photo';
+import { LevelCheck } from './level-check';
+import { LevelStep } from './level-step';
+import { BowChange } from './bow-change';
 
 WebSession.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
@@ -27,4 +31,17 @@ SessionMark.belongsTo(SightSession, { foreignKey: 'sessionId', as: 'session' });
 SightSession.hasMany(Tape, { foreignKey: 'sessionId', as: 'tapes' });
 Tape.belongsTo(SightSession, { foreignKey: 'sessionId', as: 'session' });
 
-export { User, WebSession, Bow, ArrowBuild, SightSession, SessionMark, Tape };
+// Level checks, their steps and photos, and the change log (migrations 0020–0023).
+Bow.hasMany(LevelCheck, { foreignKey: 'bowId', as: 'levelChecks' });
+LevelCheck.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
+LevelCheck.belongsTo(User, { foreignKey: 'userId', as: 'performer' });
+LevelCheck.hasMany(LevelStep, { foreignKey: 'checkId', as: 'steps' });
+LevelStep.belongsTo(LevelCheck, { foreignKey: 'checkId', as: 'check' });
+LevelStep.belongsTo(Photo, { foreignKey: 'photoId', as: 'photo' });
+Bow.hasMany(Photo, { foreignKey: 'bowId', as: 'photos' });
+Photo.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
+Bow.hasMany(BowChange, { foreignKey: 'bowId', as: 'changes' });
+BowChange.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
+BowChange.belongsTo(User, { foreignKey: 'userId', as: 'loggedBy' });
+
+export { User, WebSession, Bow, ArrowBuild, SightSession, SessionMark, Tape, Photo, LevelCheck, LevelStep, BowChange };

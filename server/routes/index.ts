@@ -12,6 +12,8 @@ import { buildRoutes } from './builds';
 import { sessionRoutes } from './sessions';
 import { tapeRoutes } from './tapes';
 import { tryRoutes } from './try';
+import { levelRoutes } from './level';
+import { photoRoutes } from './photos';
 
 export function apiRoutes(sequelize: Sequelize) {
   const api = Router();
@@ -24,5 +26,7 @@ export function apiRoutes(sequelize: Sequelize) {
   api.use(sessionRoutes()); // /bows/:bowId/sessions, /sessions/:id
   api.use(tapeRoutes()); // /sessions/:sessionId/tapes, /tapes/:id, /sessions/:id/{tape.svg,sheet.svg,sheet.pdf}
   api.use(tryRoutes()); // public, rate-limited: /try/fit, /try/tape.svg, /try/sheet.svg, /try/sheet.pdf
+  api.use(levelRoutes()); // /bows/:bowId/{level,readiness,checks,changes}, /checks/:id, /changes/:id
+  api.use(photoRoutes()); // /checks/:id/steps/:step/photo, /photos/:id
   return api;
 }
