@@ -15,3 +15,4 @@ export * from '@/math/tape';
 export * from '@/math/sheet';
 export * from '@/math/pins';
 export * from '@/math/cautions';
+export type { FitInput, TapeOptionsInput, SheetOptionsInput, Paper } from '@/shared/fit';

@@ -3,8 +3,8 @@ import { INCH_MM } from '@/math/units/constants';
 import type { SightModel } from '@/math/flight/sight-model';
 import { FitInputError } from '@/math/fit/fit-input-error';
 import { NUMERAL_FONT, SMALL_PRINT_FONT, type GlyphFont } from '@/math/tape/glyphs';
-import { textPath } from '@/math/tape/text-path';
-import { tapeLayout } from '@/math/tape/tape-layout';
+import { textElement } from '@/math/tape/text-path';
+import { tapeLayouts } from '@/math/tape/tape-layout';
 import { tapeGroup } from '@/math/tape/tape-svg';
 import { PAPER_SIZES_MM } from '@/math/sheet/paper';
 import { wrapText } from '@/math/sheet/wrap-text';
@@ -50,7 +50,7 @@ export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): s
   const model = fit.model;
   const parts: string[] = [];
   const text = (content: string, font: GlyphFont, x: number, y: number, sizeMm: number, attributes = '') =>
-    parts.push(`<path${attributes ? ` ${attributes}` : ''} d="${textPath(content, font, { x, y, sizeMm }).d}"/>`);
+    parts.push(textElement(content, font, { x, y, sizeMm }, attributes));
 
   // Header: title, labels, marks and fit in small type.
   let y = MARGIN_MM + TITLE_MM;
@@ -85,7 +85,7 @@ export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): s
 
   // Tapes: 100 % first, then the variants, wrapping to more rows if needed.
   const percents = sheet.variants ? [0, ...SHEET_VARIANT_PERCENTS] : [0];
-  const layouts = percents.map((percent) => ({ percent, layout: tapeLayout(model, sheet.tape ?? {}, 1 + percent / 100) }));
+  const layouts = tapeLayouts(model, sheet.tape ?? {}, percents.map((percent) => 1 + percent / 100)).map((layout, i) => ({ percent: percents[i], layout }));
   const labelOf = (percent: number) => (percent === 0 ? '100 %' : `${percent > 0 ? '+' : '−'}${Math.abs(percent)} %`);
   const widthMm = layouts[0].layout.widthMm;
   const pitchMm = Math.max(widthMm, 12) + 6;
@@ -131,7 +131,7 @@ function calibrationBar(x: number, y: number, lengthMm: number, tickMm: number, 
     `<g class="calibration" data-calibration="${label}">`,
     `<rect data-calibration="${label}" data-length-mm="${fixed(lengthMm)}" x="${fixed(x)}" y="${fixed(y - 1.2)}" width="${fixed(lengthMm)}" height="1.2" fill="#000"/>`,
     ...ticks,
-    `<path d="${textPath(label, SMALL_PRINT_FONT, { x: x + lengthMm + 2, y: y + 0.6, sizeMm: 2.4 }).d}"/>`,
+    textElement(label, SMALL_PRINT_FONT, { x: x + lengthMm + 2, y: y + 0.6, sizeMm: 2.4 }),
     '</g>',
   ].join('\n');
 }

@@ -77,6 +77,14 @@ export function parseTapeOptions(options: TapeOptionsInput = {}): TapeOptions {
 
 /** The layout of a tape for `model` (see the module comment); `scale` stretches the tick spacing (1 = true size). */
 export function tapeLayout(model: SightModel, options: TapeOptionsInput = {}, scale = 1): TapeLayout {
+  return tapeLayouts(model, options, [scale])[0];
+}
+
+/**
+ * Layouts of one tape at several scales (the print sheet's variants), solving
+ * the marks once. Example: tapeLayouts(model, {}, [1, 0.99]).map(l => l.scale) → [1, 0.99]
+ */
+export function tapeLayouts(model: SightModel, options: TapeOptionsInput, scales: readonly number[]): TapeLayout[] {
   const tape = parseTapeOptions(options);
   const unit = tape.unit ?? model.distanceUnit;
   const distances: number[] = [];
@@ -97,41 +105,41 @@ export function tapeLayout(model: SightModel, options: TapeOptionsInput = {}, sc
   const majorMm = Math.min(0.45 * tape.widthMm, tape.widthMm - widest - gapMm - edgeMm);
   if (majorMm < 1.5) throw new FitInputError('tape.widthMm', `The tape is too narrow for ${numeralHeightMm} mm numerals; make it wider`);
   const lengths = { major: majorMm, middle: 0.75 * majorMm, minor: 0.5 * majorMm };
-
   const lowest = Math.min(...marks);
   const highest = Math.max(...marks);
   // Room above the first tick (and below the last) for half a numeral and the unit label.
   const marginMm = 2 * numeralHeightMm + 1;
-  const ticks: TapeTick[] = distances.map((distance, i) => {
-    const kind = isMultipleOf(distance, 10) ? 'major' : isMultipleOf5(distance) ? 'middle' : 'minor';
-    const offsetMm = marginMm + scale * (tape.orientation === 'down' ? marks[i] - lowest : highest - marks[i]);
-    return { distance, markMm: marks[i], offsetMm, kind, lengthMm: lengths[kind], strokeMm: TICK_STROKE_MM[kind], numeral: false };
-  });
 
-  // Numerals: tens first, then fives where they clear the ones already placed.
-  const clearanceMm = numeralHeightMm + 0.25;
-  const placed: number[] = [];
-  for (const kind of ['major', 'middle'] as const) {
-    for (const tick of ticks) {
-      if (tick.kind !== kind) continue;
-      if (placed.some((offset) => Math.abs(offset - tick.offsetMm) < clearanceMm)) continue;
-      tick.numeral = true;
-      placed.push(tick.offsetMm);
+  return scales.map((scale) => {
+    const ticks: TapeTick[] = distances.map((distance, i) => {
+      const kind = isMultipleOf(distance, 10) ? 'major' : isMultipleOf5(distance) ? 'middle' : 'minor';
+      const offsetMm = marginMm + scale * (tape.orientation === 'down' ? marks[i] - lowest : highest - marks[i]);
+      return { distance, markMm: marks[i], offsetMm, kind, lengthMm: lengths[kind], strokeMm: TICK_STROKE_MM[kind], numeral: false };
+    });
+    // Numerals: tens first, then fives where they clear the ones already placed.
+    const clearanceMm = numeralHeightMm + 0.25;
+    const placed: number[] = [];
+    for (const kind of ['major', 'middle'] as const) {
+      for (const tick of ticks) {
+        if (tick.kind !== kind) continue;
+        if (placed.some((offset) => Math.abs(offset - tick.offsetMm) < clearanceMm)) continue;
+        tick.numeral = true;
+        placed.push(tick.offsetMm);
+      }
     }
-  }
-
-  return {
-    unit,
-    widthMm: tape.widthMm,
-    lengthMm: 2 * marginMm + scale * (highest - lowest),
-    marginMm,
-    scale,
-    orientation: tape.orientation,
-    mirror: tape.mirror,
-    numeralHeightMm,
-    numeralXMm: majorMm + gapMm,
-    ticks,
-  };
+    return {
+      unit,
+      widthMm: tape.widthMm,
+      lengthMm: 2 * marginMm + scale * (highest - lowest),
+      marginMm,
+      scale,
+      orientation: tape.orientation,
+      mirror: tape.mirror,
+      numeralHeightMm,
+      numeralXMm: majorMm + gapMm,
+      ticks,
+    };
+  });
 }
 
 /** A tape numeral: the distance without trailing zeros. Example: formatTapeNumber(45) → '45' */

@@ -1,14 +1,15 @@
 import type { TapeOptionsInput } from '@/shared/fit';
 import type { SightModel } from '@/math/flight/sight-model';
 import { NUMERAL_FONT } from '@/math/tape/glyphs';
-import { textPath } from '@/math/tape/text-path';
+import { textElement } from '@/math/tape/text-path';
 import { formatTapeNumber, tapeLayout, type TapeLayout } from '@/math/tape/tape-layout';
 
 /**
  * A sight tape as a standalone SVG in millimetres: width="…mm" height="…mm"
  * and a viewBox in mm, so one user unit is one millimetre. Each tick is a
  * <line> with data-distance (the tape's unit) and data-offset-mm (from the
- * top edge); numerals are outline paths (no fonts needed). The outline is the
+ * top edge); numerals are outline paths (no fonts needed), each with
+ * data-numeral and its text in aria-label. The outline is the
  * cut line. Geometry and alignment: see tape-layout.ts and math/README.md.
  *
  * Example: tapeSvg(fit, { from: 20, to: 100, widthMm: 12 }) → '<svg xmlns="http://www.w3.org/2000/svg" width="12mm" height="47.1mm" …'
@@ -36,23 +37,20 @@ export function tapeGroup(layout: TapeLayout, extraAttributes = ''): string {
   );
   const numerals = layout.ticks
     .filter((tick) => tick.numeral)
-    .map((tick) => {
-      const { d } = textPath(formatTapeNumber(tick.distance), NUMERAL_FONT, {
-        x: across(layout.numeralXMm),
-        y: tick.offsetMm,
-        sizeMm: layout.numeralHeightMm,
-        anchor: layout.mirror ? 'end' : 'start',
-        baseline: 'middle',
-      });
-      return `<path data-numeral="${formatTapeNumber(tick.distance)}" d="${d}"/>`;
-    });
-  const unitLabel = textPath(layout.unit, NUMERAL_FONT, {
-    x: across(layout.numeralXMm),
-    y: 0.4 + layout.numeralHeightMm / 2,
-    sizeMm: layout.numeralHeightMm,
-    anchor: layout.mirror ? 'end' : 'start',
-    baseline: 'middle',
-  });
+    .map((tick) =>
+      textElement(
+        formatTapeNumber(tick.distance),
+        NUMERAL_FONT,
+        { x: across(layout.numeralXMm), y: tick.offsetMm, sizeMm: layout.numeralHeightMm, anchor: layout.mirror ? 'end' : 'start', baseline: 'middle' },
+        `data-numeral="${formatTapeNumber(tick.distance)}"`,
+      ),
+    );
+  const unitLabel = textElement(
+    layout.unit,
+    NUMERAL_FONT,
+    { x: across(layout.numeralXMm), y: 0.4 + layout.numeralHeightMm / 2, sizeMm: layout.numeralHeightMm, anchor: layout.mirror ? 'end' : 'start', baseline: 'middle' },
+    'class="unit"',
+  );
   return [
     `<g class="tape" data-unit="${layout.unit}" data-scale="${layout.scale}" data-orientation="${layout.orientation}" data-mirror="${layout.mirror}"${extraAttributes ? ` ${extraAttributes}` : ''}>`,
     `<rect class="cut-line" x="0" y="0" width="${mm(width)}" height="${fixed(layout.lengthMm)}" fill="#fff" stroke="#8a8a8a" stroke-width="0.1"/>`,
@@ -61,7 +59,7 @@ export function tapeGroup(layout: TapeLayout, extraAttributes = ''): string {
     '</g>',
     `<g class="numerals" fill="#000">`,
     ...numerals,
-    `<path class="unit" d="${unitLabel.d}"/>`,
+    unitLabel,
     '</g>',
     '</g>',
   ].join('\n');

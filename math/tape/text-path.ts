@@ -1,12 +1,16 @@
 import type { GlyphFont } from '@/math/tape/glyphs';
 
 /**
- * Text drawn as one SVG path in millimetres, from the glyph outlines of
- * glyphs.ts, so a print looks the same whatever fonts the printing machine has.
- * `sizeMm` is the height of the digits (the digit 1, baseline to top); a
- * character the font lacks is drawn as "?". No kerning.
+ * Text drawn as one SVG path from the glyph outlines of glyphs.ts, so a print
+ * looks the same whatever fonts the printing machine has.
  *
- * Example: textPath('40', NUMERAL_FONT, { x: 5, y: 10, sizeMm: 1.8 }) → { d: 'M…Z', widthMm: 2.24 }
+ * The path data stays in font units (y up) and one transform places and scales
+ * it: matrix(s 0 0 −s x y), s = sizeMm / digitHeight, so `sizeMm` is the
+ * height of the digits (the digit 1, baseline to top). Each glyph is written
+ * as one absolute move followed by relative commands, so placing a glyph costs
+ * two numbers, not hundreds. A character the font lacks is drawn as "?". No kerning.
+ *
+ * Example: textPath('40', NUMERAL_FONT, { x: 5, y: 10, sizeMm: 1.8 }) → { d: 'M16 …z', transform: 'matrix(0.0025714 0 0 -0.0025714 5 10)', widthMm: 2.24 }
  */
 export interface TextPlacement {
   /** Anchor point, mm (SVG user units, y down). */
@@ -20,24 +24,69 @@ export interface TextPlacement {
   baseline?: 'alphabetic' | 'middle';
 }
 
-type Parsed = { advance: number; commands: (string | number)[] };
-const parsedCache = new WeakMap<GlyphFont, Map<string, Parsed>>();
+/** A glyph ready to place: advance, its first point, the rest of its outline in relative commands. */
+interface PreparedGlyph {
+  advance: number;
+  startX: number;
+  startY: number;
+  rest: string;
+}
 
-function glyphOf(font: GlyphFont, character: string): Parsed {
-  let cache = parsedCache.get(font);
+const prepared = new WeakMap<GlyphFont, Map<string, PreparedGlyph>>();
+
+function glyphOf(font: GlyphFont, character: string): PreparedGlyph {
+  let cache = prepared.get(font);
   if (!cache) {
     cache = new Map();
-    parsedCache.set(font, cache);
+    prepared.set(font, cache);
   }
-  let parsed = cache.get(character);
-  if (!parsed) {
+  let glyph = cache.get(character);
+  if (!glyph) {
     const entry = font.glyphs[character] ?? font.glyphs['?'];
-    const commands: (string | number)[] = [];
-    for (const token of entry[1].match(/[MLQCZ]|-?\d*\.?\d+/g) ?? []) commands.push(/[MLQCZ]/.test(token) ? token : Number(token));
-    parsed = { advance: entry[0], commands };
-    cache.set(character, parsed);
+    glyph = toRelative(entry[0], entry[1]);
+    cache.set(character, glyph);
   }
-  return parsed;
+  return glyph;
+}
+
+/** Rewrite an absolute M/L/Q/C/Z outline as a first absolute point plus relative commands. */
+function toRelative(advance: number, path: string): PreparedGlyph {
+  const tokens = path.match(/[MLQCZ]|-?\d*\.?\d+/g) ?? [];
+  const n = (value: number) => String(Math.round(value * 100) / 100);
+  let i = 0;
+  let x = 0;
+  let y = 0;
+  let subpathX = 0;
+  let subpathY = 0;
+  let startX = NaN;
+  let startY = NaN;
+  let rest = '';
+  const read = () => Number(tokens[i++]);
+  while (i < tokens.length) {
+    const op = tokens[i++];
+    if (op === 'Z') {
+      rest += 'z';
+      x = subpathX;
+      y = subpathY;
+      continue;
+    }
+    const pairs = op === 'Q' ? 2 : op === 'C' ? 3 : 1;
+    const points: number[] = [];
+    for (let k = 0; k < pairs; k++) points.push(read(), read());
+    if (op === 'M' && Number.isNaN(startX)) {
+      startX = points[0];
+      startY = points[1];
+    } else {
+      rest += op.toLowerCase() + points.map((value, k) => n(value - (k % 2 === 0 ? x : y))).join(' ');
+    }
+    x = points[points.length - 2];
+    y = points[points.length - 1];
+    if (op === 'M') {
+      subpathX = x;
+      subpathY = y;
+    }
+  }
+  return { advance, startX: Number.isNaN(startX) ? 0 : startX, startY: Number.isNaN(startY) ? 0 : startY, rest };
 }
 
 /** Width of `text` at digit height `sizeMm`, mm. Example: measureTextMm('100', NUMERAL_FONT, 1.8) → 2.94 */
@@ -47,31 +96,34 @@ export function measureTextMm(text: string, font: GlyphFont, sizeMm: number): nu
   return (advance * sizeMm) / font.digitHeight;
 }
 
-/** The path data (mm, absolute) and width (mm) of `text` placed as `placement` says. Example: see the module comment. */
-export function textPath(text: string, font: GlyphFont, placement: TextPlacement): { d: string; widthMm: number } {
+/** The path data (font units), its placing transform and the width (mm) of `text`. Example: see the module comment. */
+export function textPath(text: string, font: GlyphFont, placement: TextPlacement): { d: string; transform: string; widthMm: number } {
   const scale = placement.sizeMm / font.digitHeight;
   const widthMm = measureTextMm(text, font, placement.sizeMm);
-  let x = placement.x - (placement.anchor === 'middle' ? widthMm / 2 : placement.anchor === 'end' ? widthMm : 0);
-  const baselineY = placement.y + (placement.baseline === 'middle' ? placement.sizeMm / 2 : 0);
-  const parts: string[] = [];
-  const f = (value: number) => String(Math.round(value * 1000) / 1000);
+  const x = placement.x - (placement.anchor === 'middle' ? widthMm / 2 : placement.anchor === 'end' ? widthMm : 0);
+  const y = placement.y + (placement.baseline === 'middle' ? placement.sizeMm / 2 : 0);
+  let d = '';
+  let pen = 0;
   for (const character of text) {
     const glyph = glyphOf(font, character);
-    const commands = glyph.commands;
-    let i = 0;
-    while (i < commands.length) {
-      const op = commands[i++] as string;
-      const count = op === 'Z' ? 0 : op === 'Q' ? 4 : op === 'C' ? 6 : 2;
-      let part = op;
-      for (let k = 0; k < count; k += 2) {
-        const gx = commands[i + k] as number;
-        const gy = commands[i + k + 1] as number;
-        part += `${k ? ' ' : ''}${f(x + gx * scale)} ${f(baselineY - gy * scale)}`;
-      }
-      i += count;
-      parts.push(part);
-    }
-    x += glyph.advance * scale;
+    if (glyph.rest) d += `M${Math.round((pen + glyph.startX) * 100) / 100} ${glyph.startY}${glyph.rest}`;
+    pen += glyph.advance;
   }
-  return { d: parts.join(''), widthMm };
+  const s = Number(scale.toPrecision(8));
+  return { d, transform: `matrix(${s} 0 0 ${-s} ${Number(x.toFixed(4))} ${Number(y.toFixed(4))})`, widthMm };
+}
+
+/**
+ * `text` as a ready <path> element, with the text itself in aria-label (for
+ * screen readers and tests) and any `attributes` added.
+ * Example: textElement('50 mm', SMALL_PRINT_FONT, { x: 64, y: 90, sizeMm: 2.4 }) → '<path aria-label="50 mm" transform="matrix(…)" d="…"/>'
+ */
+export function textElement(text: string, font: GlyphFont, placement: TextPlacement, attributes = ''): string {
+  const { d, transform } = textPath(text, font, placement);
+  return `<path aria-label="${escapeXml(text)}"${attributes ? ` ${attributes}` : ''} transform="${transform}" d="${d}"/>`;
+}
+
+/** Escape text for an XML attribute or element. Example: escapeXml('a < b & "c"') → 'a &lt; b &amp; &quot;c&quot;' */
+export function escapeXml(text: string): string {
+  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 }
