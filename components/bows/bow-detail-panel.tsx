@@ -1,0 +1,163 @@
+import { useRouter } from 'expo-router';
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { useDeleteBow } from '@/components/bows/api';
+import { bowSetupItems } from '@/components/bows/bow-setup-items';
+import { formatLength } from '@/components/bows/form-numbers';
+import { KeyValueList } from '@/components/bows/key-value-list';
+import { fitWords, formatDay } from '@/components/bows/readiness-words';
+import { buildLine, buildName } from '@/components/builds/build-words';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { ConfirmBar } from '@/components/ui/confirm-bar';
+import { ReadinessBadge } from '@/components/ui/readiness-badge';
+import { SectionHeading } from '@/components/ui/section-heading';
+import { space } from '@/components/theme';
+import type { LengthUnit } from '@/shared/auth';
+import type { BowDetail } from '@/shared/bow';
+import type { Build } from '@/shared/build';
+import type { SessionListItem } from '@/shared/session';
+import type { Tape } from '@/shared/tape';
+
+/** What the detail pane shows. */
+export type BowSelection =
+  | { kind: 'setup' }
+  | { kind: 'build'; id: number }
+  | { kind: 'session'; id: number }
+  | { kind: 'tape'; id: number };
+
+/** The bow's set-up with Edit and Delete (delete asks first and names what is lost). */
+export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) {
+  const router = useRouter();
+  const remove = useDeleteBow();
+  const [asking, setAsking] = useState(false);
+  const counts = [
+    `${bow.builds.length} ${bow.builds.length === 1 ? 'build' : 'builds'}`,
+    `${bow.sessions.length} ${bow.sessions.length === 1 ? 'sight-in' : 'sight-ins'}`,
+    `${bow.tapes.length} ${bow.tapes.length === 1 ? 'tape' : 'tapes'}`,
+  ].join(', ');
+  return (
+    <Card style={styles.panel} testID="bow-setup">
+      <SectionHeading
+        title="Set-up"
+        action={<Button label="Edit" variant="secondary" href={`/bows/${bow.id}/edit`} testID="bow-edit" />}
+      />
+      <KeyValueList items={bowSetupItems(bow, unit)} />
+      {asking ? (
+        <ConfirmBar
+          title={`Delete ${bow.nickname}?`}
+          message={`This deletes the bow with its ${counts}. It cannot be undone.`}
+          confirmLabel="Delete for good"
+          pendingLabel="Deleting…"
+          pending={remove.isPending}
+          error={remove.isError ? remove.error.message : null}
+          onConfirm={() => remove.mutate(bow.id, { onSuccess: () => router.replace('/') })}
+          onCancel={() => setAsking(false)}
+          testID="bow-delete-confirm"
+        />
+      ) : (
+        <Button label="Delete this bow" variant="quiet" onPress={() => setAsking(true)} />
+      )}
+    </Card>
+  );
+}
+
+/** One build's components and derived numbers. */
+function BuildPanel({ bow, build, unit }: { bow: BowDetail; build: Build; unit: LengthUnit }) {
+  const items = [
+    { label: 'Total', value: `${build.derived.totalGr.toFixed(1)} gr`, numeric: true },
+    { label: 'FOC', value: build.derived.focPct === null ? 'Balance point not measured' : `${build.derived.focPct.toFixed(1)} %`, numeric: true },
+    { label: 'Shaft', value: [build.shaftLabel, build.spine ? `spine ${build.spine}` : ''].filter(Boolean).join(', ') || '—' },
+    { label: 'Cut length', value: formatLength(build.cutLengthMm, unit, 1), numeric: true },
+    { label: 'Point', value: `${build.pointGr} gr`, numeric: true },
+    { label: 'Speed', value: build.speedFps === null ? 'Not chronographed' : `${build.speedFps} fps`, numeric: true },
+  ];
+  if (build.derived.kineticEnergyJ !== null && build.derived.kineticEnergyFtLb !== null) {
+    items.push({
+      label: 'Kinetic energy',
+      value: `${build.derived.kineticEnergyJ.toFixed(1)} J (${build.derived.kineticEnergyFtLb.toFixed(1)} ft·lbf), an estimate`,
+      numeric: true,
+    });
+  }
+  return (
+    <Card style={styles.panel} testID="build-detail">
+      <SectionHeading title={build.name} description="Arrow build" />
+      <KeyValueList items={items} />
+      <View style={styles.actions}>
+        <Button label="Open the build" href={`/builds/${build.id}`} />
+        <Button label="Sight in with it" variant="secondary" href={`/bows/${bow.id}/sessions/new?build=${build.id}`} />
+      </View>
+    </Card>
+  );
+}
+
+/** One sight-in's summary, with links to the session and its tape. */
+function SessionPanel({ bow, session }: { bow: BowDetail; session: SessionListItem }) {
+  const words = fitWords(session.summary);
+  const items = [
+    { label: 'Date', value: formatDay(session.date) },
+    { label: 'Build', value: buildName(bow.builds, session.buildId) },
+    { label: 'Place', value: session.placeLabel || '—' },
+    { label: 'Marks', value: words.detail },
+  ];
+  if (session.summary.speedFps !== null) items.push({ label: 'Fitted speed', value: `${session.summary.speedFps.toFixed(0)} fps` });
+  return (
+    <Card style={styles.panel} testID="session-detail">
+      <SectionHeading title={`Sight-in, ${formatDay(session.date)}`} description={session.placeLabel || undefined} />
+      <ReadinessBadge state={words.state} label={words.label} subject="Fit" />
+      <KeyValueList items={items} />
+      <View style={styles.actions}>
+        <Button label="Open the sight-in" href={`/sessions/${session.id}`} />
+        <Button label="Tape" variant="secondary" href={`/sessions/${session.id}/tape`} />
+      </View>
+    </Card>
+  );
+}
+
+/** One saved tape layout. */
+function TapePanel({ tape }: { tape: Tape }) {
+  const items = [
+    { label: 'Range', value: `${tape.fromDistance}–${tape.toDistance} ${tape.unit}, every ${tape.step}`, numeric: true },
+    { label: 'Numbers', value: tape.orientation === 'down' ? 'Run down the tape' : 'Run up the tape' },
+    { label: 'Width', value: `${tape.widthMm} mm${tape.mirror ? ', mirrored' : ''}` },
+    { label: 'Paper', value: tape.paper === 'a4' ? 'A4' : 'Letter' },
+  ];
+  return (
+    <Card style={styles.panel} testID="tape-detail">
+      <SectionHeading title={tape.label || 'Tape layout'} description={`Saved ${formatDay(tape.updatedAt)}`} />
+      <KeyValueList items={items} />
+      <Button label="Open the tape" href={`/sessions/${tape.sessionId}/tape?tape=${tape.id}`} />
+    </Card>
+  );
+}
+
+/**
+ * The wide screen's detail pane: the selected record of the bow.
+ * Example: `<BowDetailPanel bow={bow} unit="mm" selection={{ kind: 'build', id: 4 }} />`
+ */
+export function BowDetailPanel({ bow, unit, selection }: { bow: BowDetail; unit: LengthUnit; selection: BowSelection }) {
+  if (selection.kind === 'build') {
+    const build = bow.builds.find((item) => item.id === selection.id);
+    if (build) return <BuildPanel bow={bow} build={build} unit={unit} />;
+  }
+  if (selection.kind === 'session') {
+    const session = bow.sessions.find((item) => item.id === selection.id);
+    if (session) return <SessionPanel bow={bow} session={session} />;
+  }
+  if (selection.kind === 'tape') {
+    const tape = bow.tapes.find((item) => item.id === selection.id);
+    if (tape) return <TapePanel tape={tape} />;
+  }
+  return <SetupPanel bow={bow} unit={unit} />;
+}
+
+/** A build's one-line summary, for lists. */
+export function buildRowDetail(build: Build): string {
+  return buildLine(build.derived, build.speedFps);
+}
+
+const styles = StyleSheet.create({
+  panel: { gap: space.lg },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+});

@@ -1,0 +1,224 @@
+import { useState } from 'react';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+
+import { useMe } from '@/components/auth/api';
+import { useBow } from '@/components/bows/api';
+import { BowDetailPanel, buildRowDetail, SetupPanel, type BowSelection } from '@/components/bows/bow-detail-panel';
+import { sightKindNames } from '@/components/bows/bow-setup-items';
+import { formatLength } from '@/components/bows/form-numbers';
+import { fitWords, formatDay, levelWords, sightInWords, tapeWords } from '@/components/bows/readiness-words';
+import { RecordRow } from '@/components/bows/record-row';
+import { buildName } from '@/components/builds/build-words';
+import { Button } from '@/components/ui/button';
+import { ErrorView } from '@/components/ui/error-view';
+import { PlusIcon } from '@/components/ui/icons';
+import { LoadingView } from '@/components/ui/loading-view';
+import { NotFoundScreen } from '@/components/ui/not-found-screen';
+import { ReadinessBadge } from '@/components/ui/readiness-badge';
+import { Screen } from '@/components/ui/screen';
+import { ScreenTitle } from '@/components/ui/screen-title';
+import { SectionHeading } from '@/components/ui/section-heading';
+import { Text } from '@/components/ui/text';
+import { colors, radii, space } from '@/components/theme';
+import type { LengthUnit } from '@/shared/auth';
+import type { BowDetail } from '@/shared/bow';
+
+/** Window width (px) from which the bow's lists and the selected record sit side by side. */
+export const bowSplitFrom = 900;
+
+function Readiness({ bow }: { bow: BowDetail }) {
+  const parts = [sightInWords(bow.readiness), tapeWords(bow.readiness), levelWords(bow.readiness)].filter(
+    (part): part is NonNullable<typeof part> => part !== null,
+  );
+  return (
+    <View style={styles.readiness} testID="bow-readiness">
+      {parts.map((part) => (
+        <View key={part.label} style={styles.readinessItem}>
+          <ReadinessBadge state={part.state} label={part.label} />
+          <Text variant="small" tone="soft">
+            {part.detail}
+          </Text>
+        </View>
+      ))}
+      <View style={styles.readinessLinks}>
+        <Button label="Level check" variant="secondary" href={`/bows/${bow.id}/level`} testID="bow-level" />
+        <Button label="Before a trip" variant="quiet" href={`/bows/${bow.id}/readiness`} />
+      </View>
+    </View>
+  );
+}
+
+interface ListsProps {
+  bow: BowDetail;
+  /** Wide screen: rows select; phone: rows link to their screens. */
+  selection: BowSelection | null;
+  onSelect: (selection: BowSelection) => void;
+}
+
+function Lists({ bow, selection, onSelect }: ListsProps) {
+  const split = selection !== null;
+  const isSelected = (kind: BowSelection['kind'], id?: number) =>
+    selection?.kind === kind && (kind === 'setup' || (selection as { id?: number }).id === id);
+  const canSightIn = bow.builds.length > 0;
+  return (
+    <View style={styles.lists}>
+      {split ? (
+        <RecordRow title="Set-up" detail="Draw, sight and peep" selected={isSelected('setup')} onSelect={() => onSelect({ kind: 'setup' })} />
+      ) : null}
+
+      <View style={styles.section}>
+        <SectionHeading
+          title="Arrow builds"
+          level={2}
+          action={<Button label="Add a build" icon={PlusIcon} variant="secondary" href={`/bows/${bow.id}/builds/new`} testID="add-build" />}
+        />
+        {bow.builds.length === 0 ? (
+          <Text tone="soft">No builds yet. A build gives the fit the arrow&apos;s weight and diameter.</Text>
+        ) : (
+          bow.builds.map((build) => (
+            <RecordRow
+              key={build.id}
+              testID={`build-row-${build.id}`}
+              title={build.name}
+              detail={buildRowDetail(build)}
+              href={split ? undefined : `/builds/${build.id}`}
+              selected={isSelected('build', build.id)}
+              onSelect={() => onSelect({ kind: 'build', id: build.id })}
+            />
+          ))
+        )}
+      </View>
+
+      <View style={styles.section}>
+        <SectionHeading
+          title="Sight-in sessions"
+          level={2}
+          action={
+            <Button
+              label="Start a sight-in"
+              icon={PlusIcon}
+              variant={canSightIn ? 'primary' : 'secondary'}
+              disabled={!canSightIn}
+              href={`/bows/${bow.id}/sessions/new`}
+              testID="start-session"
+            />
+          }
+        />
+        {!canSightIn ? <Text tone="soft">Add an arrow build first: the fit needs the arrow.</Text> : null}
+        {canSightIn && bow.sessions.length === 0 ? <Text tone="soft">No sight-ins yet. Two marks are enough to start.</Text> : null}
+        {bow.sessions.map((session) => (
+          <RecordRow
+            key={session.id}
+            testID={`session-row-${session.id}`}
+            title={`${formatDay(session.date)}${session.placeLabel ? ` · ${session.placeLabel}` : ''}`}
+            detail={`${buildName(bow.builds, session.buildId)} · ${fitWords(session.summary).detail}`}
+            href={split ? undefined : `/sessions/${session.id}`}
+            selected={isSelected('session', session.id)}
+            onSelect={() => onSelect({ kind: 'session', id: session.id })}
+          />
+        ))}
+      </View>
+
+      <View style={styles.section}>
+        <SectionHeading title="Tapes" level={2} />
+        {bow.tapes.length === 0 ? <Text tone="soft">No saved tapes. Open a sight-in to lay out and print one.</Text> : null}
+        {bow.tapes.map((tape) => (
+          <RecordRow
+            key={tape.id}
+            testID={`tape-row-${tape.id}`}
+            title={tape.label || `Tape ${tape.fromDistance}–${tape.toDistance} ${tape.unit}`}
+            detail={`Saved ${formatDay(tape.updatedAt)} · ${tape.widthMm} mm wide`}
+            href={split ? undefined : `/sessions/${tape.sessionId}/tape?tape=${tape.id}`}
+            selected={isSelected('tape', tape.id)}
+            onSelect={() => onSelect({ kind: 'tape', id: tape.id })}
+          />
+        ))}
+      </View>
+    </View>
+  );
+}
+
+function subtitle(bow: BowDetail, unit: LengthUnit): string {
+  return [
+    bow.hand === 'right' ? 'Right hand' : 'Left hand',
+    `${bow.drawWeightLb} lb`,
+    `${formatLength(bow.drawLengthMm, unit)} draw`,
+    sightKindNames[bow.sightKind],
+  ].join(' · ');
+}
+
+/**
+ * A bow: readiness, set-up, builds, sight-ins and tapes with their actions. On
+ * a wide screen the lists and the selected record sit side by side; on a phone
+ * the set-up comes first and each row opens its own screen.
+ * Example: `<BowScreen bowId={3} />`
+ */
+export function BowScreen({ bowId }: { bowId: number }) {
+  const me = useMe();
+  const bow = useBow(bowId);
+  const { width } = useWindowDimensions();
+  const split = width >= bowSplitFrom;
+  const [selection, setSelection] = useState<BowSelection>({ kind: 'setup' });
+
+  if (!Number.isInteger(bowId) || bowId <= 0) return <NotFoundScreen />;
+  if (bow.isPending || !me.data) {
+    return (
+      <>
+        <ScreenTitle name="Bow" />
+        <LoadingView label="Loading the bow…" />
+      </>
+    );
+  }
+  if (bow.isError) {
+    return (
+      <>
+        <ScreenTitle name="Bow" />
+        <ErrorView title="The bow could not be loaded" error={bow.error} onRetry={() => bow.refetch()} retrying={bow.isFetching} />
+      </>
+    );
+  }
+
+  const data = bow.data;
+  const unit = me.data.lengthUnit;
+  return (
+    <Screen testID="bow-screen">
+      <ScreenTitle name={data.nickname} />
+      <SectionHeading level={1} title={data.nickname} description={subtitle(data, unit)} action={<Button label="Bench" variant="quiet" href="/" />} />
+      <Readiness bow={data} />
+      <Button label="Level checks and changes" variant="secondary" href={`/bows/${data.id}/level`} testID="open-level" />
+      {split ? (
+        <View style={styles.split}>
+          <View style={styles.listColumn}>
+            <Lists bow={data} selection={selection} onSelect={setSelection} />
+          </View>
+          <View style={styles.detailColumn}>
+            <BowDetailPanel bow={data} unit={unit} selection={selection} />
+          </View>
+        </View>
+      ) : (
+        <>
+          <SetupPanel bow={data} unit={unit} />
+          <Lists bow={data} selection={null} onSelect={setSelection} />
+        </>
+      )}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  readiness: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    gap: space.md,
+    padding: space.lg,
+    borderRadius: radii.lg,
+    backgroundColor: colors.sunken,
+  },
+  readinessItem: { flexGrow: 1, flexShrink: 1, flexBasis: 220, gap: space.xs },
+  readinessLinks: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'center', flexBasis: '100%' },
+  split: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
+  listColumn: { flexBasis: 400, flexGrow: 0, flexShrink: 1, minWidth: 320 },
+  detailColumn: { flex: 1, minWidth: 0 },
+  lists: { gap: space.xl },
+  section: { gap: space.sm },
+});
