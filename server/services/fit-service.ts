@@ -9,17 +9,23 @@
  * in the stored fit (marks, residuals, scale zero); the fitted `model` stays in
  * math's convention, which is also the physical one the tape is drawn from.
  */
-import { fitSight, type FitResult } from '@/math/fit/fit-sight';
-import { isFitInputError } from '@/math/fit/fit-input-error';
-import { tapeSvg as mathTapeSvg } from '@/math/tape';
-import { printSheetSvg } from '@/math/sheet';
+import {
+  STANDARD_GRAVITY_MPS2,
+  airDensityKgM3,
+  fitSight,
+  focPercent,
+  isFitInputError,
+  kineticEnergy,
+  mmToInches,
+  momentum,
+  predictMarksMm,
+  printSheetSvg,
+  tapeSvg as mathTapeSvg,
+  totalArrowGrains,
+  type FitResult,
+  type SightModel,
+} from '@/math';
 import { sheetPdf } from '@/server/print/sheet-pdf';
-import { focPercent, kineticEnergy, momentum, totalArrowGrains } from '@/math/arrow';
-import { mmToInches } from '@/math/units';
-import type { SightModel } from '@/math/flight/sight-model';
-import { predictMarksMm } from '@/math/flight/predict-mark';
-import { airDensityKgM3 } from '@/math/air';
-import { STANDARD_GRAVITY_MPS2 } from '@/math/units';
 import { ApiError } from '@/server/errors';
 import type { ArrowBuild, Bow } from '@/server/models';
 import type { FitInput, SheetInput, SheetLabels, TapeInput, TapeOptionsInput } from '@/shared/fit';
@@ -54,23 +60,35 @@ function refusingInputErrors<T>(compute: () => T, names: Record<string, string> 
   }
 }
 
-/** Distances to predict (in the fit's unit): every 5 from 10 to 100, or to 20 beyond the longest mark, at most 150. */
-export function predictDistances(longest: number): number[] {
+/**
+ * Distances to predict (in the fit's unit): every 5 from 10 to 100, or to 20
+ * beyond the longest mark (at most 150), plus any fixed pins' distances.
+ * Example: predictDistances(60, [33]) → [10, 15, …, 30, 33, 35, …, 100]
+ */
+export function predictDistances(longest: number, pins: number[] = []): number[] {
   const last = Math.min(150, Math.max(100, Math.ceil((longest + 20) / 10) * 10));
   const distances: number[] = [];
   for (let distance = 10; distance <= last; distance += 5) distances.push(distance);
-  return distances;
+  for (const pin of pins) {
+    // Numeric care: a pin converted from metres may differ from a grid distance by rounding only.
+    if (pin >= 5 && pin <= 150 && !distances.some((distance) => Math.abs(distance - pin) < 1e-6)) distances.push(pin);
+  }
+  return distances.sort((a, b) => a - b);
 }
+
+/** What a fit needs of a bow; fixed pins' distances are predicted too. */
+export type FitBow = Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirection'> & Partial<Pick<Bow, 'pinDistances' | 'pinDistanceUnit'>>;
 
 /**
  * The math core's fit input for a session: sight radius and peep height from
  * the bow; mass, diameter, drag coefficient and chronographed speed from the
  * build; air from the session; marks in the first mark's unit (others
- * converted exactly), readings signed for math's downward-growing convention.
+ * converted exactly), readings signed for math's downward-growing convention;
+ * predictions on a grid of 5s and at the bow's fixed pins.
  * Example: fitInputFor(bow, build, { altitudeM: 1450, temperatureC: 4, marks }).sight → { radiusMm: 838, peepHeightMm: 112 }
  */
 export function fitInputFor(
-  bow: Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirection'>,
+  bow: FitBow,
   build: Pick<ArrowBuild, 'totalGr' | 'diameterMm' | 'dragCoefficient' | 'speedFps'>,
   session: { altitudeM: number | null; temperatureC: number | null; marks: MarkInput[] },
 ): FitInput {
@@ -89,7 +107,10 @@ export function fitInputFor(
     arrow,
     air,
     marks,
-    predict: predictDistances(Math.max(...marks.map((mark) => mark.distance))),
+    predict: predictDistances(
+      Math.max(...marks.map((mark) => mark.distance)),
+      (bow.pinDistances ?? []).map((pin) => convertDistance(pin, bow.pinDistanceUnit ?? 'yd', unit)),
+    ),
   };
 }
 
@@ -138,7 +159,7 @@ const SESSION_FIELDS: Record<string, string> = {
  * Example: fitSession(bow, build, { altitudeM: null, temperatureC: null, marks }).speedFps → ≈ 283
  */
 export function fitSession(
-  bow: Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirection'>,
+  bow: FitBow,
   build: Pick<ArrowBuild, 'totalGr' | 'diameterMm' | 'dragCoefficient' | 'speedFps'>,
   session: { altitudeM: number | null; temperatureC: number | null; marks: MarkInput[] },
 ): StoredFit {

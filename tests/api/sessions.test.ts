@@ -118,6 +118,16 @@ describe('POST /api/bows/:bowId/sessions', () => {
     expect(b.body.session.fit.speedFps).toBeCloseTo(a.body.session.fit.speedFps, 6);
   });
 
+  it('predicts the marks of a fixed multi-pin sight’s own pin distances too', async () => {
+    const { agent } = await signedInAgent(app);
+    const { bow, build } = await bowWithBuild(agent, { sightKind: 'fixed-multi-pin', pinDistances: [20, 33, 47] });
+    const res = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20, 60]) });
+    expect(res.status).toBe(201);
+    const distances = res.body.session.fit.marks.map((mark: { distance: number }) => mark.distance);
+    expect(distances).toEqual(expect.arrayContaining([20, 33, 47]));
+    expect(distances).toEqual([...distances].sort((a: number, b: number) => a - b));
+  });
+
   it('reads an upward-growing scale as the archer reads it', async () => {
     const { agent } = await signedInAgent(app);
     const down = await bowWithBuild(agent);
@@ -183,6 +193,7 @@ describe('PATCH /api/sessions/:id', () => {
     const storedFit = (await SightSession.findByPk(session.id))!.fit;
     // The real database, with the mark insert made to fail after the session row was updated and the old marks deleted.
     jest.spyOn(SessionMark, 'bulkCreate').mockRejectedValueOnce(new Error('disk full'));
+    jest.spyOn(console, 'error').mockImplementation(() => {}); // the error handler logs the injected failure
     const res = await agent.patch(`/api/sessions/${session.id}`).set(CSRF).send({ placeLabel: 'Changed', marks: knownMarks([20, 30, 50]) });
     expect(res.status).toBe(500);
     expect(res.body.error.message).toBe('Something went wrong on our side. Nothing was saved.');
@@ -196,6 +207,7 @@ describe('PATCH /api/sessions/:id', () => {
     const { agent } = await signedInAgent(app);
     const { bow, build } = await bowWithBuild(agent);
     jest.spyOn(SessionMark, 'bulkCreate').mockRejectedValueOnce(new Error('disk full'));
+    jest.spyOn(console, 'error').mockImplementation(() => {});
     const res = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20, 60]) });
     expect(res.status).toBe(500);
     expect(await SightSession.count({ where: { bowId: bow.id } })).toBe(0);
