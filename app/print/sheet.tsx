@@ -1,0 +1,9 @@
+import { useLocalSearchParams } from 'expo-router';
+
+import { PrintSheetScreen } from '@/components/print/print-sheet-screen';
+
+export default function PrintSheet() {
+  const { session, source, ...layout } = useLocalSearchParams<Record<string, string>>();
+  const query = new URLSearchParams(layout).toString();
+  return <PrintSheetScreen sessionId={session ? Number(session) : undefined} source={source === 'try' ? 'try' : undefined} query={query} />;
+}

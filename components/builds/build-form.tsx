@@ -1,0 +1,157 @@
+import { useMemo, useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+
+import { FieldGrid } from '@/components/bows/field-grid';
+import { applyFieldErrors, flatFieldPath } from '@/components/bows/server-field-errors';
+import { textFormResolver } from '@/components/bows/text-form-resolver';
+import { useSaveBuild } from '@/components/builds/api';
+import { buildFormDefaults, buildFormFields, buildFormSchema, type BuildFormText } from '@/components/builds/build-form-values';
+import { BuildTotals } from '@/components/builds/build-totals';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { FormField } from '@/components/ui/form-field';
+import { SectionHeading } from '@/components/ui/section-heading';
+import { useWide } from '@/components/ui/use-wide';
+import { space } from '@/components/theme';
+import type { LengthUnit } from '@/shared/auth';
+import type { Build, BuildInput } from '@/shared/build';
+
+export interface BuildFormProps {
+  /** The bow the build belongs to (new builds). */
+  bowId: number;
+  /** The build to edit; absent for a new one. */
+  build?: Build;
+  lengthUnit: LengthUnit;
+  onSaved: (build: Build) => void;
+  onCancel: () => void;
+}
+
+/**
+ * An arrow build's components, with total grains, FOC, kinetic energy and
+ * momentum worked out by the math core as the archer types. Checked with the
+ * shared build schema before anything is sent; saved in one request.
+ * Example: `<BuildForm bowId={3} lengthUnit="in" onSaved={(build) => router.replace(`/builds/${build.id}`)} onCancel={router.back} />`
+ */
+export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: BuildFormProps) {
+  const save = useSaveBuild();
+  const wide = useWide();
+  const [general, setGeneral] = useState<string | null>(null);
+  const resolver = useMemo(
+    () => textFormResolver<BuildFormText, BuildInput>(buildFormSchema(lengthUnit), { inches: lengthUnit === 'in' }),
+    [lengthUnit],
+  );
+  const { control, handleSubmit, setError } = useForm<BuildFormText, unknown, BuildInput>({
+    resolver,
+    defaultValues: buildFormDefaults(build, lengthUnit),
+  });
+  const text = useWatch({ control }) as BuildFormText;
+  const unit = lengthUnit;
+
+  const submit = handleSubmit(
+    (input) => {
+      setGeneral(null);
+      save.mutate(
+        { id: build?.id, bowId, input },
+        {
+          onSuccess: onSaved,
+          onError: (error) => setGeneral(applyFieldErrors(error, flatFieldPath(buildFormFields), setError)),
+        },
+      );
+    },
+    () => setGeneral('Some fields need another look; nothing was saved.'),
+  );
+
+  const fields = (
+    <View style={styles.fields}>
+      <Card style={styles.section}>
+        <SectionHeading title="Name and shaft" />
+        <FieldGrid>
+          <FormField control={control} name="name" label="Build name" hint="e.g. “Heavy elk arrows”" autoCapitalize="sentences" />
+          <FormField control={control} name="shaftLabel" label="Shaft label" hint="Optional: what the shaft says on it, in your words." />
+        </FieldGrid>
+        <FieldGrid minWidth={150}>
+          <FormField control={control} name="spine" label="Spine" hint="Optional" numeric />
+          <FormField control={control} name="grainsPerInch" label="Grains per inch" unit="gpi" numeric />
+          <FormField control={control} name="cutLengthMm" label="Cut length" hint="Nock throat to shaft end" unit={unit} numeric />
+          <FormField control={control} name="diameterMm" label="Diameter" hint="Shaft outside" unit={unit} numeric />
+        </FieldGrid>
+      </Card>
+
+      <Card style={styles.section}>
+        <SectionHeading title="Components" description="Weights in grains. Leave a part you do not use empty." />
+        <FieldGrid minWidth={150}>
+          <FormField control={control} name="pointGr" label="Point" unit="gr" numeric />
+          <FormField control={control} name="insertGr" label="Insert" unit="gr" numeric />
+          <FormField control={control} name="collarGr" label="Collar" unit="gr" numeric />
+          <FormField control={control} name="nockGr" label="Nock" unit="gr" numeric />
+        </FieldGrid>
+        <FieldGrid minWidth={150}>
+          <FormField control={control} name="vaneCount" label="Vanes" hint="How many" numeric />
+          <FormField control={control} name="vaneWeightGr" label="Each vane" unit="gr" numeric />
+          <FormField control={control} name="wrapGr" label="Wrap" unit="gr" numeric />
+        </FieldGrid>
+      </Card>
+
+      <Card style={styles.section}>
+        <SectionHeading title="Measured" description="Optional, but each one sharpens the numbers." />
+        <FieldGrid minWidth={180}>
+          <FormField
+            control={control}
+            name="balancePointMm"
+            label="Balance point"
+            hint="From the nock throat, with the point on. Gives FOC."
+            unit={unit}
+            numeric
+          />
+          <FormField control={control} name="speedFps" label="Chronographed speed" hint="From this bow. Gives energy." unit="fps" numeric />
+          <FormField
+            control={control}
+            name="dragCoefficient"
+            label="Drag coefficient"
+            hint="Leave empty for the default (about 2, a fletched hunting arrow)."
+            numeric
+          />
+        </FieldGrid>
+      </Card>
+    </View>
+  );
+
+  const totals = <BuildTotals text={text} lengthUnit={lengthUnit} />;
+
+  return (
+    <View style={styles.form}>
+      {general ? (
+        <Banner tone="error" title={build ? 'Could not save the build' : 'Could not add the build'} testID="build-form-error">
+          {general}
+        </Banner>
+      ) : null}
+      {wide ? (
+        <View style={styles.split}>
+          <View style={styles.main}>{fields}</View>
+          <View style={styles.side}>{totals}</View>
+        </View>
+      ) : (
+        <>
+          {totals}
+          {fields}
+        </>
+      )}
+      <View style={styles.actions}>
+        <Button label={build ? 'Save the build' : 'Add the build'} pendingLabel="Saving…" pending={save.isPending} onPress={submit} testID="build-save" />
+        <Button label="Cancel" variant="secondary" onPress={onCancel} disabled={save.isPending} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.xl },
+  fields: { gap: space.xl },
+  section: { gap: space.lg },
+  split: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
+  main: { flex: 1, minWidth: 0 },
+  side: { width: 300, position: 'sticky' as never, top: space.lg },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+});

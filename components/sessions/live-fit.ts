@@ -1,0 +1,120 @@
+import { optionalTextToNumber, textToNumber } from '@/components/bows/form-numbers';
+import type { MarkRowText } from '@/components/sessions/session-form-values';
+import { trySightFit, type FitResult } from '@/math/fit/fit-sight';
+import { predictMarksMm } from '@/math/flight/predict-mark';
+import type { DistanceUnit } from '@/shared/auth';
+import type { Bow } from '@/shared/bow';
+import type { Build } from '@/shared/build';
+import type { FitInput } from '@/shared/fit';
+
+/** What the live fit reads from the form (a subset of SessionFormText). */
+export interface LiveFitText {
+  buildId: string;
+  altitudeM: string;
+  temperatureC: string;
+  unit: DistanceUnit;
+  marks: MarkRowText[];
+}
+
+/** A sighted mark the fit can use: its table row, distance (table unit) and reading as the archer reads it (mm). */
+export interface UsableMark {
+  row: number;
+  distance: number;
+  scaleMm: number;
+}
+
+/** The live fit: the math core's result with readings as the archer reads them, or why there is none yet. */
+export type LiveFit =
+  | { state: 'fit'; fit: FitResult; marks: UsableMark[]; sign: 1 | -1 }
+  | { state: 'waiting'; message: string; marks: UsableMark[] }
+  | { state: 'refused'; message: string; field: string; marks: UsableMark[] };
+
+/**
+ * Distances whose marks are predicted: every 5 from 10 to 100 yd (10 to 90 m,
+ * the metre equivalent), further when a mark is sighted beyond; at most 150.
+ * Example: predictionDistances('yd', 60) → [10, 15, …, 100]
+ */
+export function predictionDistances(unit: DistanceUnit, longest: number): number[] {
+  const top = unit === 'yd' ? 100 : 90;
+  const last = Math.min(150, Math.max(top, Math.ceil((longest + 10) / 10) * 10));
+  const distances: number[] = [];
+  for (let distance = 10; distance <= last; distance += 5) distances.push(distance);
+  return distances;
+}
+
+/** Rows with a numeric distance and reading, in table order. */
+export function usableMarks(rows: readonly (MarkRowText | undefined)[]): UsableMark[] {
+  return rows.flatMap((row, index) => {
+    if (!row) return [];
+    const distance = textToNumber(row.distance);
+    const scaleMm = textToNumber(row.scaleMm);
+    if (distance === undefined || scaleMm === undefined || !Number.isFinite(distance) || !Number.isFinite(scaleMm)) return [];
+    return [{ row: index, distance, scaleMm }];
+  });
+}
+
+/**
+ * The math core's fit input for the marks typed so far: sight radius and peep
+ * height from the bow, the arrow from the build (total grains, diameter,
+ * optional drag coefficient and chronographed speed), the air from the header.
+ * Readings are signed for the math's convention (growing as the pin moves
+ * down), as the server does when it saves: a scale that grows upward is negated.
+ * Example: liveFitInput(text, bow, build, marks).sight → { radiusMm: 840, peepHeightMm: 112 }
+ */
+export function liveFitInput(text: LiveFitText, bow: Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirection'>, build: Build, marks: UsableMark[]): FitInput {
+  const sign = bow.scaleDirection === 'up' ? -1 : 1;
+  const air: NonNullable<FitInput['air']> = {};
+  const altitudeM = optionalTextToNumber(text.altitudeM);
+  const temperatureC = optionalTextToNumber(text.temperatureC);
+  if (altitudeM !== null && Number.isFinite(altitudeM)) air.altitudeM = altitudeM;
+  if (temperatureC !== null && Number.isFinite(temperatureC)) air.temperatureC = temperatureC;
+  const arrow: FitInput['arrow'] = { massGr: build.derived.totalGr, diameterMm: build.diameterMm };
+  if (build.dragCoefficient !== null) arrow.dragCoefficient = build.dragCoefficient;
+  if (build.speedFps !== null) arrow.speedFps = build.speedFps;
+  return {
+    distanceUnit: text.unit,
+    sight: { radiusMm: bow.sightRadiusMm, peepHeightMm: bow.peepHeightMm },
+    arrow,
+    air,
+    marks: marks.map((mark) => ({ distance: mark.distance, markMm: sign * mark.scaleMm })),
+    predict: predictionDistances(text.unit, Math.max(...marks.map((mark) => mark.distance))),
+  };
+}
+
+/**
+ * Refits the marks typed so far (pure; call it from a memo). Fewer than two
+ * usable marks → 'waiting'; marks no arrow can give → 'refused' with the math
+ * core's plain message (e.g. an impossible gap).
+ * Example: liveFit(text, bow, builds).state → 'fit'
+ */
+export function liveFit(text: LiveFitText, bow: Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirection'>, builds: readonly Build[]): LiveFit {
+  const marks = usableMarks(text.marks ?? []);
+  const build = builds.find((item) => String(item.id) === text.buildId);
+  if (!build) return { state: 'waiting', message: 'Choose the arrow build you shot.', marks };
+  if (marks.length < 2) {
+    return {
+      state: 'waiting',
+      message: marks.length === 0 ? 'Enter two marks (a short and a long distance) to see the fit.' : 'Enter one more mark, at another distance, to see the fit.',
+      marks,
+    };
+  }
+  try {
+    const attempt = trySightFit(liveFitInput(text, bow, build, marks));
+    if (!attempt.ok) return { state: 'refused', message: attempt.error.message, field: attempt.error.field, marks };
+    return { state: 'fit', fit: attempt.fit, marks, sign: bow.scaleDirection === 'up' ? -1 : 1 };
+  } catch (error) {
+    return { state: 'refused', message: error instanceof Error ? error.message : 'The fit failed.', field: 'marks', marks };
+  }
+}
+
+/**
+ * The fitted curve for a chart: (distance, reading as the archer reads it)
+ * every `step` from `from` to `to`; unreachable points are left out.
+ * Example: fittedCurve(fit, 1, 10, 100, 1).length → 91
+ */
+export function fittedCurve(fit: FitResult, sign: 1 | -1, from: number, to: number, step = 1): { x: number; y: number }[] {
+  const distances: number[] = [];
+  for (let distance = from; distance <= to + 1e-9; distance += step) distances.push(distance);
+  const marks = predictMarksMm(fit.model, distances);
+  return distances.flatMap((distance, index) => (Number.isFinite(marks[index]) ? [{ x: distance, y: sign * marks[index] }] : []));
+}

@@ -1,0 +1,82 @@
+import { StyleSheet, View } from 'react-native';
+
+import type { UsableMark } from '@/components/sessions/live-fit';
+import { Text } from '@/components/ui/text';
+import { borders, colors, radii, space } from '@/components/theme';
+import type { FitResult } from '@/math/fit/fit-sight';
+
+export interface PredictedMarksProps {
+  fit: FitResult;
+  sign: 1 | -1;
+  marks: UsableMark[];
+}
+
+/**
+ * The predicted mark for every distance of the range (10–100 yd, or 10–90 m)
+ * with its ± band in mm and in distance; a distance sighted today is marked
+ * "sighted", one whose band is too wide "confirm".
+ * Example: `<PredictedMarks fit={fit} sign={1} marks={marks} />`
+ */
+export function PredictedMarks({ fit, sign, marks }: PredictedMarksProps) {
+  const unit = fit.distanceUnit;
+  const sighted = (distance: number) => marks.some((mark) => Math.abs(mark.distance - distance) < 1e-9);
+  return (
+    <View style={styles.table} role="table" aria-label="Predicted marks" testID="predicted-marks">
+      <View style={[styles.row, styles.head]} role="row">
+        <Text variant="label" style={styles.distance} role="columnheader">
+          Distance
+        </Text>
+        <Text variant="label" style={styles.mark} role="columnheader">
+          Mark
+        </Text>
+        <Text variant="label" style={styles.band} role="columnheader">
+          ± band
+        </Text>
+        <Text variant="label" style={styles.status} role="columnheader">
+          Status
+        </Text>
+      </View>
+      {fit.marks.map((mark, index) => {
+        const reachable = Number.isFinite(mark.markMm);
+        const isSighted = sighted(mark.distance);
+        const status = !reachable ? 'Out of reach' : isSighted ? 'Sighted' : mark.verify ? 'Confirm' : 'Predicted';
+        return (
+          <View
+            key={mark.distance}
+            role="row"
+            style={[styles.row, index % 2 === 1 && styles.stripe, mark.verify && reachable && !isSighted && styles.verify]}
+            testID={`predicted-${mark.distance}`}
+          >
+            <Text variant="numeral" style={[styles.cell, styles.distance]} role="cell">
+              {mark.distance} {unit}
+            </Text>
+            <Text variant="numeral" style={[styles.cell, styles.mark]} role="cell">
+              {reachable ? `${(sign * mark.markMm).toFixed(2)} mm` : '—'}
+            </Text>
+            <Text variant="numeral" tone="soft" style={[styles.cell, styles.band]} role="cell">
+              {reachable && Number.isFinite(mark.sigmaMm)
+                ? `${mark.sigmaMm.toFixed(2)} mm${mark.sigmaDistance !== null ? ` · ${mark.sigmaDistance.toFixed(1)} ${unit}` : ''}`
+                : '—'}
+            </Text>
+            <Text variant="small" tone={status === 'Confirm' ? 'due' : status === 'Sighted' ? 'verified' : 'soft'} style={styles.status} role="cell">
+              {status}
+            </Text>
+          </View>
+        );
+      })}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  table: { borderRadius: radii.md, borderWidth: borders.hairline, borderColor: colors.line, overflow: 'hidden', backgroundColor: colors.surface },
+  row: { flexDirection: 'row', alignItems: 'center', paddingHorizontal: space.md, paddingVertical: space.xs, gap: space.sm, minHeight: 40 },
+  head: { backgroundColor: colors.sunken, borderBottomWidth: borders.hairline, borderBottomColor: colors.line },
+  stripe: { backgroundColor: colors.paper },
+  verify: { backgroundColor: colors.dueTint },
+  cell: { fontSize: 18, lineHeight: 22 },
+  distance: { flexBasis: 56, flexGrow: 0, flexShrink: 0 },
+  mark: { flexBasis: 76, flexGrow: 1 },
+  band: { flexBasis: 96, flexGrow: 1 },
+  status: { flexBasis: 66, flexGrow: 0, flexShrink: 0, textAlign: 'right' },
+});

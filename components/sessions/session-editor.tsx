@@ -1,0 +1,288 @@
+import { useRouter } from 'expo-router';
+import { useDeferredValue, useMemo, useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+
+import { FieldGrid } from '@/components/bows/field-grid';
+import { applyFieldErrors } from '@/components/bows/server-field-errors';
+import { buildLine } from '@/components/builds/build-words';
+import { FitChart } from '@/components/sessions/fit-chart';
+import { FitWarnings } from '@/components/sessions/fit-warnings';
+import { liveFit, type LiveFit, type LiveFitText } from '@/components/sessions/live-fit';
+import { MarkTable, type RowFit } from '@/components/sessions/mark-table';
+import { PredictedMarks } from '@/components/sessions/predicted-marks';
+import { useDeleteSession, useSaveSession } from '@/components/sessions/api';
+import {
+  keptRows,
+  sessionFormDefaults,
+  sessionFormResolver,
+  tablePath,
+  type SessionFormText,
+} from '@/components/sessions/session-form-values';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { ConfirmBar } from '@/components/ui/confirm-bar';
+import { FormChoice } from '@/components/ui/form-choice';
+import { FormField } from '@/components/ui/form-field';
+import { SectionHeading } from '@/components/ui/section-heading';
+import { Text } from '@/components/ui/text';
+import { space } from '@/components/theme';
+import type { DistanceUnit } from '@/shared/auth';
+import type { BowDetail } from '@/shared/bow';
+import type { Session, SessionInput } from '@/shared/session';
+
+export interface SessionEditorProps {
+  bow: BowDetail;
+  /** The saved session; absent for a new sight-in. */
+  session?: Session;
+  /** A new session's build (e.g. from ?build=); else the bow's first build. */
+  initialBuildId?: number;
+  distanceUnit: DistanceUnit;
+}
+
+/** Window width (px) from which the marks and the live fit sit side by side. */
+const splitFrom = 1000;
+
+const unitOptions = [
+  { value: 'yd', label: 'Yards' },
+  { value: 'm', label: 'Metres' },
+] as const;
+
+/** The residual of each table row against the live fit, as the archer reads the scale. */
+function rowFitsOf(live: LiveFit): Record<number, RowFit> {
+  if (live.state !== 'fit') return {};
+  const fits: Record<number, RowFit> = {};
+  for (const mark of live.marks) {
+    const residual = live.fit.residuals.find((item) => Math.abs(item.distance - mark.distance) < 1e-9);
+    if (residual) fits[mark.row] = { fittedMm: live.sign * residual.fittedMm, residualMm: live.sign * residual.residualMm, outlier: residual.outlier };
+  }
+  return fits;
+}
+
+/** The table row a refusal names ("marks[1].distance" counts usable marks). */
+function refusedRowOf(live: LiveFit): number | null {
+  if (live.state !== 'refused') return null;
+  const match = /^marks\[(\d+)\]/.exec(live.field);
+  return match ? (live.marks[Number(match[1])]?.row ?? null) : null;
+}
+
+function FitSummary({ live }: { live: Extract<LiveFit, { state: 'fit' }> }) {
+  const { fit } = live;
+  const figures = [
+    { label: 'Arrow speed', value: `${fit.speedFps.toFixed(0)} fps` },
+    { label: 'Marks', value: String(fit.residuals.length) },
+    { label: 'RMS off the fit', value: fit.method === 'two-mark' ? 'exact (2 marks)' : `${fit.rmsMm.toFixed(2)} mm` },
+  ];
+  return (
+    <View style={styles.figures} testID="fit-summary">
+      {figures.map((figure) => (
+        <View key={figure.label} style={styles.figure}>
+          <Text variant="small" tone="soft">
+            {figure.label}
+          </Text>
+          <Text variant="numeralLarge" style={styles.figureValue}>
+            {figure.value}
+          </Text>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+/**
+ * A sight-in: the session header, the marks table and, as the archer types,
+ * the refit from the math core: predicted marks for the whole range with their
+ * bands, warnings in plain words and charts. Saving sends the whole session in
+ * one request; the server refits and stores the fit. Messages from the server
+ * go to the table row they concern.
+ * Example: `<SessionEditor bow={bow} distanceUnit="yd" />`
+ */
+export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: SessionEditorProps) {
+  const router = useRouter();
+  const save = useSaveSession();
+  const remove = useDeleteSession();
+  const { width } = useWindowDimensions();
+  const split = width >= splitFrom;
+  const [general, setGeneral] = useState<string | null>(null);
+  const [asking, setAsking] = useState(false);
+  const firstBuild = initialBuildId && bow.builds.some((build) => build.id === initialBuildId) ? initialBuildId : bow.builds[0]?.id;
+  const { control, handleSubmit, setError, formState, reset } = useForm<SessionFormText, unknown, SessionInput>({
+    resolver: sessionFormResolver,
+    defaultValues: sessionFormDefaults(session, firstBuild, distanceUnit),
+  });
+
+  const [buildId, altitudeM, temperatureC, unit, marks] = useWatch({
+    control,
+    name: ['buildId', 'altitudeM', 'temperatureC', 'unit', 'marks'],
+  });
+  // The fit reruns on each keystroke; a deferred key lets typing stay ahead of it.
+  const key = JSON.stringify({ buildId, altitudeM, temperatureC, unit, marks });
+  const deferredKey = useDeferredValue(key);
+  const live = useMemo(() => liveFit(JSON.parse(deferredKey) as LiveFitText, bow, bow.builds), [deferredKey, bow]);
+  const rowFits = useMemo(() => rowFitsOf(live), [live]);
+
+  const buildOptions = bow.builds.map((build) => ({ value: String(build.id), label: build.name }));
+  const chosen = bow.builds.find((build) => String(build.id) === buildId);
+
+  const submit = handleSubmit(
+    (input) => {
+      setGeneral(null);
+      const kept = keptRows(marks ?? []);
+      save.mutate(
+        { id: session?.id, bowId: bow.id, input },
+        {
+          onSuccess: (saved) => {
+            if (session) reset(sessionFormDefaults(saved, undefined, distanceUnit));
+            else router.replace(`/sessions/${saved.id}`);
+          },
+          onError: (error) =>
+            setGeneral(
+              applyFieldErrors(
+                error,
+                (field) => {
+                  const parts = field.split('.').map((part) => (/^\d+$/.test(part) ? Number(part) : part));
+                  const known = ['buildId', 'date', 'placeLabel', 'altitudeM', 'temperatureC', 'notes', 'marks'];
+                  return known.includes(String(parts[0])) ? tablePath(parts, kept) : null;
+                },
+                setError,
+              ),
+            ),
+        },
+      );
+    },
+    () => setGeneral('Some fields need another look; nothing was saved.'),
+  );
+
+  const header = (
+    <Card style={styles.section}>
+      <SectionHeading title="The session" />
+      {buildOptions.length > 0 ? (
+        <FormChoice control={control} name="buildId" label="Arrow build" options={buildOptions} testID="session-build" />
+      ) : null}
+      {chosen ? (
+        <Text variant="small" tone="soft">
+          {buildLine(chosen.derived, chosen.speedFps)} · {chosen.diameterMm} mm shaft
+        </Text>
+      ) : null}
+      <FieldGrid minWidth={170}>
+        <FormField control={control} name="date" label="Date" hint="YYYY-MM-DD" testID="session-date" />
+        <FormField control={control} name="placeLabel" label="Place" hint="Optional, e.g. “home range”" />
+      </FieldGrid>
+      <FieldGrid minWidth={140}>
+        <FormField control={control} name="altitudeM" label="Altitude" hint="Optional" unit="m" numeric />
+        <FormField control={control} name="temperatureC" label="Temperature" hint="Optional" unit="°C" numeric />
+      </FieldGrid>
+      <FormChoice control={control} name="unit" label="Distances in" options={unitOptions} testID="session-unit" />
+    </Card>
+  );
+
+  const table = (
+    <Card style={styles.section}>
+      <SectionHeading title="Marks" description="The scale reading where your group landed centred, for each distance." />
+      <MarkTable control={control} unit={unit} rowFits={rowFits} refusedRow={refusedRowOf(live)} />
+      <FormField control={control} name="notes" label="Session notes" hint="Optional: wind, light, anything odd." multiline numberOfLines={3} />
+    </Card>
+  );
+
+  const results = (
+    <Card style={styles.section} testID="live-fit">
+      <SectionHeading title="Live fit" description="Refitted as you type, with drag, from your marks and the bow's sight radius and peep height." />
+      {live.state === 'waiting' ? <Text tone="soft">{live.message}</Text> : null}
+      <FitWarnings live={live} />
+      {live.state === 'fit' ? (
+        <>
+          <FitSummary live={live} />
+          <PredictedMarks fit={live.fit} sign={live.sign} marks={live.marks} />
+          <FitChart fit={live.fit} sign={live.sign} marks={live.marks} />
+        </>
+      ) : null}
+    </Card>
+  );
+
+  const actions = (
+    <View style={styles.actions}>
+      <Button
+        label={session ? 'Save the marks' : 'Save the sight-in'}
+        pendingLabel="Saving…"
+        pending={save.isPending}
+        onPress={submit}
+        testID="session-save"
+      />
+      {session ? (
+        <Button
+          label="Tape"
+          variant="secondary"
+          href={`/sessions/${session.id}/tape`}
+          disabled={formState.isDirty}
+          testID="open-tape"
+        />
+      ) : null}
+      <Button label="Back to the bow" variant="quiet" href={`/bows/${bow.id}`} />
+    </View>
+  );
+
+  return (
+    <View style={styles.editor}>
+      {general ? (
+        <Banner tone="error" title="Could not save the sight-in" testID="session-error">
+          {general}
+        </Banner>
+      ) : null}
+      {save.isSuccess && session && !formState.isDirty ? (
+        <Banner tone="info" title="Saved">
+          The server refitted the marks and stored the fit. Open the tape to print it.
+        </Banner>
+      ) : null}
+      {session && formState.isDirty ? (
+        <Text variant="small" tone="soft">
+          Unsaved changes: save before opening the tape, which is drawn from the saved fit.
+        </Text>
+      ) : null}
+      {split ? (
+        <View style={styles.split}>
+          <View style={styles.column}>
+            {header}
+            {table}
+            {actions}
+          </View>
+          <View style={styles.column}>{results}</View>
+        </View>
+      ) : (
+        <>
+          {header}
+          {table}
+          {results}
+          {actions}
+        </>
+      )}
+      {session ? (
+        asking ? (
+          <ConfirmBar
+            title="Delete this sight-in?"
+            message="This deletes the session with its marks, its fit and its saved tapes. It cannot be undone."
+            confirmLabel="Delete for good"
+            pendingLabel="Deleting…"
+            pending={remove.isPending}
+            error={remove.isError ? remove.error.message : null}
+            onConfirm={() => remove.mutate(session, { onSuccess: () => router.replace(`/bows/${bow.id}`) })}
+            onCancel={() => setAsking(false)}
+          />
+        ) : (
+          <Button label="Delete this sight-in" variant="quiet" onPress={() => setAsking(true)} />
+        )
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  editor: { gap: space.xl },
+  section: { gap: space.lg },
+  split: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
+  column: { flex: 1, minWidth: 0, gap: space.xl },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
+  figure: { flexGrow: 1, flexBasis: 110, gap: space.xxs },
+  figureValue: { fontSize: 32, lineHeight: 36 },
+});
