@@ -16,6 +16,9 @@ import * as m0020 from './0020-photos';
 import * as m0021 from './0021-level-checks';
 import * as m0022 from './0022-level-steps';
 import * as m0023 from './0023-bow-changes';
+import * as m0030 from './0030-shares';
+import * as m0031 from './0031-tokens';
+import * as m0032 from './0032-audit-entries';
 
 type Step = { up: (p: { context: QueryInterface }) => Promise<void>; down: (p: { context: QueryInterface }) => Promise<void> };
 
@@ -31,6 +34,9 @@ export const migrations: Array<[string, Step]> = [
   ['0021-level-checks', m0021],
   ['0022-level-steps', m0022],
   ['0023-bow-changes', m0023],
+  ['0030-shares', m0030],
+  ['0031-tokens', m0031],
+  ['0032-audit-entries', m0032],
 ];
 
 export function migrator(sequelize: Sequelize) {

@@ -13,6 +13,9 @@ import { Photo } from './photo';
 import { LevelCheck } from './level-check';
 import { LevelStep } from './level-step';
 import { BowChange } from './bow-change';
+import { Share } from './share';
+import { Token } from './token';
+import { AuditEntry } from './audit-entry';
 
 WebSession.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
@@ -44,4 +47,15 @@ Bow.hasMany(BowChange, { foreignKey: 'bowId', as: 'changes' });
 BowChange.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
 BowChange.belongsTo(User, { foreignKey: 'userId', as: 'loggedBy' });
 
-export { User, WebSession, Bow, ArrowBuild, SightSession, SessionMark, Tape, Photo, LevelCheck, LevelStep, BowChange };
+// Sharing a bow with a technician, e-mailed tokens, the audit log (migrations 0030–0032).
+Bow.hasMany(Share, { foreignKey: 'bowId', as: 'shares' });
+Share.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
+Share.belongsTo(User, { foreignKey: 'archerId', as: 'archer' });
+Share.belongsTo(User, { foreignKey: 'techId', as: 'tech' });
+Share.hasMany(Token, { foreignKey: 'shareId', as: 'tokens' });
+Token.belongsTo(Share, { foreignKey: 'shareId', as: 'share' });
+Token.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+AuditEntry.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
+
+export { User, WebSession, Bow, ArrowBuild, SightSession, SessionMark, Tape, Photo, LevelCheck, LevelStep, BowChange, Share, Token, AuditEntry };

@@ -12,11 +12,20 @@ import { buildRoutes } from './builds';
 import { sessionRoutes } from './sessions';
 import { tapeRoutes } from './tapes';
 import { tryRoutes } from './try';
+import { passwordRoutes } from './password';
+import { devMailRoutes } from './dev-mail';
+import { shareRoutes } from './shares';
+import { clientRoutes } from './clients';
+import { auditRoutes } from './audit';
+import { exportRoutes } from './export';
+import { auditTrail } from '@/server/services/audit-service';
+import { config } from '@/server/config';
 import { levelRoutes } from './level';
 import { photoRoutes } from './photos';
 
 export function apiRoutes(sequelize: Sequelize) {
   const api = Router();
+  api.use(auditTrail()); // who is acting, for the audit log of technicians' writes (before every router)
   api.use('/health', healthRoutes(sequelize));
   api.use('/auth', authRoutes());
   api.use('/me', meRoutes());
@@ -26,6 +35,12 @@ export function apiRoutes(sequelize: Sequelize) {
   api.use(sessionRoutes()); // /bows/:bowId/sessions, /sessions/:id
   api.use(tapeRoutes()); // /sessions/:sessionId/tapes, /tapes/:id, /sessions/:id/{tape.svg,sheet.svg,sheet.pdf}
   api.use(tryRoutes()); // public, rate-limited: /try/fit, /try/tape.svg, /try/sheet.svg, /try/sheet.pdf
+  api.use('/password', passwordRoutes());
+  if (config.devMail) api.use('/dev/mail', devMailRoutes()); // development only: what the fake SMTP service received
+  api.use('/clients', clientRoutes());
+  api.use(shareRoutes()); // /bows/:bowId/shares, /shares, /shares/:id/revoke, /invites/:token, /invites/accept(-new)
+  api.use(auditRoutes()); // /bows/:id/audit
+  api.use(exportRoutes()); // /bows/:id/export.{csv,json}, /sessions/:id/marks/import, /sessions/:id/send-tape
   api.use(levelRoutes()); // /bows/:bowId/{level,readiness,checks,changes}, /checks/:id, /changes/:id
   api.use(photoRoutes()); // /checks/:id/steps/:step/photo, /photos/:id
   return api;

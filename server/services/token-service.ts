@@ -57,8 +57,15 @@ export async function consumeToken(token: Token, now = new Date(), transaction?:
   return count === 1;
 }
 
-/** Ends every unused token for an account or a share (a newer link, a revoke, a reset). */
+/**
+ * Ends every unused, unexpired token for an account or a share (a newer link
+ * was sent, a reset was done) by expiring it now: its holder is told the link
+ * has expired and to ask for a new one.
+ */
 export async function retireTokens(where: { purpose: TokenPurpose; userId?: number; shareId?: number }, now = new Date(), transaction?: Transaction): Promise<number> {
-  const [count] = await Token.update({ usedAt: now }, { where: { ...where, usedAt: { [Op.is]: null } }, transaction });
+  const [count] = await Token.update(
+    { expiresAt: now },
+    { where: { ...where, usedAt: { [Op.is]: null }, expiresAt: { [Op.gt]: now } }, transaction },
+  );
   return count;
 }

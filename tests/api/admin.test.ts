@@ -7,6 +7,8 @@ import { User } from '@/server/models';
 import { CSRF, closeDb, signedInAgent, testApp, uniqueEmail } from '../helpers/api';
 
 const app = testApp();
+// Many requests per test on a shared 2-core machine (bcrypt at cost 12, PDF drawing).
+jest.setTimeout(30_000);
 afterAll(closeDb);
 
 async function adminAgent() {

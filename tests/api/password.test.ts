@@ -13,6 +13,8 @@ import { Token, User } from '@/server/models';
 import { CSRF, closeDb, signedInAgent, testApp, uniqueEmail } from '../helpers/api';
 
 const app = testApp();
+// Many requests per test on a shared 2-core machine (bcrypt at cost 12, PDF drawing).
+jest.setTimeout(30_000);
 afterAll(closeDb);
 
 const tokenIn = (text: string | null) => /\/reset-password\?token=([A-Za-z0-9_-]{43})/.exec(text ?? '')?.[1];

@@ -1,0 +1,71 @@
+import express, { Router, type RequestHandler, type Response } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import { ApiError } from '@/server/errors';
+import { currentUser, requireUser } from '@/server/middleware/auth';
+import { validate } from '@/server/middleware/validate';
+import * as csvImport from '@/server/services/csv-import-service';
+import * as exporter from '@/server/services/export-service';
+import { idParamSchema } from '@/shared/common';
+import { markImportQuerySchema, markImportSchema } from '@/shared/csv';
+import { sendTapeSchema } from '@/shared/export';
+
+function send(res: Response, file: exporter.ExportFile) {
+  res.attachment(file.fileName);
+  res.setHeader('Content-Type', file.contentType);
+  res.setHeader('Cache-Control', 'no-store');
+  res.send(file.body);
+}
+
+/** A raw `text/csv` body becomes `{ csv, unit }` (unit from ?unit=), so the same schema checks both kinds of request. */
+const csvBody: RequestHandler[] = [
+  express.text({ type: ['text/csv', 'text/plain'], limit: '1mb' }),
+  (req, _res, next) => {
+    if (typeof req.body === 'string') req.body = { csv: req.body, unit: req.query.unit ?? 'yd' };
+    next();
+  },
+];
+
+/**
+ * Records in and out.
+ *   GET  /api/bows/:id/export.csv              builds, sessions and marks, one row per mark
+ *   GET  /api/bows/:id/export.json             the same as a JSON document
+ *   POST /api/sessions/:id/marks/import?dryRun=1   {csv, unit} (or a text/csv body): per-row preview
+ *   POST /api/sessions/:id/marks/import        add the file's marks, all or nothing
+ *   POST /api/sessions/:id/send-tape           {to, paper, tape?}: the print sheet as a PDF attachment
+ */
+export function exportRoutes() {
+  const router = Router();
+  const sendLimit = rateLimit({
+    windowMs: 60 * 60 * 1000,
+    limit: 20,
+    keyGenerator: (req) => `user:${req.session?.userId ?? 'none'}`,
+    handler: (_req, _res, next) => next(new ApiError(429, 'rate_limited', 'You have sent 20 tapes in the last hour. Try again later.')),
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+  });
+
+  router.get('/bows/:id/export.csv', requireUser, validate({ params: idParamSchema }), async (req, res) => {
+    send(res, await exporter.exportBowCsv(currentUser(req), idOf(req)));
+  });
+  router.get('/bows/:id/export.json', requireUser, validate({ params: idParamSchema }), async (req, res) => {
+    send(res, await exporter.exportBowJson(currentUser(req), idOf(req)));
+  });
+  router.post(
+    '/sessions/:id/marks/import',
+    requireUser,
+    ...csvBody,
+    validate({ params: idParamSchema, query: markImportQuerySchema, body: markImportSchema }),
+    async (req, res) => {
+      const { dryRun } = req.query as unknown as { dryRun: boolean };
+      const result = await csvImport.importMarks(currentUser(req), idOf(req), req.body, dryRun);
+      res.status(dryRun ? 200 : 201).json(result);
+    },
+  );
+  router.post('/sessions/:id/send-tape', requireUser, sendLimit, validate({ params: idParamSchema, body: sendTapeSchema }), async (req, res) => {
+    const { fileName } = await exporter.sendTape(currentUser(req), idOf(req), req.body);
+    res.json({ message: `The print sheet (${fileName}) was sent to ${req.body.to}.` });
+  });
+  return router;
+}
+
+const idOf = (req: { params: unknown }) => (req.params as { id: number }).id;

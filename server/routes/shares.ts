@@ -1,0 +1,75 @@
+import { Router } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import { ApiError } from '@/server/errors';
+import { currentUser, requireUser } from '@/server/middleware/auth';
+import { validate } from '@/server/middleware/validate';
+import * as shares from '@/server/services/share-service';
+import { bowIdParamSchema, idParamSchema } from '@/shared/common';
+import { inviteAcceptSchema, inviteSignUpSchema, inviteTokenParamSchema, shareInviteSchema } from '@/shared/share';
+
+/** A fresh session id for the new account (defeats session fixation), as at sign-in. */
+function startSession(req: Express.Request, userId: number) {
+  return new Promise<void>((resolve, reject) => {
+    req.session.regenerate((err) => {
+      if (err) return reject(err);
+      req.session.userId = userId;
+      req.session.save((saveErr) => (saveErr ? reject(saveErr) : resolve()));
+    });
+  });
+}
+
+/**
+ * Sharing a bow with a technician.
+ *   GET  /api/bows/:bowId/shares     the bow's shares (its archer)
+ *   POST /api/bows/:bowId/shares     {email} invite; e-mails a 7-day single-use link
+ *   GET  /api/shares                 every open share of the archer's bows
+ *   POST /api/shares/:id/revoke      end a share at once
+ *   GET  /api/invites/:token         what an invitation is for (no sign-in)
+ *   POST /api/invites/accept         {token} accept, signed in as a technician
+ *   POST /api/invites/accept-new     {token, name, email, password} new technician account + accept
+ */
+export function shareRoutes() {
+  const router = Router();
+  const inviteLimit = rateLimit({
+    windowMs: 60 * 60 * 1000,
+    limit: 30,
+    handler: (_req, _res, next) => next(new ApiError(429, 'rate_limited', 'Too many invitations in an hour. Try again later.')),
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+  });
+  const signUpLimit = rateLimit({
+    windowMs: 60 * 60 * 1000,
+    limit: 30,
+    handler: (_req, _res, next) => next(new ApiError(429, 'rate_limited', 'Too many new accounts from this address. Try again in an hour.')),
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+  });
+
+  router.get('/bows/:bowId/shares', requireUser, validate({ params: bowIdParamSchema }), async (req, res) => {
+    res.json({ shares: await shares.listBowShares(currentUser(req), bowIdOf(req)) });
+  });
+  router.post('/bows/:bowId/shares', requireUser, inviteLimit, validate({ params: bowIdParamSchema, body: shareInviteSchema }), async (req, res) => {
+    res.status(201).json({ share: await shares.inviteTech(currentUser(req), bowIdOf(req), req.body.email) });
+  });
+  router.get('/shares', requireUser, async (req, res) => {
+    res.json({ shares: await shares.listMyShares(currentUser(req)) });
+  });
+  router.post('/shares/:id/revoke', requireUser, validate({ params: idParamSchema }), async (req, res) => {
+    res.json({ share: await shares.revokeShare(currentUser(req), (req.params as unknown as { id: number }).id) });
+  });
+  router.get('/invites/:token', validate({ params: inviteTokenParamSchema }), async (req, res) => {
+    res.setHeader('Cache-Control', 'no-store');
+    res.json({ invite: await shares.previewInvite(String(req.params.token)) });
+  });
+  router.post('/invites/accept', requireUser, validate({ body: inviteAcceptSchema }), async (req, res) => {
+    res.json({ share: await shares.acceptInvite(currentUser(req), req.body.token) });
+  });
+  router.post('/invites/accept-new', signUpLimit, validate({ body: inviteSignUpSchema }), async (req, res) => {
+    const { user, share } = await shares.acceptWithNewAccount(req.body);
+    await startSession(req, user.id);
+    res.status(201).json({ user: user.toPublic(), share });
+  });
+  return router;
+}
+
+const bowIdOf = (req: { params: unknown }) => (req.params as { bowId: number }).bowId;

@@ -1,0 +1,123 @@
+/**
+ * Taking a bow's records out of Pinwright: the builds, sessions and marks as
+ * JSON (the whole structure, as the API returns it) or as one CSV table (one
+ * row per mark, with its session and build beside it; a build without
+ * sessions or a session without marks gets a row with the mark cells empty),
+ * and a tape's print sheet sent by e-mail as a PDF.
+ *
+ * Example: (await exportBowCsv(marit, 12)).body.split('\r\n')[0]
+ *   → 'bow,build_id,build,shaft,spine,…,distance,unit,reading_mm,arrows,mark_note'
+ */
+import { Op } from 'sequelize';
+import { toCsv, type CsvCell } from '@/server/csv';
+import { ApiError } from '@/server/errors';
+import { tapeMessage } from '@/server/mail/messages';
+import { ArrowBuild, SessionMark, SightSession, type User } from '@/server/models';
+import { recordAudit } from '@/server/services/audit-service';
+import { bowFor } from '@/server/services/bow-access';
+import { bowOut } from '@/server/services/bow-service';
+import { buildOut, sessionCounts } from '@/server/services/build-service';
+import { sendMail } from '@/server/services/mail-service';
+import { findOwnSession, sessionOut } from '@/server/services/session-service';
+import { sheetDownload } from '@/server/services/tape-service';
+import type { SendTape } from '@/shared/export';
+import type { TapeQuery } from '@/shared/tape';
+
+export type ExportFile = { body: string | Buffer; contentType: string; fileName: string };
+
+/** "Ridge slider #2" → "ridge-slider-2" (file names). */
+function slug(text: string): string {
+  return (
+    text
+      .normalize('NFKD')
+      .replace(/[^\w\s-]/g, '')
+      .trim()
+      .toLowerCase()
+      .replace(/[\s_-]+/g, '-') || 'bow'
+  );
+}
+
+async function recordsOf(user: User, bowId: number) {
+  const { bow } = await bowFor(user, bowId, 'read');
+  const [builds, sessions] = await Promise.all([
+    ArrowBuild.findAll({ where: { bowId }, order: [['id', 'ASC']] }),
+    SightSession.findAll({ where: { bowId }, order: [['date', 'ASC'], ['id', 'ASC']] }),
+  ]);
+  const marks = sessions.length
+    ? await SessionMark.findAll({ where: { sessionId: { [Op.in]: sessions.map((s) => s.id) } }, order: [['sessionId', 'ASC'], ['position', 'ASC']] })
+    : [];
+  const counts = await sessionCounts(builds.map((b) => b.id));
+  return { bow, builds, sessions, marks, counts };
+}
+
+/** GET /api/bows/:id/export.json */
+export async function exportBowJson(user: User, bowId: number, now = new Date()): Promise<ExportFile> {
+  const { bow, builds, sessions, marks, counts } = await recordsOf(user, bowId);
+  const document = {
+    format: 'pinwright-bow-export',
+    version: 1,
+    exportedAt: now.toISOString(),
+    note: 'Lengths in millimetres, masses in grains, speeds in feet per second; distances in the unit given with each mark.',
+    bow: bowOut(bow),
+    builds: builds.map((build) => buildOut(build, counts.get(build.id) ?? 0)),
+    sessions: sessions.map((session) => sessionOut(session, marks.filter((mark) => mark.sessionId === session.id))),
+  };
+  return { body: `${JSON.stringify(document, null, 2)}\n`, contentType: 'application/json; charset=utf-8', fileName: `${slug(bow.nickname)}-export.json` };
+}
+
+const csvHeader = [
+  'bow', 'build_id', 'build', 'shaft', 'spine', 'grains_per_inch', 'cut_length_mm', 'point_gr', 'total_gr', 'foc_pct', 'build_speed_fps',
+  'session_id', 'session_date', 'place', 'altitude_m', 'temperature_c', 'session_notes', 'fit_speed_fps', 'fit_rms_mm',
+  'mark_position', 'distance', 'unit', 'reading_mm', 'arrows', 'mark_note',
+];
+
+/** GET /api/bows/:id/export.csv — text cells neutralised against formula injection (server/csv/write.ts). */
+export async function exportBowCsv(user: User, bowId: number): Promise<ExportFile> {
+  const { bow, builds, sessions, marks } = await recordsOf(user, bowId);
+  const rows: CsvCell[][] = [csvHeader];
+  const buildCells = (build: ArrowBuild | undefined): CsvCell[] =>
+    build
+      ? [build.id, build.name, build.shaftLabel, build.spine, build.grainsPerInch, build.cutLengthMm, build.pointGr, build.totalGr, build.focPct, build.speedFps]
+      : Array(10).fill(null);
+  for (const build of builds) {
+    const ofBuild = sessions.filter((session) => session.buildId === build.id);
+    if (ofBuild.length === 0) rows.push([bow.nickname, ...buildCells(build), ...Array(14).fill(null)]);
+    for (const session of ofBuild) {
+      const sessionCells: CsvCell[] = [session.id, session.date, session.placeLabel, session.altitudeM, session.temperatureC, session.notes, session.fitSpeedFps, session.fitRmsMm];
+      const ofSession = marks.filter((mark) => mark.sessionId === session.id);
+      if (ofSession.length === 0) rows.push([bow.nickname, ...buildCells(build), ...sessionCells, ...Array(6).fill(null)]);
+      for (const mark of ofSession) {
+        rows.push([bow.nickname, ...buildCells(build), ...sessionCells, mark.position + 1, mark.distance, mark.unit, mark.scaleMm, mark.arrowsShot, mark.note]);
+      }
+    }
+  }
+  return { body: toCsv(rows), contentType: 'text/csv; charset=utf-8', fileName: `${slug(bow.nickname)}-export.csv` };
+}
+
+/**
+ * POST /api/sessions/:id/send-tape: the session's print sheet (the same PDF
+ * as GET /api/sessions/:id/sheet.pdf) e-mailed as an attachment.
+ */
+export async function sendTape(user: User, sessionId: number, { to, paper, tape }: SendTape): Promise<{ fileName: string }> {
+  const session = await findOwnSession(user, sessionId, undefined, 'read');
+  const pdf = await sheetDownload(user, sessionId, { paper, tape } as TapeQuery, 'pdf');
+  try {
+    await sendMail({
+      to,
+      ...tapeMessage({ senderName: user.name, bowNickname: session.bow.nickname, sessionDate: session.date, filename: pdf.fileName }),
+      attachments: [{ filename: pdf.fileName, content: pdf.body as Buffer, contentType: 'application/pdf' }],
+    });
+  } catch (err) {
+    console.error(`Tape e-mail to ${to} could not be sent: ${err instanceof Error ? err.message : err}`);
+    throw new ApiError(502, 'mail_failed', 'The e-mail could not be sent. Try again in a few minutes, or download the PDF instead.');
+  }
+  await recordAudit({
+    actorId: user.id,
+    action: 'sent',
+    bowId: session.bowId,
+    recordType: 'tape-sheet',
+    recordId: session.id,
+    summary: `Sent the print sheet of the ${session.date} session to ${to}`,
+  });
+  return { fileName: pdf.fileName };
+}
