@@ -164,6 +164,17 @@ describe('the print sheet', () => {
     expectTicksMatchFit(ticksOf(byPercent.get(-2)!), session.fit, { scale: 0.98 });
   });
 
+  it('prints the archer’s own words safely: a nickname with markup stays text', async () => {
+    const { agent } = await signedInAgent(app);
+    const { session } = await bowWithSession(agent, [20, 40, 60], {}, { nickname: 'Fox "&" <script>x</script>' });
+    const res = await download(agent, `/api/sessions/${session.id}/sheet.svg?from=20&to=60`);
+    expect(res.status).toBe(200);
+    expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?fox-scriptxscript-2026-11-02-sheet\.svg"?$/);
+    const svg = parseSvg(res.body);
+    expect(svg.getElementsByTagName('script').length).toBe(0);
+    expect(res.body.toString('utf8')).not.toContain('<script>');
+  });
+
   it('sheet.pdf is a PDF of the paper’s size', async () => {
     const { agent } = await signedInAgent(app);
     const { session } = await bowWithSession(agent, [20, 40, 60]);
