@@ -14,5 +14,6 @@ export * from '@/math/slope';
 export * from '@/math/tape';
 export * from '@/math/sheet';
 export * from '@/math/pins';
+export * from '@/math/field';
 export * from '@/math/cautions';
 export type { FitInput, TapeOptionsInput, SheetOptionsInput, Paper } from '@/shared/fit';

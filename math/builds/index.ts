@@ -1,1 +1,2 @@
 export * from '@/math/builds/virtual-mass';
+export * from '@/math/builds/build-summary';

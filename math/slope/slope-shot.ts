@@ -57,7 +57,8 @@ export function levelRangeForMark(model: SightModel, markMm: number, nearRangeM:
   };
   // Turning point of the level marks: tan γ ≈ h/S + g·S/(2v²) is least at S = v·√(2h/g).
   const turningM = shot.speedMps * Math.sqrt((2 * shot.peepHeightM) / shot.gravityMps2);
-  const [low, high] = nearRangeM >= turningM ? [turningM, Math.max(1.2 * nearRangeM, turningM + 1)] : [2, turningM];
+  const shortBranch = nearRangeM < turningM && turningM > 2;
+  const [low, high] = shortBranch ? [2, turningM] : [Math.max(turningM, 1), Math.max(1.2 * nearRangeM, turningM + 1)];
   const lowMiss = levelMark(low) - markMm;
   const highMiss = levelMark(high) - markMm;
   if (!Number.isFinite(lowMiss) || !Number.isFinite(highMiss) || lowMiss * highMiss > 0) return null;
