@@ -19,6 +19,7 @@ import { buildOut, sessionCounts } from './build-service';
 import { markStats, sessionListItems } from './session-service';
 import { tapeOut } from './tape-service';
 import { levelSummaryForBows } from './level-service';
+import { photoKeysOfBow, removeStoredPhotos } from './photo-service';
 import { bowFor, type BowCapability } from './bow-access';
 
 /**
@@ -161,5 +162,7 @@ export async function updateBow(user: User, id: number, update: BowUpdate): Prom
 /** Deletes the bow; its builds, sessions, marks and tapes go with it (foreign-key cascade, migrations 0011–0014). */
 export async function deleteBow(user: User, id: number): Promise<void> {
   const bow = await findOwnBow(user, id);
+  const photoKeys = await photoKeysOfBow(bow.id); // the cascade removes photo rows; their files go after
   await bow.destroy();
+  await removeStoredPhotos(photoKeys);
 }

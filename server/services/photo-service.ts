@@ -79,3 +79,17 @@ export async function readPhoto(user: User, id: number): Promise<{ mimeType: Pho
   if (!bytes) throw ApiError.notFound('That photo');
   return { mimeType: photo.mimeType, bytes };
 }
+
+/**
+ * Storage keys of every photo of a bow, taken before the bow is deleted (the
+ * database cascade removes the rows but cannot reach the files).
+ * Example: const keys = await photoKeysOfBow(3); await bow.destroy(); await removeStoredPhotos(keys);
+ */
+export async function photoKeysOfBow(bowId: number): Promise<string[]> {
+  return (await Photo.findAll({ where: { bowId }, attributes: ['storageKey'] })).map((photo) => photo.storageKey);
+}
+
+/** Removes the stored files under `keys` (missing ones are fine). */
+export async function removeStoredPhotos(keys: readonly string[]): Promise<void> {
+  for (const key of keys) await photoStorage.remove(key);
+}
