@@ -49,7 +49,7 @@ export function standardAtmosphere(geopotentialM: number): StandardAir {
  * Geometric altitude above sea level (m) → geopotential height (m):
  * H = r0·z/(r0 + z) (US Standard Atmosphere 1976, eq. 18). The two differ by
  * 2.5 m at 4000 m, about 0.03 % of air density.
- * Example: geopotentialHeightM(4000) → 3997.49
+ * Example: geopotentialHeightM(4000) → 3997.48
  */
 export function geopotentialHeightM(altitudeM: number): number {
   return (EARTH_RADIUS_M * altitudeM) / (EARTH_RADIUS_M + altitudeM);

@@ -6,7 +6,7 @@ import { fpsToMps, grainsToKg } from '@/math/units/convert';
  * (ft/s), exactly: KE = ½·m·v² (J, and ft·lbf with 1 ft·lbf = 1.3558179483314 J),
  * p = m·v (kg·m/s, and slug·ft/s). These are physics, not a legal
  * determination: hunting rules vary, follow the local ones.
- * Example: kineticEnergy({ massGr: 420, speedFps: 285 }).footPounds → 75.77
+ * Example: kineticEnergy({ massGr: 420, speedFps: 285 }).footPounds → 75.737
  */
 export function kineticEnergy(arrow: { massGr: number; speedFps: number }): { joules: number; footPounds: number } {
   checkArrow(arrow, 'kineticEnergy');
@@ -19,7 +19,7 @@ export function kineticEnergy(arrow: { massGr: number; speedFps: number }): { jo
  * The trade's shortcut for kinetic energy, ft·lbf: grains × fps² / 450,240
  * (common practice, no published source). It reads about 0.04 % high against
  * the exact value; show the exact one.
- * Example: tradeKineticEnergyFtLbf({ massGr: 420, speedFps: 285 }) → 75.77
+ * Example: tradeKineticEnergyFtLbf({ massGr: 420, speedFps: 285 }) → 75.770
  */
 export function tradeKineticEnergyFtLbf(arrow: { massGr: number; speedFps: number }): number {
   checkArrow(arrow, 'tradeKineticEnergyFtLbf');
@@ -28,7 +28,7 @@ export function tradeKineticEnergyFtLbf(arrow: { massGr: number; speedFps: numbe
 
 /**
  * Momentum, exactly: kg·m/s and slug·ft/s (1 slug = 1 lbf·s²/ft).
- * Example: momentum({ massGr: 420, speedFps: 285 }).slugFeetPerSecond → 0.5317
+ * Example: momentum({ massGr: 420, speedFps: 285 }).slugFeetPerSecond → 0.5315
  */
 export function momentum(arrow: { massGr: number; speedFps: number }): { kilogramMetresPerSecond: number; slugFeetPerSecond: number } {
   checkArrow(arrow, 'momentum');

@@ -12,7 +12,7 @@ import { ENERGY_CAUTION } from '@/math/cautions';
  * no legal determination), the drop between two distances and the range
  * forgiveness at one.
  *
- * Example: buildSummary(withArrow(model, { massGr: 500, diameterMm: 6.5, speedFps: 262 })).drop.dropMm → ≈ 640
+ * Example: buildSummary(withArrow(model, { massGr: 500, diameterMm: 6.5, speedFps: 262 })).drop.dropMm → 779
  */
 export function withArrow(model: SightModel, arrow: { massGr: number; diameterMm: number; speedFps: number; dragCoefficient?: number }): SightModel {
   const { covariance: _covariance, ...rest } = model;

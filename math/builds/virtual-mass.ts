@@ -14,7 +14,7 @@ import { FitInputError } from '@/math/fit/fit-input-error';
  * (δ(1/v²) = −2·δv/v³); two builds give E and m_v exactly.
  *
  * Units: masses grains, speeds ft/s, energy joules.
- * Example: fitVirtualMass([{ massGr: 350, speedFps: 300 }, { massGr: 450, speedFps: 270 }]) → { energyJ: ≈ 111, virtualMassGr: ≈ 498, rmsFps: 0 }
+ * Example: fitVirtualMass([{ massGr: 350, speedFps: 300 }, { massGr: 450, speedFps: 270 }]) → { energyJ: 115.49, virtualMassGr: 76.3, rmsFps: 0 }
  */
 export interface ChronographedBuild {
   massGr: number;
@@ -65,7 +65,7 @@ export function fitVirtualMass(builds: readonly ChronographedBuild[]): VirtualMa
 
 /**
  * Speed (ft/s) of a new build of `massGr` grains from a virtual-mass fit.
- * Example: predictBuildSpeedFps({ energyJ: 111, virtualMassGr: 498, rmsFps: 0 }, 400) → ≈ 284
+ * Example: predictBuildSpeedFps({ energyJ: 115.49, virtualMassGr: 76.3, rmsFps: 0 }, 400) → 283.8
  */
 export function predictBuildSpeedFps(fit: Pick<VirtualMassFit, 'energyJ' | 'virtualMassGr'>, massGr: number): number {
   return mpsToFps(Math.sqrt((2 * fit.energyJ) / grainsToKg(massGr + fit.virtualMassGr)));

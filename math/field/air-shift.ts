@@ -12,7 +12,7 @@ import { SLOPE_CAUTION } from '@/math/cautions';
  * real terrain.
  *
  * Units: distances in model.distanceUnit, marks and shifts mm.
- * Example: airShift(model, { altitudeM: 3000, temperatureC: 0 }, [20, 60, 100]).rows.map(r => r.shiftMm) → [−0.05, −0.5, −1.7]
+ * Example: airShift(model, { altitudeM: 3000, temperatureC: 0 }, [20, 60, 100]).rows.map(r => r.shiftMm) → [−0.049, −0.465, −1.368]
  */
 export interface AirShift {
   airDensityKgM3: number;

@@ -10,7 +10,7 @@ import { FitInputError } from '@/math/fit/fit-input-error';
  * the two marks (mm). A flatter build drops less.
  *
  * Units: distances in model.distanceUnit, lengths mm, times s. Level shots.
- * Example: dropBetween(model, 40, 60) → { near: 40, far: 60, dropMm: 537, gapMm: 9.9, nearTimeS: 0.43, farTimeS: 0.66 }
+ * Example: dropBetween(model, 40, 60) → { near: 40, far: 60, dropMm: 660, gapMm: 9.89, nearTimeS: 0.433, farTimeS: 0.659 }
  */
 export interface DropBetween {
   near: number;

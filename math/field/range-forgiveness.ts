@@ -14,7 +14,7 @@ import { FitInputError } from '@/math/fit/fit-input-error';
  * aimed distance where w ≤ +window too.
  *
  * Units: distances in model.distanceUnit, window and peak mm.
- * Example: rangeForgiveness(model, 40) → { distance: 40, windowMm: 100, nearEdge: 32.9, farEdge: 45.9, span: 13.0, peakAboveMm: 136 }
+ * Example: rangeForgiveness(model, 40) → { distance: 40, windowMm: 100, nearEdge: 34.16, farEdge: 44.30, span: 10.14, peakAboveMm: 178.5 }
  */
 export interface RangeForgiveness {
   distance: number;

@@ -13,7 +13,7 @@ import { solveElevation } from '@/math/flight/solve-elevation';
  * coincide) the mark hardly moves and the distance band is left null.
  *
  * Units: distance and sigmaDistance in model.distanceUnit, the rest mm.
- * Example: markBand(model, 80) → { distance: 80, markMm: 43.4, sigmaMm: 0.12, sigmaDistance: 0.22, mmPerDistance: 0.55 }
+ * Example: markBand(model, 80) → { distance: 80, markMm: 43.32, sigmaMm: 0.38, sigmaDistance: 0.69, mmPerDistance: 0.55, gradient: […] } (two marks, 20 and 60 yd)
  */
 export interface MarkBand {
   distance: number;

@@ -18,7 +18,7 @@ import { FitInputError } from '@/math/fit/fit-input-error';
  * for messages), the flight without its speed, the sight radius (mm), and the
  * speed bracket (ft/s). Result: speed m/s and scale zero mm.
  * Example: solveTwoMarks({ near: { rangeM: 18.288, markMm: 14.9, label: '20 yd' }, far: { rangeM: 54.864, markMm: 32.6, label: '60 yd' } },
- *   { dragPerM: 0.0014937, peepHeightM: 0.11, gravityMps2: 9.80665 }, 820, { min: 120, max: 500 }) → { speedMps: ≈ 86.9, scaleZeroMm: ≈ 0.04 }
+ *   { dragPerM: 0.0014937, peepHeightM: 0.11, gravityMps2: 9.80665 }, 820, { min: 120, max: 500 }) → { speedMps: 86.93, scaleZeroMm: 0.055 }
  */
 
 /** A level mark as the two-mark solve needs it. */

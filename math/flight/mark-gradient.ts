@@ -19,7 +19,7 @@ import type { SightModel } from '@/math/flight/sight-model';
  * Cd, mm per mm, mm per mm. `perRangeMmPerM` is how the mark moves with the
  * slant range itself, from ∂w/∂S = vw/vu (the flight's slope across the line
  * of sight where it crosses the target).
- * Example: markGradient(model, shot, 54.864, 0, 0.0397196).parameters[0] → ≈ −0.18 (mm of mark per fps at 60 yd)
+ * Example: markGradient(model, shot, 54.864, 0, 0.0397196).parameters[0] → −0.218 (mm of mark per fps at 60 yd)
  */
 export interface MarkGradient {
   parameters: number[];

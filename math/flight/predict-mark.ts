@@ -15,7 +15,7 @@ import { solveElevation, type ElevationSolution, type ShotParameters } from '@/m
 /**
  * The mark (mm) for a shot at slant `distance` (in model.distanceUnit) on a line
  * of sight `angleDeg` above the horizontal (negative downhill). NaN if out of reach.
- * Example: predictMarkMm(model, 40, -30) → 20.1
+ * Example: predictMarkMm(model, 40, -30) → 19.84
  */
 export function predictMarkMm(model: SightModel, distance: number, angleDeg = 0): number {
   const solution = solveElevation(shotParametersOf(model), distanceToMetres(distance, model.distanceUnit), degToRad(angleDeg));
@@ -25,7 +25,7 @@ export function predictMarkMm(model: SightModel, distance: number, angleDeg = 0)
 /**
  * Marks (mm) for many slant distances (in model.distanceUnit) at one slope, in
  * the order given; NaN where out of reach.
- * Example: predictMarksMm(model, [20, 30, 40]) → [14.90, 18.38, 22.74]
+ * Example: predictMarksMm(model, [20, 30, 40]) → [14.90, 18.36, 22.74]
  */
 export function predictMarksMm(model: SightModel, distances: readonly number[], angleDeg = 0): number[] {
   const shot = shotParametersOf(model);
@@ -39,7 +39,7 @@ export function predictMarksMm(model: SightModel, distances: readonly number[], 
  * given. Each guess extrapolates q(S) = (tan γ − h/S)/S, which is nearly
  * linear in S (it is g/(2v²) for a drag-free flight), from the two nearest
  * ranges already solved.
- * Example: solveElevations(shot, [18.288, 27.432], 0).map(s => s?.elevationRad) → [0.018118, 0.022...]
+ * Example: solveElevations(shot, [18.288, 54.864], 0).map(s => s?.elevationRad) → [0.018118, 0.039720]
  */
 export function solveElevations(shot: ShotParameters, rangesM: readonly number[], losAngleRad: number): (ElevationSolution | null)[] {
   const order = rangesM.map((_, index) => index).sort((a, b) => rangesM[a] - rangesM[b]);

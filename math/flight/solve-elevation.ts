@@ -12,7 +12,7 @@ import { integrateToRange, type RangeCrossing } from '@/math/flight/integrate-to
  * u = S. That miss distance rises monotonically with γ over the useful range,
  * so a bracketed secant search converges in three or four flights.
  *
- * Example: solveElevation({ speedMps: 86.868, dragPerM: 0.0014937, peepHeightM: 0.11, gravityMps2: 9.80665 }, 18.288, 0)?.elevationRad → ≈ 0.01800 rad
+ * Example: solveElevation({ speedMps: 86.868, dragPerM: 0.0014937, peepHeightM: 0.11, gravityMps2: 9.80665 }, 18.288, 0)?.elevationRad → 0.018118 rad
  */
 
 /** What the bow and arrow give every shot, in SI units. */
@@ -48,7 +48,7 @@ export const MISS_TOLERANCE_M = 1e-10;
 /**
  * The arrow's height above the line of sight (m) where it crosses slant range
  * `rangeM`, launched `elevationRad` above a line of sight at `losAngleRad`.
- * Example: missAtRange(shot, 18.288, 0, 0.018).w → ≈ 0.0000 m (a hit)
+ * Example: missAtRange(shot, 18.288, 0, 0.018118).w → ≈ 0 m (a hit)
  */
 export function missAtRange(shot: ShotParameters, rangeM: number, losAngleRad: number, elevationRad: number): RangeCrossing {
   const sin = Math.sin(elevationRad);
@@ -64,7 +64,7 @@ export function missAtRange(shot: ShotParameters, rangeM: number, losAngleRad: n
  * A first guess at the elevation from the small-angle flight:
  * tan γ ≈ h/S + g·cos θ·S·(1 + k·S)/(2·v0²) (drag-free drop, stretched by the
  * slower average speed under drag).
- * Example: guessElevationRad(shot, 18.288, 0) → ≈ 0.0180
+ * Example: guessElevationRad(shot, 18.288, 0) → 0.01822 (solved: 0.01812)
  */
 export function guessElevationRad(shot: ShotParameters, rangeM: number, losAngleRad: number): number {
   const drop = (shot.gravityMps2 * Math.cos(losAngleRad) * rangeM * (1 + shot.dragPerM * rangeM)) / (2 * shot.speedMps * shot.speedMps);

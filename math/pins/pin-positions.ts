@@ -9,7 +9,7 @@ import { FitInputError } from '@/math/fit/fit-input-error';
  * closest the sight's pins can sit), pins closer than that are flagged.
  *
  * Units: distances in model.distanceUnit, lengths mm.
- * Example: pinPositions(model, [20, 30, 40, 50, 60]).pins.map(p => p.gapMm) → [null, 3.45, 4.37, 4.80, 5.07]
+ * Example: pinPositions(model, [20, 30, 40, 50, 60]).pins.map(p => p.gapMm) → [null, 3.46, 4.38, 4.81, 5.08]
  */
 export interface PinPosition {
   distance: number;

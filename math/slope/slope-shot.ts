@@ -12,7 +12,7 @@ import { solveElevation } from '@/math/flight/solve-elevation';
  * speeds the arrow. Both are estimates: confirm on real terrain.
  *
  * Units: distances in model.distanceUnit, angle in degrees (+ uphill), mark mm.
- * Example: slopeShot(model, 40, -30) → { distance: 40, angleDeg: -30, markMm: 19.96, aimAsIf: 34.4, horizontal: 34.64, aimAsIfMinusHorizontal: -0.24 }
+ * Example: slopeShot(model, 40, -30) → { distance: 40, angleDeg: -30, markMm: 19.84, aimAsIf: 33.54, horizontal: 34.64, aimAsIfMinusHorizontal: -1.10 }
  */
 export interface SlopeShot {
   distance: number;
@@ -44,7 +44,7 @@ export function slopeShot(model: SightModel, distance: number, angleDeg: number)
  * short-range turning point as `nearRangeM` (level marks fall from 5 yd to
  * about 14 yd, where the arrow's rise past the line of sight peaks, then grow).
  * Null if no level range in 2–1.2·nearRangeM has that mark.
- * Example: levelRangeForMark(model, 19.96, 36.576) → 31.46
+ * Example: levelRangeForMark(model, 19.96, 36.576) → 30.92
  */
 export function levelRangeForMark(model: SightModel, markMm: number, nearRangeM: number): number | null {
   const shot = shotParametersOf(model);

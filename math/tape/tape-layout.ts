@@ -29,7 +29,7 @@ import { measureTextMm } from '@/math/tape/text-path';
  * the ticks on the right edge and the numerals to their left (for a pointer on
  * the tape's right), the digits still reading normally.
  *
- * Example: tapeLayout(fit.model, { from: 20, to: 100 }).ticks[0] → { distance: 20, markMm: 14.9, offsetMm: 3.3, kind: 'major', numeral: true, ... }
+ * Example: tapeLayout(fit.model, { from: 20, to: 100 }).ticks[0] → { distance: 20, markMm: 14.9, offsetMm: 4.6, kind: 'major', lengthMm: 5.4, strokeMm: 0.25, numeral: true }
  */
 export interface TapeTick {
   /** In the tape's unit. */

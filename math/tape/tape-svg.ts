@@ -12,7 +12,7 @@ import { formatTapeNumber, tapeLayout, type TapeLayout } from '@/math/tape/tape-
  * data-numeral and its text in aria-label. The outline is the
  * cut line. Geometry and alignment: see tape-layout.ts and math/README.md.
  *
- * Example: tapeSvg(fit, { from: 20, to: 100, widthMm: 12 }) → '<svg xmlns="http://www.w3.org/2000/svg" width="12mm" height="47.1mm" …'
+ * Example: tapeSvg(fit, { from: 20, to: 100, widthMm: 12 }) → '<svg xmlns="http://www.w3.org/2000/svg" width="12mm" height="49.0419mm" …'
  */
 export function tapeSvg(fit: { model: SightModel }, options: TapeOptionsInput = {}): string {
   const layout = tapeLayout(fit.model, options);

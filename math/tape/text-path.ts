@@ -10,7 +10,7 @@ import type { GlyphFont } from '@/math/tape/glyphs';
  * as one absolute move followed by relative commands, so placing a glyph costs
  * two numbers, not hundreds. A character the font lacks is drawn as "?". No kerning.
  *
- * Example: textPath('40', NUMERAL_FONT, { x: 5, y: 10, sizeMm: 1.8 }) → { d: 'M16 …z', transform: 'matrix(0.0025714 0 0 -0.0025714 5 10)', widthMm: 2.24 }
+ * Example: textPath('40', NUMERAL_FONT, { x: 5, y: 10, sizeMm: 1.8 }) → { d: 'M16 …z', transform: 'matrix(0.0025714286 0 0 -0.0025714286 5 10)', widthMm: 2.34 }
  */
 export interface TextPlacement {
   /** Anchor point, mm (SVG user units, y down). */
@@ -89,7 +89,7 @@ function toRelative(advance: number, path: string): PreparedGlyph {
   return { advance, startX: Number.isNaN(startX) ? 0 : startX, startY: Number.isNaN(startY) ? 0 : startY, rest };
 }
 
-/** Width of `text` at digit height `sizeMm`, mm. Example: measureTextMm('100', NUMERAL_FONT, 1.8) → 2.94 */
+/** Width of `text` at digit height `sizeMm`, mm. Example: measureTextMm('100', NUMERAL_FONT, 1.8) → 3.02 */
 export function measureTextMm(text: string, font: GlyphFont, sizeMm: number): number {
   let advance = 0;
   for (const character of text) advance += glyphOf(font, character).advance;

@@ -21,6 +21,7 @@ export interface CommandOutcome {
   stderr: string;
 }
 
+/** What `pinwright help` prints. */
 export const USAGE = `Usage: pinwright <command> [--pdf] < input.json
 Commands:
   fit      fit the marks; prints the fit as JSON
