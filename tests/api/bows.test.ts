@@ -8,6 +8,8 @@ import { bowBody, bowWithSession } from './bow-fixtures';
 
 const app = testApp();
 afterAll(closeDb);
+// Sign-ups (bcrypt), fits and PDFs: slow when the API test files run in parallel on two cores.
+jest.setTimeout(30_000);
 
 describe('POST /api/bows', () => {
   it('names each field problem in plain words and writes nothing', async () => {

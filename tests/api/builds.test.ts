@@ -7,6 +7,8 @@ import { bowBody, buildBody, bowWithSession } from './bow-fixtures';
 
 const app = testApp();
 afterAll(closeDb);
+// Sign-ups (bcrypt), fits and PDFs: slow when the API test files run in parallel on two cores.
+jest.setTimeout(30_000);
 
 async function newBow(agent: ReturnType<typeof request.agent>) {
   const res = await agent.post('/api/bows').set(CSRF).send(bowBody());

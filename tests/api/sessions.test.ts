@@ -5,6 +5,8 @@ import { bowWithBuild, bowWithSession, knownMarks, knownSight } from './bow-fixt
 
 const app = testApp();
 afterAll(closeDb);
+// Sign-ups (bcrypt), fits and PDFs: slow when the API test files run in parallel on two cores.
+jest.setTimeout(30_000);
 afterEach(() => jest.restoreAllMocks());
 
 const marksOf = async (sessionId: number) =>

@@ -8,6 +8,8 @@ import { bowWithSession, type Agent } from './bow-fixtures';
 
 const app = testApp();
 afterAll(closeDb);
+// Sign-ups (bcrypt), fits and PDFs: slow when the API test files run in parallel on two cores.
+jest.setTimeout(30_000);
 
 /** Keep the body of an SVG/PDF response as text or bytes. */
 const asBuffer = (res: NodeJS.ReadableStream & { setEncoding?: unknown }, done: (err: Error | null, body: Buffer) => void) => {

@@ -5,6 +5,8 @@ import { TRY_LIMIT_PER_MINUTE } from '@/server/routes/try';
 import { knownMarks, knownSight } from './bow-fixtures';
 
 afterAll(closeDb);
+// Sign-ups (bcrypt), fits and PDFs: slow when the API test files run in parallel on two cores.
+jest.setTimeout(30_000);
 
 const binary = (res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) => {
   const chunks: Buffer[] = [];
