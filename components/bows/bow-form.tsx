@@ -103,8 +103,8 @@ export function BowForm({ bow, lengthUnit, distanceUnit, onSaved, onCancel }: Bo
           <FormChoice control={control} name="hand" label="Hand" options={handOptions} />
         </FieldGrid>
         <FieldGrid minWidth={160}>
-          <FormField control={control} name="drawWeightLb" label="Draw weight" unit="lb" numeric />
-          <FormField control={control} name="drawLengthMm" label="Draw length" unit={unit} numeric />
+          <FormField control={control} name="drawWeightLb" label="Draw weight" hint="Peak weight" unit="lb" numeric />
+          <FormField control={control} name="drawLengthMm" label="Draw length" hint="As the bow is set" unit={unit} numeric />
           <FormField control={control} name="letOffPct" label="Let-off" hint="Optional" unit="%" numeric />
           <FormField control={control} name="ratedSpeedFps" label="Rated speed" hint="Optional" unit="fps" numeric />
         </FieldGrid>

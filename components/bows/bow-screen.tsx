@@ -8,6 +8,7 @@ import { sightKindNames } from '@/components/bows/bow-setup-items';
 import { formatLength } from '@/components/bows/form-numbers';
 import { fitWords, formatDay, levelWords, sightInWords, tapeWords } from '@/components/bows/readiness-words';
 import { RecordRow } from '@/components/bows/record-row';
+import { BowSharingLink } from '@/components/shares/bow-sharing-link';
 import { buildName } from '@/components/builds/build-words';
 import { Button } from '@/components/ui/button';
 import { ErrorView } from '@/components/ui/error-view';
@@ -41,7 +42,7 @@ function Readiness({ bow }: { bow: BowDetail }) {
         </View>
       ))}
       <View style={styles.readinessLinks}>
-        <Button label="Level check" variant="secondary" href={`/bows/${bow.id}/level`} testID="bow-level" />
+        <Button label="Level checks and changes" variant="secondary" href={`/bows/${bow.id}/level`} testID="open-level" />
         <Button label="Before a trip" variant="quiet" href={`/bows/${bow.id}/readiness`} />
       </View>
     </View>
@@ -185,7 +186,7 @@ export function BowScreen({ bowId }: { bowId: number }) {
       <ScreenTitle name={data.nickname} />
       <SectionHeading level={1} title={data.nickname} description={subtitle(data, unit)} action={<Button label="Bench" variant="quiet" href="/" />} />
       <Readiness bow={data} />
-      <Button label="Level checks and changes" variant="secondary" href={`/bows/${data.id}/level`} testID="open-level" />
+      <BowSharingLink bowId={data.id} ownerId={data.userId} />
       {split ? (
         <View style={styles.split}>
           <View style={styles.listColumn}>

@@ -52,7 +52,7 @@ export function sightInWords(readiness: BowReadiness): ReadinessWords {
   const latest = readiness.latestSession;
   if (!latest) return { state: 'none', label: 'Not sighted in', detail: 'No sight-in session yet.' };
   const words = fitWords(latest);
-  return { ...words, detail: `Last sighted in ${formatDay(latest.date)}: ${words.detail}` };
+  return { ...words, detail: `Last sight-in ${formatDay(latest.date)}: ${words.detail}` };
 }
 
 /** The tape part of a bow's readiness. */

@@ -7,7 +7,7 @@ import { applyFieldErrors, flatFieldPath } from '@/components/bows/server-field-
 import { textFormResolver } from '@/components/bows/text-form-resolver';
 import { useSaveBuild } from '@/components/builds/api';
 import { buildFormDefaults, buildFormFields, buildFormSchema, type BuildFormText } from '@/components/builds/build-form-values';
-import { BuildTotals } from '@/components/builds/build-totals';
+import { BuildTotals, BuildTotalsStrip } from '@/components/builds/build-totals';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -71,9 +71,9 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: Build
           <FormField control={control} name="name" label="Build name" hint="e.g. “Heavy elk arrows”" autoCapitalize="sentences" />
           <FormField control={control} name="shaftLabel" label="Shaft label" hint="Optional: what the shaft says on it, in your words." />
         </FieldGrid>
-        <FieldGrid minWidth={150}>
+        <FieldGrid minWidth={120}>
           <FormField control={control} name="spine" label="Spine" hint="Optional" numeric />
-          <FormField control={control} name="grainsPerInch" label="Grains per inch" unit="gpi" numeric />
+          <FormField control={control} name="grainsPerInch" label="Grains per inch" hint="Bare shaft" unit="gpi" numeric />
           <FormField control={control} name="cutLengthMm" label="Cut length" hint="Nock throat to shaft end" unit={unit} numeric />
           <FormField control={control} name="diameterMm" label="Diameter" hint="Shaft outside" unit={unit} numeric />
         </FieldGrid>
@@ -81,16 +81,16 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: Build
 
       <Card style={styles.section}>
         <SectionHeading title="Components" description="Weights in grains. Leave a part you do not use empty." />
-        <FieldGrid minWidth={150}>
-          <FormField control={control} name="pointGr" label="Point" unit="gr" numeric />
-          <FormField control={control} name="insertGr" label="Insert" unit="gr" numeric />
-          <FormField control={control} name="collarGr" label="Collar" unit="gr" numeric />
-          <FormField control={control} name="nockGr" label="Nock" unit="gr" numeric />
+        <FieldGrid minWidth={120}>
+          <FormField control={control} name="pointGr" label="Point" hint="Or broadhead" unit="gr" numeric />
+          <FormField control={control} name="insertGr" label="Insert" hint="If any" unit="gr" numeric />
+          <FormField control={control} name="collarGr" label="Collar" hint="If any" unit="gr" numeric />
+          <FormField control={control} name="nockGr" label="Nock" hint="With its bushing" unit="gr" numeric />
         </FieldGrid>
         <FieldGrid minWidth={150}>
           <FormField control={control} name="vaneCount" label="Vanes" hint="How many" numeric />
-          <FormField control={control} name="vaneWeightGr" label="Each vane" unit="gr" numeric />
-          <FormField control={control} name="wrapGr" label="Wrap" unit="gr" numeric />
+          <FormField control={control} name="vaneWeightGr" label="Each vane" hint="One vane" unit="gr" numeric />
+          <FormField control={control} name="wrapGr" label="Wrap" hint="If any" unit="gr" numeric />
         </FieldGrid>
       </Card>
 
@@ -134,8 +134,9 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: Build
         </View>
       ) : (
         <>
-          {totals}
+          <BuildTotalsStrip text={text} lengthUnit={lengthUnit} />
           {fields}
+          {totals}
         </>
       )}
       <View style={styles.actions}>

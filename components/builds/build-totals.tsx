@@ -39,6 +39,27 @@ function Figure({ label, value, unit, testID, second }: { label: string; value: 
 }
 
 /**
+ * Total grains and FOC on one line for the top of a phone screen (it stays in
+ * view while the archer types further down; energy, with its caution, is in
+ * the full card below the fields).
+ * Example: `<BuildTotalsStrip text={watchedText} lengthUnit="mm" />`
+ */
+export function BuildTotalsStrip({ text, lengthUnit }: { text: BuildFormText; lengthUnit: LengthUnit }) {
+  const live = liveQuantities(text, lengthUnit);
+  const parts = [
+    live.totalGr === null ? '— gr' : `${live.totalGr.toFixed(1)} gr`,
+    live.focPct === null ? 'FOC —' : `FOC ${live.focPct.toFixed(1)} %`,
+  ];
+  return (
+    <View style={styles.strip} testID="build-totals-strip" aria-live="polite">
+      <Text variant="numeral" style={styles.stripText}>
+        {parts.join('  ·  ')}
+      </Text>
+    </View>
+  );
+}
+
+/**
  * The build's totals, recomputed by the math core on every keystroke: total
  * grains, FOC, kinetic energy (J and ft·lbf) and momentum, with the energy caution.
  * Example: `<BuildTotals text={watchedText} lengthUnit="in" />`
@@ -88,4 +109,14 @@ const styles = StyleSheet.create({
   valueRow: { flexDirection: 'row', alignItems: 'baseline', gap: space.xs },
   missing: { color: colors.lineStrong },
   needs: { backgroundColor: colors.sunken, borderRadius: radii.sm, padding: space.sm },
+  strip: {
+    position: 'sticky' as never,
+    top: 0,
+    zIndex: 2,
+    backgroundColor: colors.slate,
+    borderRadius: radii.md,
+    paddingHorizontal: space.md,
+    paddingVertical: space.sm,
+  },
+  stripText: { color: colors.onSlate, fontSize: 20, lineHeight: 24 },
 });

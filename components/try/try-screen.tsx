@@ -190,7 +190,7 @@ export function TryScreen() {
         <SectionHeading title="Your tape" />
         {outcome.live.state === 'waiting' ? <Text tone="soft">{outcome.live.message}</Text> : null}
         <FitWarnings live={outcome.live} />
-        {outcome.tape ? <TapePreview layout={outcome.tape} zoom={4} /> : null}
+        {outcome.tape ? <TapePreview layout={outcome.tape} zoom={6} /> : null}
         {outcome.tapeProblem ? <Banner tone="warn" title="This tape cannot be drawn">{`${outcome.tapeProblem}.`}</Banner> : null}
         <FieldGrid minWidth={110}>
           <FormField control={control} name="tapeFrom" label="From" unit={distance} numeric />

@@ -1,0 +1,222 @@
+/**
+ * The main workflow as a new archer walks it: sign up, add a bow with its
+ * sight radius and peep height, add an arrow build (total grains and FOC shown
+ * as they type), start a sight-in with marks at 20 and 60 yd, see the
+ * predicted marks for 10–100 yd and the chart, save, open the tape, download
+ * its SVG (ticks checked against the session's stored marks) and open the
+ * print sheet. Screenshots of every screen at 390×844 and 1280×800.
+ */
+import fs from 'node:fs';
+import path from 'node:path';
+import { DOMParser } from '@xmldom/xmldom';
+import type { Page } from 'playwright-core';
+import { uniqueEmail } from '../helpers/api';
+import { DESKTOP, PHONE, SCREENSHOT_DIR, newPage, pageErrors, screenshot as viewportShot, startStack, type Stack } from '../helpers/browser';
+
+let stack: Stack;
+beforeAll(async () => {
+  stack = await startStack();
+}, 60_000);
+afterAll(async () => {
+  await stack?.close();
+});
+
+/**
+ * The page at its viewport size, and when the app's scroll container holds
+ * more, its whole length too (<name>-full-<width>w.png): the window is made
+ * as tall as the content for one shot, then restored.
+ */
+async function screenshot(page: Page, name: string) {
+  await viewportShot(page, name);
+  const size = page.viewportSize()!;
+  const extra = await page.evaluate(() => {
+    let most = 0;
+    for (const el of Array.from(document.querySelectorAll('div'))) {
+      const overflow = getComputedStyle(el).overflowY;
+      if ((overflow === 'auto' || overflow === 'scroll') && el.scrollHeight > el.clientHeight + 1) most = Math.max(most, el.scrollHeight - el.clientHeight);
+    }
+    return most;
+  });
+  if (extra <= 0) return;
+  const height = Math.min(size.height + extra, 12000);
+  await page.setViewportSize({ width: size.width, height });
+  await page.waitForTimeout(250);
+  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}-full-${size.width}w.png`) });
+  // Long pages also in parts of at most 1400 px, readable at full resolution.
+  for (let top = 0, part = 1; top < height && height > 1600; top += 1400, part += 1) {
+    await page.screenshot({
+      path: path.join(SCREENSHOT_DIR, `${name}-full-${size.width}w-part${part}.png`),
+      clip: { x: 0, y: top, width: size.width, height: Math.min(1400, height - top) },
+    });
+  }
+  await page.setViewportSize(size);
+  await page.waitForTimeout(150);
+}
+
+/** Parses "413.7" out of a figure's text. */
+const numberIn = (text: string | null) => Number((text ?? '').replace(/[^\d.-]/g, ''));
+
+// Invented sight-in: marks at 20 and 60 yd for R 820 mm, h 110 mm, a 414 gr,
+// 6.5 mm arrow (readings of the order the drag model gives for ~285 fps).
+const NEAR = { distance: '20', reading: '14.9' };
+const FAR = { distance: '60', reading: '32.6' };
+
+for (const size of [PHONE, DESKTOP]) {
+  it(`signs up, adds a bow, a build and a sight-in, opens the tape, downloads it and opens the print sheet (${size.width}×${size.height})`, async () => {
+    const { context, page } = await newPage(stack, size);
+    await page.addInitScript(() => {
+      // The print dialog cannot be driven headless; count the calls instead.
+      (window as unknown as { printCalls: number }).printCalls = 0;
+      window.print = () => {
+        (window as unknown as { printCalls: number }).printCalls += 1;
+      };
+    });
+
+    // Sign up.
+    await page.goto('/sign-up');
+    await page.getByLabel('Name').waitFor();
+    await page.getByLabel('Name').fill('Orla Venn');
+    await page.getByLabel('E-mail').fill(uniqueEmail('workflow'));
+    await page.getByLabel('Password').fill('a long enough password');
+    await page.getByRole('button', { name: /create account/i }).click();
+    await page.getByText(/add your first bow/i).first().waitFor({ timeout: 15_000 });
+
+    // Add a bow: bad input first (nothing saved), then its sight radius and peep height.
+    await page.getByText(/add your first bow/i).first().click();
+    await page.getByLabel('Nickname').waitFor();
+    await screenshot(page, 'bow-new');
+    await page.getByTestId('bow-save').click();
+    await page.getByText('Enter the nickname').waitFor();
+    await page.getByText('Enter the sight radius').waitFor();
+    await screenshot(page, 'bow-new-errors');
+    await page.getByLabel('Nickname').fill('Tarn ridge slider');
+    await page.getByLabel('Draw weight').fill('62');
+    await page.getByLabel('Draw length').fill('711');
+    await page.getByLabel('Sight radius').fill('820');
+    await page.getByLabel('Peep height').fill('110');
+    await page.getByTestId('bow-save').click();
+    await page.waitForURL(/\/bows\/\d+$/);
+    const bowId = Number(new URL(page.url()).pathname.split('/').pop());
+    await page.getByTestId('bow-setup').getByText('820 mm').waitFor();
+    await screenshot(page, 'bow-empty');
+
+    // Add a build: the totals appear as the parts are typed.
+    await page.getByTestId('add-build').click();
+    await page.getByLabel('Build name').waitFor();
+    await page.getByLabel('Build name').fill('Ash heavy 414');
+    await page.getByLabel('Grains per inch').fill('9.5');
+    await page.getByLabel('Cut length').fill('723.9');
+    await page.getByLabel('Diameter').fill('6.5');
+    await page.getByLabel('Point', { exact: true }).fill('100');
+    await page.getByLabel('Insert', { exact: true }).fill('16');
+    await page.getByLabel('Nock', { exact: true }).fill('9');
+    await page.getByLabel('Each vane').fill('6');
+    await page.getByLabel('Balance point').fill('419.1');
+    await page.getByLabel('Chronographed speed').fill('285');
+    // 9.5 gpi × 28.5 in (723.9 mm / 25.4) + 100 + 16 + 9 + 3 × 6 = 413.75 gr (arithmetic of the parts).
+    await page.getByTestId('total-grains').getByText(/^413\.[78]$/).waitFor();
+    expect(Math.abs(numberIn(await page.getByTestId('total-grains').textContent()) - 413.75)).toBeLessThan(0.06);
+    // FOC = 100 × (419.1 − 723.9/2) / 723.9 = 7.89 % (common practice formula, no published source).
+    expect(Math.abs(numberIn(await page.getByTestId('foc').textContent()) - 7.89)).toBeLessThan(0.06);
+    await page.getByText(/Energy figures are estimates, not a legal determination/).waitFor();
+    await screenshot(page, 'build-new');
+    await page.getByTestId('build-save').click();
+    await page.waitForURL(new RegExp(`/bows/${bowId}$`));
+    await page.getByText('Ash heavy 414').first().waitFor();
+
+    // Start a sight-in and enter the marks.
+    await page.getByTestId('start-session').click();
+    await page.getByTestId('mark-distance-0').waitFor();
+    await page.getByTestId('session-unit').getByRole('radio', { name: 'Yards' }).click();
+    await page.getByLabel('Place').fill('Kestrel Hollow range');
+    await page.getByTestId('mark-distance-0').fill(NEAR.distance);
+    await page.getByTestId('mark-reading-0').fill(NEAR.reading);
+    await page.getByTestId('mark-distance-1').fill(FAR.distance);
+    await page.getByTestId('mark-reading-1').fill(FAR.reading);
+    await page.getByTestId('predicted-marks').waitFor();
+    for (let distance = 10; distance <= 100; distance += 10) await page.getByTestId(`predicted-${distance}`).waitFor();
+    await page.getByTestId('fit-chart').locator('svg').first().waitFor();
+    await screenshot(page, 'session-new');
+    await page.getByTestId('session-save').click();
+    await page.waitForURL(/\/sessions\/\d+$/);
+    const sessionId = Number(new URL(page.url()).pathname.split('/').pop());
+    await page.getByTestId('open-tape').waitFor();
+    await screenshot(page, 'session-saved');
+
+    // The bow now lists the sight-in.
+    await page.goto(`/bows/${bowId}`);
+    await page.getByTestId('bow-readiness').waitFor();
+    await screenshot(page, 'bow');
+
+    // The tape.
+    await page.goto(`/sessions/${sessionId}`);
+    await page.getByTestId('open-tape').click();
+    await page.waitForURL(new RegExp(`/sessions/${sessionId}/tape`));
+    await page.getByTestId('tape-preview').waitFor();
+    await page.getByTestId('tape-caution').getByText(/Print at actual size \(100 %, no fit-to-page\)/).waitFor();
+    await screenshot(page, 'tape');
+    await page.getByTestId('tape-save').click();
+    await page.getByText('Layout saved.').waitFor();
+
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByTestId('download-svg').click()]);
+    const svgText = fs.readFileSync((await download.path())!, 'utf8');
+    const svg = new DOMParser().parseFromString(svgText, 'image/svg+xml');
+    const root = svg.documentElement!;
+    expect(root.getAttribute('width')).toMatch(/mm$/);
+    const ticks = Array.from(svg.getElementsByTagName('line')).filter((line) => line.getAttribute('data-distance') !== null);
+    const offsetOf = (distance: number) => {
+      const tick = ticks.find((line) => Number(line.getAttribute('data-distance')) === distance);
+      if (!tick) throw new Error(`no tick at ${distance}`);
+      return Number(tick.getAttribute('y1'));
+    };
+    // The session as the API stores it: with two marks the fit passes through both, so the
+    // 20 → 60 yd tick spacing equals the difference of the stored readings (tape at 100 %).
+    const stored = await context.request.get(`${stack.baseUrl}/api/sessions/${sessionId}`);
+    const marks = (await stored.json()).session.marks as { distance: number; scaleMm: number }[];
+    const near = marks.find((mark) => mark.distance === 20)!;
+    const far = marks.find((mark) => mark.distance === 60)!;
+    expect(Math.abs(offsetOf(60) - offsetOf(20) - (far.scaleMm - near.scaleMm))).toBeLessThan(0.01);
+    // Every yard has a tick, in order down the tape.
+    const distances = ticks.map((line) => Number(line.getAttribute('data-distance')));
+    expect(distances).toEqual(Array.from({ length: distances.length }, (_, i) => distances[0] + i));
+
+    // The print sheet: at true size on its paper, print dialog opened once it loaded.
+    await page.getByTestId('tape-print').click();
+    await page.waitForURL(/\/print\/sheet\?/);
+    const sheet = page.getByTestId('print-sheet');
+    await sheet.waitFor();
+    await page.waitForFunction(() => (window as unknown as { printCalls: number }).printCalls > 0, undefined, { timeout: 10_000 });
+    const natural = await sheet.evaluate((img: HTMLImageElement) => ({ width: img.naturalWidth, css: img.style.width }));
+    expect(natural.width).toBeGreaterThan(0);
+    expect(natural.css).toMatch(/mm$/);
+    const pageRule = await page.evaluate(() => Array.from(document.querySelectorAll('style')).map((style) => style.textContent ?? '').find((css) => css.includes('@page')) ?? '');
+    expect(pageRule).toMatch(/@page \{ size: (A4|letter); margin: 0; \}/);
+    await screenshot(page, 'print-sheet');
+
+    expect(pageErrors(page)).toEqual([]);
+    await context.close();
+  }, 180_000);
+}
+
+it('gives a visitor a tape from two marks, with a prompt to sign up', async () => {
+  for (const size of [PHONE, DESKTOP]) {
+    const { context, page } = await newPage(stack, size);
+    await page.goto('/try');
+    await page.getByTestId('try-sight-radius').waitFor();
+    await page.getByTestId('try-sight-radius').fill('820');
+    await page.getByTestId('try-peep-height').fill('110');
+    await page.getByTestId('try-near-reading').fill(NEAR.reading);
+    await page.getByTestId('try-far-reading').fill(FAR.reading);
+    await page.getByTestId('tape-preview').waitFor();
+    await page.getByText('Create an account').waitFor();
+    await screenshot(page, 'try');
+    // An impossible gap is named in plain words.
+    await page.getByTestId('try-far-reading').fill('15.1');
+    await page.getByText('These marks cannot be fitted').waitFor();
+    await screenshot(page, 'try-impossible');
+    await page.getByTestId('try-far-reading').fill(FAR.reading);
+    await page.getByTestId('tape-preview').waitFor();
+    expect(pageErrors(page)).toEqual([]);
+    await context.close();
+  }
+}, 120_000);
