@@ -192,10 +192,17 @@ export function fitSight(input: FitInput): FitResult {
   const model: SightModel = { ...modelOf(base, parameters), covariance };
   const warnings: FitWarning[] = [];
 
+  // Bands, each distance solved once: the predictions and the next-distance grid share them.
+  const bands = new Map<number, MarkBand | null>();
+  const bandAt = (distance: number) => {
+    if (!bands.has(distance)) bands.set(distance, markBand(model, distance));
+    return bands.get(distance)!;
+  };
+
   // Predicted marks with bands.
   const predict = data.predict ?? DEFAULT_PREDICT;
   const predicted: PredictedMark[] = predict.map((distance) => {
-    const band = markBand(model, distance);
+    const band = bandAt(distance);
     if (!band) {
       warnings.push({ code: 'out-of-reach', distance, message: `The arrow cannot reach ${label(distance)} with this fit` });
       return { distance, markMm: NaN, sigmaMm: NaN, sigmaDistance: null, verify: true };
@@ -211,7 +218,7 @@ export function fitSight(input: FitInput): FitResult {
   const longest = Math.max(...predict, ...marks.map((mark) => mark.distance));
   const grid: MarkBand[] = [];
   for (let distance = 10; distance <= longest + 1e-9; distance += 5) {
-    const band = markBand(model, distance);
+    const band = bandAt(distance);
     if (band) grid.push(band);
   }
   const marked = (distance: number) => marks.some((mark) => Math.abs(mark.distance - distance) < 1e-9);

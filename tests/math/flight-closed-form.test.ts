@@ -65,7 +65,8 @@ describe('flight, quadratic drag without gravity (1-D)', () => {
     const crossing = integrateToRange({ u: 0, w: 0, vu: v0, vw: 0 }, { dragPerM: k, gravityMps2: 0, losAngleRad: 0 }, x);
     const t = (Math.exp(k * x) - 1) / (k * v0); // inverting x(t)
     expect(Math.abs(crossing.vu - v0 / (1 + k * v0 * t))).toBeLessThan(1e-9);
-    expect(Math.abs(crossing.timeS - t)).toBeLessThan(1e-10);
+    // 1 ns of flight time is under 0.1 µm of travel at these speeds.
+    expect(Math.abs(crossing.timeS - t)).toBeLessThan(1e-9);
   });
 
   it('computes the drag factor k = rho·Cd·A/(2m)', () => {
