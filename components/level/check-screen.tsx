@@ -25,12 +25,21 @@ import { ScreenTitle } from '@/components/ui/screen-title';
 import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { borders, colors, radii, space } from '@/components/theme';
-import { levelStepKeys, type LevelCheck } from '@/shared/level';
+import { levelStepKeys, type LevelCheck, type LevelStepKey } from '@/shared/level';
 
 /** Window width (px) from which every step of a check is shown at once. */
 export const allStepsFrom = 900;
 
 type PressState = { pressed: boolean; hovered?: boolean; focused?: boolean };
+
+/** Words that fit under a fifth of a phone's width. */
+const stripWords: Record<LevelStepKey, string> = {
+  setup: 'Set-up',
+  'first-axis': '1st axis',
+  'second-axis': '2nd axis',
+  'third-axis': '3rd axis',
+  range: 'Range',
+};
 
 /** The five steps as large numbered tabs with their results; tapping one jumps to it. */
 function StepStrip({ check, current, onSelect }: { check: LevelCheck; current: number; onSelect: (index: number) => void }) {
@@ -58,7 +67,7 @@ function StepStrip({ check, current, onSelect }: { check: LevelCheck; current: n
           >
             {Icon && look ? <Icon size={22} color={look.text} /> : <Text variant="label">{index + 1}</Text>}
             <Text variant="caption" numberOfLines={1} style={styles.stripWord}>
-              {stepGuides[step.step].title.replace('At the range', 'Range')}
+              {stripWords[step.step]}
             </Text>
           </Pressable>
         );
@@ -163,6 +172,9 @@ export function CheckScreen({ checkId }: { checkId: number }) {
   const editable = data.status === 'open' && me.data?.id === data.performedBy.id;
   const current = Math.min(index ?? resumeIndex(data), levelStepKeys.length - 1);
   const nickname = bow.data?.nickname ?? 'the bow';
+  // The caution comes before the work: above every step on a wide screen, above the set-up on a
+  // phone; on a phone's later steps it moves below, so the step itself is what the archer sees first.
+  const cautionFirst = editable && (wide || current === 0);
 
   const header = (
     <View style={styles.header}>
@@ -244,8 +256,9 @@ export function CheckScreen({ checkId }: { checkId: number }) {
     <Screen testID="check-screen">
       <ScreenTitle name="Level check" />
       {header}
-      {editable ? <LevelCaution /> : null}
+      {cautionFirst ? <LevelCaution /> : null}
       {body}
+      {editable && !cautionFirst ? <LevelCaution /> : null}
     </Screen>
   );
 }

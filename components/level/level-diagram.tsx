@@ -66,7 +66,7 @@ function Arrow({ x1, y1, x2, y2, color = checked, both = false }: { x1: number; 
   );
 }
 
-/** A bow in side view, riser centred on (cx, cy), string on the right, `tall` from tip to tip. */
+/** A compound bow in side view, riser centred on (cx, cy), string on the right, `tall` from tip to tip. */
 function SideBow({ cx, cy, tall = 200, opacity = 1 }: { cx: number; cy: number; tall?: number; opacity?: number }) {
   const half = tall / 2;
   const tipX = cx + 44;
@@ -76,6 +76,9 @@ function SideBow({ cx, cy, tall = 200, opacity = 1 }: { cx: number; cy: number; 
       <Path d={`M${cx} ${cy + half * 0.55} Q ${cx + 12} ${cy + half * 0.9} ${tipX} ${cy + half}`} stroke={ink} strokeWidth={6} fill="none" strokeLinecap="round" />
       <Rect x={cx - 8} y={cy - half * 0.6} width={16} height={half * 1.2} rx={7} fill={colors.slate} />
       <Line x1={tipX} y1={cy - half} x2={tipX} y2={cy + half} stroke={colors.inkSoft} strokeWidth={2} />
+      {/* The cams at the limb tips (a compound bow). */}
+      <Circle cx={tipX - 3} cy={cy - half + 4} r={6} fill={colors.surface} stroke={ink} strokeWidth={2.5} />
+      <Circle cx={tipX - 3} cy={cy + half - 4} r={6} fill={colors.surface} stroke={ink} strokeWidth={2.5} />
     </G>
   );
 }
@@ -92,13 +95,13 @@ function SetupDiagram() {
       {/* Arrow across the rest, nocked on the string. */}
       <Line x1={46} y1={100} x2={186} y2={100} stroke={ink} strokeWidth={3} />
       <Polygon points="38,100 50,94 50,106" fill={ink} />
-      <Vial cx={92} cy={86} length={60} />
+      <Vial cx={86} cy={92} length={60} />
       {/* String level on the bowstring, and the plumb reference beside it. */}
       <Line x1={206} y1={8} x2={206} y2={232} stroke={reference} strokeWidth={1.5} strokeDasharray="5 5" />
       <Vial cx={184} cy={168} length={50} vertical />
-      <Label x={62} y={66}>Arrow level</Label>
+      <Label x={56} y={76} anchor="middle">Arrow level</Label>
       <Label x={214} y={164} color={reference}>String plumb</Label>
-      <Label x={26} y={206}>Vise</Label>
+      <Label x={100} y={224}>Vise</Label>
     </>
   );
 }
@@ -120,7 +123,7 @@ function FirstAxisDiagram() {
       <Circle cx={145} cy={98} r={3} fill={checked} />
       <Rect x={152} y={140} width={70} height={10} fill={colors.lineStrong} />
       {/* The level held against the bar's face. */}
-      <Vial cx={118} cy={150} length={64} vertical />
+      <Vial cx={131} cy={150} length={64} vertical />
       <Arrow x1={180} y1={60} x2={180} y2={120} both />
       <Label x={186} y={94} color={checked}>Pin</Label>
       <Label x={186} y={110} color={checked}>travel</Label>
@@ -133,20 +136,22 @@ function FirstAxisDiagram() {
 function SecondAxisDiagram() {
   return (
     <>
-      <Line x1={276} y1={8} x2={276} y2={232} stroke={reference} strokeWidth={2.5} />
-      <Label x={270} y={24} anchor="end" color={reference}>String plumb</Label>
+      <Line x1={282} y1={8} x2={282} y2={232} stroke={reference} strokeWidth={2.5} />
+      <SvgText x={298} y={120} fontSize={13} fill={reference} fontFamily={fonts.bold} textAnchor="middle" transform="rotate(90 298 120)">
+        String plumb
+      </SvgText>
       {/* The housing from behind: ring, pin, and its bubble vial at the bottom. */}
-      <Circle cx={150} cy={110} r={70} fill={colors.surface} stroke={ink} strokeWidth={8} />
-      <Line x1={150} y1={180} x2={150} y2={112} stroke={ink} strokeWidth={3} />
-      <Circle cx={150} cy={110} r={4} fill={checked} />
-      <Vial cx={150} cy={160} length={76} />
+      <Circle cx={140} cy={110} r={70} fill={colors.surface} stroke={ink} strokeWidth={8} />
+      <Line x1={140} y1={180} x2={140} y2={112} stroke={ink} strokeWidth={3} />
+      <Circle cx={140} cy={110} r={4} fill={checked} />
+      <Vial cx={140} cy={160} length={76} />
       {/* Roll arrows around the ring. */}
-      <Path d="M 62 70 A 98 98 0 0 1 104 24" stroke={checked} strokeWidth={2.5} fill="none" />
-      <Polygon points="108,20 96,22 104,32" fill={checked} />
-      <Path d="M 238 70 A 98 98 0 0 0 196 24" stroke={checked} strokeWidth={2.5} fill="none" />
-      <Polygon points="192,20 204,22 196,32" fill={checked} />
-      <Label x={150} y={222} anchor="middle">Bubble centred</Label>
-      <Label x={20} y={100} color={checked}>roll</Label>
+      <Path d="M 52 70 A 98 98 0 0 1 94 24" stroke={checked} strokeWidth={2.5} fill="none" />
+      <Polygon points="98,20 86,22 94,32" fill={checked} />
+      <Path d="M 228 70 A 98 98 0 0 0 186 24" stroke={checked} strokeWidth={2.5} fill="none" />
+      <Polygon points="182,20 194,22 186,32" fill={checked} />
+      <Label x={140} y={222} anchor="middle">Bubble centred</Label>
+      <Label x={12} y={100} color={checked}>roll</Label>
     </>
   );
 }
@@ -159,11 +164,11 @@ function ThirdAxisDiagram() {
       <Polygon points="150,232 142,216 158,216" fill={reference} />
       <Label x={158} y={16} color={reference}>Plumb line</Label>
       {/* The bow pitched up and pitched down along the line. */}
-      <G transform="rotate(-22 150 120)">
-        <SideBow cx={106} cy={120} tall={176} opacity={0.35} />
+      <G transform="rotate(-18 150 120)">
+        <SideBow cx={106} cy={120} tall={176} opacity={0.22} />
       </G>
-      <G transform="rotate(22 150 120)">
-        <SideBow cx={106} cy={120} tall={176} opacity={0.35} />
+      <G transform="rotate(18 150 120)">
+        <SideBow cx={106} cy={120} tall={176} opacity={0.22} />
       </G>
       <SideBow cx={106} cy={120} tall={176} />
       <Path d="M 52 70 A 80 80 0 0 0 52 170" stroke={checked} strokeWidth={2.5} fill="none" />
@@ -203,7 +208,7 @@ function RangeDiagram() {
       {target(296, 64, 16)}
       {target(244, 192, 16)}
       <Label x={300} y={100} anchor="end">Long shot</Label>
-      <Label x={218} y={160} anchor="end">Steep shot</Label>
+      <Label x={180} y={140}>Steep shot</Label>
     </>
   );
 }

@@ -26,6 +26,8 @@ export function PrintOnly({ rootId }: { rootId: string }) {
   @page { margin: 12mm; }
   html, body { background: #fff !important; height: auto !important; overflow: visible !important; }
   body * { visibility: hidden !important; }
+  /* A transformed ancestor (the navigator's screen) would hold a fixed element inside it. */
+  div { transform: none !important; }
   #${rootId}, #${rootId} * { visibility: visible !important; }
   #${rootId} { position: fixed !important; left: 0; top: 0; width: 100% !important; max-width: none !important; padding: 0 !important; }
   #${rootId} [data-print="hide"] { display: none !important; }

@@ -48,7 +48,7 @@ export async function seedLevel(archer: User, now = new Date()): Promise<void> {
       { step: 'first-axis', result: 'pass', reading: 0, readingUnit: 'deg' },
       { step: 'second-axis', result: 'adjusted', reading: 0.5, readingUnit: 'bubble', adjustment: 'Rotated the housing about half a bubble toward the riser.' },
       { step: 'third-axis', result: 'pass' },
-      { step: 'range', result: 'pass', adjustment: '70 yd group on the mark; 35° downhill from the tower held left-right.' },
+      { step: 'range', result: 'pass', adjustment: '60 yd group on the mark; the steep shot down from the tower held left-right.' },
     ]);
   }
 

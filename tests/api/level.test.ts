@@ -1,7 +1,10 @@
 import zlib from 'node:zlib';
 import request from 'supertest';
 import { CSRF, closeDb, signedInAgent, testApp } from '@/tests/helpers/api';
-import { Bow, BowChange, LevelCheck, User } from '@/server/models';
+import fs from 'node:fs';
+import path from 'node:path';
+import { config } from '@/server/config';
+import { Bow, BowChange, LevelCheck, Photo, User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
 import { seedLevel } from '@/server/seed/level';
 
@@ -346,6 +349,24 @@ describe('photos', () => {
     expect((await request(app).get(`/api/photos/${photoId}`)).status).toBe(401);
   });
 
+  it('stores the bytes outside the database under a random name, and removes them with the bow', async () => {
+    const doomedBow = await makeBow(owner.user.id, 'Doomed bow');
+    const started = await owner.agent.post(`/api/bows/${doomedBow}/checks`).set(CSRF).send({ place: 'bench' });
+    const up = await owner.agent
+      .post(`/api/checks/${started.body.check.id}/steps/setup/photo`)
+      .set(CSRF)
+      .attach('photo', image, { filename: 'my-vise.png', contentType: 'image/png' });
+    expect(up.status).toBe(201);
+    const row = (await Photo.findByPk(up.body.photo.id))!;
+    expect(row.storageKey).toMatch(/^[0-9a-f]{32}\.png$/);
+    const file = path.join(config.uploadDir, row.storageKey);
+    expect(fs.readFileSync(file).equals(image)).toBe(true);
+    const gone = await owner.agent.delete(`/api/bows/${doomedBow}`).set(CSRF);
+    expect(gone.status).toBe(204);
+    expect(fs.existsSync(file)).toBe(false);
+    expect(await Photo.findByPk(up.body.photo.id)).toBeNull();
+  });
+
   it('replaces and removes a step photo', async () => {
     const again = await owner.agent
       .post(`/api/checks/${checkId}/steps/second-axis/photo`)
@@ -467,6 +488,29 @@ describe('demo seed and the bows list', () => {
     const longest = Math.max(...res.body.marks.marks.map((m: { distance: number }) => m.distance));
     expect(res.body.marks.longestDistance).toBe(longest);
     expect(res.body.tape).not.toBeNull();
-    expect(res.body.warnings[0]).toBe('Level: New string 12 days after the last check.');
+    expect(res.body.warnings).toEqual([
+      'Level: New string 12 days after the last check.',
+      'New string after the latest sight-in (24 Oct 2026): the marks may have moved; confirm them at the range.',
+    ]);
+    // The fit's "confirm at" distances all lie off this tape's span (20–60 yd), so none is listed.
+    expect(res.body.tape).toMatchObject({ fromDistance: 20, toDistance: 60, unit: 'yd', fromLatestSession: true });
+
+    // On the hunting bow, any "confirm at" distances named lie on its tape's span.
+    const timberline = (await Bow.findOne({ where: { userId: archer.id, nickname: 'Timberline slider' } }))!;
+    const trip = (await seeded.agent.get(`/api/bows/${timberline.id}/readiness`)).body;
+    expect(trip.level.state).toBe('verified');
+    for (const warning of trip.warnings as string[]) {
+      const named = /^Fit: confirm at (.+) (yd|m) before relying on the tape there/.exec(warning);
+      if (!named) continue;
+      for (const distance of named[1].replace(' and ', ', ').split(', ').map(Number)) {
+        expect(distance).toBeGreaterThanOrEqual(trip.tape.fromDistance);
+        expect(distance).toBeLessThanOrEqual(trip.tape.toDistance);
+      }
+    }
+    // The tape comes from the newest sight-in that has one, and its span past the longest mark is flagged.
+    expect(trip.tape).toMatchObject({ fromLatestSession: true, sessionDate: trip.marks.date });
+    expect(trip.warnings).toContain(
+      `The tape runs to ${trip.tape.toDistance} yd, beyond the longest confirmed mark (${trip.marks.longestDistance} yd): the distances beyond it are estimates until shot at the range.`,
+    );
   });
 });
