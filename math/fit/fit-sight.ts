@@ -194,9 +194,9 @@ export function fitSight(input: FitInput): FitResult {
 
   // Bands, each distance solved once: the predictions and the next-distance grid share them.
   const bands = new Map<number, MarkBand | null>();
-  const bandAt = (distance: number) => {
+  const bandAt = (distance: number): MarkBand | null => {
     if (!bands.has(distance)) bands.set(distance, markBand(model, distance));
-    return bands.get(distance)!;
+    return bands.get(distance) ?? null;
   };
 
   // Predicted marks with bands.
