@@ -1,6 +1,6 @@
 // One Jest run, four projects. `npm test` (server/tools/test-run.ts) provides the
 // database and the web export that the api and browser projects need.
-const swc = ['@swc/jest', { jsc: { parser: { syntax: 'typescript', tsx: true }, target: 'es2022', transform: { react: { runtime: 'automatic' } } }, module: { type: 'commonjs' } }];
+const swc = ['@swc/jest', { inputSourceMap: false, jsc: { parser: { syntax: 'typescript', tsx: true }, target: 'es2022', transform: { react: { runtime: 'automatic' } } }, module: { type: 'commonjs' } }];
 const alias = { '^@/(.*)$': '<rootDir>/$1' };
 
 module.exports = {
@@ -16,6 +16,8 @@ module.exports = {
     {
       displayName: 'api',
       testEnvironment: 'node',
+      // bcrypt at cost 12 and a real database: slower than unit tests, more so on 2 busy cores.
+      testTimeout: 60_000,
       testMatch: ['<rootDir>/tests/api/**/*.test.ts'],
       transform: { '^.+\\.(t|j)sx?$': swc },
       moduleNameMapper: alias,
@@ -23,12 +25,14 @@ module.exports = {
     {
       displayName: 'components',
       preset: 'jest-expo/web',
+      testTimeout: 30_000,
       testMatch: ['<rootDir>/tests/components/**/*.test.tsx'],
       moduleNameMapper: { ...alias, '^react-native$': 'react-native-web' },
     },
     {
       displayName: 'browser',
       testEnvironment: 'node',
+      testTimeout: 120_000,
       testMatch: ['<rootDir>/tests/browser/**/*.test.ts'],
       transform: { '^.+\\.(t|j)sx?$': swc },
       moduleNameMapper: alias,

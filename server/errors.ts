@@ -4,7 +4,6 @@
  */
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
-import { config } from './config';
 
 export type FieldErrors = Record<string, string>;
 
@@ -67,7 +66,8 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   else if (err?.name === 'SequelizeConnectionRefusedError' || err?.name === 'SequelizeConnectionError') {
     apiError = new ApiError(503, 'db_unavailable', 'The database is not reachable; try again shortly.');
   } else {
-    if (!config.production || process.env.PINWRIGHT_LOG_ERRORS) console.error(err);
+    // Logged on the server (never sent to the client); quiet under Jest unless asked for.
+    if (process.env.NODE_ENV !== 'test' || process.env.PINWRIGHT_LOG_ERRORS) console.error(err);
     apiError = new ApiError(500, 'internal', 'Something went wrong on our side. Nothing was saved.');
   }
   if (res.headersSent) return;
