@@ -4,6 +4,9 @@ const swc = ['@swc/jest', { inputSourceMap: false, jsc: { parser: { syntax: 'typ
 const alias = { '^@/(.*)$': '<rootDir>/$1' };
 
 module.exports = {
+  // bcrypt at cost 12, a real database and a real browser on 2 cores: far slower than
+  // Jest's 5 s default allows. (Jest 29 takes testTimeout only at the top level.)
+  testTimeout: 60_000,
   projects: [
     {
       displayName: 'unit',
@@ -16,8 +19,6 @@ module.exports = {
     {
       displayName: 'api',
       testEnvironment: 'node',
-      // bcrypt at cost 12 and a real database: slower than unit tests, more so on 2 busy cores.
-      testTimeout: 60_000,
       testMatch: ['<rootDir>/tests/api/**/*.test.ts'],
       transform: { '^.+\\.(t|j)sx?$': swc },
       moduleNameMapper: alias,
@@ -25,14 +26,12 @@ module.exports = {
     {
       displayName: 'components',
       preset: 'jest-expo/web',
-      testTimeout: 30_000,
       testMatch: ['<rootDir>/tests/components/**/*.test.tsx'],
       moduleNameMapper: { ...alias, '^react-native$': 'react-native-web' },
     },
     {
       displayName: 'browser',
       testEnvironment: 'node',
-      testTimeout: 120_000,
       testMatch: ['<rootDir>/tests/browser/**/*.test.ts'],
       transform: { '^.+\\.(t|j)sx?$': swc },
       moduleNameMapper: alias,
