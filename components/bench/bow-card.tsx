@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
+import { sightInWords, tapeWords } from '@/components/bows/readiness-words';
 import { Card } from '@/components/ui/card';
 import { ChevronRightIcon } from '@/components/ui/icons';
 import { ReadinessBadge } from '@/components/ui/readiness-badge';
@@ -18,10 +19,12 @@ const count = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : 
 export function BowCard({ bow }: { bow: BowSummary }) {
   const level = levelSummarySchema.safeParse(bow.readiness.level);
   const state = level.success ? level.data.state : 'none';
+  // Fit quality of the latest sight-in and whether a tape is saved (words shared with the Bow screen).
+  const sightIn = sightInWords(bow.readiness);
+  const tape = tapeWords(bow.readiness);
   const records = [
     count(bow.readiness.buildCount, 'build', 'builds'),
     count(bow.readiness.sessionCount, 'sight-in', 'sight-ins'),
-    bow.readiness.hasTape ? 'tape saved' : 'no tape yet',
   ].join(' · ');
   return (
     <Card href={`/bows/${bow.id}`} accessibilityLabel={`Open ${bow.nickname}`} testID={`bow-card-${bow.id}`}>
@@ -30,7 +33,11 @@ export function BowCard({ bow }: { bow: BowSummary }) {
           <Text variant="title" numberOfLines={1}>
             {bow.nickname}
           </Text>
-          <ReadinessBadge state={state} subject="Level" />
+          <View style={styles.badges}>
+            <ReadinessBadge state={sightIn.state} label={sightIn.label} subject="Sight-in" />
+            <ReadinessBadge state={tape.state} label={tape.label} subject="Tape" />
+            <ReadinessBadge state={state} subject="Level" />
+          </View>
           <Text variant="small" tone="soft">
             {records}
           </Text>
@@ -44,4 +51,5 @@ export function BowCard({ bow }: { bow: BowSummary }) {
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'center', gap: space.md },
   words: { flex: 1, gap: space.sm },
+  badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

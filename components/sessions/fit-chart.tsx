@@ -53,8 +53,8 @@ export function FitChart({ fit, sign, marks }: FitChartProps) {
       {width > 0 ? (
         <View accessibilityLabel={`Chart of ${marks.length} marks and the fitted curve from ${first} to ${last} ${unit}`} role="img">
           <VictoryChart width={width} height={height} padding={padding} domainPadding={{ y: 4 }}>
-            <VictoryAxis crossAxis={false} label={`Distance (${unit})`} style={axisStyle} />
-            <VictoryAxis dependentAxis crossAxis={false} label="Reading (mm)" style={axisStyle} />
+            <VictoryAxis crossAxis={false} offsetY={padding.bottom} label={`Distance (${unit})`} style={axisStyle} />
+            <VictoryAxis dependentAxis crossAxis={false} offsetX={padding.left} label="Reading (mm)" style={axisStyle} />
             <VictoryArea data={band} style={{ data: { fill: colors.signalTint, stroke: colors.signal, strokeWidth: 0.5 } }} />
             <VictoryLine data={curve} style={{ data: { stroke: colors.signal, strokeWidth: 2.5 } }} />
             <VictoryScatter data={points} size={6} style={{ data: { fill: colors.slate, stroke: colors.surface, strokeWidth: 2 } }} />
@@ -71,8 +71,8 @@ export function FitChart({ fit, sign, marks }: FitChartProps) {
       {width > 0 ? (
         <View accessibilityLabel="Chart of each mark's residual against the fit's band" role="img">
           <VictoryChart width={width} height={Math.round(height * 0.7)} padding={padding} domain={{ x: [first, last], y: [-residualReach, residualReach] }}>
-            <VictoryAxis crossAxis={false} label={`Distance (${unit})`} style={axisStyle} />
-            <VictoryAxis dependentAxis crossAxis={false} label="mm" style={axisStyle} tickFormat={(tick: number) => tick.toFixed(2)} />
+            <VictoryAxis crossAxis={false} offsetY={padding.bottom} label={`Distance (${unit})`} style={axisStyle} />
+            <VictoryAxis dependentAxis crossAxis={false} offsetX={padding.left} label="mm" style={axisStyle} tickFormat={(tick: number) => tick.toFixed(2)} />
             <VictoryArea data={residualBand} style={{ data: { fill: colors.infoTint, stroke: colors.info, strokeWidth: 0.5 } }} />
             <VictoryLine data={[{ x: first, y: 0 }, { x: last, y: 0 }]} style={{ data: { stroke: colors.inkSoft, strokeWidth: 1 } }} />
             <VictoryScatter

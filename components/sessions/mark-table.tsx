@@ -118,7 +118,7 @@ const styles = StyleSheet.create({
   rowHead: { flexDirection: 'row', alignItems: 'center', flexWrap: 'wrap', columnGap: space.md },
   spacer: { flexGrow: 1 },
   inputs: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.md, rowGap: space.sm },
-  numberCell: { flexGrow: 1, flexBasis: 120, minWidth: 0 },
-  smallCell: { flexGrow: 0, flexBasis: 90, minWidth: 0 },
+  numberCell: { flexGrow: 1, flexBasis: 96, minWidth: 0 },
+  smallCell: { flexGrow: 0, flexBasis: 72, minWidth: 0 },
   noteCell: { flexGrow: 2, flexBasis: 200, minWidth: 0 },
 });

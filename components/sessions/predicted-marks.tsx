@@ -27,10 +27,10 @@ export function PredictedMarks({ fit, sign, marks }: PredictedMarksProps) {
           Distance
         </Text>
         <Text variant="label" style={styles.mark} role="columnheader">
-          Mark
+          Mark, mm
         </Text>
         <Text variant="label" style={styles.band} role="columnheader">
-          ± band
+          Band, mm
         </Text>
         <Text variant="label" style={styles.status} role="columnheader">
           Status
@@ -51,13 +51,18 @@ export function PredictedMarks({ fit, sign, marks }: PredictedMarksProps) {
               {mark.distance} {unit}
             </Text>
             <Text variant="numeral" style={[styles.cell, styles.mark]} role="cell">
-              {reachable ? `${(sign * mark.markMm).toFixed(2)} mm` : '—'}
+              {reachable ? (sign * mark.markMm).toFixed(2) : '—'}
             </Text>
-            <Text variant="numeral" tone="soft" style={[styles.cell, styles.band]} role="cell">
-              {reachable && Number.isFinite(mark.sigmaMm)
-                ? `${mark.sigmaMm.toFixed(2)} mm${mark.sigmaDistance !== null ? ` · ${mark.sigmaDistance.toFixed(1)} ${unit}` : ''}`
-                : '—'}
-            </Text>
+            <View style={styles.band} role="cell">
+              <Text variant="numeral" tone="soft" style={styles.cell}>
+                {reachable && Number.isFinite(mark.sigmaMm) ? `±${mark.sigmaMm.toFixed(2)}` : '—'}
+              </Text>
+              {reachable && mark.sigmaDistance !== null ? (
+                <Text variant="caption" tone="soft">
+                  ±{mark.sigmaDistance.toFixed(1)} {unit}
+                </Text>
+              ) : null}
+            </View>
             <Text variant="small" tone={status === 'Confirm' ? 'due' : status === 'Sighted' ? 'verified' : 'soft'} style={styles.status} role="cell">
               {status}
             </Text>
@@ -76,7 +81,7 @@ const styles = StyleSheet.create({
   verify: { backgroundColor: colors.dueTint },
   cell: { fontSize: 18, lineHeight: 22 },
   distance: { flexBasis: 56, flexGrow: 0, flexShrink: 0 },
-  mark: { flexBasis: 76, flexGrow: 1 },
+  mark: { flexBasis: 76, flexGrow: 1, flexShrink: 0 },
   band: { flexBasis: 96, flexGrow: 1 },
   status: { flexBasis: 66, flexGrow: 0, flexShrink: 0, textAlign: 'right' },
 });

@@ -234,6 +234,14 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: Se
           The server refitted the marks and stored the fit. Open the tape to print it.
         </Banner>
       ) : null}
+      {session && !formState.isDirty ? (
+        <View style={styles.topActions}>
+          <Button label="Open the tape" href={`/sessions/${session.id}/tape`} testID="open-tape-top" />
+          <Text variant="small" tone="soft" style={styles.topHint}>
+            Drawn from the fit saved with these marks.
+          </Text>
+        </View>
+      ) : null}
       {session && formState.isDirty ? (
         <Text variant="small" tone="soft">
           Unsaved changes: save before opening the tape, which is drawn from the saved fit.
@@ -282,6 +290,8 @@ const styles = StyleSheet.create({
   split: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
   column: { flex: 1, minWidth: 0, gap: space.xl },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  topActions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'center' },
+  topHint: { flexShrink: 1 },
   figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
   figure: { flexGrow: 1, flexBasis: 110, gap: space.xxs },
   figureValue: { fontSize: 32, lineHeight: 36 },

@@ -193,6 +193,17 @@ for (const size of [PHONE, DESKTOP]) {
     expect(pageRule).toMatch(/@page \{ size: (A4|letter); margin: 0; \}/);
     await screenshot(page, 'print-sheet');
 
+    // Back on the Bench, the bow's card shows its readiness at a glance, and opens the bow.
+    await page.goto('/');
+    const card = page.getByTestId(`bow-card-${bowId}`);
+    await card.getByText('Two-mark fit').waitFor();
+    await card.getByText('Tape saved', { exact: true }).waitFor();
+    await screenshot(page, 'bench');
+    await card.click();
+    await page.waitForURL(new RegExp(`/bows/${bowId}$`));
+    await page.getByTestId(`tape-row-${(await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow.tapes[0].id}`).waitFor();
+    await screenshot(page, 'bow-complete');
+
     expect(pageErrors(page)).toEqual([]);
     await context.close();
   }, 180_000);

@@ -77,11 +77,11 @@ describe('the marks table and its live fit', () => {
     await screen.findByTestId('predicted-marks');
     for (let distance = 10; distance <= 100; distance += 5) expect(screen.getByTestId(`predicted-${distance}`)).toBeTruthy();
     // Two marks, no chronograph: the fit passes through both exactly (a two-mark solve).
-    expect(within(screen.getByTestId('predicted-20')).getByText('14.90 mm')).toBeTruthy();
-    expect(within(screen.getByTestId('predicted-60')).getByText('32.60 mm')).toBeTruthy();
+    expect(within(screen.getByTestId('predicted-20')).getByText('14.90')).toBeTruthy();
+    expect(within(screen.getByTestId('predicted-60')).getByText('32.60')).toBeTruthy();
     expect(screen.getByTestId('mark-residual-0').textContent).toBe('on the fit');
     // Between the marks the predicted mark lies between their readings, growing with distance.
-    const reading = (distance: number) => Number(within(screen.getByTestId(`predicted-${distance}`)).getByText(/^\d+\.\d\d mm$/).textContent!.replace(' mm', ''));
+    const reading = (distance: number) => Number(within(screen.getByTestId(`predicted-${distance}`)).getByText(/^\d+\.\d\d$/).textContent);
     expect(reading(40)).toBeGreaterThan(14.9);
     expect(reading(40)).toBeLessThan(32.6);
     expect(reading(80)).toBeGreaterThan(32.6);
