@@ -231,3 +231,55 @@ it('gives a visitor a tape from two marks, with a prompt to sign up', async () =
     await context.close();
   }
 }, 120_000);
+
+it('shows a fixed multi-pin sight the gap of each pin beside its tape', async () => {
+  const { context, page } = await newPage(stack, DESKTOP);
+  const email = uniqueEmail('pins');
+  const signUp = await context.request.post(`${stack.baseUrl}/api/auth/sign-up`, {
+    headers: { 'X-Pinwright-Csrf': '1' },
+    data: { name: 'Brannoc Hale', email, password: 'a long enough password' },
+  });
+  expect(signUp.status()).toBe(201);
+  const post = async (path: string, data: unknown) => {
+    const res = await context.request.post(`${stack.baseUrl}${path}`, { headers: { 'X-Pinwright-Csrf': '1' }, data });
+    if (res.status() !== 201) throw new Error(`${path}: ${res.status()} ${await res.text()}`);
+    return res.json();
+  };
+  const { bow } = await post('/api/bows', {
+    nickname: 'Fenmoor five-pin',
+    hand: 'left',
+    drawWeightLb: 58,
+    drawLengthMm: 700,
+    sightKind: 'fixed-multi-pin',
+    sightRadiusMm: 820,
+    peepHeightMm: 110,
+    pinDistances: [20, 30, 40, 50, 60],
+    pinDistanceUnit: 'yd',
+  });
+  const { build } = await post(`/api/bows/${bow.id}/builds`, { name: 'Birch 414', grainsPerInch: 9.5, cutLengthMm: 723.9, diameterMm: 6.5, pointGr: 100, insertGr: 16, nockGr: 9, vaneWeightGr: 6 });
+  const { session } = await post(`/api/bows/${bow.id}/sessions`, {
+    buildId: build.id,
+    date: '2026-11-28',
+    marks: [
+      { distance: 20, unit: 'yd', scaleMm: 14.9 },
+      { distance: 60, unit: 'yd', scaleMm: 32.6 },
+    ],
+  });
+
+  await page.goto(`/sessions/${session.id}/tape`);
+  const table = page.getByTestId('pin-gaps');
+  await table.waitFor();
+  // Two marks and no chronograph: the fit passes through both, so the 60 yd pin sits
+  // 32.6 − 14.9 = 17.70 mm below the 20 yd pin (arithmetic of the stored readings).
+  await page.getByTestId('pin-20').getByText('0.00 mm').waitFor();
+  await page.getByTestId('pin-60').getByText('17.70 mm').waitFor();
+  const gaps = await Promise.all([30, 40, 50, 60].map(async (distance) => numberIn(await page.getByTestId(`pin-${distance}`).locator('[role="cell"]').nth(3).textContent())));
+  // The gaps add up to the spread of the pins.
+  expect(Math.abs(gaps.reduce((sum, gap) => sum + gap, 0) - 17.7)).toBeLessThan(0.03);
+  // Each pin's gap is larger than the one above it (the arrow drops faster with range).
+  gaps.slice(1).forEach((gap, i) => expect(gap).toBeGreaterThan(gaps[i]));
+  await page.getByTestId('tape-preview').waitFor();
+  await screenshot(page, 'tape-pins');
+  expect(pageErrors(page)).toEqual([]);
+  await context.close();
+}, 60_000);
