@@ -14,6 +14,7 @@ export function SignInScreen() {
         lead="Welcome back to your bench."
         footer={
           <>
+            <TextLink href="/forgot-password" label="Forgot your password?" />
             <TextLink href="/sign-up" label="New here? Create an account" />
             <TextLink href="/try" label="Try a tape without an account" />
           </>

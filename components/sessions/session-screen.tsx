@@ -3,6 +3,7 @@ import { useBow } from '@/components/bows/api';
 import { formatDay } from '@/components/bows/readiness-words';
 import { useSession } from '@/components/sessions/api';
 import { SessionEditor } from '@/components/sessions/session-editor';
+import { Button } from '@/components/ui/button';
 import { ErrorView } from '@/components/ui/error-view';
 import { LoadingView } from '@/components/ui/loading-view';
 import { NotFoundScreen } from '@/components/ui/not-found-screen';
@@ -41,6 +42,7 @@ export function SessionScreen({ sessionId }: { sessionId: number }) {
         level={1}
         title={`Sight-in, ${formatDay(data.date)}`}
         description={[bow.data.nickname, data.placeLabel].filter(Boolean).join(' · ')}
+        action={<Button label="Import marks (CSV)" variant="secondary" href={`/sessions/${data.id}/import`} testID="import-marks" />}
       />
       <SessionEditor key={data.id} bow={bow.data} session={data} distanceUnit={me.data.distanceUnit} />
     </Screen>

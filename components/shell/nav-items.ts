@@ -1,6 +1,8 @@
 import type { Href } from 'expo-router';
 import type { ReactElement } from 'react';
 
+import { AdminIcon } from '@/components/admin/admin-icon';
+import { ClientsIcon } from '@/components/clients/clients-icon';
 import { BenchIcon, PersonIcon, type IconProps } from '@/components/ui/icons';
 import type { Role } from '@/shared/auth';
 
@@ -25,6 +27,20 @@ export const navItems: NavItem[] = [
     href: '/',
     icon: BenchIcon,
     matches: (pathname) => pathname === '/' || pathname.startsWith('/bows'),
+  },
+  {
+    label: 'Clients',
+    href: '/clients',
+    icon: ClientsIcon,
+    matches: (pathname) => pathname.startsWith('/clients'),
+    roles: ['tech'],
+  },
+  {
+    label: 'Admin',
+    href: '/admin',
+    icon: AdminIcon,
+    matches: (pathname) => pathname.startsWith('/admin'),
+    roles: ['admin'],
   },
   {
     label: 'Account',

@@ -21,6 +21,7 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { DownloadLink } from '@/components/ui/download-link';
+import { SendTapeForm } from '@/components/import-export/send-tape-form';
 import { FormChoice } from '@/components/ui/form-choice';
 import { FormField } from '@/components/ui/form-field';
 import { SectionHeading } from '@/components/ui/section-heading';
@@ -182,6 +183,7 @@ export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit }: Tap
           <DownloadLink label="Download PDF" href={`/api/sessions/${session.id}/sheet.pdf?${query}`} testID="download-pdf" />
         </>
       ) : null}
+      <SendTapeForm sessionId={session.id} layoutQuery={query} />
     </View>
   );
 

@@ -95,7 +95,7 @@ export function tapeMessage({ senderName, bowNickname, sessionDate, filename }: 
     ``,
     `${senderName} sent you the print sheet of a sight tape for the bow "${bowNickname}", from the sight-in session of ${sessionDate}. It is attached as ${filename}.`,
     ``,
-    `Print it at 100 % (actual size, no "fit to page") and check the scale bar with a ruler before you cut the tape.`,
+    `Print it at 100 % (actual size, no "fit to page") and measure the 50 mm bar on the sheet with a ruler before you cut the tape.`,
     caution,
     ``,
     `Pinwright`,
@@ -104,7 +104,7 @@ export function tapeMessage({ senderName, bowNickname, sessionDate, filename }: 
     'A sight tape for you',
     [
       `${escapeHtml(senderName)} sent you the print sheet of a sight tape for the bow <strong>${escapeHtml(bowNickname)}</strong>, from the sight-in session of ${escapeHtml(sessionDate)}. It is attached as ${escapeHtml(filename)}.`,
-      `Print it at 100 % (actual size, no “fit to page”) and check the scale bar with a ruler before you cut the tape.`,
+      `Print it at 100 % (actual size, no “fit to page”) and measure the 50 mm bar on the sheet with a ruler before you cut the tape.`,
       `<strong>Caution:</strong> ${escapeHtml(caution)}`,
     ],
   );

@@ -6,6 +6,7 @@ import { User } from '@/server/models';
 import { hashPassword } from '@/server/services/auth-service';
 import { seedBowsStep } from './bows'; // bows.ts imports only the SeedStep type from here, so no import cycle
 import { seedLevelStep } from './level'; // likewise; runs after the bows it checks
+import { seedSharingStep } from './sharing'; // likewise; shares one of the seeded bows
 
 export const demoAccounts = [
   { role: 'archer', name: 'Marit Oakhollow', email: 'marit@demo.pinwright.test', password: 'pinwright-archer' },
@@ -18,6 +19,7 @@ export type SeedStep = (accounts: Record<(typeof demoAccounts)[number]['role'], 
 export const seedSteps: SeedStep[] = [];
 seedSteps.push(seedBowsStep);
 seedSteps.push(seedLevelStep);
+seedSteps.push(seedSharingStep);
 
 export async function seedDemo(): Promise<void> {
   const accounts = {} as Record<(typeof demoAccounts)[number]['role'], User>;

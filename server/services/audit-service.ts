@@ -86,7 +86,22 @@ type Audited = {
   describe: (values: Values) => string;
   /** The bow the record belongs to. */
   bowOf: (values: Values, transaction?: Transaction | null) => Promise<number | null>;
+  /** A verb of its own for an update (e.g. "Completed" a level check), else the usual "Changed". */
+  updateVerb?: (values: Values, fields: string[]) => string | null;
 };
+
+/** Fields worked out by the server (refits, totals, time stamps): not named in summaries. */
+const derivedFields = new Set([
+  'createdAt', 'updatedAt', 'fit', 'fitSpeedFps', 'fitRmsMm',
+  'totalGr', 'focPct', 'kineticEnergyFtLb', 'kineticEnergyJ', 'momentumSlugFtPerS', 'momentumKgMPerS',
+]);
+const fieldWords: Record<string, string> = {
+  placeLabel: 'place', scaleMm: 'scale reading', arrowsShot: 'arrows shot', buildId: 'arrow build',
+  altitudeM: 'altitude', temperatureC: 'temperature', completedAt: 'finish time', startedAt: 'start time',
+  readingUnit: 'reading unit', photoId: 'photo', changedAt: 'time of the change',
+};
+/** "placeLabel" → "place", "sightRadiusMm" → "sight radius mm". */
+const fieldWord = (field: string) => fieldWords[field] ?? field.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
 
 const direct = async (values: Values) => (typeof values.bowId === 'number' ? values.bowId : null);
 const viaSession = async (values: Values, transaction?: Transaction | null) => {
@@ -119,11 +134,17 @@ const audited: Record<string, Audited> = {
     bowOf: viaSession,
   },
   Tape: { type: 'tape', noun: 'a tape layout', describe: () => '', bowOf: viaSession },
-  LevelCheck: { type: 'level-check', noun: 'a level check', describe: (v) => (v.place ? `at the ${text(v.place)}` : ''), bowOf: direct },
+  LevelCheck: {
+    type: 'level-check',
+    noun: 'a level check',
+    describe: (v) => (v.place ? `at the ${text(v.place)}` : ''),
+    bowOf: direct,
+    updateVerb: (v, fields) => (fields.includes('status') && v.status === 'complete' ? 'Completed' : null),
+  },
   LevelStep: {
     type: 'level-step',
     noun: 'a level-check step',
-    describe: (v) => [text(v.step), text(v.result)].filter(Boolean).join(': '),
+    describe: (v) => [text(v.step).replace(/-/g, ' '), text(v.result)].filter(Boolean).join(': '),
     bowOf: viaCheck,
   },
   Photo: { type: 'photo', noun: 'a photo', describe: () => '', bowOf: direct },
@@ -166,7 +187,9 @@ async function trail(
     const first = bowRows[0];
     const what = bowRows.length === 1 ? spec.noun : `${bowRows.length} ${spec.type.replace(/-/g, ' ')}s`;
     const detail = bowRows.length === 1 ? spec.describe(first) : '';
-    const fields = action === 'updated' && changedFields.length ? ` (${changedFields.join(', ')})` : '';
+    const named = changedFields.filter((field) => !derivedFields.has(field));
+    const ownVerb = action === 'updated' ? (spec.updateVerb?.(first, changedFields) ?? null) : null;
+    const fields = action === 'updated' && !ownVerb && named.length ? ` (${named.map(fieldWord).join(', ')})` : '';
     await recordAudit(
       {
         actorId: actor.id,
@@ -174,7 +197,7 @@ async function trail(
         bowId,
         recordType: spec.type,
         recordId: bowRows.length === 1 && typeof first.id === 'number' ? first.id : null,
-        summary: `${verbs[action]} ${what}${detail ? `: ${detail}` : ''}${fields}`,
+        summary: `${ownVerb ?? verbs[action]} ${what}${detail ? `: ${detail}` : ''}${fields}`,
       },
       transaction,
     );

@@ -10,7 +10,7 @@
  */
 import { Op } from 'sequelize';
 import { toCsv, type CsvCell } from '@/server/csv';
-import { ApiError } from '@/server/errors';
+import { ApiError, validationError } from '@/server/errors';
 import { tapeMessage } from '@/server/mail/messages';
 import { ArrowBuild, SessionMark, SightSession, type User } from '@/server/models';
 import { recordAudit } from '@/server/services/audit-service';
@@ -21,7 +21,7 @@ import { sendMail } from '@/server/services/mail-service';
 import { findOwnSession, sessionOut } from '@/server/services/session-service';
 import { sheetDownload } from '@/server/services/tape-service';
 import type { SendTape } from '@/shared/export';
-import type { TapeQuery } from '@/shared/tape';
+import { tapeQuerySchema, type TapeQuery } from '@/shared/tape';
 
 export type ExportFile = { body: string | Buffer; contentType: string; fileName: string };
 
@@ -98,9 +98,16 @@ export async function exportBowCsv(user: User, bowId: number): Promise<ExportFil
  * POST /api/sessions/:id/send-tape: the session's print sheet (the same PDF
  * as GET /api/sessions/:id/sheet.pdf) e-mailed as an attachment.
  */
-export async function sendTape(user: User, sessionId: number, { to, paper, tape }: SendTape): Promise<{ fileName: string }> {
+export async function sendTape(user: User, sessionId: number, { to, paper, tape, layout }: SendTape): Promise<{ fileName: string }> {
   const session = await findOwnSession(user, sessionId, undefined, 'read');
-  const pdf = await sheetDownload(user, sessionId, { paper, tape } as TapeQuery, 'pdf');
+  let query: TapeQuery = { tape } as TapeQuery;
+  if (layout !== undefined) {
+    const parsed = tapeQuerySchema.safeParse(Object.fromEntries(new URLSearchParams(layout)));
+    if (!parsed.success) throw validationError(parsed.error, 'layout');
+    query = parsed.data;
+  }
+  if (paper) query = { ...query, paper };
+  const pdf = await sheetDownload(user, sessionId, query, 'pdf');
   try {
     await sendMail({
       to,

@@ -1,0 +1,5 @@
+import { AdminAuditScreen } from '@/components/admin/audit-screen';
+
+export default function AdminAudit() {
+  return <AdminAuditScreen />;
+}

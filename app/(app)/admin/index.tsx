@@ -1,0 +1,5 @@
+import { AccountsScreen } from '@/components/admin/accounts-screen';
+
+export default function AdminAccounts() {
+  return <AccountsScreen />;
+}

@@ -1,0 +1,5 @@
+import { ClientsScreen } from '@/components/clients/clients-screen';
+
+export default function Clients() {
+  return <ClientsScreen />;
+}

@@ -1,0 +1,145 @@
+/**
+ * Sharing a bow, as the people would do it: an archer invites a technician
+ * from the bow; the technician opens the e-mail in the development mail
+ * reader, follows its link, creates a technician account from the invitation
+ * and adds a level check on the shared bow; the archer sees it in the bow's
+ * log and ends the share; the technician's next look at the bow is refused.
+ * Screenshots at phone (390×844) and desktop (1280×800) size.
+ */
+import type { BrowserContext, Page } from 'playwright-core';
+import { CSRF, uniqueEmail } from '../helpers/api';
+import { DESKTOP, PHONE, newPage, pageErrors, screenshot, signUpInContext, startStack, type Stack } from '../helpers/browser';
+import { bowBody, buildBody, knownMarks } from '../api/bow-fixtures';
+
+let stack: Stack;
+beforeAll(async () => {
+  stack = await startStack();
+}, 60_000);
+afterAll(async () => {
+  await stack?.close();
+});
+
+/** A bow with a build and a sight-in, through the API in the archer's browser context. */
+async function makeBow(context: BrowserContext, nickname: string): Promise<number> {
+  const post = async (path: string, data: unknown) => {
+    const res = await context.request.post(`${stack.baseUrl}${path}`, { headers: CSRF, data });
+    if (res.status() !== 201) throw new Error(`${path}: ${res.status()} ${await res.text()}`);
+    return res.json();
+  };
+  const { bow } = await post('/api/bows', bowBody({ nickname }));
+  const { build } = await post(`/api/bows/${bow.id}/builds`, buildBody());
+  await post(`/api/bows/${bow.id}/sessions`, { buildId: build.id, date: '2026-11-02', placeLabel: 'Alder Flats range', marks: knownMarks([20, 40, 60]) });
+  return bow.id;
+}
+
+const steps = [
+  ['setup', 'pass'],
+  ['first-axis', 'pass'],
+  ['second-axis', 'adjusted'],
+  ['third-axis', 'pass'],
+  ['range', 'skipped'],
+] as const;
+
+/** Works a started check through every step and finishes it (phone: one step a screen; desktop: all at once). */
+async function workCheck(page: Page) {
+  for (const [step, result] of steps) {
+    await page.getByTestId(`${step}-result-${result}`).click();
+    if (result === 'adjusted') await page.getByTestId(`${step}-adjustment`).fill('Turned the sight bubble a quarter turn');
+    const saved = page.waitForResponse((res) => res.request().method() === 'PATCH' && res.url().includes('/api/checks/'));
+    await page.getByTestId(`${step}-save`).click();
+    expect((await saved).status()).toBe(200);
+  }
+  // The phone's last step saves and finishes; the desktop has a separate finish button.
+  await page.getByTestId('check-outcome').or(page.getByTestId('finish-check')).first().waitFor();
+  if (!(await page.getByTestId('check-outcome').isVisible())) {
+    await page.waitForFunction(() => document.querySelector('[data-testid="finish-check"]')?.getAttribute('aria-disabled') !== 'true');
+    await page.getByTestId('finish-check').click();
+  }
+  await page.getByTestId('check-outcome').waitFor();
+}
+
+for (const size of [PHONE, DESKTOP]) {
+  it(`invites a technician, who accepts from the e-mail and adds a level check; the archer revokes (${size.width}×${size.height})`, async () => {
+    const tag = `${size.width}`;
+    const archerName = `Sigrun Vale ${tag}`;
+    const nickname = `Larch Ridge slider ${tag}`;
+    const techEmail = uniqueEmail('tech');
+
+    // The archer invites the technician from the bow.
+    const archer = await newPage(stack, size);
+    await signUpInContext(archer.context, stack.baseUrl, archerName);
+    const bowId = await makeBow(archer.context, nickname);
+    await archer.page.goto(`/bows/${bowId}`);
+    await archer.page.getByTestId('open-sharing').click();
+    await archer.page.getByTestId('bow-sharing').waitFor();
+    await archer.page.getByText('Nobody. This bow’s records are yours alone.').waitFor();
+    await archer.page.getByLabel('Technician’s e-mail').fill(techEmail);
+    await archer.page.getByTestId('send-invite').click();
+    await archer.page.getByTestId('invite-sent').waitFor();
+    await archer.page.getByText('Invited, not yet accepted').waitFor();
+    await screenshot(archer.page, 'share-invited');
+
+    // The technician reads the e-mail and follows its link.
+    const tech = await newPage(stack, size);
+    await tech.page.goto('/dev-mail');
+    const subject = `${archerName} shared a bow with you on Pinwright`;
+    await tech.page.getByText(subject).first().click();
+    await tech.page.getByTestId('mail-text').getByText(new RegExp(`"${nickname}"`)).waitFor();
+    await screenshot(tech.page, 'share-mail');
+    await tech.page.getByTestId('mail-open-link').click();
+    await tech.page.waitForURL(/\/invite\?token=/);
+    await tech.page.getByText(`${archerName} would like you to see the records of the bow “${nickname}”`, { exact: false }).waitFor();
+    await screenshot(tech.page, 'share-invite-page');
+
+    // No account yet: create a technician account from the invitation.
+    expect(await tech.page.getByLabel('E-mail').inputValue()).toBe(techEmail);
+    await tech.page.getByLabel('Name').fill(`Bram Kettleby ${tag}`);
+    await tech.page.getByLabel('Password').fill('a long enough password');
+    await tech.page.getByTestId('create-tech').click();
+    await tech.page.getByTestId('invite-accepted').waitFor();
+    await screenshot(tech.page, 'share-accepted');
+
+    // The bow is under Clients; the technician adds a level check on it.
+    await tech.page.goto('/clients');
+    await tech.page.getByTestId(`client-bow-${bowId}`).waitFor();
+    await screenshot(tech.page, 'share-clients');
+    await tech.page.getByTestId(`client-bow-${bowId}`).click();
+    await tech.page.getByTestId('shared-with-you').waitFor();
+    await screenshot(tech.page, 'share-tech-bow');
+    await tech.page.getByTestId('open-level').click();
+    await tech.page.getByTestId('start-check').click();
+    await tech.page.waitForURL(/\/checks\/\d+$/);
+    await workCheck(tech.page);
+    await screenshot(tech.page, 'share-tech-check');
+
+    // The archer sees the technician's check in the bow's log, and ends the share.
+    await archer.page.reload();
+    const log = archer.page.getByTestId('bow-audit');
+    await log.getByText('Added a level check: at the bench').waitFor();
+    await log.getByText(`By Bram Kettleby ${tag} (technician)`).first().waitFor();
+    await archer.page.getByText('Active', { exact: true }).waitFor();
+    await screenshot(archer.page, 'share-archer-log');
+    await archer.page.getByRole('button', { name: 'End the share' }).click();
+    await archer.page.getByText(`End the share with Bram Kettleby ${tag}?`).waitFor();
+    await screenshot(archer.page, 'share-revoke-confirm');
+    await archer.page.getByTestId(/^confirm-revoke-/).getByRole('button', { name: 'End the share' }).click();
+    await archer.page.getByText('Nobody. This bow’s records are yours alone.').waitFor();
+    await archer.page.getByText(/^Ended: Bram Kettleby/).waitFor();
+
+    // The archer's level page shows the check the technician did.
+    await archer.page.goto(`/bows/${bowId}/level`);
+    await archer.page.getByText(`Bram Kettleby ${tag}`, { exact: false }).first().waitFor();
+
+    // The technician's next request is refused: the bow is gone from their view.
+    await tech.page.goto(`/bows/${bowId}`);
+    await tech.page.getByText('The bow could not be loaded').waitFor();
+    await screenshot(tech.page, 'share-revoked');
+    await tech.page.goto('/clients');
+    await tech.page.getByText('No shared bows yet').waitFor();
+
+    expect(pageErrors(archer.page)).toEqual([]);
+    expect(pageErrors(tech.page)).toEqual([]);
+    await archer.context.close();
+    await tech.context.close();
+  }, 240_000);
+}
