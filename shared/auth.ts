@@ -72,3 +72,17 @@ export type User = z.infer<typeof userSchema>;
 export type Role = z.infer<typeof roleSchema>;
 export type DistanceUnit = z.infer<typeof distanceUnitSchema>;
 export type LengthUnit = z.infer<typeof lengthUnitSchema>;
+
+/** The signed-in user's own changes: name and preferred units (each optional, at least one). */
+export const profileUpdateSchema = z
+  .object({
+    name: signUpSchema.shape.name.optional(),
+    distanceUnit: distanceUnitSchema.optional(),
+    lengthUnit: lengthUnitSchema.optional(),
+  })
+  .strict('Only name, distance unit and length unit can be changed here')
+  .refine((v) => v.name !== undefined || v.distanceUnit !== undefined || v.lengthUnit !== undefined, {
+    message: 'Nothing to change: give a name or a unit',
+  });
+
+export type ProfileUpdate = z.infer<typeof profileUpdateSchema>;

@@ -9,8 +9,6 @@ const roleWords: Record<User['role'], string> = {
   tech: 'Technician — works on bows shared with you',
   admin: 'Administrator — runs the service',
 };
-const distanceWords: Record<User['distanceUnit'], string> = { yd: 'Yards', m: 'Metres' };
-const lengthWords: Record<User['lengthUnit'], string> = { mm: 'Millimetres', in: 'Inches' };
 
 function Row({ label, value, last = false }: { label: string; value: string; last?: boolean }) {
   return (
@@ -32,9 +30,7 @@ export function AccountDetails({ user }: { user: User }) {
     <View>
       <Row label="Name" value={user.name} />
       <Row label="E-mail" value={user.email} />
-      <Row label="Role" value={roleWords[user.role]} />
-      <Row label="Distances in" value={distanceWords[user.distanceUnit]} />
-      <Row label="Lengths in" value={lengthWords[user.lengthUnit]} last />
+      <Row label="Role" value={roleWords[user.role]} last />
     </View>
   );
 }

@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { AccountDetails } from '@/components/account/account-details';
+import { UnitChoices } from '@/components/account/unit-choices';
 import { useMe, useSignOut } from '@/components/auth/api';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -26,6 +27,10 @@ export function AccountScreen() {
       <SectionHeading level={1} title="Account" description="Who is signed in on this device." />
       <Card>
         <AccountDetails user={me.data} />
+      </Card>
+      <SectionHeading level={2} title="Units" description="How Pinwright shows distances and lengths to you." />
+      <Card>
+        <UnitChoices user={me.data} />
       </Card>
       {signOut.isError ? (
         <Banner tone="error" title="Could not sign out">

@@ -2,7 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 
 import { apiFetch, ApiError, isApiError } from '@/components/api/client';
-import { userSchema, type SignInInput, type SignUpInput, type User } from '@/shared/auth';
+import { userSchema, type ProfileUpdate, type SignInInput, type SignUpInput, type User } from '@/shared/auth';
 
 /** Query keys for the account feature. */
 export const authKeys = {
@@ -75,6 +75,22 @@ export function useSignOut() {
     onSuccess: () => {
       queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.me[0] });
       queryClient.setQueryData(authKeys.me, null);
+    },
+  });
+}
+
+/**
+ * Changes the signed-in user's name or preferred units; the result becomes the `useMe` value.
+ * Example: `useUpdateProfile().mutate({ distanceUnit: 'm' })`
+ */
+export function useUpdateProfile() {
+  const queryClient = useQueryClient();
+  return useMutation<User, ApiError, ProfileUpdate>({
+    mutationFn: async (input) => (await apiFetch('/api/me', { method: 'PATCH', body: input, schema: userResponse })).user,
+    onSuccess: (user) => {
+      queryClient.setQueryData(authKeys.me, user);
+      // Screens show lengths and distances in these units: refetch what they show.
+      queryClient.invalidateQueries({ predicate: (q) => q.queryKey[0] !== authKeys.me[0] });
     },
   });
 }

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
-import { signInSchema, signUpSchema } from '@/shared/auth';
+import { profileUpdateSchema, signInSchema, signUpSchema } from '@/shared/auth';
 import { ApiError } from '@/server/errors';
 import { validate } from '@/server/middleware/validate';
 import { requireUser, currentUser } from '@/server/middleware/auth';
@@ -72,6 +72,10 @@ export function meRoutes() {
   const router = Router();
   router.get('/', requireUser, (req, res) => {
     res.json({ user: currentUser(req).toPublic() });
+  });
+  router.patch('/', requireUser, validate({ body: profileUpdateSchema }), async (req, res) => {
+    const user = await currentUser(req).update(req.body);
+    res.json({ user: user.toPublic() });
   });
   return router;
 }

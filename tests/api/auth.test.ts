@@ -134,3 +134,20 @@ describe('error shape', () => {
     expect(res.text).not.toMatch(/at .*\.ts:\d+/);
   });
 });
+
+describe('own profile', () => {
+  it('changes name and preferred units, and refuses anything else', async () => {
+    const { agent } = await signedInAgent(app);
+    const res = await agent.patch('/api/me').set(CSRF).send({ distanceUnit: 'm', lengthUnit: 'in' });
+    expect(res.status).toBe(200);
+    expect(res.body.user).toMatchObject({ distanceUnit: 'm', lengthUnit: 'in' });
+    expect((await agent.get('/api/me')).body.user.distanceUnit).toBe('m');
+
+    const bad = await agent.patch('/api/me').set(CSRF).send({ distanceUnit: 'furlong' });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['distanceUnit']);
+    const sneaky = await agent.patch('/api/me').set(CSRF).send({ role: 'admin' });
+    expect(sneaky.status).toBe(400);
+    expect((await agent.get('/api/me')).body.user.role).toBe('archer');
+  });
+});
