@@ -1,14 +1,14 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { Controller, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { useLogChange } from '@/components/level/api';
+import { BigChoice } from '@/components/level/big-choice';
 import { todayIso } from '@/components/level/level-words';
 import { bigTap } from '@/components/level/result-buttons';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { FormChoice } from '@/components/ui/form-choice';
 import { FormField } from '@/components/ui/form-field';
 import { space } from '@/components/theme';
 import {
@@ -74,7 +74,13 @@ export function ChangeForm({ bowId, onLogged, onCancel }: ChangeFormProps) {
 
   return (
     <View style={styles.form} testID="change-form">
-      <FormChoice control={control} name="kind" label="What changed" options={kindOptions} testID="change-kind" />
+      <Controller
+        control={control}
+        name="kind"
+        render={({ field, fieldState }) => (
+          <BigChoice label="What changed" options={kindOptions} value={field.value} onChange={field.onChange} error={fieldState.error?.message} testID="change-kind" />
+        )}
+      />
       <View style={styles.row}>
         <View style={styles.cell}>
           <FormField control={control} name="date" label="Date" hint="YYYY-MM-DD" autoCorrect={false} testID="change-date" />

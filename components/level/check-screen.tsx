@@ -91,6 +91,12 @@ function Outcome({ check }: { check: LevelCheck }) {
         <View style={styles.outcomeState}>
           <ReadinessBadge state={level.data.state} label={levelStateLabels[level.data.state]} subject="Level" testID="check-outcome-state" />
           <Text>{level.data.reason}</Text>
+          {level.data.state === 'failed' ? (
+            <Text tone="soft">
+              Fix what failed (each step&apos;s &ldquo;If it is not&rdquo; says how), then start a new check. If it will not come level,
+              take the bow to a pro shop.
+            </Text>
+          ) : null}
         </View>
       ) : null}
       <View style={styles.row}>
@@ -133,7 +139,7 @@ function Discard({ check }: { check: LevelCheck }) {
   const router = useRouter();
   const discard = useDiscardCheck();
   const [asking, setAsking] = useState(false);
-  if (!asking) return <Button label="Discard this check" variant="quiet" onPress={() => setAsking(true)} testID="discard-check" />;
+  if (!asking) return <Button label="Discard this check" variant="quiet" onPress={() => setAsking(true)} style={styles.big} testID="discard-check" />;
   return (
     <ConfirmBar
       title="Discard this check?"
@@ -194,8 +200,9 @@ export function CheckScreen({ checkId }: { checkId: number }) {
     body = (
       <>
         {data.status === 'complete' ? <Outcome check={data} /> : <Banner tone="info">This check is in progress by {data.performedBy.name}; it is shown read-only.</Banner>}
+        <View style={[styles.readGrid, wide && styles.readGridWide]}>
         {data.steps.map((step) => (
-          <Card key={step.step} testID={`read-${step.step}`}>
+          <Card key={step.step} testID={`read-${step.step}`} style={wide ? styles.readCellWide : undefined}>
             <Text variant="caption" tone="soft">
               Step {levelStepKeys.indexOf(step.step) + 1}
             </Text>
@@ -205,6 +212,7 @@ export function CheckScreen({ checkId }: { checkId: number }) {
             <SavedStep check={data} stepKey={step.step} />
           </Card>
         ))}
+        </View>
         {data.note ? <Text>Note: {data.note}</Text> : null}
       </>
     );
@@ -286,4 +294,7 @@ const styles = StyleSheet.create({
   outcomeState: { gap: space.sm },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
   big: { minHeight: bigTap },
+  readGrid: { gap: space.lg },
+  readGridWide: { flexDirection: 'row', flexWrap: 'wrap' },
+  readCellWide: { flexBasis: 320, flexGrow: 1 },
 });

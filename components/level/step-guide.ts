@@ -14,6 +14,8 @@ export interface StepGuide {
   lookAt: string;
   levelMeans: string;
   adjust: string;
+  /** An example of an adjustment note for this step. */
+  adjustExample: string;
   /** The unit a reading of this step is usually taken in. */
   readingUnit: ReadingUnit;
   /** Plain description of the diagram, for screen readers. */
@@ -32,6 +34,7 @@ export const stepGuides: Record<LevelStepKey, StepGuide> = {
     levelMeans: 'The arrow reads level and the string reads plumb together. Everything after this is read against that.',
     adjust:
       'Loosen the vise, roll or tilt the bow a little, tighten, and read both levels again. Repeat until both agree; one can move the other.',
+    adjustExample: 'Rolled the bow a little in the vise until the string read plumb',
     readingUnit: 'bubble',
     diagramLabel:
       'A bow clamped upright in a vise. A level on the arrow shows its bubble centred; a string level on the bowstring shows it plumb.',
@@ -46,6 +49,7 @@ export const stepGuides: Record<LevelStepKey, StepGuide> = {
       'With the string plumb, the sight’s face reads plumb too. Then moving the pin up or down for distance does not also move it left or right.',
     adjust:
       'Loosen the sight’s mounting screws and square the bar at the mount (some sights have a first-axis screw, others need a thin shim), tighten evenly, and read again.',
+    adjustExample: 'Added a thin shim under the front mounting screw',
     readingUnit: 'deg',
     diagramLabel:
       'The bowstring drawn as a plumb line beside the sight bar. A level held against the sight bar reads plumb; arrows show the pin travelling up and down parallel to the string.',
@@ -59,6 +63,7 @@ export const stepGuides: Record<LevelStepKey, StepGuide> = {
       'The bubble sits in the middle while the string is plumb. At full draw, centring the bubble then really means the bow is upright.',
     adjust:
       'Loosen the second-axis screws and rotate the housing (or the bubble vial) until the bubble centres, tighten, and check it did not move while tightening.',
+    adjustExample: 'Turned the second-axis screw a quarter turn',
     readingUnit: 'bubble',
     diagramLabel:
       'The sight housing seen from behind with its bubble centred between two marks; a curved arrow shows the housing rolling left or right around the line of sight.',
@@ -73,6 +78,7 @@ export const stepGuides: Record<LevelStepKey, StepGuide> = {
       'The bubble stays centred through the whole pitch. Then steep uphill and downhill shots do not drift left or right.',
     adjust:
       'If the bubble runs off as you pitch, turn the third-axis adjustment a little, re-centre with the second axis, and pitch again. Small steps: each one affects the other.',
+    adjustExample: 'Two small turns of the third-axis screw, then re-centred the bubble',
     readingUnit: 'bubble',
     diagramLabel:
       'A bow in side view pitched up and down along a hanging plumb line, with the sight’s bubble shown centred in both positions.',
@@ -86,6 +92,7 @@ export const stepGuides: Record<LevelStepKey, StepGuide> = {
     levelMeans: 'Long groups land on the tape’s mark, and steep shots do not drift sideways.',
     adjust:
       'Note any correction. A sideways drift only on steep shots points back to the third axis; a miss high or low at distance points to the marks and the tape: sight in again and print a new tape.',
+    adjustExample: 'Groups 2 cm left on the steep shot; re-check the third axis',
     readingUnit: 'mm',
     diagramLabel: 'An archer on a slope shooting at a far target and at a target well below; both arrows land centred.',
   },

@@ -3,6 +3,7 @@ import { Controller, useForm } from 'react-hook-form';
 import { Image, StyleSheet, View } from 'react-native';
 
 import { textFormResolver } from '@/components/bows/text-form-resolver';
+import { BigChoice } from '@/components/level/big-choice';
 import { useRemoveStepPhoto, useSaveCheck, useUploadStepPhoto } from '@/components/level/api';
 import { LevelDiagram } from '@/components/level/level-diagram';
 import { resultLabels } from '@/components/level/level-words';
@@ -13,7 +14,6 @@ import { stepGuides } from '@/components/level/step-guide';
 import { stepTextFrom, stepTextSchema, type StepText } from '@/components/level/step-form';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { FormChoice } from '@/components/ui/form-choice';
 import { FormField } from '@/components/ui/form-field';
 import { Text } from '@/components/ui/text';
 import { borders, colors, radii, space } from '@/components/theme';
@@ -127,14 +127,20 @@ export function StepPanel({ check, stepKey, editable, submitLabel, completes = f
           <FormField control={control} name="reading" label="Reading (optional)" hint="Bubble or plumb offset, or degrees" numeric testID={`${stepKey}-reading`} />
         </View>
         <View style={styles.readingUnit}>
-          <FormChoice control={control} name="readingUnit" label="Unit" options={unitOptions} />
+          <Controller
+            control={control}
+            name="readingUnit"
+            render={({ field, fieldState }) => (
+              <BigChoice label="Unit" options={unitOptions} value={field.value} onChange={field.onChange} error={fieldState.error?.message} />
+            )}
+          />
         </View>
       </View>
       <FormField
         control={control}
         name="adjustment"
         label={result === 'adjusted' ? 'What you adjusted' : 'Adjustment or note (optional)'}
-        hint={result === 'adjusted' ? 'E.g. "Turned the second-axis screw a quarter turn"' : undefined}
+        hint={result === 'adjusted' ? `E.g. “${guide.adjustExample}”` : undefined}
         multiline
         testID={`${stepKey}-adjustment`}
       />

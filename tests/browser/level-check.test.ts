@@ -83,6 +83,17 @@ async function screenshot(page: Page, name: string) {
   await page.waitForTimeout(100);
 }
 
+/** Runs `body`; on a failure, saves what the page showed (debug-<name>) before rethrowing. */
+async function recording(page: Page, name: string, body: () => Promise<void>) {
+  try {
+    await body();
+  } catch (error) {
+    await viewportShot(page, `debug-${name}`).catch(() => {});
+    const text = await page.evaluate(() => document.body.innerText.slice(0, 1500)).catch(() => '');
+    throw new Error(`${(error as Error).message}\n--- page at ${page.url()} ---\n${text}`);
+  }
+}
+
 /** The step shown on a phone: its heading. */
 const stepHeading = (page: Page, title: string) => page.getByRole('heading', { name: title, exact: true });
 
@@ -160,7 +171,7 @@ it('walks a check on a phone, resumes it midway, logs a string change and sees t
 
   // A new string, logged today after the check: the bow is due.
   await page.goto(`/bows/${bowId}/level`);
-  await page.getByTestId('level-state-verified').waitFor();
+  await recording(page, 'after-complete', () => page.getByTestId('level-state-verified').waitFor({ timeout: 10_000 }));
   await page.getByTestId('log-change').click();
   await page.getByTestId('change-submit').click();
   await page.getByText(/^Choose what changed/).waitFor();
@@ -218,7 +229,7 @@ it('shows every step at once on a wide screen, and the level and trip pages side
   await screenshot(page, 'check-complete-failed');
 
   await page.goto(`/bows/${bowId}/level`);
-  await page.getByTestId('level-state-failed').waitFor({ timeout: 8000 }).catch(async (e) => { await viewportShot(page, 'debug-failed'); throw e; });
+  await recording(page, 'after-failed', () => page.getByTestId('level-state-failed').waitFor({ timeout: 10_000 }));
   await page.getByText('The last check left the third axis failing.').waitFor();
   await screenshot(page, 'level-failed');
 

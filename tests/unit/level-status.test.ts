@@ -6,6 +6,7 @@ import {
   type LevelResult,
   type LevelStepKey,
 } from '@/shared/level-status';
+import { changedAtFrom } from '@/shared/level';
 
 // The rules under test are our own product decisions (see the header of
 // shared/level-status.ts); the order of the steps (set-up, first, second and
@@ -252,5 +253,26 @@ describe('levelStatus: failed', () => {
     expect(levelStatus({ ...base, checks: [b, a] }).lastCheckId).toBe(2);
     const c = check(3, { 'first-axis': 'fail' }, at(1000), done);
     expect(levelStatus({ ...base, checks: [b, c] }).lastCheckId).toBe(3);
+  });
+});
+
+describe('changedAtFrom: a change entered as a date and an optional time', () => {
+  // Local time throughout (the form's date and time are the archer's own clock).
+  const now = new Date(2026, 10, 20, 15, 30, 0, 0);
+
+  it('uses the time of day when one is given', () => {
+    expect(changedAtFrom('2026-11-18', '07:45', now).getTime()).toBe(new Date(2026, 10, 18, 7, 45).getTime());
+  });
+
+  it('means "now" for today without a time', () => {
+    expect(changedAtFrom('2026-11-20', '', now).getTime()).toBe(now.getTime());
+  });
+
+  it('means the end of the day for an earlier date without a time, so it counts as after a check that day', () => {
+    const changedAt = changedAtFrom('2026-11-12', '', now);
+    expect(changedAt.getTime()).toBe(new Date(2026, 10, 12, 23, 59, 59, 999).getTime());
+    const checkThatMorning = check(1, {}, new Date(2026, 10, 12, 9, 0), new Date(2026, 10, 12, 10, 0));
+    const status = levelStatus({ checks: [checkThatMorning], changes: [change(1, changedAt)], now, maxAgeDays: 90 });
+    expect(status.state).toBe('due');
   });
 });
