@@ -4,7 +4,7 @@ import { CSRF, closeDb, signedInAgent, testApp } from '@/tests/helpers/api';
 import fs from 'node:fs';
 import path from 'node:path';
 import { config } from '@/server/config';
-import { Bow, BowChange, LevelCheck, Photo, User } from '@/server/models';
+import { Bow, BowChange, LevelCheck, Photo, Share, User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
 import { seedLevel } from '@/server/seed/level';
 
@@ -512,5 +512,51 @@ describe('demo seed and the bows list', () => {
     expect(trip.warnings).toContain(
       `The tape runs to ${trip.tape.toDistance} yd, beyond the longest confirmed mark (${trip.marks.longestDistance} yd): the distances beyond it are estimates until shot at the range.`,
     );
+  });
+});
+
+describe('a technician the bow is shared with', () => {
+  it('reads the level, checks and photos, adds checks and changes, but deletes only their own change', async () => {
+    const archer = await signedInAgent(app, { name: 'Sharing Archer' });
+    const tech = await signedInAgent(app, { name: 'Shop Tech' });
+    await User.update({ role: 'tech' }, { where: { id: tech.user.id } });
+    const sharedBow = await makeBow(archer.user.id, 'Shared bow');
+    const share = await Share.create({
+      bowId: sharedBow,
+      archerId: archer.user.id,
+      techId: tech.user.id,
+      invitedEmail: tech.email,
+      state: 'active',
+      acceptedAt: new Date(),
+      revokedAt: null,
+    });
+
+    const archerChange = await archer.agent.post(`/api/bows/${sharedBow}/changes`).set(CSRF).send({ kind: 'rest', changedAt: '2022-02-02T10:00:00Z' });
+    const archerCheck = await archer.agent.post(`/api/bows/${sharedBow}/checks`).set(CSRF).send({ place: 'bench' });
+    const photo = await archer.agent
+      .post(`/api/checks/${archerCheck.body.check.id}/steps/setup/photo`)
+      .set(CSRF)
+      .attach('photo', png(), { filename: 'a.png', contentType: 'image/png' });
+
+    expect((await tech.agent.get(`/api/bows/${sharedBow}/level`)).status).toBe(200);
+    expect((await tech.agent.get(`/api/photos/${photo.body.photo.id}`)).status).toBe(200);
+    // The archer's open check reads back, but only its performer works on it.
+    expect((await tech.agent.get(`/api/checks/${archerCheck.body.check.id}`)).status).toBe(200);
+    const notTheirs = await tech.agent.patch(`/api/checks/${archerCheck.body.check.id}`).set(CSRF).send({ steps: [{ step: 'setup', result: 'pass' }] });
+    expect(notTheirs.status).toBe(403);
+
+    const techCheck = await tech.agent.post(`/api/bows/${sharedBow}/checks`).set(CSRF).send({ place: 'range' });
+    expect(techCheck.status).toBe(201);
+    expect(techCheck.body.check.performedBy).toEqual({ id: tech.user.id, name: 'Shop Tech' });
+    const techChange = await tech.agent.post(`/api/bows/${sharedBow}/changes`).set(CSRF).send({ kind: 'peep', changedAt: '2022-03-03T10:00:00Z' });
+    expect(techChange.status).toBe(201);
+    expect((await tech.agent.delete(`/api/changes/${archerChange.body.change.id}`).set(CSRF)).status).toBe(403);
+    expect((await tech.agent.delete(`/api/changes/${techChange.body.change.id}`).set(CSRF)).status).toBe(204);
+
+    // Revoked: nothing more, at once.
+    await share.update({ state: 'revoked', revokedAt: new Date() });
+    expect((await tech.agent.get(`/api/bows/${sharedBow}/level`)).status).toBe(404);
+    expect((await tech.agent.get(`/api/photos/${photo.body.photo.id}`)).status).toBe(404);
+    expect((await tech.agent.get(`/api/checks/${techCheck.body.check.id}`)).status).toBe(404);
   });
 });
