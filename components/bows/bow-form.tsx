@@ -64,6 +64,8 @@ export function BowForm({ bow, lengthUnit, distanceUnit, onSaved, onCancel }: Bo
     resolver,
     defaultValues: bowFormDefaults(bow, lengthUnit, distanceUnit),
   });
+  // Read in render: react-hook-form tracks dirty fields only for a formState that is read.
+  const { dirtyFields } = formState;
   const sightKind = useWatch({ control, name: 'sightKind' });
   const unit = lengthUnit;
   const lengthHint = unit === 'in' ? 'inches' : 'millimetres';
@@ -74,7 +76,7 @@ export function BowForm({ bow, lengthUnit, distanceUnit, onSaved, onCancel }: Bo
       // An edit sends only what changed, so an untouched length is not re-rounded through inches.
       const body = bow
         ? Object.fromEntries(
-            Object.entries(input).filter(([key]) => formState.dirtyFields[key as keyof BowFormText] || (key === 'pinDistances' && formState.dirtyFields.sightKind)),
+            Object.entries(input).filter(([key]) => dirtyFields[key as keyof BowFormText] || (key === 'pinDistances' && dirtyFields.sightKind)),
           )
         : input;
       save.mutate(

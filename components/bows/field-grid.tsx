@@ -1,34 +1,36 @@
-import type { ReactNode } from 'react';
-import { StyleSheet, View } from 'react-native';
+import { useState, type ReactNode } from 'react';
+import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 
 import { space } from '@/components/theme';
 
 /**
- * Form fields side by side where they fit (each at least `minWidth` px), one
- * per line on a narrow phone. A short last line keeps the column width of the
- * lines above (zero-height spacer cells fill it, so a lone field does not
- * stretch across the whole card).
+ * Form fields in columns of at least `minWidth` px: as many columns as fit
+ * (never more than there are fields), one per line on a narrow phone. Every
+ * field of a grid has the column's width, so a short last line does not
+ * stretch its field across the card.
  * Example: `<FieldGrid><FormField …/><FormField …/></FieldGrid>`
  */
 export function FieldGrid({ children, minWidth = 220 }: { children: ReactNode; minWidth?: number }) {
+  const [width, setWidth] = useState(0);
   const items = (Array.isArray(children) ? children : [children]).filter(Boolean);
+  const gap = space.lg;
+  const columns = width > 0 ? Math.max(1, Math.min(items.length, Math.floor((width + gap) / (minWidth + gap)))) : 0;
+  // Half a pixel spare, so rounding never pushes the last column onto a new line.
+  const cellWidth = columns > 0 ? (width - gap * (columns - 1)) / columns - 0.5 : undefined;
+  const onLayout = (event: LayoutChangeEvent) => setWidth(Math.floor(event.nativeEvent.layout.width));
   return (
-    <View style={styles.grid}>
+    <View style={styles.grid} onLayout={onLayout}>
       {items.map((child, index) => (
-        <View key={index} style={[styles.cell, { flexBasis: minWidth }]}>
+        // Until the grid is measured, cells share the line by flex (one frame).
+        <View key={index} style={cellWidth ? { width: cellWidth } : [styles.cell, { flexBasis: minWidth }]}>
           {child}
         </View>
-      ))}
-      {items.slice(1).map((_, index) => (
-        <View key={`spacer-${index}`} style={[styles.spacer, { flexBasis: minWidth }]} aria-hidden />
       ))}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  // Gaps as margins (not rowGap), so a line of spacers adds no height.
-  grid: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, marginBottom: -space.lg },
-  cell: { flexGrow: 1, flexShrink: 1, minWidth: 0, marginBottom: space.lg },
-  spacer: { flexGrow: 1, flexShrink: 1, minWidth: 0, height: 0 },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.lg },
+  cell: { flexGrow: 1, flexShrink: 1, minWidth: 0 },
 });

@@ -23,7 +23,7 @@ export interface RecordRowProps {
 /**
  * One record in a bow's lists: a link on a phone, or a selectable row whose
  * detail shows beside the list on a wide screen (the selected row is marked
- * with an edge and aria-selected, not colour alone).
+ * with an edge and aria-pressed, not colour alone).
  * Example: `<RecordRow title="Elk heavy" detail="498 gr" href="/builds/4" />`
  */
 export function RecordRow({ title, detail, aside, href, onSelect, selected = false, testID }: RecordRowProps) {
@@ -62,7 +62,7 @@ export function RecordRow({ title, detail, aside, href, onSelect, selected = fal
     );
   }
   return (
-    <Pressable role="tab" aria-selected={selected} testID={testID} onPress={onSelect} style={body}>
+    <Pressable role="button" aria-pressed={selected} testID={testID} onPress={onSelect} style={body}>
       {content}
     </Pressable>
   );

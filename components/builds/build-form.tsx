@@ -74,7 +74,7 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: Build
         <FieldGrid minWidth={120}>
           <FormField control={control} name="spine" label="Spine" hint="Optional" numeric />
           <FormField control={control} name="grainsPerInch" label="Grains per inch" hint="Bare shaft" unit="gpi" numeric />
-          <FormField control={control} name="cutLengthMm" label="Cut length" hint="Nock throat to shaft end" unit={unit} numeric />
+          <FormField control={control} name="cutLengthMm" label="Cut length" hint="From the nock throat" unit={unit} numeric />
           <FormField control={control} name="diameterMm" label="Diameter" hint="Shaft outside" unit={unit} numeric />
         </FieldGrid>
       </Card>
@@ -110,7 +110,7 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: Build
             control={control}
             name="dragCoefficient"
             label="Drag coefficient"
-            hint="Leave empty for the default (about 2, a fletched hunting arrow)."
+            hint="Empty: the default, 2.0"
             numeric
           />
         </FieldGrid>

@@ -204,6 +204,27 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByTestId(`tape-row-${(await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow.tapes[0].id}`).waitFor();
     await screenshot(page, 'bow-complete');
 
+    // Edit the set-up: a peep moved up a little; only that field changes.
+    await page.getByTestId('bow-edit').first().click();
+    await page.waitForURL(new RegExp(`/bows/${bowId}/edit$`));
+    await page.getByLabel('Peep height').fill('112');
+    await screenshot(page, 'bow-edit');
+    await page.getByTestId('bow-save').click();
+    await page.waitForURL(new RegExp(`/bows/${bowId}$`));
+    await page.getByTestId('bow-setup').getByText('112 mm').waitFor();
+    await page.getByTestId('bow-setup').getByText('820 mm').waitFor();
+
+    // Delete asks first, names what goes with it, and then the Bench is empty again.
+    await page.getByRole('button', { name: 'Delete this bow' }).click();
+    const confirm = page.getByTestId('bow-delete-confirm');
+    await confirm.getByText(/1 build, 1 sight-in, 1 tape/).waitFor();
+    await screenshot(page, 'bow-delete-confirm');
+    await confirm.getByRole('button', { name: 'Keep it' }).click();
+    await page.getByRole('button', { name: 'Delete this bow' }).click();
+    await page.getByTestId('bow-delete-confirm').getByRole('button', { name: 'Delete for good' }).click();
+    await page.getByText(/add your first bow/i).first().waitFor();
+    expect((await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).status()).toBe(404);
+
     expect(pageErrors(page)).toEqual([]);
     await context.close();
   }, 180_000);
