@@ -46,6 +46,8 @@ export const config = {
   trustProxy: process.env.TRUST_PROXY || '',
   cookieSecure: bool('COOKIE_SECURE', production),
   bcryptCost: int('BCRYPT_COST', 12),
+  /** Days after a completed level check when the bow is due again (shared/level-status.ts). */
+  levelCheckMaxAgeDays: int('LEVEL_CHECK_MAX_AGE_DAYS', 90),
   uploadDir: path.resolve(root, process.env.UPLOAD_DIR || '.data/uploads'),
   webDir: path.resolve(root, process.env.WEB_DIR || 'dist'),
   smtp: {

@@ -38,6 +38,11 @@ export function BowCard({ bow }: { bow: BowSummary }) {
             <ReadinessBadge state={tape.state} label={tape.label} subject="Tape" />
             <ReadinessBadge state={state} subject="Level" />
           </View>
+          {level.success && level.data.reason ? (
+            <Text variant="small" testID={`bow-card-${bow.id}-level-reason`}>
+              {level.data.reason}
+            </Text>
+          ) : null}
           <Text variant="small" tone="soft">
             {records}
           </Text>

@@ -7,6 +7,7 @@
  * The age after which a verified bow is due again is LEVEL_CHECK_MAX_AGE_DAYS
  * (whole days, default 90), one setting for the whole service.
  */
+import { config } from '@/server/config';
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError } from '@/server/errors';
@@ -34,12 +35,12 @@ import type {
 const clockSkewMs = 5 * 60 * 1000;
 
 /**
- * The age limit in days from LEVEL_CHECK_MAX_AGE_DAYS (a whole number >= 1), else 90.
- * Example: with LEVEL_CHECK_MAX_AGE_DAYS=60 → 60
+ * The age limit in days: config.levelCheckMaxAgeDays (LEVEL_CHECK_MAX_AGE_DAYS), default 90.
+ * Read on every call so tests can change the variable. Example: with LEVEL_CHECK_MAX_AGE_DAYS=60 → 60
  */
 export function levelMaxAgeDays(): number {
   const raw = process.env.LEVEL_CHECK_MAX_AGE_DAYS;
-  if (raw === undefined || raw === '') return defaultLevelMaxAgeDays;
+  if (raw === undefined || raw === '') return config.levelCheckMaxAgeDays ?? defaultLevelMaxAgeDays;
   const days = Number(raw);
   if (!Number.isInteger(days) || days < 1) throw new Error(`LEVEL_CHECK_MAX_AGE_DAYS must be a whole number of days >= 1, got "${raw}"`);
   return days;
