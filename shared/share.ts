@@ -38,6 +38,7 @@ const personSchema = z.object({ id: z.number().int(), name: z.string() });
 export const shareSchema = z.object({
   id: z.number().int().positive(),
   bowId: z.number().int().positive(),
+  bowNickname: z.string(),
   invitedEmail: z.string(),
   state: shareStateSchema,
   tech: personSchema.extend({ email: z.string() }).nullable(),

@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { AccountDetails } from '@/components/account/account-details';
+import { AccountShares } from '@/components/shares/account-shares';
 import { UnitChoices } from '@/components/account/unit-choices';
 import { useMe, useSignOut } from '@/components/auth/api';
 import { Banner } from '@/components/ui/banner';
@@ -32,6 +33,7 @@ export function AccountScreen() {
       <Card>
         <UnitChoices user={me.data} />
       </Card>
+      <AccountShares />
       {signOut.isError ? (
         <Banner tone="error" title="Could not sign out">
           {signOut.error.message}

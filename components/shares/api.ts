@@ -36,9 +36,10 @@ export function useBowShares(bowId: number, enabled = true) {
 }
 
 /** The open shares of all the archer's bows (Account page). */
-export function useMyShares() {
+export function useMyShares(enabled = true) {
   return useQuery<Share[], ApiError>({
     queryKey: shareKeys.mine,
+    enabled,
     queryFn: async () => (await apiFetch('/api/shares', { schema: shareListResponseSchema })).shares,
   });
 }

@@ -36,7 +36,10 @@ export function inviteLink(raw: string): string {
   return `${config.publicUrl.replace(/\/+$/, '')}/invite?token=${raw}`;
 }
 
-const shareIncludes = [{ model: User, as: 'tech', attributes: ['id', 'name', 'email'] }];
+const shareIncludes = [
+  { model: User, as: 'tech', attributes: ['id', 'name', 'email'] },
+  { model: Bow, as: 'bow', attributes: ['id', 'nickname'] },
+];
 
 async function shareJson(share: Share): Promise<ShareJson> {
   const newest =
@@ -46,6 +49,7 @@ async function shareJson(share: Share): Promise<ShareJson> {
   return {
     id: share.id,
     bowId: share.bowId,
+    bowNickname: share.bow?.nickname ?? '',
     invitedEmail: share.invitedEmail,
     state: share.state,
     tech: share.tech ? { id: share.tech.id, name: share.tech.name, email: share.tech.email } : null,

@@ -4,9 +4,13 @@
  * reader, follows its link, creates a technician account from the invitation
  * and adds a level check on the shared bow; the archer sees it in the bow's
  * log and ends the share; the technician's next look at the bow is refused.
- * Screenshots at phone (390×844) and desktop (1280×800) size.
+ * Then the account basics around it: a password reset from the e-mailed
+ * link, the administrator's accounts and audit log, and importing marks from
+ * a CSV file with its preview. Screenshots at phone (390×844) and desktop
+ * (1280×800) size.
  */
 import type { BrowserContext, Page } from 'playwright-core';
+import { User } from '@/server/models';
 import { CSRF, uniqueEmail } from '../helpers/api';
 import { DESKTOP, PHONE, newPage, pageErrors, screenshot, signUpInContext, startStack, type Stack } from '../helpers/browser';
 import { bowBody, buildBody, knownMarks } from '../api/bow-fixtures';
@@ -21,6 +25,10 @@ afterAll(async () => {
 
 /** A bow with a build and a sight-in, through the API in the archer's browser context. */
 async function makeBow(context: BrowserContext, nickname: string): Promise<number> {
+  return (await makeBowWithSession(context, nickname)).bowId;
+}
+
+async function makeBowWithSession(context: BrowserContext, nickname: string): Promise<{ bowId: number; sessionId: number }> {
   const post = async (path: string, data: unknown) => {
     const res = await context.request.post(`${stack.baseUrl}${path}`, { headers: CSRF, data });
     if (res.status() !== 201) throw new Error(`${path}: ${res.status()} ${await res.text()}`);
@@ -28,8 +36,8 @@ async function makeBow(context: BrowserContext, nickname: string): Promise<numbe
   };
   const { bow } = await post('/api/bows', bowBody({ nickname }));
   const { build } = await post(`/api/bows/${bow.id}/builds`, buildBody());
-  await post(`/api/bows/${bow.id}/sessions`, { buildId: build.id, date: '2026-11-02', placeLabel: 'Alder Flats range', marks: knownMarks([20, 40, 60]) });
-  return bow.id;
+  const { session } = await post(`/api/bows/${bow.id}/sessions`, { buildId: build.id, date: '2026-11-02', placeLabel: 'Alder Flats range', marks: knownMarks([20, 40, 60]) });
+  return { bowId: bow.id, sessionId: session.id };
 }
 
 const steps = [
@@ -119,6 +127,12 @@ for (const size of [PHONE, DESKTOP]) {
     await log.getByText(`By Bram Kettleby ${tag} (technician)`).first().waitFor();
     await archer.page.getByText('Active', { exact: true }).waitFor();
     await screenshot(archer.page, 'share-archer-log');
+    // The Account page lists the bow as shared, and leads back to its sharing page.
+    await archer.page.goto('/account');
+    await archer.page.getByTestId('account-shares').getByText(nickname).waitFor();
+    await screenshot(archer.page, 'share-account');
+    await archer.page.getByTestId('account-shares').getByText('Manage').click();
+    await archer.page.getByTestId('bow-sharing').waitFor();
     await archer.page.getByRole('button', { name: 'End the share' }).click();
     await archer.page.getByText(`End the share with Bram Kettleby ${tag}?`).waitFor();
     await screenshot(archer.page, 'share-revoke-confirm');
@@ -141,5 +155,85 @@ for (const size of [PHONE, DESKTOP]) {
     expect(pageErrors(tech.page)).toEqual([]);
     await archer.context.close();
     await tech.context.close();
+  }, 240_000);
+}
+
+for (const size of [PHONE, DESKTOP]) {
+  it(`resets a password from the e-mail, runs the admin pages and imports marks from CSV (${size.width}×${size.height})`, async () => {
+    const tag = `${size.width}`;
+
+    // Forgot password → the e-mail → a new password.
+    const archer = await newPage(stack, size);
+    const { email } = await signUpInContext(archer.context, stack.baseUrl, `Oswin Brae ${tag}`);
+    const visitor = await newPage(stack, size);
+    await visitor.page.goto('/sign-in');
+    await visitor.page.getByText('Forgot your password?').click();
+    await visitor.page.getByLabel('E-mail').fill(email);
+    await visitor.page.getByRole('button', { name: 'Send the link' }).click();
+    await visitor.page.getByTestId('forgot-sent').waitFor();
+    await screenshot(visitor.page, 'password-forgot');
+    await visitor.page.goto('/dev-mail');
+    await visitor.page.getByText(`To ${email}`, { exact: false }).first().click();
+    await visitor.page.getByTestId('mail-text').getByText(`Hello Oswin Brae ${tag},`).waitFor();
+    await visitor.page.getByTestId('mail-open-link').click();
+    await visitor.page.waitForURL(/\/reset-password\?token=/);
+    await visitor.page.getByLabel('New password', { exact: true }).fill('a fresh long passphrase');
+    await visitor.page.getByLabel('New password again').fill('a different passphrase');
+    await visitor.page.getByRole('button', { name: 'Change the password' }).click();
+    await visitor.page.getByText('The two passwords are not the same').waitFor();
+    await visitor.page.getByLabel('New password again').fill('a fresh long passphrase');
+    await visitor.page.getByRole('button', { name: 'Change the password' }).click();
+    await visitor.page.getByTestId('reset-done').waitFor();
+    await screenshot(visitor.page, 'password-reset');
+    // The archer's open session ended with the reset; the new password signs in.
+    await archer.page.goto('/');
+    await archer.page.getByLabel('E-mail').waitFor();
+    await archer.page.getByLabel('E-mail').fill(email);
+    await archer.page.getByLabel('Password').fill('a fresh long passphrase');
+    await archer.page.getByRole('button', { name: 'Sign in' }).click();
+    await archer.page.getByText(/add your first bow/i).first().waitFor();
+
+    // Marks from a CSV file: the preview names each row's problem; then all are added.
+    const { sessionId } = await makeBowWithSession(archer.context, `Import slider ${tag}`);
+    await archer.page.goto(`/sessions/${sessionId}`);
+    await archer.page.getByTestId('import-marks').click();
+    await archer.page.getByTestId('marks-import').waitFor();
+    const good = knownMarks([30, 50]);
+    await archer.page.getByTestId('csv-paste').fill(`distance,reading,arrows,note\n30,${good[0].scaleMm},3,calm\nfifty,${good[1].scaleMm},,\n`);
+    await archer.page.getByTestId('check-csv').click();
+    await archer.page.getByText('The distance “fifty” is not a number').waitFor();
+    await archer.page.getByTestId('import-rows').scrollIntoViewIfNeeded();
+    await screenshot(archer.page, 'import-preview');
+    await archer.page.getByTestId('csv-paste').fill(`distance,reading,arrows,note\n30,${good[0].scaleMm},3,calm\n50,${good[1].scaleMm},,"gusty, left to right"\n`);
+    await archer.page.getByTestId('check-csv').click();
+    await archer.page.getByText('All 2 rows are ready. Nothing is saved until you add them.').waitFor();
+    await archer.page.getByTestId('save-csv').click();
+    await archer.page.getByTestId('import-done').waitFor();
+    await archer.page.getByTestId('import-done').scrollIntoViewIfNeeded();
+    await screenshot(archer.page, 'import-done');
+
+    // The administrator finds the archer, makes them a technician, and reads the log.
+    const admin = await newPage(stack, size);
+    const adminAccount = await signUpInContext(admin.context, stack.baseUrl, `Runa Admin ${tag}`);
+    await User.update({ role: 'admin' }, { where: { email: adminAccount.email } });
+    await admin.page.goto('/admin');
+    await admin.page.getByTestId('admin-accounts').waitFor();
+    await admin.page.getByLabel('Search').fill(email);
+    const row = admin.page.locator('[data-testid^="account-"]').filter({ hasText: email });
+    await row.waitFor();
+    await row.getByRole('radio', { name: 'Technician' }).click();
+    await admin.page.getByText(`${1} account matching`, { exact: false }).waitFor();
+    await row.getByRole('radio', { name: 'Technician', checked: true }).waitFor();
+    await screenshot(admin.page, 'admin-accounts');
+    await admin.page.getByTestId('admin-audit-tab').click();
+    await admin.page.getByTestId('admin-audit').waitFor();
+    await admin.page.getByText(`Changed the role of Oswin Brae ${tag} <${email}> from archer to tech`).waitFor();
+    await screenshot(admin.page, 'admin-audit');
+    expect((await User.findOne({ where: { email } }))?.role).toBe('tech');
+
+    for (const page of [archer.page, visitor.page, admin.page]) expect(pageErrors(page)).toEqual([]);
+    await archer.context.close();
+    await visitor.context.close();
+    await admin.context.close();
   }, 240_000);
 }
