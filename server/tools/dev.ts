@@ -22,6 +22,8 @@ async function main() {
   await (await import('@/server/migrations')).migrate(sequelize);
   const { seedDemo, demoAccounts } = await import('@/server/seed/demo');
   await seedDemo();
+  // A local fake SMTP service keeps every e-mail (read them at /dev-mail).
+  const smtp = config.smtp.fake ? await (await import('@/server/mail/fake-smtp')).startFakeSmtp({ port: config.smtp.port, dir: config.mailDir }) : null;
   const { createApp } = await import('@/server/app');
 
   const metro = spawn(process.execPath, [path.join(root, 'node_modules/expo/bin/cli'), 'start', '--web', '--localhost', '--port', String(METRO_PORT)], {
@@ -62,6 +64,7 @@ async function main() {
   });
   const stop = async () => {
     metro.kill('SIGTERM');
+    await smtp?.close();
     server.close();
     await sequelize.close().catch(() => {});
     await db.stop();

@@ -141,3 +141,40 @@ describe('choosing a new password from the link', () => {
     expect(broken.body.error.fields.token).toMatch(/not complete/);
   });
 });
+
+describe('the development mail reader', () => {
+  it('lists what was sent to an address and gives the links that open in this app', async () => {
+    const { email } = await signedInAgent(app);
+    const { mail, token } = await resetLinkFor(email);
+    const list = await request(app).get('/api/dev/mail').query({ to: email.toUpperCase() });
+    expect(list.status).toBe(200);
+    expect(list.body.messages).toEqual([expect.objectContaining({ id: mail.id, to: [email], subject: 'Reset your Pinwright password', attachmentCount: 0 })]);
+    const one = await request(app).get(`/api/dev/mail/${mail.id}`);
+    expect(one.body.message.links).toEqual([{ href: `${config.publicUrl}/reset-password?token=${token}`, appPath: `/reset-password?token=${token}` }]);
+    expect((await request(app).get('/api/dev/mail/..%2F..%2Fetc%2Fpasswd')).status).toBe(400);
+  });
+
+  it('is not there in production', async () => {
+    const saved = { NODE_ENV: process.env.NODE_ENV, SESSION_SECRET: process.env.SESSION_SECRET };
+    let production: { app: import('express').Express; close: () => Promise<void> } | undefined;
+    try {
+      process.env.NODE_ENV = 'production';
+      process.env.SESSION_SECRET = 'a production secret for this test only';
+      jest.isolateModules(() => {
+        // A fresh module registry: config, database and app built as production would build them.
+        // eslint-disable-next-line @typescript-eslint/no-require-imports
+        const { createApp } = require('@/server/app');
+        // eslint-disable-next-line @typescript-eslint/no-require-imports
+        const { sequelize } = require('@/server/db');
+        production = { app: createApp({ sessionExpiryTimer: false }), close: () => sequelize.close() };
+      });
+    } finally {
+      process.env.NODE_ENV = saved.NODE_ENV;
+      process.env.SESSION_SECRET = saved.SESSION_SECRET;
+    }
+    const res = await request(production!.app).get('/api/dev/mail');
+    expect(res.status).toBe(404);
+    expect(res.body.error.message).toBe('No such API path: GET /api/dev/mail');
+    await production!.close();
+  });
+});
