@@ -41,6 +41,9 @@ export function pinListToNumbers(text: string): number[] {
     .map((part) => textToNumber(part) as number);
 }
 
+/** To 0.1 mm (NaN and undefined pass through). */
+const roundTenth = (mm: number | undefined) => (mm === undefined || !Number.isFinite(mm) ? mm : Math.round(mm * 10) / 10);
+
 /**
  * The form schema for one length unit: text → the API's bow input (mm), then
  * the shared bowInputSchema.
@@ -81,7 +84,8 @@ export function bowFormSchema(unit: LengthUnit) {
       sightRadiusMm: lengthTextToMm(text.sightRadiusMm, unit),
       peepHeightMm: lengthTextToMm(text.peepHeightMm, unit),
       scaleDirection: text.scaleDirection,
-      tapeWidthMm: optionalLengthMm(text.tapeWidthMm) ?? undefined,
+      // A cut width: to 0.1 mm, so the default 8 mm shown as 0.315 in comes back as 8 mm.
+      tapeWidthMm: roundTenth(optionalLengthMm(text.tapeWidthMm) ?? undefined),
       // Only a sight with fixed pins keeps its pin list.
       pinDistances: text.sightKind === 'single-pin-slider' ? [] : pinListToNumbers(text.pinDistances),
       pinDistanceUnit: text.pinDistanceUnit,

@@ -37,6 +37,8 @@ export const tapeFormFields: readonly (keyof TapeFormText)[] = [
   'label',
 ];
 
+const roundTenth = (mm: number | undefined) => (mm === undefined || !Number.isFinite(mm) ? mm : Math.round(mm * 10) / 10);
+
 /** Text → a tape layout candidate (not yet checked). */
 export function tapeTextToLayout(text: TapeFormText, lengthUnit: LengthUnit) {
   return {
@@ -46,7 +48,8 @@ export function tapeTextToLayout(text: TapeFormText, lengthUnit: LengthUnit) {
     unit: text.unit,
     orientation: text.orientation,
     mirror: text.mirror === 'yes',
-    widthMm: lengthTextToMm(text.widthMm, lengthUnit),
+    // A cut width: to 0.1 mm, so a width shown in inches comes back as the millimetres it stands for.
+    widthMm: roundTenth(lengthTextToMm(text.widthMm, lengthUnit)),
     paper: text.paper,
     label: text.label,
   };

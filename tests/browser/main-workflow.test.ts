@@ -304,3 +304,41 @@ it('shows a fixed multi-pin sight the gap of each pin beside its tape', async ()
   expect(pageErrors(page)).toEqual([]);
   await context.close();
 }, 60_000);
+
+it('takes lengths in inches from an archer who prefers them, and stores millimetres', async () => {
+  const { context, page } = await newPage(stack, PHONE);
+  const signUp = await context.request.post(`${stack.baseUrl}/api/auth/sign-up`, {
+    headers: { 'X-Pinwright-Csrf': '1' },
+    data: { name: 'Wren Alder', email: uniqueEmail('inches'), password: 'a long enough password' },
+  });
+  expect(signUp.status()).toBe(201);
+  const units = await context.request.patch(`${stack.baseUrl}/api/me`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { lengthUnit: 'in' } });
+  expect(units.status()).toBe(200);
+
+  await page.goto('/bows/new');
+  await page.getByLabel('Nickname').waitFor();
+  await page.getByText('Lengths in inches; change the unit on your account page.').waitFor();
+  await page.getByLabel('Nickname').fill('Cobble creek hunter');
+  await page.getByLabel('Draw weight').fill('55');
+  await page.getByLabel('Draw length').fill('28');
+  // Too short a sight radius: the message gives the limit in mm and in inches.
+  await page.getByLabel('Sight radius').fill('12');
+  await page.getByLabel('Peep height').fill('4.25');
+  await page.getByTestId('bow-save').click();
+  await page.getByText('Sight radius must be at least 400 mm (15.75 in)').waitFor();
+  await screenshot(page, 'bow-new-inches');
+  await page.getByLabel('Sight radius').fill('33');
+  await page.getByTestId('bow-save').click();
+  await page.waitForURL(/\/bows\/\d+$/);
+  const bowId = Number(new URL(page.url()).pathname.split('/').pop());
+  const { bow } = await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json();
+  // 1 in = 25.4 mm exactly (international yard and pound, 1959).
+  expect(Math.abs(bow.sightRadiusMm - 838.2)).toBeLessThan(1e-9);
+  expect(Math.abs(bow.peepHeightMm - 107.95)).toBeLessThan(1e-9);
+  expect(Math.abs(bow.drawLengthMm - 711.2)).toBeLessThan(1e-9);
+  // The tape width left at its default (shown as 0.315 in) is stored as the 8 mm it stands for.
+  expect(Math.abs(bow.tapeWidthMm - 8)).toBeLessThan(1e-9);
+  await page.getByTestId('bow-setup').getByText('33.00 in').waitFor();
+  expect(pageErrors(page)).toEqual([]);
+  await context.close();
+}, 60_000);
