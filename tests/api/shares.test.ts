@@ -9,6 +9,8 @@ import request from 'supertest';
 import { config } from '@/server/config';
 import { waitForMail } from '@/server/mail/mail-store';
 import { AuditEntry, Bow, SessionMark, Share, SightSession, Token, User } from '@/server/models';
+import { seedBows } from '@/server/seed/bows';
+import { seedSharingStep } from '@/server/seed/sharing';
 import { CSRF, closeDb, signedInAgent, testApp, uniqueEmail } from '../helpers/api';
 import { bowWithSession, buildBody, knownMarks, type Agent } from './bow-fixtures';
 
@@ -314,5 +316,24 @@ describe('revoking', () => {
     const log = await archer.agent.get(`/api/bows/${bow.id}/audit`);
     expect(log.body.entries[0]).toMatchObject({ action: 'revoked', recordType: 'share', actor: { id: archer.user.id }, summary: expect.stringContaining('Desmond Revoke') });
     expect((await archer.agent.get('/api/shares')).body.shares.map((s: { id: number }) => s.id)).not.toContain(share.id);
+  });
+});
+
+describe('the demo scenario', () => {
+  it('shares the archer’s first bow with the technician once, however often it runs', async () => {
+    const archer = await signedInAgent(app, { name: 'Demo Archer Copy' });
+    const tech = await technician('Demo Technician Copy');
+    const archerUser = (await User.findByPk(archer.user.id))!;
+    const techUser = (await User.findByPk(tech.user.id))!;
+    await seedBows(archerUser);
+    const accounts = { archer: archerUser, tech: techUser, admin: archerUser };
+    await seedSharingStep(accounts);
+    await seedSharingStep(accounts);
+    const shares = await Share.findAll({ where: { archerId: archerUser.id } });
+    expect(shares).toHaveLength(1);
+    expect(shares[0]).toMatchObject({ state: 'active', techId: techUser.id });
+    const clients = (await tech.agent.get('/api/clients')).body.clients;
+    expect(clients).toEqual([expect.objectContaining({ archer: expect.objectContaining({ id: archerUser.id }) })]);
+    expect((await tech.agent.get(`/api/bows/${shares[0].bowId}`)).status).toBe(200);
   });
 });
