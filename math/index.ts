@@ -16,4 +16,6 @@ export * from '@/math/sheet';
 export * from '@/math/pins';
 export * from '@/math/field';
 export * from '@/math/cautions';
+export * from '@/math/compare';
+export * from '@/math/card';
 export type { FitInput, TapeOptionsInput, SheetOptionsInput, Paper } from '@/shared/fit';

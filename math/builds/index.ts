@@ -1,2 +1,3 @@
 export * from '@/math/builds/virtual-mass';
 export * from '@/math/builds/build-summary';
+export * from '@/math/builds/predict-build';

@@ -22,6 +22,9 @@ import { auditTrail } from '@/server/services/audit-service';
 import { config } from '@/server/config';
 import { levelRoutes } from './level';
 import { photoRoutes } from './photos';
+import { compareRoutes } from './compare';
+import { fieldCardRoutes } from './field-card';
+import { predictRoutes } from './predict';
 
 export function apiRoutes(sequelize: Sequelize) {
   const api = Router();
@@ -43,5 +46,8 @@ export function apiRoutes(sequelize: Sequelize) {
   api.use(exportRoutes()); // /bows/:id/export.{csv,json}, /sessions/:id/marks/import, /sessions/:id/send-tape
   api.use(levelRoutes()); // /bows/:bowId/{level,readiness,checks,changes}, /checks/:id, /changes/:id
   api.use(photoRoutes()); // /checks/:id/steps/:step/photo, /photos/:id
+  api.use(compareRoutes()); // /bows/:bowId/compare
+  api.use(fieldCardRoutes()); // /sessions/:id/field-card, field-card.svg, field-card.pdf
+  api.use(predictRoutes()); // /bows/:bowId/predict, /bows/:bowId/predict/tape.svg
   return api;
 }

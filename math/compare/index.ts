@@ -1,0 +1,2 @@
+export * from '@/math/compare/mark-slope';
+export * from '@/math/compare/compare-builds';
