@@ -248,6 +248,17 @@ it('gives a visitor a tape from two marks, with a prompt to sign up', async () =
     await screenshot(page, 'try-impossible');
     await page.getByTestId('try-far-reading').fill(FAR.reading);
     await page.getByTestId('tape-preview').waitFor();
+    // Print goes through /api/try/sheet.svg: the sheet shows at true size on its paper.
+    await page.addInitScript(() => {
+      window.print = () => undefined;
+    });
+    await page.getByTestId('try-print').click();
+    await page.waitForURL(/\/print\/sheet\?source=try/);
+    const sheet = page.getByTestId('print-sheet');
+    await sheet.waitFor();
+    await page.waitForFunction(() => ((document.querySelector('[data-testid="print-sheet"]') as HTMLImageElement | null)?.naturalWidth ?? 0) > 0);
+    expect(await sheet.getAttribute('data-paper')).toBe('letter');
+    await screenshot(page, 'try-print-sheet');
     expect(pageErrors(page)).toEqual([]);
     await context.close();
   }
