@@ -6,8 +6,8 @@
  *    (bow, build, session, mark, tape, level check, step, photo, change):
  *    whenever someone who is not the bow's owner (a technician working on a
  *    shared bow) creates, changes or deletes one during an API request, an
- *    entry is written in the same transaction. Services need not remember to
- *    log their writes, and a write that rolls back leaves no entry.
+ *    entry is written (when the write's transaction commits). Services need
+ *    not remember to log their writes, and a write that rolls back leaves no entry.
  *
  * Example: api.use(auditTrail());   // once, before the routers
  *          await listBowAudit(marit, 12, 1)  → { entries: [{ action: 'created', recordType: 'level-check', … }], … }
@@ -163,7 +163,64 @@ function valuesOf(instance: Model): Values {
   return instance.get({ plain: true }) as Values;
 }
 
-/** Writes the entry when the actor of this request is not the bow's owner. */
+/** One write of a bow's records by someone who is not its owner, before it becomes an entry. */
+type TrailEvent = { modelName: string; action: TrailAction; bowId: number; actorId: number; rows: Values[]; fields: string[] };
+
+/** Events of writes inside a transaction, written once it commits (none if it rolls back). */
+const pending = new WeakMap<Transaction, TrailEvent[]>();
+
+/** Columns that are bookkeeping, not content, when telling whether a row came back unchanged. */
+const bookkeeping = new Set(['id', 'position', 'createdAt', 'updatedAt']);
+/** Same content: every column both rows have, bookkeeping aside, is equal. */
+const sameContent = (a: Values, b: Values) =>
+  Object.keys(a)
+    .filter((key) => !bookkeeping.has(key) && key in b)
+    .every((key) => JSON.stringify(a[key]) === JSON.stringify(b[key]));
+
+/**
+ * A replaced set (the sessions service deletes a session's marks and writes
+ * them again) should read as what really changed: a deleted row and a
+ * created row of the same kind, on the same bow, with the same content cancel out.
+ */
+function coalesce(events: TrailEvent[]): TrailEvent[] {
+  for (const deleted of events.filter((e) => e.action === 'deleted')) {
+    for (const created of events.filter((e) => e.action === 'created' && e.modelName === deleted.modelName && e.bowId === deleted.bowId)) {
+      for (const row of [...deleted.rows]) {
+        const twin = created.rows.findIndex((other) => sameContent(other, row));
+        if (twin < 0) continue;
+        created.rows.splice(twin, 1);
+        deleted.rows.splice(deleted.rows.indexOf(row), 1);
+      }
+    }
+  }
+  return events.filter((event) => event.rows.length > 0);
+}
+
+async function writeEvents(events: TrailEvent[]): Promise<void> {
+  for (const event of coalesce(events)) {
+    const spec = audited[event.modelName];
+    const { rows, action } = event;
+    const first = rows[0];
+    const what = rows.length === 1 ? spec.noun : `${rows.length} ${spec.type.replace(/-/g, ' ')}s`;
+    const detail = rows.length === 1 ? spec.describe(first) : '';
+    const named = event.fields.filter((field) => !derivedFields.has(field));
+    const ownVerb = action === 'updated' ? (spec.updateVerb?.(first, event.fields) ?? null) : null;
+    const fields = action === 'updated' && !ownVerb && named.length ? ` (${named.map(fieldWord).join(', ')})` : '';
+    await recordAudit({
+      actorId: event.actorId,
+      action,
+      bowId: event.bowId,
+      recordType: spec.type,
+      recordId: rows.length === 1 && typeof first.id === 'number' ? first.id : null,
+      summary: `${ownVerb ?? verbs[action]} ${what}${detail ? `: ${detail}` : ''}${fields}`,
+    });
+  }
+}
+
+/**
+ * Notes a write when the actor of this request is not the bow's owner; the
+ * entry is written at once, or when the write's transaction commits.
+ */
 async function trail(
   modelName: string,
   action: TrailAction,
@@ -174,34 +231,30 @@ async function trail(
   const actor = currentActor();
   const spec = audited[modelName];
   if (!actor || !spec || rows.length === 0) return;
-  // One entry per bow touched (a bulk write of 12 marks is one entry).
+  // A refit alone (only worked-out fields changed) is no change of the actor's.
+  if (action === 'updated' && !spec.updateVerb?.(rows[0], changedFields) && changedFields.every((field) => derivedFields.has(field))) return;
+  // One event per bow touched (a bulk write of 12 marks is one entry).
   const byBow = new Map<number, Values[]>();
   for (const row of rows) {
     const bowId = await spec.bowOf(row, transaction);
     if (bowId === null) continue;
     byBow.set(bowId, [...(byBow.get(bowId) ?? []), row]);
   }
+  const events: TrailEvent[] = [];
   for (const [bowId, bowRows] of byBow) {
     const bow = await Bow.findByPk(bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined });
-    if (!bow || bow.userId === actor.id) continue;
-    const first = bowRows[0];
-    const what = bowRows.length === 1 ? spec.noun : `${bowRows.length} ${spec.type.replace(/-/g, ' ')}s`;
-    const detail = bowRows.length === 1 ? spec.describe(first) : '';
-    const named = changedFields.filter((field) => !derivedFields.has(field));
-    const ownVerb = action === 'updated' ? (spec.updateVerb?.(first, changedFields) ?? null) : null;
-    const fields = action === 'updated' && !ownVerb && named.length ? ` (${named.map(fieldWord).join(', ')})` : '';
-    await recordAudit(
-      {
-        actorId: actor.id,
-        action,
-        bowId,
-        recordType: spec.type,
-        recordId: bowRows.length === 1 && typeof first.id === 'number' ? first.id : null,
-        summary: `${ownVerb ?? verbs[action]} ${what}${detail ? `: ${detail}` : ''}${fields}`,
-      },
-      transaction,
-    );
+    if (bow && bow.userId !== actor.id) events.push({ modelName, action, bowId, actorId: actor.id, rows: bowRows, fields: changedFields });
   }
+  if (events.length === 0) return;
+  if (!transaction) return writeEvents(events);
+  let queue = pending.get(transaction);
+  if (!queue) {
+    const created: TrailEvent[] = [];
+    queue = created;
+    pending.set(transaction, created);
+    transaction.afterCommit(() => writeEvents(created));
+  }
+  queue.push(...events);
 }
 
 // Loose on purpose: one shape for the create, update and destroy hooks' options.

@@ -231,6 +231,14 @@ describe('what a technician may do on a shared bow', () => {
         'accepted share',
       ]),
     );
+    // Appending a mark rewrites the session's mark set; the log names only the added mark, and no deletion.
+    expect(kinds.filter((kind: string) => kind.startsWith('deleted'))).toEqual([]);
+    const markEntries = byTech.filter((e: { recordType: string; summary: string }) => e.recordType === 'session-mark');
+    expect(markEntries.map((e: { summary: string }) => e.summary)).toEqual(
+      expect.arrayContaining([`Added a mark: 50 yd at ${extra.scaleMm} mm`, 'Added 3 session marks']),
+    );
+    // A refit alone is not logged as a change of the technician's.
+    expect(byTech.filter((e: { action: string; recordType: string }) => e.action === 'updated' && e.recordType === 'sight-session')).toEqual([]);
     const checkEntry = byTech.find((e: { recordType: string }) => e.recordType === 'level-check');
     expect(checkEntry).toMatchObject({ recordId: check.body.check?.id ?? expect.any(Number), bowId: bow.id, actor: { name: 'Desmond Audit', role: 'tech' } });
     const changeEntry = byTech.find((e: { recordType: string }) => e.recordType === 'bow-change');
