@@ -1,0 +1,68 @@
+/**
+ * Runs Jest against a scratch database on the project-local MariaDB: start
+ * (or reuse) the server, create and migrate `<prefix>_<id>`, start the fake
+ * SMTP service, run Jest, then drop the database and stop what was started.
+ * Used by `npm test` (test-run.ts) and by developers (dev-test-db.ts).
+ */
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { spawn } from 'node:child_process';
+
+export type ScratchRunOptions = {
+  prefix: string;
+  jestArgs: string[];
+  /** Rebuild dist/ first when its sources changed (the browser tests use it). */
+  buildWeb?: boolean;
+  /** Type-check the whole project first; errors fail the run (Jest still runs). */
+  typecheck?: boolean;
+  quiet?: boolean;
+};
+
+const root = path.resolve(__dirname, '../..');
+
+function run(command: string, args: string[], env: NodeJS.ProcessEnv): Promise<number> {
+  return new Promise((resolve) => {
+    const child = spawn(command, args, { cwd: root, stdio: 'inherit', env });
+    child.on('exit', (code) => resolve(code ?? 1));
+  });
+}
+
+export async function runJestOnScratchDatabase(options: ScratchRunOptions): Promise<number> {
+  const dbName = `${options.prefix}_${Date.now().toString(36)}_${process.pid}`;
+  process.env.DB_NAME = dbName;
+  process.env.NODE_ENV = 'test';
+  // Imported only now: config reads DB_NAME when it is first loaded.
+  const { startLocalDatabase, createDatabase, dropDatabase } = await import('./database');
+  const db = await startLocalDatabase(options.quiet ? () => {} : console.log);
+  let smtp: { close: () => Promise<void> } | undefined;
+  let code = 1;
+  try {
+    await createDatabase(db, dbName);
+    // Fake SMTP on a free port; its mailbox is a fresh folder the test workers read (MAIL_DIR).
+    process.env.MAIL_DIR ||= fs.mkdtempSync(path.join(os.tmpdir(), 'pinwright-mail-'));
+    const fake = await (await import('@/server/mail/fake-smtp')).startFakeSmtp({ port: 0, dir: process.env.MAIL_DIR! });
+    smtp = fake;
+    process.env.SMTP_PORT = String(fake.port);
+    const { sequelize } = await import('@/server/db');
+    await (await import('@/server/migrations')).migrate(sequelize);
+    await sequelize.close();
+    if (options.buildWeb) await (await import('./web-export')).exportWebIfStale(root);
+    let typeErrors = 0;
+    if (options.typecheck) {
+      console.log('Type-checking (tsc --noEmit)…');
+      typeErrors = await run(process.execPath, [path.join(root, 'node_modules/typescript/bin/tsc'), '--noEmit', '-p', root], process.env);
+      if (typeErrors) console.error('Type errors above: the run fails, the tests still run.');
+    }
+    const jestCode = await run(process.execPath, [path.join(root, 'node_modules/jest/bin/jest.js'), ...options.jestArgs], process.env);
+    code = jestCode || (typeErrors ? 1 : 0);
+  } catch (err) {
+    console.error(err instanceof Error ? err.message : err);
+  } finally {
+    await dropDatabase(db, dbName).catch(() => {});
+    await smtp?.close();
+    // A server someone else started (e.g. `npm start`) is left running.
+    await db.stop();
+  }
+  return code;
+}
