@@ -54,8 +54,20 @@ export async function runJestOnScratchDatabase(options: ScratchRunOptions): Prom
       typeErrors = await run(process.execPath, [path.join(root, 'node_modules/typescript/bin/tsc'), '--noEmit', '-p', root], process.env);
       if (typeErrors) console.error('Type errors above: the run fails, the tests still run.');
     }
-    const jestCode = await run(process.execPath, [path.join(root, 'node_modules/jest/bin/jest.js'), ...options.jestArgs], process.env);
+    const resultsFile = path.join(os.tmpdir(), `${dbName}-results.json`);
+    const jestCode = await run(
+      process.execPath,
+      [path.join(root, 'node_modules/jest/bin/jest.js'), '--json', `--outputFile=${resultsFile}`, ...options.jestArgs],
+      process.env,
+    );
     code = jestCode || (typeErrors ? 1 : 0);
+    // One plain closing line: what ran, whatever the reporters printed above.
+    if (fs.existsSync(resultsFile)) {
+      const results = JSON.parse(fs.readFileSync(resultsFile, 'utf8'));
+      fs.rmSync(resultsFile, { force: true });
+      const skipped = results.numPendingTests + results.numTodoTests;
+      console.log(`\nSummary: ${results.numPassedTests} passed, ${results.numFailedTests} failed${skipped ? `, ${skipped} skipped` : ''}`);
+    }
   } catch (err) {
     console.error(err instanceof Error ? err.message : err);
   } finally {
