@@ -9,6 +9,7 @@ import { formatLength } from '@/components/bows/form-numbers';
 import { fitWords, formatDay, levelWords, sightInWords, tapeWords } from '@/components/bows/readiness-words';
 import { RecordRow } from '@/components/bows/record-row';
 import { BowSharingLink } from '@/components/shares/bow-sharing-link';
+import { BuildToolsLinks } from '@/components/compare/build-tools-links';
 import { buildName } from '@/components/builds/build-words';
 import { Button } from '@/components/ui/button';
 import { ErrorView } from '@/components/ui/error-view';
@@ -88,6 +89,7 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
             />
           ))
         )}
+        <BuildToolsLinks bowId={bow.id} buildCount={bow.builds.length} />
       </View>
 
       <View style={styles.section}>

@@ -237,6 +237,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: Se
       {session && !formState.isDirty ? (
         <View style={styles.topActions}>
           <Button label="Open the tape" href={`/sessions/${session.id}/tape`} testID="open-tape-top" />
+          <Button label="Field card: slopes, altitude" variant="secondary" href={`/sessions/${session.id}/field-card`} testID="open-field-card" />
           <Text variant="small" tone="soft" style={styles.topHint}>
             Drawn from the fit saved with these marks.
           </Text>

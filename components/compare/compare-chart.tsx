@@ -1,0 +1,76 @@
+import { useState } from 'react';
+import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
+import Svg, { Line } from 'react-native-svg';
+
+import { buildStyle } from '@/components/compare/build-styles';
+import { VictoryAxis, VictoryChart, VictoryLine } from '@/components/sessions/victory';
+import { Text } from '@/components/ui/text';
+import { colors, fonts, space } from '@/components/theme';
+import type { BuildComparison } from '@/shared/compare';
+
+const axisStyle = {
+  axis: { stroke: colors.lineStrong },
+  grid: { stroke: colors.line, strokeDasharray: '2,4' },
+  tickLabels: { fontFamily: fonts.numeral, fontSize: 14, fill: colors.inkSoft, padding: 4 },
+  axisLabel: { fontFamily: fonts.body, fontSize: 14, fill: colors.inkSoft, padding: 30 },
+};
+
+/**
+ * The fitted mark curves of the compared builds on one chart (victory, as the
+ * sight-in chart), each in its own colour and dash, with a legend that shows
+ * the same line samples.
+ * Example: `<CompareChart comparison={data.comparison} />`
+ */
+export function CompareChart({ comparison }: { comparison: BuildComparison }) {
+  const [width, setWidth] = useState(0);
+  const onLayout = (event: LayoutChangeEvent) => setWidth(Math.round(event.nativeEvent.layout.width));
+  const unit = comparison.unit;
+  const curves = comparison.curves.map((curve) => ({
+    label: curve.label,
+    data: curve.points.filter((point) => point.markMm !== null).map((point) => ({ x: point.distance, y: point.markMm as number })),
+  }));
+  const first = comparison.curves[0]?.points[0]?.distance ?? 10;
+  const last = comparison.curves[0]?.points[comparison.curves[0].points.length - 1]?.distance ?? 100;
+  const height = width < 500 ? 260 : 320;
+  return (
+    <View style={styles.box} onLayout={onLayout} testID="compare-chart">
+      <Text variant="small" tone="soft">
+        Each build’s fitted marks from {first} to {last} {unit}: the higher a line, the lower the pin sits for that distance.
+      </Text>
+      {width > 0 ? (
+        <View role="img" accessibilityLabel={`Chart of the fitted mark curves of ${curves.map((curve) => curve.label).join(', ')}`}>
+          <VictoryChart width={width} height={height} padding={{ top: 16, bottom: 48, left: 58, right: 16 }} domainPadding={{ y: 4 }}>
+            <VictoryAxis crossAxis={false} label={`Distance (${unit})`} style={axisStyle} />
+            <VictoryAxis dependentAxis crossAxis={false} label="Reading (mm)" style={axisStyle} />
+            {curves.map((curve, index) => (
+              <VictoryLine
+                key={curve.label + index}
+                data={curve.data}
+                style={{ data: { stroke: buildStyle(index).color, strokeWidth: 2.5, strokeDasharray: buildStyle(index).dash } }}
+              />
+            ))}
+          </VictoryChart>
+        </View>
+      ) : null}
+      <View style={styles.legend}>
+        {curves.map((curve, index) => (
+          <View key={curve.label + index} style={styles.legendItem}>
+            <Svg width={36} height={12}>
+              <Line x1={2} y1={6} x2={34} y2={6} stroke={buildStyle(index).color} strokeWidth={3} strokeDasharray={buildStyle(index).dash} />
+            </Svg>
+            <Text variant="small">
+              {index + 1}. {curve.label}
+              {index === 0 ? ' (reference)' : ''}
+            </Text>
+          </View>
+        ))}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: space.sm, alignSelf: 'stretch' },
+  legend: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
+  legendItem: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+});

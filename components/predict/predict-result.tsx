@@ -1,0 +1,167 @@
+import { StyleSheet, View } from 'react-native';
+
+import { formatFixed, formatSigned } from '@/components/compare/format';
+import { PredictedTapePreview } from '@/components/predict/predicted-tape-preview';
+import { Banner } from '@/components/ui/banner';
+import { Card } from '@/components/ui/card';
+import { DownloadLink } from '@/components/ui/download-link';
+import { SectionHeading } from '@/components/ui/section-heading';
+import { Text } from '@/components/ui/text';
+import { colors, radii, space } from '@/components/theme';
+import { formatDay } from '@/components/bows/readiness-words';
+import type { SightModel } from '@/math/flight/sight-model';
+import type { PredictResponse } from '@/shared/predict';
+
+export interface PredictResultProps {
+  result: PredictResponse;
+  bowName: string;
+  tapeWidthMm: number;
+  /** The predicted tape's download address for a range, or null when it cannot be asked for. */
+  tapeHref: ((from: number, to: number) => string) | null;
+}
+
+/** Distances shown in the marks table: every 10 from 20. */
+const shown = (distance: number) => distance >= 20 && distance % 10 === 0;
+
+/**
+ * A prediction: the speed (and where it comes from), energy and momentum, the
+ * predicted marks beside the sighted build's, the predicted tape, and the
+ * caution that none of it is sighted.
+ * Example: `<PredictResult result={prediction} bowName="Timberline slider" tapeWidthMm={12} tapeHref={(from, to) => href} />`
+ */
+export function PredictResult({ result, bowName, tapeWidthMm, tapeHref }: PredictResultProps) {
+  const { prediction } = result;
+  const unit = prediction.unit ?? 'yd';
+  const source =
+    prediction.speedSource === 'chronograph'
+      ? 'Chronographed speed of this build.'
+      : `Predicted from ${result.chronographed.map((build) => `${build.name} (${formatFixed(build.massGr, 0)} gr, ${formatFixed(build.speedFps, 0)} fps)`).join(' and ')}.`;
+  const reachable = (prediction.marks ?? []).filter((mark) => mark.markMm !== null);
+  const lastReachable = reachable.length > 0 ? reachable[reachable.length - 1].distance : 80;
+  const tapeTo = Math.max(30, Math.min(80, Math.floor(lastReachable / 10) * 10));
+  const speedWords = `${formatFixed(prediction.speedFps, 0)} fps (${prediction.speedSource === 'chronograph' ? 'chronographed' : 'predicted'})`;
+
+  return (
+    <View style={styles.box} testID="predict-result">
+      <Banner tone="caution" title="PREDICTED — not sighted" testID="predict-caution">
+        {prediction.caution.replace(/^PREDICTED — not sighted\. /, '')}
+      </Banner>
+      {prediction.warnings.map((warning) => (
+        <Banner key={warning} tone="warn">
+          {warning}
+        </Banner>
+      ))}
+
+      <Card>
+        <SectionHeading title={`${result.build.name}, ${formatFixed(result.build.totalGr, 0)} gr`} level={2} description={source} />
+        <View style={styles.figures}>
+          <Figure label="Speed" value={`${formatFixed(prediction.speedFps, 0)} fps`} testID="predict-speed" />
+          <Figure label="Kinetic energy" value={`${formatFixed(prediction.kineticEnergyFtLbf, 1)} ft·lbf`} detail={`${formatFixed(prediction.kineticEnergyJ, 1)} J`} />
+          <Figure label="Momentum" value={`${formatFixed(prediction.momentumSlugFps, 3)}`} detail={`slug·ft/s · ${formatFixed(prediction.momentumKgMps, 2)} kg·m/s`} />
+          <Figure label="FOC" value={result.build.focPct === null ? '—' : `${formatFixed(result.build.focPct, 1)} %`} detail={result.build.focPct === null ? 'balance point not given' : undefined} />
+        </View>
+        {prediction.virtualMass ? (
+          <Text variant="small" tone="soft">
+            The bow’s fit: {formatFixed(prediction.virtualMass.energyJ, 1)} J shared with a virtual mass of {formatFixed(prediction.virtualMass.virtualMassGr, 0)} gr of limbs
+            and string (speed = √(2E / (arrow + virtual mass))).{' '}
+            {result.chronographed.length === 2
+              ? 'Two builds fit it exactly; a third chronographed build would check it.'
+              : `The chronographed builds sit ${formatFixed(prediction.virtualMass.rmsFps, 1)} fps (RMS) off it.`}
+          </Text>
+        ) : null}
+        <Text variant="small" tone="soft">
+          {result.energyCaution}
+        </Text>
+      </Card>
+
+      {result.marksMissing ? (
+        <Banner tone="info" title="No marks yet" testID="predict-marks-missing">
+          {result.marksMissing}
+        </Banner>
+      ) : null}
+
+      {prediction.marks && result.session && result.model ? (
+        <Card>
+          <SectionHeading
+            title="Predicted marks"
+            level={2}
+            description={`On the sight of the ${formatDay(result.session.date)} sight-in with ${result.session.buildName}; mm as your scale reads them.`}
+          />
+          <View style={styles.table} role="table" aria-label="Predicted marks" testID="predict-marks">
+            <View style={[styles.row, styles.head]} role="row">
+              <Text variant="label" style={styles.distance} role="columnheader">
+                {unit}
+              </Text>
+              <Text variant="label" style={styles.cell} role="columnheader">
+                Predicted
+              </Text>
+              <Text variant="label" style={styles.cell} role="columnheader">
+                {result.session.buildName}
+              </Text>
+              <Text variant="label" style={styles.cell} role="columnheader">
+                Δ mm
+              </Text>
+            </View>
+            {prediction.marks.filter((mark) => shown(mark.distance)).map((mark, index) => (
+              <View key={mark.distance} style={[styles.row, index % 2 === 1 && styles.stripe]} role="row">
+                <Text variant="numeral" style={styles.distance} role="rowheader">
+                  {mark.distance}
+                </Text>
+                <Text variant="numeral" style={styles.cell} role="cell">
+                  {formatFixed(mark.markMm, 1)}
+                </Text>
+                <Text variant="numeral" style={[styles.cell, styles.soft]} role="cell">
+                  {formatFixed(mark.sightedBuildMarkMm, 1)}
+                </Text>
+                <Text variant="numeral" style={styles.cell} role="cell">
+                  {formatSigned(mark.differenceMm, 1)}
+                </Text>
+              </View>
+            ))}
+          </View>
+          <SectionHeading title="Predicted tape" level={3} description="PREDICTED runs along its edge, so a cut-out tape still says so. Confirm two distances at the range before you trust the rest." />
+          <PredictedTapePreview
+            model={result.model as unknown as SightModel}
+            from={20}
+            to={tapeTo}
+            widthMm={tapeWidthMm}
+            labels={{ bow: bowName, build: `${result.build.name}, ${formatFixed(result.build.totalGr, 0)} gr`, speed: speedWords }}
+          />
+          {tapeHref ? <DownloadLink label="Download the predicted tape (SVG)" href={tapeHref(20, tapeTo)} fileName="predicted-tape.svg" testID="predict-download" /> : null}
+        </Card>
+      ) : null}
+    </View>
+  );
+}
+
+function Figure({ label, value, detail, testID }: { label: string; value: string; detail?: string; testID?: string }) {
+  return (
+    <View style={styles.figure}>
+      <Text variant="small" tone="soft">
+        {label}
+      </Text>
+      <Text variant="numeralLarge" style={styles.figureValue} testID={testID}>
+        {value}
+      </Text>
+      {detail ? (
+        <Text variant="caption" tone="soft">
+          {detail}
+        </Text>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: space.xl },
+  figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
+  figure: { flexGrow: 1, flexBasis: 130, gap: space.xxs },
+  figureValue: { fontSize: 32, lineHeight: 36 },
+  table: { borderRadius: radii.md, overflow: 'hidden', borderWidth: 1, borderColor: colors.line },
+  row: { flexDirection: 'row', alignItems: 'center', paddingVertical: space.xs, paddingHorizontal: space.sm, gap: space.sm },
+  head: { backgroundColor: colors.sunken, paddingVertical: space.sm },
+  stripe: { backgroundColor: colors.surface },
+  distance: { width: 44 },
+  cell: { flex: 1 },
+  soft: { color: colors.inkSoft },
+});

@@ -1,0 +1,208 @@
+import { useMemo, useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+
+import { useMe } from '@/components/auth/api';
+import { useBow } from '@/components/bows/api';
+import { FieldGrid } from '@/components/bows/field-grid';
+import { formatDay } from '@/components/bows/readiness-words';
+import { applyFieldErrors, flatFieldPath } from '@/components/bows/server-field-errors';
+import { textFormResolver } from '@/components/bows/text-form-resolver';
+import { buildFormDefaults, buildFormFields, buildFormSchema, type BuildFormText } from '@/components/builds/build-form-values';
+import { buildLine, buildName } from '@/components/builds/build-words';
+import { liveQuantities } from '@/components/builds/live-quantities';
+import { formatFixed } from '@/components/compare/format';
+import { predictedTapeHref, usePredict } from '@/components/predict/api';
+import { PredictResult } from '@/components/predict/predict-result';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { ErrorView } from '@/components/ui/error-view';
+import { FormField } from '@/components/ui/form-field';
+import { LoadingView } from '@/components/ui/loading-view';
+import { NotFoundScreen } from '@/components/ui/not-found-screen';
+import { Screen } from '@/components/ui/screen';
+import { ScreenTitle } from '@/components/ui/screen-title';
+import { SectionHeading } from '@/components/ui/section-heading';
+import { SegmentedControl } from '@/components/ui/segmented-control';
+import { Text } from '@/components/ui/text';
+import { useWide } from '@/components/ui/use-wide';
+import { space } from '@/components/theme';
+import type { LengthUnit } from '@/shared/auth';
+import type { BowDetail } from '@/shared/bow';
+import type { BuildInput } from '@/shared/build';
+
+/** The form's text for a new build started from `build`: its parts, a new name, no speed (that is what we predict). */
+function startingText(build: BowDetail['builds'][number] | undefined, unit: LengthUnit): BuildFormText {
+  const text = buildFormDefaults(build, unit);
+  return { ...text, name: build ? `${build.name}, changed` : 'New build', speedFps: '' };
+}
+
+/**
+ * Predict a build not shot yet on a bow: start from one of its builds, change
+ * the parts (a heavier point, another shaft), choose the sight-in whose sight
+ * carries it, and see its speed from the bow's chronographed builds and its
+ * predicted marks and tape, all marked as predicted, not sighted.
+ * Example: `<PredictScreen bowId={3} startFromBuildId={5} />`
+ */
+export function PredictScreen({ bowId, startFromBuildId }: { bowId: number; startFromBuildId?: number }) {
+  const me = useMe();
+  const bow = useBow(bowId);
+  if (!Number.isInteger(bowId) || bowId <= 0) return <NotFoundScreen />;
+  if (bow.isError) {
+    return (
+      <>
+        <ScreenTitle name="Predict a build" />
+        <ErrorView title="The bow could not be loaded" error={bow.error} onRetry={() => bow.refetch()} retrying={bow.isFetching} />
+      </>
+    );
+  }
+  if (bow.isPending || !me.data) {
+    return (
+      <>
+        <ScreenTitle name="Predict a build" />
+        <LoadingView label="Loading the bow…" />
+      </>
+    );
+  }
+  return <PredictBody bow={bow.data} unit={me.data.lengthUnit} startFromBuildId={startFromBuildId} />;
+}
+
+function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: LengthUnit; startFromBuildId?: number }) {
+  const wide = useWide();
+  const predict = usePredict();
+  const [general, setGeneral] = useState<string | null>(null);
+  const firstBuild = bow.builds.find((build) => build.id === startFromBuildId) ?? bow.builds[0];
+  const [startFrom, setStartFrom] = useState<string>(firstBuild ? String(firstBuild.id) : 'blank');
+  const [sessionId, setSessionId] = useState<string>(bow.sessions[0] ? String(bow.sessions[0].id) : '');
+  const [sent, setSent] = useState<BuildInput | null>(null);
+  const resolver = useMemo(() => textFormResolver<BuildFormText, BuildInput>(buildFormSchema(unit), { inches: unit === 'in' }), [unit]);
+  const { control, handleSubmit, setError, reset } = useForm<BuildFormText, unknown, BuildInput>({
+    resolver,
+    defaultValues: startingText(firstBuild, unit),
+  });
+  const text = useWatch({ control }) as BuildFormText;
+  const live = liveQuantities(text, unit);
+  const chronographed = bow.builds.filter((build) => build.speedFps !== null);
+
+  const startOptions = [...bow.builds.map((build) => ({ value: String(build.id), label: build.name })), { value: 'blank', label: 'Blank' }];
+  const sessionOptions = bow.sessions.slice(0, 6).map((session) => ({
+    value: String(session.id),
+    label: `${formatDay(session.date)} · ${buildName(bow.builds, session.buildId)}`,
+  }));
+
+  const chooseStart = (value: string) => {
+    setStartFrom(value);
+    reset(startingText(bow.builds.find((build) => String(build.id) === value), unit));
+    predict.reset();
+  };
+
+  const submit = handleSubmit(
+    (input) => {
+      setGeneral(null);
+      const build = { ...input, speedFps: null };
+      setSent(build);
+      predict.mutate(
+        { bowId: bow.id, request: { build, ...(sessionId ? { sessionId: Number(sessionId) } : {}) } },
+        {
+          onError: (error) => {
+            // "Chronograph at least one more build …" is about the bow, not a field of the form.
+            if (error.fields.builds) return setGeneral(error.message);
+            const fields = flatFieldPath(buildFormFields);
+            setGeneral(applyFieldErrors(error, (key) => fields(key.replace(/^build\./, '')), setError));
+          },
+        },
+      );
+    },
+    () => setGeneral('Some fields need another look; nothing was predicted.'),
+  );
+
+  const form = (
+    <Card>
+      <SectionHeading title="The new build" level={2} description="Start from one of this bow’s builds and change what you would change." />
+      <SegmentedControl label="Start from" options={startOptions} value={startFrom} onChange={chooseStart} testID="predict-start" />
+      <FormField control={control} name="name" label="Name" autoCapitalize="sentences" />
+      <FieldGrid minWidth={150}>
+        <FormField control={control} name="grainsPerInch" label="Grains per inch" unit="gpi" numeric />
+        <FormField control={control} name="cutLengthMm" label="Cut length" unit={unit} numeric />
+        <FormField control={control} name="diameterMm" label="Diameter" unit={unit} numeric />
+        <FormField control={control} name="pointGr" label="Point" unit="gr" numeric testID="predict-point" />
+        <FormField control={control} name="insertGr" label="Insert" unit="gr" numeric />
+        <FormField control={control} name="collarGr" label="Collar" unit="gr" numeric />
+        <FormField control={control} name="nockGr" label="Nock" unit="gr" numeric />
+        <FormField control={control} name="vaneCount" label="Vanes" unit="×" numeric />
+        <FormField control={control} name="vaneWeightGr" label="Each vane" unit="gr" numeric />
+        <FormField control={control} name="wrapGr" label="Wrap" unit="gr" numeric />
+        <FormField control={control} name="balancePointMm" label="Balance point" hint="Optional, for FOC" unit={unit} numeric />
+        <FormField control={control} name="dragCoefficient" label="Drag coefficient" hint="Optional: else fitted" numeric />
+      </FieldGrid>
+      <Text variant="label" testID="predict-total">
+        Total: {live.totalGr === null ? '—' : `${formatFixed(live.totalGr, 0)} gr`}
+        {live.focPct === null ? '' : ` · FOC ${formatFixed(live.focPct, 1)} %`}
+      </Text>
+      {sessionOptions.length > 0 ? (
+        <SegmentedControl
+          label="Carried on the sight of"
+          hint="The sight-in whose fitted peep height, sight radius and scale set the marks"
+          options={sessionOptions}
+          value={sessionId}
+          onChange={setSessionId}
+        />
+      ) : null}
+      {general ? (
+        <Banner tone="warn" title="Cannot predict yet" testID="predict-error">
+          {general}
+        </Banner>
+      ) : null}
+      <Button label="Predict" pendingLabel="Predicting…" pending={predict.isPending} onPress={submit} testID="predict-submit" />
+    </Card>
+  );
+
+  const intro = (
+    <Text tone="soft">
+      {chronographed.length >= 2
+        ? `Speed from ${chronographed.length} chronographed builds: ${chronographed.map((build) => `${build.name} (${buildLine(build.derived, build.speedFps)})`).join('; ')}.`
+        : chronographed.length === 1
+          ? `Only ${chronographed[0].name} is chronographed. Chronograph at least one more build on this bow (of another weight) to predict a new one’s speed.`
+          : 'No build on this bow is chronographed yet. Chronograph at least two builds of different weights to predict a new one’s speed.'}
+    </Text>
+  );
+
+  const result = predict.data ? (
+    <PredictResult
+      result={predict.data}
+      bowName={bow.nickname}
+      tapeWidthMm={bow.tapeWidthMm}
+      tapeHref={sent ? (from, to) => predictedTapeHref(bow.id, sent, { sessionId: predict.data!.session?.id, from, to, width: bow.tapeWidthMm }) : null}
+    />
+  ) : null;
+
+  return (
+    <Screen testID="predict-screen">
+      <ScreenTitle name={`Predict a build · ${bow.nickname}`} />
+      <SectionHeading
+        level={1}
+        title="Predict a build"
+        description={`${bow.nickname} · what an arrow you have not shot yet will do`}
+        action={<Button label="Back to the bow" variant="quiet" href={`/bows/${bow.id}`} />}
+      />
+      {intro}
+      {wide ? (
+        <View style={styles.split}>
+          <View style={styles.column}>{form}</View>
+          <View style={styles.column}>{result ?? <Text tone="soft">The prediction appears here.</Text>}</View>
+        </View>
+      ) : (
+        <>
+          {form}
+          {result}
+        </>
+      )}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  split: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
+  column: { flex: 1, minWidth: 0, gap: space.xl },
+});

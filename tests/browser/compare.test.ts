@@ -1,0 +1,130 @@
+/**
+ * Builds and the field card as an archer uses them before a mountain hunt:
+ * on the demo scenario's hunting bow (seeded for a fresh account), compare
+ * its two sighted builds (chart, marks by distance with differences, figures),
+ * predict a heavier build, and open a sight-in's field card for 2,700 m.
+ * Screenshots at 390×844 and 1280×800.
+ */
+import path from 'node:path';
+import type { BrowserContext, Page } from 'playwright-core';
+import { User } from '@/server/models';
+import { seedBows } from '@/server/seed/bows';
+import { DESKTOP, PHONE, SCREENSHOT_DIR, newPage, pageErrors, screenshot as viewportShot, signUpInContext, startStack, type Stack } from '../helpers/browser';
+
+let stack: Stack;
+beforeAll(async () => {
+  stack = await startStack();
+}, 60_000);
+afterAll(async () => {
+  await stack?.close();
+});
+
+/**
+ * The page at its viewport size, and when the app's scroll container holds
+ * more, its whole length too (<name>-full-<width>w.png).
+ */
+async function screenshot(page: Page, name: string) {
+  await viewportShot(page, name);
+  const size = page.viewportSize()!;
+  const extra = await page.evaluate(() => {
+    let most = 0;
+    for (const el of Array.from(document.querySelectorAll('div'))) {
+      const overflow = getComputedStyle(el).overflowY;
+      if ((overflow === 'auto' || overflow === 'scroll') && el.scrollHeight > el.clientHeight + 1) most = Math.max(most, el.scrollHeight - el.clientHeight);
+    }
+    return most;
+  });
+  if (extra <= 0) return;
+  await page.setViewportSize({ width: size.width, height: Math.min(size.height + extra, 9000) });
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}-full-${size.width}w.png`) });
+  await page.setViewportSize(size);
+  await page.waitForTimeout(150);
+}
+
+/** A fresh archer with the demo scenario's bows, builds and sight-ins (invented), signed in in `context`. */
+async function archerWithDemoBows(context: BrowserContext): Promise<{ bowId: number; basinSessionId: number }> {
+  const { email } = await signUpInContext(context, stack.baseUrl, 'Compare Archer');
+  const user = await User.findOne({ where: { email } });
+  await seedBows(user!);
+  const bows = (await (await context.request.get(`${stack.baseUrl}/api/bows`)).json()).bows as { id: number; nickname: string }[];
+  const bowId = bows.find((bow) => bow.nickname === 'Timberline slider')!.id;
+  const detail = (await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow as { sessions: { id: number; placeLabel: string }[] };
+  return { bowId, basinSessionId: detail.sessions.find((session) => session.placeLabel.startsWith('Greywether'))!.id };
+}
+
+const numberIn = (text: string | null) => Number((text ?? '').replace('−', '-').replace(/[^\d.-]/g, ''));
+
+for (const size of [PHONE, DESKTOP]) {
+  const tag = `${size.width}x${size.height}`;
+  it(`compares two builds, predicts a heavier one and opens the field card for 2,700 m (${tag})`, async () => {
+    const { context, page } = await newPage(stack, size);
+    await page.addInitScript(() => {
+      // The print dialog cannot be driven headless; count the calls instead.
+      (window as unknown as { printCalls: number }).printCalls = 0;
+      window.print = () => {
+        (window as unknown as { printCalls: number }).printCalls += 1;
+      };
+    });
+    const { bowId, basinSessionId } = await archerWithDemoBows(context);
+
+    // From the bow screen to the comparison: the two sighted builds are chosen already.
+    await page.goto(`/bows/${bowId}`);
+    await page.getByTestId('open-compare').waitFor();
+    await viewportShot(page, 'compare-bow-links');
+    await page.getByTestId('open-compare').click();
+    await page.getByTestId('compare-results').waitFor();
+    await page.getByTestId('compare-chart').locator('svg path').first().waitFor();
+    const picks = page.getByRole('checkbox', { checked: true });
+    expect(await picks.count()).toBe(2);
+    // The elk build (chosen first) is the reference; the faster practice build needs a smaller reading at 40 yd.
+    const diff = await page.getByTestId('compare-diff-40-1').textContent();
+    expect(diff).toMatch(/mm\s+[+−][\d.]+ yd/);
+    expect(numberIn(diff!.split('mm')[0])).toBeLessThan(0);
+    const figures = await page.getByTestId('compare-figures').textContent();
+    expect(figures).toMatch(/Elk heavy/);
+    expect(figures).toMatch(/fps/);
+    expect(figures).toMatch(/ft·lbf/);
+    await expect(page.getByText('no legal determination', { exact: false }).count()).resolves.toBeGreaterThan(0);
+    await screenshot(page, 'compare-builds');
+    await page.getByTestId('compare-print-button').click();
+    expect(await page.evaluate(() => (window as unknown as { printCalls: number }).printCalls)).toBe(1);
+
+    // Predict a heavier point on the elk build.
+    await page.goto(`/bows/${bowId}/predict`);
+    await page.getByTestId('predict-point').waitFor();
+    await page.getByTestId('predict-point').fill('200');
+    await page.getByTestId('predict-submit').click();
+    await page.getByTestId('predict-result').waitFor();
+    expect(await page.getByTestId('predict-caution').textContent()).toMatch(/PREDICTED — not sighted/);
+    const speed = numberIn(await page.getByTestId('predict-speed').textContent());
+    // Heavier than the elk build (276 fps chronographed): slower.
+    expect(speed).toBeGreaterThan(230);
+    expect(speed).toBeLessThan(276);
+    await page.getByTestId('predicted-tape-preview').waitFor();
+    await screenshot(page, 'predict-build');
+
+    // The field card of the basin sight-in, for 2,700 m.
+    await page.goto(`/sessions/${basinSessionId}`);
+    await page.getByTestId('open-field-card').click();
+    await page.getByTestId('field-card-table').waitFor();
+    await page.getByTestId('field-card-altitude').fill('2700');
+    await page.getByText('Marks for 2700 m, standard temperature').first().waitFor();
+    const cell = await page.getByTestId('field-card-cell--30-40').textContent();
+    expect(cell).toMatch(/≈ \d+\.\d/);
+    expect(await page.getByTestId('field-card-cautions').textContent()).toMatch(/confirm on real terrain/);
+    await page.getByTestId('field-card-preview').locator('svg').first().waitFor();
+    await screenshot(page, 'field-card');
+    await page.getByTestId('field-card-print').click();
+    // (Each page load starts the count again.)
+    expect(await page.evaluate(() => (window as unknown as { printCalls: number }).printCalls)).toBe(1);
+    // The print-only card is exactly 100 × 150 mm (CSS mm: 96 px per 25.4 mm).
+    const printed = await page.locator('.pw-card-print img').evaluate((img) => (img as HTMLImageElement).style.width + ' ' + (img as HTMLImageElement).style.height);
+    expect(printed).toBe('100mm 150mm');
+    const pdf = await context.request.get(`${stack.baseUrl}/api/sessions/${basinSessionId}/field-card.pdf?altitudeM=2700`);
+    expect(pdf.status()).toBe(200);
+
+    expect(pageErrors(page)).toEqual([]);
+    await context.close();
+  }, 120_000);
+}
