@@ -29,6 +29,8 @@ export function ComparePrintOnly({ rootId }: { rootId: string }) {
   #${rootId}, #${rootId} * { visibility: visible !important; }
   #${rootId} { position: absolute !important; left: 0; top: 0; width: 100% !important; max-width: none !important; padding: 0 !important; }
   #${rootId} [role="row"] { break-inside: avoid; }
+  /* Printers drop backgrounds by default: print every word black on white so the caution stays legible. */
+  #${rootId}, #${rootId} * { color: #000 !important; background-color: transparent !important; }
 }`;
     document.head.appendChild(style);
     return () => style.remove();

@@ -53,6 +53,12 @@ async function archerWithDemoBows(context: BrowserContext): Promise<{ bowId: num
   return { bowId, basinSessionId: detail.sessions.find((session) => session.placeLabel.startsWith('Greywether'))!.id };
 }
 
+/** The id of the first build button on the compare screen. */
+async function firstPickId(page: Page): Promise<string> {
+  const testId = await page.locator('[data-testid^="compare-pick-"]').first().getAttribute('data-testid');
+  return testId!.replace('compare-pick-', '');
+}
+
 const numberIn = (text: string | null) => Number((text ?? '').replace('−', '-').replace(/[^\d.-]/g, ''));
 
 for (const size of [PHONE, DESKTOP]) {
@@ -89,6 +95,11 @@ for (const size of [PHONE, DESKTOP]) {
     await screenshot(page, 'compare-builds');
     await page.getByTestId('compare-print-button').click();
     expect(await page.evaluate(() => (window as unknown as { printCalls: number }).printCalls)).toBe(1);
+    // What the printer gets: the comparison alone, no navigation or controls.
+    await page.emulateMedia({ media: 'print' });
+    await viewportShot(page, 'compare-builds-print');
+    expect(await page.getByTestId('compare-pick-' + (await firstPickId(page))).isVisible()).toBe(false);
+    await page.emulateMedia({ media: 'screen' });
 
     // Predict a heavier point on the elk build.
     await page.goto(`/bows/${bowId}/predict`);
@@ -121,6 +132,10 @@ for (const size of [PHONE, DESKTOP]) {
     // The print-only card is exactly 100 × 150 mm (CSS mm: 96 px per 25.4 mm).
     const printed = await page.locator('.pw-card-print img').evaluate((img) => (img as HTMLImageElement).style.width + ' ' + (img as HTMLImageElement).style.height);
     expect(printed).toBe('100mm 150mm');
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('.pw-card-print img').isVisible()).toBe(true);
+    await viewportShot(page, 'field-card-print');
+    await page.emulateMedia({ media: 'screen' });
     const pdf = await context.request.get(`${stack.baseUrl}/api/sessions/${basinSessionId}/field-card.pdf?altitudeM=2700`);
     expect(pdf.status()).toBe(200);
 
