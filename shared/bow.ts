@@ -124,8 +124,14 @@ export const bowSummarySchema = bowSchema.extend({ readiness: bowReadinessSchema
 /** GET /api/bows → { bows: BowSummary[] } */
 export const bowListResponseSchema = z.object({ bows: z.array(bowSummarySchema) });
 
-/** GET /api/bows/:id → { bow: BowDetail }: the bow with its builds, sessions (newest first, with fit summaries) and tapes. */
+/**
+ * GET /api/bows/:id → { bow: BowDetail }: the bow with its builds, sessions
+ * (newest first, with fit summaries) and tapes, and its owner's name (so a
+ * technician it is shared with sees whose records they are).
+ */
 export const bowDetailSchema = bowSummarySchema.extend({
+  /** The archer who owns the bow (User.name of `userId`). */
+  ownerName: z.string(),
   builds: z.array(buildSchema),
   sessions: z.array(sessionListItemSchema),
   tapes: z.array(tapeSchema),

@@ -6,6 +6,7 @@ import { useDeleteBow } from '@/components/bows/api';
 import { bowSetupItems } from '@/components/bows/bow-setup-items';
 import { formatLength } from '@/components/bows/form-numbers';
 import { KeyValueList } from '@/components/bows/key-value-list';
+import { useBowRole } from '@/components/bows/use-bow-role';
 import { fitWords, formatDay } from '@/components/bows/readiness-words';
 import { buildLine, buildName } from '@/components/builds/build-words';
 import { Button } from '@/components/ui/button';
@@ -27,10 +28,11 @@ export type BowSelection =
   | { kind: 'session'; id: number }
   | { kind: 'tape'; id: number };
 
-/** The bow's set-up with Edit and Delete (delete asks first and names what is lost). */
+/** The bow's set-up with, for its owner, Edit and Delete (delete asks first and names what is lost). */
 export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) {
   const router = useRouter();
   const remove = useDeleteBow();
+  const { isOwner } = useBowRole(bow);
   const [asking, setAsking] = useState(false);
   const counts = [
     `${bow.builds.length} ${bow.builds.length === 1 ? 'build' : 'builds'}`,
@@ -41,10 +43,10 @@ export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) 
     <Card style={styles.panel} testID="bow-setup">
       <SectionHeading
         title="Set-up"
-        action={<Button label="Edit" variant="secondary" href={`/bows/${bow.id}/edit`} testID="bow-edit" />}
+        action={isOwner ? <Button label="Edit" variant="secondary" href={`/bows/${bow.id}/edit`} testID="bow-edit" /> : undefined}
       />
       <KeyValueList items={bowSetupItems(bow, unit)} />
-      {asking ? (
+      {!isOwner ? null : asking ? (
         <ConfirmBar
           title={`Delete ${bow.nickname}?`}
           message={`This deletes the bow with its ${counts}. It cannot be undone.`}
@@ -57,7 +59,7 @@ export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) 
           testID="bow-delete-confirm"
         />
       ) : (
-        <Button label="Delete this bow" variant="quiet" onPress={() => setAsking(true)} />
+        <Button label="Delete this bow" variant="quiet" onPress={() => setAsking(true)} testID="bow-delete" />
       )}
     </Card>
   );

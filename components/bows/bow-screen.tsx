@@ -8,6 +8,7 @@ import { sightKindNames } from '@/components/bows/bow-setup-items';
 import { formatLength } from '@/components/bows/form-numbers';
 import { fitWords, formatDay, levelWords, sightInWords, tapeWords } from '@/components/bows/readiness-words';
 import { RecordRow } from '@/components/bows/record-row';
+import { useBowRole } from '@/components/bows/use-bow-role';
 import { BowSharingLink } from '@/components/shares/bow-sharing-link';
 import { BuildToolsLinks } from '@/components/compare/build-tools-links';
 import { buildName } from '@/components/builds/build-words';
@@ -61,6 +62,7 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
   const split = selection !== null;
   const isSelected = (kind: BowSelection['kind'], id?: number) =>
     selection?.kind === kind && (kind === 'setup' || (selection as { id?: number }).id === id);
+  const { isOwner, canAdd } = useBowRole(bow);
   const canSightIn = bow.builds.length > 0;
   return (
     <View style={styles.lists}>
@@ -72,10 +74,16 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
         <SectionHeading
           title="Arrow builds"
           level={2}
-          action={<Button label="Add a build" icon={PlusIcon} variant="secondary" href={`/bows/${bow.id}/builds/new`} testID="add-build" />}
+          action={
+            isOwner ? <Button label="Add a build" icon={PlusIcon} variant="secondary" href={`/bows/${bow.id}/builds/new`} testID="add-build" /> : undefined
+          }
         />
         {bow.builds.length === 0 ? (
-          <Text tone="soft">No builds yet. A build gives the fit the arrow&apos;s weight and diameter.</Text>
+          <Text tone="soft">
+            {isOwner
+              ? 'No builds yet. A build gives the fit the arrow’s weight and diameter.'
+              : `No builds yet. Only ${bow.ownerName || 'the archer'} can add one; the fit needs the arrow’s weight and diameter.`}
+          </Text>
         ) : (
           bow.builds.map((build) => (
             <RecordRow
@@ -97,17 +105,19 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
           title="Sight-in sessions"
           level={2}
           action={
-            <Button
-              label="Start a sight-in"
-              icon={PlusIcon}
-              variant={canSightIn ? 'primary' : 'secondary'}
-              disabled={!canSightIn}
-              href={`/bows/${bow.id}/sessions/new`}
-              testID="start-session"
-            />
+            canAdd ? (
+              <Button
+                label="Start a sight-in"
+                icon={PlusIcon}
+                variant={canSightIn ? 'primary' : 'secondary'}
+                disabled={!canSightIn}
+                href={`/bows/${bow.id}/sessions/new`}
+                testID="start-session"
+              />
+            ) : undefined
           }
         />
-        {!canSightIn ? <Text tone="soft">Add an arrow build first: the fit needs the arrow.</Text> : null}
+        {!canSightIn && isOwner ? <Text tone="soft">Add an arrow build first: the fit needs the arrow.</Text> : null}
         {canSightIn && bow.sessions.length === 0 ? <Text tone="soft">No sight-ins yet. Two marks are enough to start.</Text> : null}
         {bow.sessions.map((session) => (
           <RecordRow
@@ -188,7 +198,7 @@ export function BowScreen({ bowId }: { bowId: number }) {
       <ScreenTitle name={data.nickname} />
       <SectionHeading level={1} title={data.nickname} description={subtitle(data, unit)} action={<Button label="Bench" variant="quiet" href="/" />} />
       <Readiness bow={data} />
-      <BowSharingLink bowId={data.id} ownerId={data.userId} />
+      <BowSharingLink bow={data} />
       {split ? (
         <View style={styles.split}>
           <View style={styles.listColumn}>

@@ -3,6 +3,8 @@ import { useRouter } from 'expo-router';
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { BowForm } from '@/components/bows/bow-form';
+import { OwnerOnlyNotice } from '@/components/bows/owner-only-notice';
+import { useBowRole } from '@/components/bows/use-bow-role';
 import { ErrorView } from '@/components/ui/error-view';
 import { LoadingView } from '@/components/ui/loading-view';
 import { Screen } from '@/components/ui/screen';
@@ -14,6 +16,7 @@ export function EditBowScreen({ bowId }: { bowId: number }) {
   const router = useRouter();
   const me = useMe();
   const bow = useBow(bowId);
+  const { isOwner } = useBowRole(bow.data);
   const title = <ScreenTitle name="Edit bow" />;
 
   if (bow.isPending || !me.data) {
@@ -30,6 +33,14 @@ export function EditBowScreen({ bowId }: { bowId: number }) {
         {title}
         <ErrorView title="The bow could not be loaded" error={bow.error} onRetry={() => bow.refetch()} retrying={bow.isFetching} />
       </>
+    );
+  }
+  if (!isOwner) {
+    return (
+      <Screen>
+        {title}
+        <OwnerOnlyNotice bow={bow.data} what="change this bow’s set-up" />
+      </Screen>
     );
   }
   const back = () => router.replace(`/bows/${bowId}`);

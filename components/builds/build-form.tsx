@@ -26,6 +26,8 @@ export interface BuildFormProps {
   lengthUnit: LengthUnit;
   onSaved: (build: Build) => void;
   onCancel: () => void;
+  /** Show the build without letting it change (a technician on a shared bow): inputs disabled, no Save. */
+  readOnly?: boolean;
 }
 
 /**
@@ -34,7 +36,7 @@ export interface BuildFormProps {
  * shared build schema before anything is sent; saved in one request.
  * Example: `<BuildForm bowId={3} lengthUnit="in" onSaved={(build) => router.replace(`/builds/${build.id}`)} onCancel={router.back} />`
  */
-export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: BuildFormProps) {
+export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel, readOnly = false }: BuildFormProps) {
   const save = useSaveBuild();
   const wide = useWide();
   const [general, setGeneral] = useState<string | null>(null);
@@ -68,29 +70,29 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: Build
       <Card style={styles.section}>
         <SectionHeading title="Name and shaft" />
         <FieldGrid>
-          <FormField control={control} name="name" label="Build name" hint="e.g. “Heavy elk arrows”" autoCapitalize="sentences" />
-          <FormField control={control} name="shaftLabel" label="Shaft label" hint="Optional: what the shaft says on it, in your words." />
+          <FormField control={control} disabled={readOnly} name="name" label="Build name" hint="e.g. “Heavy elk arrows”" autoCapitalize="sentences" />
+          <FormField control={control} disabled={readOnly} name="shaftLabel" label="Shaft label" hint="Optional: what the shaft says on it, in your words." />
         </FieldGrid>
         <FieldGrid minWidth={120}>
-          <FormField control={control} name="spine" label="Spine" hint="Optional" numeric />
-          <FormField control={control} name="grainsPerInch" label="Grains per inch" hint="Bare shaft" unit="gpi" numeric />
-          <FormField control={control} name="cutLengthMm" label="Cut length" hint="From the nock throat" unit={unit} numeric />
-          <FormField control={control} name="diameterMm" label="Diameter" hint="Shaft outside" unit={unit} numeric />
+          <FormField control={control} disabled={readOnly} name="spine" label="Spine" hint="Optional" numeric />
+          <FormField control={control} disabled={readOnly} name="grainsPerInch" label="Grains per inch" hint="Bare shaft" unit="gpi" numeric />
+          <FormField control={control} disabled={readOnly} name="cutLengthMm" label="Cut length" hint="From the nock throat" unit={unit} numeric />
+          <FormField control={control} disabled={readOnly} name="diameterMm" label="Diameter" hint="Shaft outside" unit={unit} numeric />
         </FieldGrid>
       </Card>
 
       <Card style={styles.section}>
         <SectionHeading title="Components" description="Weights in grains. Leave a part you do not use empty." />
         <FieldGrid minWidth={120}>
-          <FormField control={control} name="pointGr" label="Point" hint="Or broadhead" unit="gr" numeric />
-          <FormField control={control} name="insertGr" label="Insert" hint="If any" unit="gr" numeric />
-          <FormField control={control} name="collarGr" label="Collar" hint="If any" unit="gr" numeric />
-          <FormField control={control} name="nockGr" label="Nock" hint="With its bushing" unit="gr" numeric />
+          <FormField control={control} disabled={readOnly} name="pointGr" label="Point" hint="Or broadhead" unit="gr" numeric />
+          <FormField control={control} disabled={readOnly} name="insertGr" label="Insert" hint="If any" unit="gr" numeric />
+          <FormField control={control} disabled={readOnly} name="collarGr" label="Collar" hint="If any" unit="gr" numeric />
+          <FormField control={control} disabled={readOnly} name="nockGr" label="Nock" hint="With its bushing" unit="gr" numeric />
         </FieldGrid>
         <FieldGrid minWidth={150}>
-          <FormField control={control} name="vaneCount" label="Vanes" hint="How many" numeric />
-          <FormField control={control} name="vaneWeightGr" label="Each vane" hint="One vane" unit="gr" numeric />
-          <FormField control={control} name="wrapGr" label="Wrap" hint="If any" unit="gr" numeric />
+          <FormField control={control} disabled={readOnly} name="vaneCount" label="Vanes" hint="How many" numeric />
+          <FormField control={control} disabled={readOnly} name="vaneWeightGr" label="Each vane" hint="One vane" unit="gr" numeric />
+          <FormField control={control} disabled={readOnly} name="wrapGr" label="Wrap" hint="If any" unit="gr" numeric />
         </FieldGrid>
       </Card>
 
@@ -99,15 +101,17 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: Build
         <FieldGrid minWidth={180}>
           <FormField
             control={control}
+            disabled={readOnly}
             name="balancePointMm"
             label="Balance point"
             hint="From the nock throat, with the point on. Gives FOC."
             unit={unit}
             numeric
           />
-          <FormField control={control} name="speedFps" label="Chronographed speed" hint="From this bow. Gives energy." unit="fps" numeric />
+          <FormField control={control} disabled={readOnly} name="speedFps" label="Chronographed speed" hint="From this bow. Gives energy." unit="fps" numeric />
           <FormField
             control={control}
+            disabled={readOnly}
             name="dragCoefficient"
             label="Drag coefficient"
             hint="Empty: the default, 2.0"
@@ -139,10 +143,12 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel }: Build
           {totals}
         </>
       )}
-      <View style={styles.actions}>
-        <Button label={build ? 'Save the build' : 'Add the build'} pendingLabel="Saving…" pending={save.isPending} onPress={submit} testID="build-save" />
-        <Button label="Cancel" variant="secondary" onPress={onCancel} disabled={save.isPending} />
-      </View>
+      {readOnly ? null : (
+        <View style={styles.actions}>
+          <Button label={build ? 'Save the build' : 'Add the build'} pendingLabel="Saving…" pending={save.isPending} onPress={submit} testID="build-save" />
+          <Button label="Cancel" variant="secondary" onPress={onCancel} disabled={save.isPending} />
+        </View>
+      )}
     </View>
   );
 }

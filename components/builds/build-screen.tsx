@@ -2,6 +2,8 @@ import { useRouter } from 'expo-router';
 import { useState } from 'react';
 
 import { useMe } from '@/components/auth/api';
+import { useBow } from '@/components/bows/api';
+import { useBowRole } from '@/components/bows/use-bow-role';
 import { useBuild, useDeleteBuild } from '@/components/builds/api';
 import { BuildForm } from '@/components/builds/build-form';
 import { Button } from '@/components/ui/button';
@@ -14,28 +16,34 @@ import { ScreenTitle } from '@/components/ui/screen-title';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { Text } from '@/components/ui/text';
 
-/** An arrow build: its components and live totals, editable; delete asks first. */
+/**
+ * An arrow build: its components and live totals, editable by the bow's owner
+ * (delete asks first); read-only for a technician the bow is shared with.
+ */
 export function BuildScreen({ buildId }: { buildId: number }) {
   const router = useRouter();
   const me = useMe();
   const build = useBuild(buildId);
+  const bow = useBow(build.data?.bowId);
+  const { isOwner } = useBowRole(bow.data);
   const remove = useDeleteBuild();
   const [asking, setAsking] = useState(false);
 
   if (!Number.isInteger(buildId) || buildId <= 0) return <NotFoundScreen />;
-  if (build.isPending || !me.data) {
+  if (build.isError || bow.isError) {
+    const failed = build.isError ? build : bow;
+    return (
+      <>
+        <ScreenTitle name="Arrow build" />
+        <ErrorView title="The build could not be loaded" error={failed.error} onRetry={() => failed.refetch()} retrying={failed.isFetching} />
+      </>
+    );
+  }
+  if (build.isPending || bow.isPending || !me.data) {
     return (
       <>
         <ScreenTitle name="Arrow build" />
         <LoadingView label="Loading the build…" />
-      </>
-    );
-  }
-  if (build.isError) {
-    return (
-      <>
-        <ScreenTitle name="Arrow build" />
-        <ErrorView title="The build could not be loaded" error={build.error} onRetry={() => build.refetch()} retrying={build.isFetching} />
       </>
     );
   }
@@ -48,11 +56,17 @@ export function BuildScreen({ buildId }: { buildId: number }) {
       <SectionHeading
         level={1}
         title={data.name}
-        description={used ? `Used by ${data.sessionCount} ${data.sessionCount === 1 ? 'sight-in' : 'sight-ins'}: a change here may move their marks.` : 'Arrow build'}
+        description={
+          !isOwner
+            ? `Arrow build of ${bow.data.ownerName || 'the archer'}: only they can change it.`
+            : used
+              ? `Used by ${data.sessionCount} ${data.sessionCount === 1 ? 'sight-in' : 'sight-ins'}: a change here may move their marks.`
+              : 'Arrow build'
+        }
         action={<Button label="Back to the bow" variant="quiet" href={`/bows/${data.bowId}`} />}
       />
-      <BuildForm key={data.updatedAt} bowId={data.bowId} build={data} lengthUnit={me.data.lengthUnit} onSaved={back} onCancel={back} />
-      {used ? (
+      <BuildForm key={data.updatedAt} bowId={data.bowId} build={data} lengthUnit={me.data.lengthUnit} onSaved={back} onCancel={back} readOnly={!isOwner} />
+      {!isOwner ? null : used ? (
         <Text variant="small" tone="soft">
           Sight-ins use this build, so it cannot be deleted while they exist: their marks were shot with this arrow.
         </Text>
@@ -68,7 +82,7 @@ export function BuildScreen({ buildId }: { buildId: number }) {
           onCancel={() => setAsking(false)}
         />
       ) : (
-        <Button label="Delete this build" variant="quiet" onPress={() => setAsking(true)} />
+        <Button label="Delete this build" variant="quiet" onPress={() => setAsking(true)} testID="build-delete" />
       )}
     </Screen>
   );

@@ -2,6 +2,8 @@ import { useRouter } from 'expo-router';
 
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
+import { OwnerOnlyNotice } from '@/components/bows/owner-only-notice';
+import { useBowRole } from '@/components/bows/use-bow-role';
 import { BuildForm } from '@/components/builds/build-form';
 import { ErrorView } from '@/components/ui/error-view';
 import { LoadingView } from '@/components/ui/loading-view';
@@ -15,6 +17,7 @@ export function NewBuildScreen({ bowId }: { bowId: number }) {
   const router = useRouter();
   const me = useMe();
   const bow = useBow(bowId);
+  const { isOwner } = useBowRole(bow.data);
   if (!Number.isInteger(bowId) || bowId <= 0) return <NotFoundScreen />;
   if (bow.isPending || !me.data) {
     return (
@@ -30,6 +33,14 @@ export function NewBuildScreen({ bowId }: { bowId: number }) {
         <ScreenTitle name="Add a build" />
         <ErrorView title="The bow could not be loaded" error={bow.error} onRetry={() => bow.refetch()} retrying={bow.isFetching} />
       </>
+    );
+  }
+  if (!isOwner) {
+    return (
+      <Screen>
+        <ScreenTitle name="Add a build" />
+        <OwnerOnlyNotice bow={bow.data} what="add arrow builds to this bow" />
+      </Screen>
     );
   }
   const back = () => router.replace(`/bows/${bowId}`);

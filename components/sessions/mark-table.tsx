@@ -23,15 +23,18 @@ export interface MarkTableProps {
   rowFits: Record<number, RowFit>;
   /** A table row the fit refused (e.g. a distance entered twice). */
   refusedRow?: number | null;
+  /** The first rows that are shown but cannot change or be removed (a technician's view of saved marks). Default 0. */
+  lockedRows?: number;
 }
 
 /**
  * The marks table: one card per sighted distance (distance, reading in mm,
  * arrows shot, note) with big inputs, add and remove. Beside each row, how far
- * it sits off the live fit. Blank rows are ignored on save.
+ * it sits off the live fit. Blank rows are ignored on save. The first
+ * `lockedRows` rows are read-only.
  * Example: `<MarkTable control={control} unit="yd" rowFits={{ 0: { fittedMm: 12.4, residualMm: 0, outlier: false } }} />`
  */
-export function MarkTable({ control, unit, rowFits, refusedRow = null }: MarkTableProps) {
+export function MarkTable({ control, unit, rowFits, refusedRow = null, lockedRows = 0 }: MarkTableProps) {
   const { fields, append, remove } = useFieldArray({ control, name: 'marks' });
   const { errors } = useFormState({ control, name: 'marks' });
   const listError = errors.marks?.root?.message ?? errors.marks?.message;
@@ -40,6 +43,7 @@ export function MarkTable({ control, unit, rowFits, refusedRow = null }: MarkTab
     <View style={styles.table} testID="mark-table">
       {fields.map((field, index) => {
         const fit = rowFits[index];
+        const locked = index < lockedRows;
         return (
           <View
             key={field.id}
@@ -61,26 +65,32 @@ export function MarkTable({ control, unit, rowFits, refusedRow = null }: MarkTab
                 </Text>
               ) : null}
               <View style={styles.spacer} />
-              <Button
-                label="Remove"
-                variant="quiet"
-                onPress={() => remove(index)}
-                accessibilityLabel={`Remove mark ${index + 1}`}
-                testID={`mark-remove-${index}`}
-              />
+              {locked ? (
+                <Text variant="small" tone="soft" testID={`mark-locked-${index}`}>
+                  Saved
+                </Text>
+              ) : (
+                <Button
+                  label="Remove"
+                  variant="quiet"
+                  onPress={() => remove(index)}
+                  accessibilityLabel={`Remove mark ${index + 1}`}
+                  testID={`mark-remove-${index}`}
+                />
+              )}
             </View>
             <View style={styles.inputs}>
               <View style={styles.numberCell}>
-                <FormField control={control} name={`marks.${index}.distance`} label="Distance" unit={unit} numeric testID={`mark-distance-${index}`} />
+                <FormField control={control} name={`marks.${index}.distance`} label="Distance" unit={unit} numeric disabled={locked} testID={`mark-distance-${index}`} />
               </View>
               <View style={styles.numberCell}>
-                <FormField control={control} name={`marks.${index}.scaleMm`} label="Reading" unit="mm" numeric testID={`mark-reading-${index}`} />
+                <FormField control={control} name={`marks.${index}.scaleMm`} label="Reading" unit="mm" numeric disabled={locked} testID={`mark-reading-${index}`} />
               </View>
               <View style={styles.smallCell}>
-                <FormField control={control} name={`marks.${index}.arrowsShot`} label="Arrows" numeric inputMode="numeric" testID={`mark-arrows-${index}`} />
+                <FormField control={control} name={`marks.${index}.arrowsShot`} label="Arrows" numeric inputMode="numeric" disabled={locked} testID={`mark-arrows-${index}`} />
               </View>
               <View style={styles.noteCell}>
-                <FormField control={control} name={`marks.${index}.note`} label="Note" placeholder="Optional" testID={`mark-note-${index}`} />
+                <FormField control={control} name={`marks.${index}.note`} label="Note" placeholder="Optional" disabled={locked} testID={`mark-note-${index}`} />
               </View>
             </View>
           </View>

@@ -1,5 +1,6 @@
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
+import { useBowRole } from '@/components/bows/use-bow-role';
 import { SessionEditor } from '@/components/sessions/session-editor';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -14,6 +15,7 @@ import { SectionHeading } from '@/components/ui/section-heading';
 export function NewSessionScreen({ bowId, buildId }: { bowId: number; buildId?: number }) {
   const me = useMe();
   const bow = useBow(bowId);
+  const { isOwner } = useBowRole(bow.data);
   if (!Number.isInteger(bowId) || bowId <= 0) return <NotFoundScreen />;
   if (bow.isPending || !me.data) {
     return (
@@ -39,11 +41,15 @@ export function NewSessionScreen({ bowId, buildId }: { bowId: number; buildId?: 
       {data.builds.length === 0 ? (
         <EmptyState
           title="Add an arrow build first"
-          message="The fit needs the arrow's weight and diameter."
-          action={<Button label="Add a build" href={`/bows/${data.id}/builds/new`} />}
+          message={
+            isOwner
+              ? 'The fit needs the arrow’s weight and diameter.'
+              : `The fit needs the arrow’s weight and diameter; only ${data.ownerName || 'the archer'} can add a build to this bow.`
+          }
+          action={isOwner ? <Button label="Add a build" href={`/bows/${data.id}/builds/new`} /> : undefined}
         />
       ) : (
-        <SessionEditor bow={data} initialBuildId={buildId} distanceUnit={me.data.distanceUnit} />
+        <SessionEditor bow={data} initialBuildId={buildId} distanceUnit={me.data.distanceUnit} addOnly={!isOwner} />
       )}
     </Screen>
   );

@@ -13,6 +13,7 @@ import { MarkTable, type RowFit } from '@/components/sessions/mark-table';
 import { PredictedMarks } from '@/components/sessions/predicted-marks';
 import { useDeleteSession, useSaveSession } from '@/components/sessions/api';
 import {
+  appendOnlyUpdate,
   keptRows,
   sessionFormDefaults,
   sessionFormResolver,
@@ -39,6 +40,12 @@ export interface SessionEditorProps {
   /** A new session's build (e.g. from ?build=); else the bow's first build. */
   initialBuildId?: number;
   distanceUnit: DistanceUnit;
+  /**
+   * The viewer may add but not change or delete (a technician on a shared bow,
+   * see useBowRole): a saved session's details and marks are shown read-only,
+   * new marks can be added below them, and there is no Delete. Default false.
+   */
+  addOnly?: boolean;
 }
 
 /** Window width (px) from which the marks and the live fit sit side by side. */
@@ -98,7 +105,7 @@ function FitSummary({ live }: { live: Extract<LiveFit, { state: 'fit' }> }) {
  * go to the table row they concern.
  * Example: `<SessionEditor bow={bow} distanceUnit="yd" />`
  */
-export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: SessionEditorProps) {
+export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addOnly = false }: SessionEditorProps) {
   const router = useRouter();
   const save = useSaveSession();
   const remove = useDeleteSession();
@@ -106,6 +113,9 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: Se
   const split = width >= splitFrom;
   const [general, setGeneral] = useState<string | null>(null);
   const [asking, setAsking] = useState(false);
+  // A technician keeps the archer's saved session as it is and only adds marks to it.
+  const keepSaved = addOnly && session !== undefined;
+  const lockedRows = keepSaved ? session.marks.length : 0;
   const firstBuild = initialBuildId && bow.builds.some((build) => build.id === initialBuildId) ? initialBuildId : bow.builds[0]?.id;
   const { control, handleSubmit, setError, formState, reset } = useForm<SessionFormText, unknown, SessionInput>({
     resolver: sessionFormResolver,
@@ -130,7 +140,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: Se
       setGeneral(null);
       const kept = keptRows(marks ?? []);
       save.mutate(
-        { id: session?.id, bowId: bow.id, input },
+        { id: session?.id, bowId: bow.id, input: keepSaved ? appendOnlyUpdate(session, input) : input },
         {
           onSuccess: (saved) => {
             if (session) reset(sessionFormDefaults(saved, undefined, distanceUnit));
@@ -158,7 +168,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: Se
     <Card style={styles.section}>
       <SectionHeading title="The session" />
       {buildOptions.length > 0 ? (
-        <FormChoice control={control} name="buildId" label="Arrow build" options={buildOptions} testID="session-build" />
+        <FormChoice control={control} name="buildId" label="Arrow build" options={buildOptions} disabled={keepSaved} testID="session-build" />
       ) : null}
       {chosen ? (
         <Text variant="small" tone="soft">
@@ -166,22 +176,35 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: Se
         </Text>
       ) : null}
       <FieldGrid minWidth={170}>
-        <FormField control={control} name="date" label="Date" hint="YYYY-MM-DD" testID="session-date" />
-        <FormField control={control} name="placeLabel" label="Place" hint="Optional, e.g. “home range”" />
+        <FormField control={control} name="date" label="Date" hint="YYYY-MM-DD" disabled={keepSaved} testID="session-date" />
+        <FormField control={control} name="placeLabel" label="Place" hint="Optional, e.g. “home range”" disabled={keepSaved} />
       </FieldGrid>
       <FieldGrid minWidth={140}>
-        <FormField control={control} name="altitudeM" label="Altitude" hint="Optional" unit="m" numeric />
-        <FormField control={control} name="temperatureC" label="Temperature" hint="Optional" unit="°C" numeric />
+        <FormField control={control} name="altitudeM" label="Altitude" hint="Optional" unit="m" numeric disabled={keepSaved} />
+        <FormField control={control} name="temperatureC" label="Temperature" hint="Optional" unit="°C" numeric disabled={keepSaved} />
       </FieldGrid>
-      <FormChoice control={control} name="unit" label="Distances in" options={unitOptions} testID="session-unit" />
+      <FormChoice control={control} name="unit" label="Distances in" options={unitOptions} disabled={keepSaved} testID="session-unit" />
     </Card>
   );
 
   const table = (
     <Card style={styles.section}>
       <SectionHeading title="Marks" description="The scale reading where your group landed centred, for each distance." />
-      <MarkTable control={control} unit={unit} rowFits={rowFits} refusedRow={refusedRowOf(live)} />
-      <FormField control={control} name="notes" label="Session notes" hint="Optional: wind, light, anything odd." multiline numberOfLines={3} />
+      {keepSaved ? (
+        <Text variant="small" tone="soft" testID="marks-add-only">
+          {`The saved marks and the session’s details are ${bow.ownerName || 'the archer'}’s: you can add marks below them.`}
+        </Text>
+      ) : null}
+      <MarkTable control={control} unit={unit} rowFits={rowFits} refusedRow={refusedRowOf(live)} lockedRows={lockedRows} />
+      <FormField
+        control={control}
+        name="notes"
+        label="Session notes"
+        hint="Optional: wind, light, anything odd."
+        multiline
+        numberOfLines={3}
+        disabled={keepSaved}
+      />
     </Card>
   );
 
@@ -265,7 +288,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: Se
           {actions}
         </>
       )}
-      {session ? (
+      {session && !addOnly ? (
         asking ? (
           <ConfirmBar
             title="Delete this sight-in?"
@@ -278,7 +301,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit }: Se
             onCancel={() => setAsking(false)}
           />
         ) : (
-          <Button label="Delete this sight-in" variant="quiet" onPress={() => setAsking(true)} />
+          <Button label="Delete this sight-in" variant="quiet" onPress={() => setAsking(true)} testID="session-delete" />
         )
       ) : null}
     </View>

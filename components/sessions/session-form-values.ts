@@ -3,7 +3,7 @@ import { set, type FieldErrors, type Resolver } from 'react-hook-form';
 import { numberToText, optionalTextToNumber, textToNumber } from '@/components/bows/form-numbers';
 import { distanceToMetres, metresToDistance } from '@/math/units/convert';
 import type { DistanceUnit } from '@/shared/auth';
-import { sessionInputSchema, type Session, type SessionInput } from '@/shared/session';
+import { sessionInputSchema, type Session, type SessionInput, type SessionUpdate } from '@/shared/session';
 
 /** One row of the marks table, as typed. */
 export interface MarkRowText {
@@ -151,4 +151,18 @@ export function sessionFormDefaults(session: Session | undefined, buildId: numbe
       note: mark.note,
     })),
   };
+}
+
+/**
+ * What a technician saves on a shared bow's session: only the marks, the saved
+ * ones exactly as stored (in entry order) and then the table's new rows (the
+ * server refuses any other change to the archer's session). `input` is the
+ * checked form, whose first marks are the saved ones as shown.
+ * Example: appendOnlyUpdate(session with 20 and 40 yd, input with 20, 40 and 60 yd).marks → the stored 20 and 40 yd marks, then 60 yd
+ */
+export function appendOnlyUpdate(session: Session, input: SessionInput): SessionUpdate {
+  const stored = [...session.marks]
+    .sort((a, b) => a.position - b.position)
+    .map(({ distance, unit, scaleMm, arrowsShot, note }) => ({ distance, unit, scaleMm, arrowsShot, note }));
+  return { marks: [...stored, ...input.marks.slice(stored.length)] };
 }

@@ -1,5 +1,6 @@
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
+import { useBowRole } from '@/components/bows/use-bow-role';
 import { formatDay } from '@/components/bows/readiness-words';
 import { useSession } from '@/components/sessions/api';
 import { SessionEditor } from '@/components/sessions/session-editor';
@@ -11,11 +12,12 @@ import { Screen } from '@/components/ui/screen';
 import { ScreenTitle } from '@/components/ui/screen-title';
 import { SectionHeading } from '@/components/ui/section-heading';
 
-/** A saved sight-in: its marks (editable), the live fit, and the way to its tape. */
+/** A saved sight-in: its marks (editable by the bow's owner; a technician adds marks), the live fit, and the way to its tape. */
 export function SessionScreen({ sessionId }: { sessionId: number }) {
   const me = useMe();
   const session = useSession(sessionId);
   const bow = useBow(session.data?.bowId);
+  const { isOwner } = useBowRole(bow.data);
   if (!Number.isInteger(sessionId) || sessionId <= 0) return <NotFoundScreen />;
   if (session.isError || bow.isError) {
     const failed = session.isError ? session : bow;
@@ -44,7 +46,7 @@ export function SessionScreen({ sessionId }: { sessionId: number }) {
         description={[bow.data.nickname, data.placeLabel].filter(Boolean).join(' · ')}
         action={<Button label="Import marks (CSV)" variant="secondary" href={`/sessions/${data.id}/import`} testID="import-marks" />}
       />
-      <SessionEditor key={data.id} bow={bow.data} session={data} distanceUnit={me.data.distanceUnit} />
+      <SessionEditor key={data.id} bow={bow.data} session={data} distanceUnit={me.data.distanceUnit} addOnly={!isOwner} />
     </Screen>
   );
 }

@@ -43,6 +43,11 @@ export interface TapeEditorProps {
   tape?: Tape;
   lengthUnit: LengthUnit;
   distanceUnit: DistanceUnit;
+  /**
+   * The viewer may add but not change saved layouts (a technician on a shared
+   * bow, see useBowRole): saving always stores a new layout. Default false.
+   */
+  addOnly?: boolean;
 }
 
 const stepOptions = [
@@ -86,7 +91,7 @@ function previewOf(text: TapeFormText, lengthUnit: LengthUnit, model: SightModel
  * download the SVG or the PDF. Sights with fixed pins also get the pin gaps.
  * Example: `<TapeEditor bow={bow} session={session} lengthUnit="mm" distanceUnit="yd" />`
  */
-export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit }: TapeEditorProps) {
+export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit, addOnly = false }: TapeEditorProps) {
   const wide = useWide();
   const save = useSaveTape();
   const [general, setGeneral] = useState<string | null>(null);
@@ -113,7 +118,7 @@ export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit }: Tap
     (input) => {
       setGeneral(null);
       save.mutate(
-        { id: savedId, sessionId: session.id, input },
+        { id: addOnly ? undefined : savedId, sessionId: session.id, input },
         {
           onSuccess: (saved) => {
             setSavedId(saved.id);
@@ -163,7 +168,7 @@ export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit }: Tap
   const actions = (
     <View style={styles.actions}>
       <Button
-        label={savedId ? 'Save the layout' : 'Save this layout'}
+        label={savedId ? (addOnly ? 'Save as a new layout' : 'Save the layout') : 'Save this layout'}
         pendingLabel="Saving…"
         pending={save.isPending}
         disabled={!preview.ok || (savedId !== undefined && !formState.isDirty)}

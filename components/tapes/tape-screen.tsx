@@ -1,5 +1,6 @@
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
+import { useBowRole } from '@/components/bows/use-bow-role';
 import { formatDay } from '@/components/bows/readiness-words';
 import { useSession } from '@/components/sessions/api';
 import { TapeEditor } from '@/components/tapes/tape-editor';
@@ -16,6 +17,7 @@ export function TapeScreen({ sessionId, tapeId }: { sessionId: number; tapeId?: 
   const me = useMe();
   const session = useSession(sessionId);
   const bow = useBow(session.data?.bowId);
+  const { isOwner } = useBowRole(bow.data);
   if (!Number.isInteger(sessionId) || sessionId <= 0) return <NotFoundScreen />;
   if (session.isError || bow.isError) {
     const failed = session.isError ? session : bow;
@@ -51,6 +53,7 @@ export function TapeScreen({ sessionId, tapeId }: { sessionId: number; tapeId?: 
         tape={tape}
         lengthUnit={me.data.lengthUnit}
         distanceUnit={me.data.distanceUnit}
+        addOnly={!isOwner}
       />
     </Screen>
   );

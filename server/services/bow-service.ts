@@ -5,7 +5,7 @@
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
-import { ArrowBuild, Bow, SightSession, Tape, type User } from '@/server/models';
+import { ArrowBuild, Bow, SightSession, Tape, User } from '@/server/models';
 import {
   bowInputSchema,
   type Bow as BowOut,
@@ -115,10 +115,11 @@ export async function listBows(user: User): Promise<BowSummary[]> {
   return bows.map((bow) => ({ ...bowOut(bow), readiness: readiness.get(bow.id)! }));
 }
 
-/** GET /api/bows/:id: the bow, its builds, its sessions (newest first, with fit summaries) and its tapes. */
+/** GET /api/bows/:id: the bow, its owner's name, its builds, its sessions (newest first, with fit summaries) and its tapes. */
 export async function getBow(user: User, id: number): Promise<BowDetail> {
   const bow = await findBow(user, id, 'read');
-  const [readiness, builds, sessions, tapes] = await Promise.all([
+  const [owner, readiness, builds, sessions, tapes] = await Promise.all([
+    bow.userId === user.id ? user : User.findByPk(bow.userId, { attributes: ['id', 'name'] }),
     readinessOf([bow]),
     ArrowBuild.findAll({ where: { bowId: bow.id }, order: [['id', 'ASC']] }),
     SightSession.findAll({ where: { bowId: bow.id }, order: [['date', 'DESC'], ['id', 'DESC']] }),
@@ -130,6 +131,7 @@ export async function getBow(user: User, id: number): Promise<BowDetail> {
   const counts = await sessionCounts(builds.map((build) => build.id));
   return {
     ...bowOut(bow),
+    ownerName: owner?.name ?? '',
     readiness: readiness.get(bow.id)!,
     builds: builds.map((build) => buildOut(build, counts.get(build.id) ?? 0)),
     sessions: await sessionListItems(sessions),

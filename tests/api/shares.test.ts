@@ -90,6 +90,8 @@ describe('the invitation', () => {
     ]);
     const bowRes = await tech.agent.get(`/api/bows/${made.bow.id}`);
     expect(bowRes.status).toBe(200);
+    // The technician is told whose bow it is.
+    expect(bowRes.body.bow).toMatchObject({ userId: archer.user.id, ownerName: 'Ilse Brannock' });
     expect(bowRes.body.bow.sessions).toHaveLength(1);
     expect((await tech.agent.get(`/api/sessions/${made.session.id}`)).body.session.marks).toHaveLength(3);
     expect((await tech.agent.get(`/api/builds/${made.build.id}`)).status).toBe(200);

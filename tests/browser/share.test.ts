@@ -113,6 +113,13 @@ for (const size of [PHONE, DESKTOP]) {
     await screenshot(tech.page, 'share-clients');
     await tech.page.getByTestId(`client-bow-${bowId}`).click();
     await tech.page.getByTestId('shared-with-you').waitFor();
+    // Whose bow it is, and none of the archer-only actions (the server would refuse them).
+    await tech.page.getByTestId('shared-with-you').getByText(`Shared with you by ${archerName}.`).waitFor();
+    await tech.page.getByTestId('shared-with-you').getByText(`only ${archerName} can change or delete their records`, { exact: false }).waitFor();
+    await tech.page.getByTestId('bow-setup').waitFor();
+    expect(await tech.page.getByTestId('bow-edit').count()).toBe(0);
+    expect(await tech.page.getByTestId('add-build').count()).toBe(0);
+    expect(await tech.page.getByText('Delete this bow').count()).toBe(0);
     await screenshot(tech.page, 'share-tech-bow');
     await tech.page.getByTestId('open-level').click();
     await tech.page.getByTestId('start-check').click();

@@ -15,6 +15,7 @@ const stamp = '2026-11-20T09:00:00.000Z';
 const bow: BowDetail = {
   id: 3,
   userId: 1,
+  ownerName: 'Ilse Marrow',
   nickname: 'Tarn ridge slider',
   hand: 'right',
   drawWeightLb: 62,
