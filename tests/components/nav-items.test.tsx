@@ -1,10 +1,11 @@
 import { navItems, navItemsFor } from '@/components/shell/nav-items';
 
 describe('navigation items', () => {
-  it('gives every role the Bench and Account, in that order', () => {
-    for (const role of ['archer', 'tech', 'admin'] as const) {
-      expect(navItemsFor(role).map((item) => item.label).slice(0, 2)).toEqual(['Bench', 'Account']);
-    }
+  it('gives every role the Bench first and Account last, and each role its own work between', () => {
+    const labels = (role: 'archer' | 'tech' | 'admin') => navItemsFor(role).map((item) => item.label);
+    expect(labels('archer')).toEqual(['Bench', 'Account']);
+    expect(labels('tech')).toEqual(['Bench', 'Clients', 'Account']);
+    expect(labels('admin')).toEqual(['Bench', 'Admin', 'Account']);
   });
 
   it('marks the Bench active on the home page and on bow pages, Account only on its own', () => {
