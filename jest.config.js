@@ -33,6 +33,7 @@ module.exports = {
       displayName: 'browser',
       testEnvironment: 'node',
       testMatch: ['<rootDir>/tests/browser/**/*.test.ts'],
+      setupFilesAfterEnv: ['<rootDir>/tests/helpers/browser-retry.ts'],
       transform: { '^.+\\.(t|j)sx?$': swc },
       moduleNameMapper: alias,
     },
