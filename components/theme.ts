@@ -132,6 +132,8 @@ export const radii = {
 export const layout = {
   /** Smallest tap target (WCAG 2.5.5 asks 44; we use 48 for gloved or busy hands). */
   minTap: 48,
+  /** Tap target where hands are busy with the bow (level checks, results): 64. */
+  bigTap: 64,
   /** Content column cap on wide screens. */
   contentMax: 1040,
   /** Narrow column for single forms (sign-in, one-field pages). */

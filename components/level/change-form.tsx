@@ -4,12 +4,12 @@ import { Controller, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { useLogChange } from '@/components/level/api';
-import { BigChoice } from '@/components/level/big-choice';
 import { todayIso } from '@/components/level/level-words';
 import { bigTap } from '@/components/level/result-buttons';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { FormField } from '@/components/ui/form-field';
+import { SegmentedControl } from '@/components/ui/segmented-control';
 import { space } from '@/components/theme';
 import {
   bowChangeFormSchema,
@@ -78,7 +78,7 @@ export function ChangeForm({ bowId, onLogged, onCancel }: ChangeFormProps) {
         control={control}
         name="kind"
         render={({ field, fieldState }) => (
-          <BigChoice label="What changed" options={kindOptions} value={field.value} onChange={field.onChange} error={fieldState.error?.message} testID="change-kind" />
+          <SegmentedControl size="large" label="What changed" options={kindOptions} value={field.value} onChange={field.onChange} error={fieldState.error?.message} testID="change-kind" />
         )}
       />
       <View style={styles.row}>

@@ -6,7 +6,6 @@ import { isApiError } from '@/components/api/client';
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { useChanges, useChecks, useDeleteChange, useLevel, useStartCheck } from '@/components/level/api';
-import { BigChoice } from '@/components/level/big-choice';
 import { ChangeForm } from '@/components/level/change-form';
 import { allStepsFrom } from '@/components/level/check-screen';
 import { LevelCaution } from '@/components/level/level-caution';
@@ -25,6 +24,7 @@ import { ReadinessBadge } from '@/components/ui/readiness-badge';
 import { Screen } from '@/components/ui/screen';
 import { ScreenTitle } from '@/components/ui/screen-title';
 import { SectionHeading } from '@/components/ui/section-heading';
+import { SegmentedControl } from '@/components/ui/segmented-control';
 import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { colors, space } from '@/components/theme';
@@ -77,7 +77,7 @@ function StartOrResume({ bowId, level, myOpenCheck }: { bowId: number; level: Le
         {level.state === 'none' ? 'Check the level' : 'Check again'}
       </Text>
       <Text tone="soft">Five steps: the set-up, the three axes, then a confirmation at the range. You can leave and resume.</Text>
-      <BigChoice label="Where" options={placeOptions} value={place} onChange={setPlace} />
+      <SegmentedControl size="large" label="Where" options={placeOptions} value={place} onChange={setPlace} />
       {start.error ? (
         <Banner tone="error" title="Could not start">
           {start.error.message}

@@ -3,7 +3,6 @@ import { Controller, useForm } from 'react-hook-form';
 import { Image, StyleSheet, View } from 'react-native';
 
 import { textFormResolver } from '@/components/bows/text-form-resolver';
-import { BigChoice } from '@/components/level/big-choice';
 import { useRemoveStepPhoto, useSaveCheck, useUploadStepPhoto } from '@/components/level/api';
 import { LevelDiagram } from '@/components/level/level-diagram';
 import { resultLabels } from '@/components/level/level-words';
@@ -15,6 +14,7 @@ import { stepTextFrom, stepTextSchema, type StepText } from '@/components/level/
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { FormField } from '@/components/ui/form-field';
+import { SegmentedControl } from '@/components/ui/segmented-control';
 import { Text } from '@/components/ui/text';
 import { borders, colors, radii, space } from '@/components/theme';
 import {
@@ -131,7 +131,7 @@ export function StepPanel({ check, stepKey, editable, submitLabel, completes = f
             control={control}
             name="readingUnit"
             render={({ field, fieldState }) => (
-              <BigChoice label="Unit" options={unitOptions} value={field.value} onChange={field.onChange} error={fieldState.error?.message} />
+              <SegmentedControl size="large" label="Unit" options={unitOptions} value={field.value} onChange={field.onChange} error={fieldState.error?.message} />
             )}
           />
         </View>

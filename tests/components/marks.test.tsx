@@ -1,8 +1,8 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 
 import { SessionEditor } from '@/components/sessions/session-editor';
-import type { BowDetail } from '@/shared/bow';
 
+import { inventedBow } from './fixtures';
 import { jsonResponse, mockFetch, renderWithClient } from './helpers';
 
 jest.mock('expo-router', () => ({
@@ -10,59 +10,8 @@ jest.mock('expo-router', () => ({
   useRouter: () => ({ replace: jest.fn(), push: jest.fn(), back: jest.fn() }),
 }));
 
-const stamp = '2026-11-20T09:00:00.000Z';
 /** An invented bow: R 820 mm, h 110 mm, one 414 gr build on a 6.5 mm shaft. */
-const bow: BowDetail = {
-  id: 3,
-  userId: 1,
-  ownerName: 'Ilse Marrow',
-  nickname: 'Tarn ridge slider',
-  hand: 'right',
-  drawWeightLb: 62,
-  drawLengthMm: 711,
-  letOffPct: null,
-  ratedSpeedFps: null,
-  sightDescription: '',
-  sightKind: 'single-pin-slider',
-  sightRadiusMm: 820,
-  peepHeightMm: 110,
-  scaleDirection: 'down',
-  tapeWidthMm: 8,
-  pinDistances: [],
-  pinDistanceUnit: 'yd',
-  notes: '',
-  createdAt: stamp,
-  updatedAt: stamp,
-  readiness: { latestSession: null, buildCount: 1, sessionCount: 0, hasTape: false, level: null },
-  builds: [
-    {
-      id: 4,
-      bowId: 3,
-      name: 'Ash heavy 414',
-      shaftLabel: '',
-      spine: null,
-      grainsPerInch: 9.5,
-      cutLengthMm: 723.9,
-      diameterMm: 6.5,
-      pointGr: 100,
-      insertGr: 16,
-      collarGr: 0,
-      nockGr: 9,
-      vaneCount: 3,
-      vaneWeightGr: 6,
-      wrapGr: 0,
-      balancePointMm: null,
-      speedFps: null,
-      dragCoefficient: null,
-      sessionCount: 0,
-      derived: { totalGr: 413.75, focPct: null, kineticEnergyFtLb: null, kineticEnergyJ: null, momentumSlugFtPerS: null, momentumKgMPerS: null },
-      createdAt: stamp,
-      updatedAt: stamp,
-    },
-  ],
-  sessions: [],
-  tapes: [],
-};
+const bow = inventedBow();
 
 const type = (testID: string, value: string) => fireEvent.change(screen.getByTestId(testID), { target: { value } });
 

@@ -16,6 +16,7 @@ import type { User } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import { storedFitSchema, type Session } from '@/shared/session';
 
+import { inventedBow, inventedBuild } from './fixtures';
 import { jsonResponse, mockFetch, renderWithClient } from './helpers';
 
 jest.mock('expo-router', () => ({
@@ -31,30 +32,7 @@ const stamp = '2026-11-20T09:00:00.000Z';
 const archer: User = { id: 1, name: 'Ilse Marrow', email: 'ilse@example.test', role: 'archer', distanceUnit: 'yd', lengthUnit: 'mm' };
 const tech: User = { id: 2, name: 'Bram Oakes', email: 'bram@example.test', role: 'tech', distanceUnit: 'yd', lengthUnit: 'mm' };
 
-const build: BowDetail['builds'][number] = {
-  id: 4,
-  bowId: 3,
-  name: 'Ash heavy 414',
-  shaftLabel: '',
-  spine: null,
-  grainsPerInch: 9.5,
-  cutLengthMm: 723.9,
-  diameterMm: 6.5,
-  pointGr: 100,
-  insertGr: 16,
-  collarGr: 0,
-  nockGr: 9,
-  vaneCount: 3,
-  vaneWeightGr: 6,
-  wrapGr: 0,
-  balancePointMm: null,
-  speedFps: null,
-  dragCoefficient: null,
-  sessionCount: 1,
-  derived: { totalGr: 413.75, focPct: null, kineticEnergyFtLb: null, kineticEnergyJ: null, momentumSlugFtPerS: null, momentumKgMPerS: null },
-  createdAt: stamp,
-  updatedAt: stamp,
-};
+const build = inventedBuild({ sessionCount: 1 });
 
 /** Two saved marks, as the archer entered them (a reading the table shows rounded to 0.01 mm). */
 const savedMarks = [
@@ -110,27 +88,9 @@ const tape = {
 };
 
 /** Ilse's bow, with one build, one sight-in and one saved tape. */
-const bow: BowDetail = {
-  id: 3,
+const bow: BowDetail = inventedBow({
   userId: archer.id,
   ownerName: archer.name,
-  nickname: 'Tarn ridge slider',
-  hand: 'right',
-  drawWeightLb: 62,
-  drawLengthMm: 711,
-  letOffPct: null,
-  ratedSpeedFps: null,
-  sightDescription: '',
-  sightKind: 'single-pin-slider',
-  sightRadiusMm: 820,
-  peepHeightMm: 110,
-  scaleDirection: 'down',
-  tapeWidthMm: 8,
-  pinDistances: [],
-  pinDistanceUnit: 'yd',
-  notes: '',
-  createdAt: stamp,
-  updatedAt: stamp,
   readiness: { latestSession: null, buildCount: 1, sessionCount: 1, hasTape: true, level: null },
   builds: [build],
   sessions: [
@@ -149,7 +109,7 @@ const bow: BowDetail = {
     },
   ],
   tapes: [tape],
-};
+});
 
 /** The API as the signed-in `user` sees it; writes answer as the server would, and are recorded. */
 function serveAs(user: User) {
