@@ -155,7 +155,7 @@ function subtitle(bow: BowDetail, unit: LengthUnit): string {
   return [
     bow.hand === 'right' ? 'Right hand' : 'Left hand',
     `${bow.drawWeightLb} lb`,
-    `${formatLength(bow.drawLengthMm, unit)} draw`,
+    `${formatLength(bow.drawLengthMm, 'in')} draw`, // draw length is stated in inches in the trade
     sightKindNames[bow.sightKind],
   ].join(' · ');
 }

@@ -1,4 +1,4 @@
-import { formatLength } from '@/components/bows/form-numbers';
+import { formatDrawLength, formatLength } from '@/components/bows/form-numbers';
 import type { KeyValueItem } from '@/components/bows/key-value-list';
 import type { LengthUnit } from '@/shared/auth';
 import type { Bow, SightKind } from '@/shared/bow';
@@ -18,7 +18,7 @@ export function bowSetupItems(bow: Bow, unit: LengthUnit): KeyValueItem[] {
   const items: KeyValueItem[] = [
     { label: 'Hand', value: bow.hand === 'right' ? 'Right' : 'Left' },
     { label: 'Draw weight', value: `${bow.drawWeightLb} lb`, numeric: true },
-    { label: 'Draw length', value: formatLength(bow.drawLengthMm, unit), numeric: true },
+    { label: 'Draw length', value: formatDrawLength(bow.drawLengthMm, unit), numeric: true },
   ];
   if (bow.letOffPct !== null) items.push({ label: 'Let-off', value: `${bow.letOffPct} %`, numeric: true });
   if (bow.ratedSpeedFps !== null) items.push({ label: 'Rated speed', value: `${bow.ratedSpeedFps} fps`, numeric: true });

@@ -74,6 +74,18 @@ export function formatLength(mm: number | null | undefined, unit: LengthUnit, mm
 }
 
 /**
+ * A draw length as the trade states it: in inches (to the quarter inch people
+ * set bows to, shown to two places), with millimetres beside it for an archer
+ * who works in mm.
+ * Example: formatDrawLength(723.9, 'mm') → '28.50 in (724 mm)'
+ */
+export function formatDrawLength(mm: number | null | undefined, unit: LengthUnit): string {
+  if (mm === null || mm === undefined || !Number.isFinite(mm)) return '—';
+  const inches = formatLength(mm, 'in');
+  return unit === 'in' ? inches : `${inches} (${formatLength(mm, 'mm')})`;
+}
+
+/**
  * Adds the inch equivalent to a schema message that names millimetres, for an
  * archer who types inches: "… at least 400 mm" → "… at least 400 mm (15.75 in)".
  * Example: withInches('Sight radius must be at least 400 mm') → 'Sight radius must be at least 400 mm (15.75 in)'
