@@ -2,16 +2,10 @@
  * As a new archer would: sign up, land on the Bench, sign out, sign back in.
  * Screenshots at phone (390×844) and desktop (1280×800) size.
  */
-import { DESKTOP, PHONE, newPage, pageErrors, screenshot, startStack, type Stack } from '../helpers/browser';
+import { DESKTOP, PHONE, newPage, pageErrors, screenshot, stackForFile } from '../helpers/browser';
 import { uniqueEmail } from '../helpers/api';
 
-let stack: Stack;
-beforeAll(async () => {
-  stack = await startStack();
-}, 60_000);
-afterAll(async () => {
-  await stack?.close();
-});
+const stack = stackForFile();
 
 for (const size of [PHONE, DESKTOP]) {
   it(`signs up, sees the Bench, signs out and back in (${size.width}×${size.height})`, async () => {

@@ -5,42 +5,15 @@
  * predict a heavier build, and open a sight-in's field card for 2,700 m.
  * Screenshots at 390×844 and 1280×800.
  */
-import path from 'node:path';
 import type { BrowserContext, Page } from 'playwright-core';
 import { User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
-import { DESKTOP, PHONE, SCREENSHOT_DIR, newPage, pageErrors, screenshot as viewportShot, signUpInContext, startStack, type Stack } from '../helpers/browser';
+import { DESKTOP, PHONE, fullScreenshot, newPage, pageErrors, screenshot as viewportShot, signUpInContext, stackForFile } from '../helpers/browser';
 
-let stack: Stack;
-beforeAll(async () => {
-  stack = await startStack();
-}, 60_000);
-afterAll(async () => {
-  await stack?.close();
-});
+const stack = stackForFile();
 
-/**
- * The page at its viewport size, and when the app's scroll container holds
- * more, its whole length too (<name>-full-<width>w.png).
- */
-async function screenshot(page: Page, name: string) {
-  await viewportShot(page, name);
-  const size = page.viewportSize()!;
-  const extra = await page.evaluate(() => {
-    let most = 0;
-    for (const el of Array.from(document.querySelectorAll('div'))) {
-      const overflow = getComputedStyle(el).overflowY;
-      if ((overflow === 'auto' || overflow === 'scroll') && el.scrollHeight > el.clientHeight + 1) most = Math.max(most, el.scrollHeight - el.clientHeight);
-    }
-    return most;
-  });
-  if (extra <= 0) return;
-  await page.setViewportSize({ width: size.width, height: Math.min(size.height + extra, 9000) });
-  await page.waitForTimeout(300);
-  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}-full-${size.width}w.png`) });
-  await page.setViewportSize(size);
-  await page.waitForTimeout(150);
-}
+/** The page at its viewport size and, when the app's scroll container holds more, its whole length (fullScreenshot). */
+const screenshot = (page: Page, name: string) => fullScreenshot(page, name, { maxHeightPx: 9000, settleMs: 300, restoreMs: 150 });
 
 /** A fresh archer with the demo scenario's bows, builds and sight-ins (invented), signed in in `context`. */
 async function archerWithDemoBows(context: BrowserContext): Promise<{ bowId: number; basinSessionId: number }> {

@@ -4,22 +4,15 @@
  * finish; log a new string; see the Bench show the bow as due. Then the wide
  * layouts and the before-a-trip sheet. Screenshots at 390×844 and 1280×800.
  */
-import path from 'node:path';
 import zlib from 'node:zlib';
 import type { BrowserContext, Page } from 'playwright-core';
 import { CSRF } from '../helpers/api';
 import { User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
 import { seedLevel } from '@/server/seed/level';
-import { DESKTOP, PHONE, SCREENSHOT_DIR, newPage, pageErrors, screenshot as viewportShot, signUpInContext, startStack, type Stack } from '../helpers/browser';
+import { DESKTOP, PHONE, fullScreenshot, newPage, pageErrors, screenshot as viewportShot, signUpInContext, stackForFile } from '../helpers/browser';
 
-let stack: Stack;
-beforeAll(async () => {
-  stack = await startStack();
-}, 60_000);
-afterAll(async () => {
-  await stack?.close();
-});
+const stack = stackForFile();
 
 /** A small real PNG (PNG spec, ISO/IEC 15948): a green bubble-coloured block. */
 function png(width = 40, height = 30): Buffer {
@@ -59,29 +52,8 @@ async function makeBow(context: BrowserContext, nickname: string): Promise<numbe
   return (await res.json()).bow.id;
 }
 
-/**
- * The page at its viewport size (name-390x844.png), and, when the app's scroll
- * container holds more, the whole length too (name-full-390w.png): the window
- * is made as tall as the content for one shot, then restored.
- */
-async function screenshot(page: Page, name: string) {
-  await viewportShot(page, name);
-  const size = page.viewportSize()!;
-  const extra = await page.evaluate(() => {
-    let most = 0;
-    for (const el of Array.from(document.querySelectorAll('div'))) {
-      const overflow = getComputedStyle(el).overflowY;
-      if ((overflow === 'auto' || overflow === 'scroll') && el.scrollHeight > el.clientHeight + 1) most = Math.max(most, el.scrollHeight - el.clientHeight);
-    }
-    return most;
-  });
-  if (extra <= 0) return;
-  await page.setViewportSize({ width: size.width, height: size.height + extra });
-  await page.waitForTimeout(200);
-  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}-full-${size.width}w.png`) });
-  await page.setViewportSize(size);
-  await page.waitForTimeout(100);
-}
+/** The page at its viewport size and, when the app's scroll container holds more, its whole length (fullScreenshot). */
+const screenshot = (page: Page, name: string) => fullScreenshot(page, name, { settleMs: 200, restoreMs: 100 });
 
 /** Runs `body`; on a failure, saves what the page showed (debug-<name>) before rethrowing. */
 async function recording(page: Page, name: string, body: () => Promise<void>) {

@@ -7,51 +7,15 @@
  * print sheet. Screenshots of every screen at 390×844 and 1280×800.
  */
 import fs from 'node:fs';
-import path from 'node:path';
 import { DOMParser } from '@xmldom/xmldom';
 import type { Page } from 'playwright-core';
 import { uniqueEmail } from '../helpers/api';
-import { DESKTOP, PHONE, SCREENSHOT_DIR, newPage, pageErrors, screenshot as viewportShot, startStack, type Stack } from '../helpers/browser';
+import { DESKTOP, PHONE, fullScreenshot, newPage, pageErrors, stackForFile } from '../helpers/browser';
 
-let stack: Stack;
-beforeAll(async () => {
-  stack = await startStack();
-}, 60_000);
-afterAll(async () => {
-  await stack?.close();
-});
+const stack = stackForFile();
 
-/**
- * The page at its viewport size, and when the app's scroll container holds
- * more, its whole length too (<name>-full-<width>w.png): the window is made
- * as tall as the content for one shot, then restored.
- */
-async function screenshot(page: Page, name: string) {
-  await viewportShot(page, name);
-  const size = page.viewportSize()!;
-  const extra = await page.evaluate(() => {
-    let most = 0;
-    for (const el of Array.from(document.querySelectorAll('div'))) {
-      const overflow = getComputedStyle(el).overflowY;
-      if ((overflow === 'auto' || overflow === 'scroll') && el.scrollHeight > el.clientHeight + 1) most = Math.max(most, el.scrollHeight - el.clientHeight);
-    }
-    return most;
-  });
-  if (extra <= 0) return;
-  const height = Math.min(size.height + extra, 12000);
-  await page.setViewportSize({ width: size.width, height });
-  await page.waitForTimeout(250);
-  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}-full-${size.width}w.png`) });
-  // Long pages also in parts of at most 1400 px, readable at full resolution.
-  for (let top = 0, part = 1; top < height && height > 1600; top += 1400, part += 1) {
-    await page.screenshot({
-      path: path.join(SCREENSHOT_DIR, `${name}-full-${size.width}w-part${part}.png`),
-      clip: { x: 0, y: top, width: size.width, height: Math.min(1400, height - top) },
-    });
-  }
-  await page.setViewportSize(size);
-  await page.waitForTimeout(150);
-}
+/** The page at its viewport size and, when the app's scroll container holds more, its whole length (fullScreenshot). */
+const screenshot = (page: Page, name: string) => fullScreenshot(page, name, { maxHeightPx: 12000, settleMs: 250, restoreMs: 150, parts: { heightPx: 1400, whenTallerThanPx: 1600 } });
 
 /** Parses "413.7" out of a figure's text. */
 const numberIn = (text: string | null) => Number((text ?? '').replace(/[^\d.-]/g, ''));

@@ -12,16 +12,10 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { User } from '@/server/models';
 import { CSRF, uniqueEmail } from '../helpers/api';
-import { DESKTOP, PHONE, newPage, pageErrors, screenshot, signUpInContext, startStack, type Stack } from '../helpers/browser';
+import { DESKTOP, PHONE, newPage, pageErrors, screenshot, signUpInContext, stackForFile } from '../helpers/browser';
 import { bowBody, buildBody, knownMarks } from '../api/bow-fixtures';
 
-let stack: Stack;
-beforeAll(async () => {
-  stack = await startStack();
-}, 60_000);
-afterAll(async () => {
-  await stack?.close();
-});
+const stack = stackForFile();
 
 /** A bow with a build and a sight-in, through the API in the archer's browser context. */
 async function makeBow(context: BrowserContext, nickname: string): Promise<number> {

@@ -88,3 +88,65 @@ export async function signUpInContext(context: BrowserContext, baseUrl: string, 
   if (res.status() !== 201) throw new Error(`sign-up failed: ${res.status()} ${await res.text()}`);
   return { email, password };
 }
+
+/**
+ * Starts the stack before the file's tests (60 s allowed) and closes it after
+ * them; returns the stack, filled in once beforeAll has run.
+ * Example: `const stack = stackForFile();` then `newPage(stack)` inside a test
+ */
+export function stackForFile(): Stack {
+  const stack = {} as Stack;
+  beforeAll(async () => {
+    Object.assign(stack, await startStack());
+  }, 60_000);
+  afterAll(async () => {
+    await stack.close?.();
+  });
+  return stack;
+}
+
+export interface FullScreenshotOptions {
+  /** Tallest window (px) the full-length shot may use; default no limit. */
+  maxHeightPx?: number;
+  /** Wait (ms) after making the window tall, before the shot. */
+  settleMs: number;
+  /** Wait (ms) after restoring the window. */
+  restoreMs: number;
+  /** Also save a page taller than `whenTallerThanPx` in parts of `heightPx` (<name>-full-<width>w-part<n>.png). */
+  parts?: { heightPx: number; whenTallerThanPx: number };
+}
+
+/**
+ * The page at its viewport size (`screenshot`), and when the app's scroll
+ * container holds more, its whole length too (<name>-full-<width>w.png): the
+ * window is made as tall as the content for one shot, then restored.
+ * Example: `await fullScreenshot(page, 'bench', { settleMs: 200, restoreMs: 100 })`
+ */
+export async function fullScreenshot(page: Page, name: string, options: FullScreenshotOptions): Promise<void> {
+  await screenshot(page, name);
+  const size = page.viewportSize()!;
+  const extra = await page.evaluate(() => {
+    let most = 0;
+    for (const el of Array.from(document.querySelectorAll('div'))) {
+      const overflow = getComputedStyle(el).overflowY;
+      if ((overflow === 'auto' || overflow === 'scroll') && el.scrollHeight > el.clientHeight + 1) most = Math.max(most, el.scrollHeight - el.clientHeight);
+    }
+    return most;
+  });
+  if (extra <= 0) return;
+  const height = Math.min(size.height + extra, options.maxHeightPx ?? Infinity);
+  await page.setViewportSize({ width: size.width, height });
+  await page.waitForTimeout(options.settleMs);
+  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}-full-${size.width}w.png`) });
+  const parts = options.parts;
+  if (parts) {
+    for (let top = 0, part = 1; top < height && height > parts.whenTallerThanPx; top += parts.heightPx, part += 1) {
+      await page.screenshot({
+        path: path.join(SCREENSHOT_DIR, `${name}-full-${size.width}w-part${part}.png`),
+        clip: { x: 0, y: top, width: size.width, height: Math.min(parts.heightPx, height - top) },
+      });
+    }
+  }
+  await page.setViewportSize(size);
+  await page.waitForTimeout(options.restoreMs);
+}
