@@ -35,8 +35,13 @@ export const predictRequestSchema = z
     }
   });
 
-/** The build fields a query string may carry for the tape (numbers as text). */
-const componentNumberFields = [
+/**
+ * The build's number fields, under the build input's (and build form's) names,
+ * in form order: the ones a tape query carries as text. Units as in
+ * buildInputSchema (mm, gr, fps).
+ * Example: buildNumberFields[0] → 'spine'
+ */
+export const buildNumberFields = [
   'spine',
   'grainsPerInch',
   'cutLengthMm',
@@ -70,7 +75,7 @@ const componentShape = {
   balancePointMm: componentNumber,
   speedFps: componentNumber,
   dragCoefficient: componentNumber,
-} satisfies Record<(typeof componentNumberFields)[number], typeof componentNumber>;
+} satisfies Record<(typeof buildNumberFields)[number], typeof componentNumber>;
 
 const stepSchema = z
   .number({ invalid_type_error: 'Tick step must be a number' })
@@ -88,7 +93,7 @@ export const predictTapeQuerySchema = z.preprocess(
   (raw) => {
     if (!raw || typeof raw !== 'object') return raw;
     const query = { ...(raw as Record<string, unknown>) };
-    for (const key of componentNumberFields) {
+    for (const key of buildNumberFields) {
       const value = query[key];
       if (value === '' || value === undefined) delete query[key];
       else if (value === 'null') query[key] = null;

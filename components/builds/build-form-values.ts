@@ -11,6 +11,7 @@ import {
 import { mmToInches } from '@/math/units/convert';
 import type { LengthUnit } from '@/shared/auth';
 import { buildInputSchema, type Build } from '@/shared/build';
+import { buildNumberFields } from '@/shared/predict';
 
 /**
  * What the build form holds: text for every number; cut length, diameter and
@@ -37,24 +38,7 @@ export interface BuildFormText {
 }
 
 /** Every field of the form, for matching server messages. */
-export const buildFormFields: readonly (keyof BuildFormText)[] = [
-  'name',
-  'shaftLabel',
-  'spine',
-  'grainsPerInch',
-  'cutLengthMm',
-  'diameterMm',
-  'pointGr',
-  'insertGr',
-  'collarGr',
-  'nockGr',
-  'vaneCount',
-  'vaneWeightGr',
-  'wrapGr',
-  'balancePointMm',
-  'speedFps',
-  'dragCoefficient',
-];
+export const buildFormFields: readonly (keyof BuildFormText)[] = ['name', 'shaftLabel', ...buildNumberFields];
 
 /**
  * Text → the API's build input (lengths in mm; empty optional weights take the
