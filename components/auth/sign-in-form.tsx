@@ -10,6 +10,7 @@ import { Button } from '@/components/ui/button';
 import { FormField } from '@/components/ui/form-field';
 import { space } from '@/components/theme';
 import { signInSchema, type SignInInput, type User } from '@/shared/auth';
+import { emailInputProps } from '@/components/ui/email-input-props';
 
 export interface SignInFormProps {
   /** Called after a successful sign-in (the user is already in the useMe cache). */
@@ -48,11 +49,7 @@ export function SignInForm({ onSignedIn }: SignInFormProps) {
         control={control}
         name="email"
         label="E-mail"
-        autoComplete="email"
-        keyboardType="email-address"
-        inputMode="email"
-        autoCapitalize="none"
-        autoCorrect={false}
+        {...emailInputProps}
         returnKeyType="next"
         onSubmitEditing={() => setFocus('password')}
       />

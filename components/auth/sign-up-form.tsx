@@ -11,6 +11,7 @@ import { Button } from '@/components/ui/button';
 import { FormField } from '@/components/ui/form-field';
 import { space } from '@/components/theme';
 import { passwordMinLength, signUpSchema, type SignUpInput, type User } from '@/shared/auth';
+import { emailInputProps } from '@/components/ui/email-input-props';
 
 export interface SignUpFormProps {
   /** Called after the account is made and signed in (the user is already in the useMe cache). */
@@ -64,11 +65,7 @@ export function SignUpForm({ onSignedUp }: SignUpFormProps) {
         control={control}
         name="email"
         label="E-mail"
-        autoComplete="email"
-        keyboardType="email-address"
-        inputMode="email"
-        autoCapitalize="none"
-        autoCorrect={false}
+        {...emailInputProps}
         returnKeyType="next"
         onSubmitEditing={() => setFocus('password')}
       />

@@ -9,6 +9,7 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { TextField } from '@/components/ui/text-field';
 import { space } from '@/components/theme';
 import { emailSchema } from '@/shared/auth';
+import { emailInputProps } from '@/components/ui/email-input-props';
 
 export interface SendTapeFormProps {
   sessionId: number;
@@ -42,11 +43,7 @@ export function SendTapeForm({ sessionId, layoutQuery }: SendTapeFormProps) {
           send.reset();
         }}
         error={problem ?? send.error?.fields.to}
-        autoComplete="email"
-        keyboardType="email-address"
-        inputMode="email"
-        autoCapitalize="none"
-        autoCorrect={false}
+        {...emailInputProps}
         onSubmitEditing={submit}
       />
       {send.isSuccess ? <Banner tone="info" title="Sent">{send.data}</Banner> : null}

@@ -12,6 +12,7 @@ import { ScreenTitle } from '@/components/ui/screen-title';
 import { TextLink } from '@/components/ui/text-link';
 import { space } from '@/components/theme';
 import { passwordForgotSchema, type PasswordForgot } from '@/shared/password';
+import { emailInputProps } from '@/components/ui/email-input-props';
 
 /**
  * "Forgot password": the e-mail address to send a reset link to. The answer
@@ -50,11 +51,7 @@ export function ForgotPasswordScreen() {
             control={control}
             name="email"
             label="E-mail"
-            autoComplete="email"
-            keyboardType="email-address"
-            inputMode="email"
-            autoCapitalize="none"
-            autoCorrect={false}
+            {...emailInputProps}
             returnKeyType="send"
             onSubmitEditing={submit}
           />

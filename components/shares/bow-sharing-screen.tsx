@@ -24,6 +24,7 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/theme';
 import { inviteValidDays, shareInviteSchema, type Share, type ShareInvite } from '@/shared/share';
+import { emailInputProps } from '@/components/ui/email-input-props';
 
 const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { dateStyle: 'medium' });
 
@@ -65,11 +66,7 @@ function InviteForm({ bowId }: { bowId: number }) {
         control={control}
         name="email"
         label="Technician’s e-mail"
-        autoComplete="email"
-        keyboardType="email-address"
-        inputMode="email"
-        autoCapitalize="none"
-        autoCorrect={false}
+        {...emailInputProps}
         returnKeyType="send"
         onSubmitEditing={submit}
       />

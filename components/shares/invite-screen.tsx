@@ -19,6 +19,7 @@ import { TextLink } from '@/components/ui/text-link';
 import { space } from '@/components/theme';
 import { passwordMinLength } from '@/shared/auth';
 import { inviteSignUpSchema, type InvitePreview, type InviteSignUp, type Share } from '@/shared/share';
+import { emailInputProps } from '@/components/ui/email-input-props';
 
 const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { dateStyle: 'medium' });
 
@@ -62,7 +63,7 @@ function NewTechForm({ token, invite, onDone }: { token: string; invite: InviteP
         </Banner>
       ) : null}
       <FormField control={control} name="name" label="Name" hint="Shown to the archers who share bows with you, e.g. your name and shop." autoComplete="name" returnKeyType="next" onSubmitEditing={() => setFocus('password')} />
-      <FormField control={control} name="email" label="E-mail" hint="The invited address." autoComplete="email" keyboardType="email-address" inputMode="email" autoCapitalize="none" autoCorrect={false} />
+      <FormField control={control} name="email" label="E-mail" hint="The invited address." {...emailInputProps} />
       <FormField control={control} name="password" label="Password" hint={`At least ${passwordMinLength} characters. A short sentence works well.`} autoComplete="new-password" secureTextEntry returnKeyType="go" onSubmitEditing={submit} />
       <Button label="Create the account and accept" pendingLabel="Creating…" pending={create.isPending} onPress={submit} fullWidth testID="create-tech" />
     </View>
