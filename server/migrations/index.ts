@@ -19,6 +19,7 @@ import * as m0023 from './0023-bow-changes';
 import * as m0030 from './0030-shares';
 import * as m0031 from './0031-tokens';
 import * as m0032 from './0032-audit-entries';
+import * as m0040 from './0040-idempotency-keys';
 
 type Step = { up: (p: { context: QueryInterface }) => Promise<void>; down: (p: { context: QueryInterface }) => Promise<void> };
 
@@ -37,6 +38,7 @@ export const migrations: Array<[string, Step]> = [
   ['0030-shares', m0030],
   ['0031-tokens', m0031],
   ['0032-audit-entries', m0032],
+  ['0040-idempotency-keys', m0040],
 ];
 
 export function migrator(sequelize: Sequelize) {

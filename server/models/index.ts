@@ -16,6 +16,7 @@ import { BowChange } from './bow-change';
 import { Share } from './share';
 import { Token } from './token';
 import { AuditEntry } from './audit-entry';
+import { IdempotencyKey } from './idempotency-key';
 
 WebSession.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
@@ -58,4 +59,4 @@ Token.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
 AuditEntry.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
 
-export { User, WebSession, Bow, ArrowBuild, SightSession, SessionMark, Tape, Photo, LevelCheck, LevelStep, BowChange, Share, Token, AuditEntry };
+export { User, WebSession, Bow, ArrowBuild, SightSession, SessionMark, Tape, Photo, LevelCheck, LevelStep, BowChange, Share, Token, AuditEntry, IdempotencyKey };

@@ -25,10 +25,12 @@ import { photoRoutes } from './photos';
 import { compareRoutes } from './compare';
 import { fieldCardRoutes } from './field-card';
 import { predictRoutes } from './predict';
+import { idempotency } from '@/server/middleware/idempotency';
 
 export function apiRoutes(sequelize: Sequelize) {
   const api = Router();
   api.use(auditTrail()); // who is acting, for the audit log of technicians' writes (before every router)
+  api.use(idempotency()); // a write sent again with the same Idempotency-Key is answered from the first (the phone's outbox)
   api.use('/health', healthRoutes(sequelize));
   api.use('/auth', authRoutes());
   api.use('/me', meRoutes());
