@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { addedBySchema } from './added-by';
 import { countSchema, measureSchema, nameSchema, optionalMeasureSchema, textSchema, timestampsSchema } from './common';
 
 /**
@@ -71,7 +72,7 @@ export const buildDerivedSchema = z.object({
 
 /** A build as the API returns it. */
 export const buildSchema = buildFields
-  .extend({ id: z.number().int(), bowId: z.number().int(), derived: buildDerivedSchema, sessionCount: z.number().int() })
+  .extend({ id: z.number().int(), bowId: z.number().int(), derived: buildDerivedSchema, sessionCount: z.number().int(), addedBy: addedBySchema.optional() })
   .merge(timestampsSchema);
 
 export type BuildInput = z.infer<typeof buildInputSchema>;

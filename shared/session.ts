@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { addedBySchema } from './added-by';
 import {
   countSchema,
   distanceUnitSchema,
@@ -81,7 +82,7 @@ export const sessionInputSchema = sessionFields.superRefine(checkDistinctDistanc
 export const sessionUpdateSchema = sessionFields.partial().superRefine(checkDistinctDistances);
 
 /** A mark as the API returns it. */
-export const markSchema = markInputSchema.extend({ id: z.number().int(), position: z.number().int() });
+export const markSchema = markInputSchema.extend({ id: z.number().int(), position: z.number().int(), addedBy: addedBySchema.optional() });
 
 /**
  * The fit stored with a session: the math core's fit result (see math/README.md),
@@ -141,6 +142,7 @@ export const sessionSchema = sessionFields
     bowId: z.number().int(),
     marks: z.array(markSchema),
     fit: storedFitSchema,
+    addedBy: addedBySchema.optional(),
   })
   .merge(timestampsSchema);
 
@@ -156,7 +158,7 @@ export const sessionFitSummarySchema = z.object({
 
 export const sessionListItemSchema = sessionFields
   .omit({ marks: true })
-  .extend({ id: z.number().int(), bowId: z.number().int(), summary: sessionFitSummarySchema })
+  .extend({ id: z.number().int(), bowId: z.number().int(), summary: sessionFitSummarySchema, addedBy: addedBySchema.optional() })
   .merge(timestampsSchema);
 
 export type MarkInput = z.infer<typeof markInputSchema>;

@@ -40,6 +40,8 @@ export class ArrowBuild extends Model<InferAttributes<ArrowBuild>, InferCreation
   declare momentumKgMPerS: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+  /** Who added it (set on create: server/models/added-by.ts; null once that account is deleted). */
+  declare addedById: CreationOptional<number | null>;
 }
 
 ArrowBuild.init(
@@ -69,6 +71,7 @@ ArrowBuild.init(
     momentumKgMPerS: { type: DataTypes.DOUBLE, allowNull: true },
     createdAt: DataTypes.DATE(3),
     updatedAt: DataTypes.DATE(3),
+    addedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
   },
   { sequelize, tableName: 'arrow_builds' },
 );

@@ -17,6 +17,7 @@ import { Share } from './share';
 import { Token } from './token';
 import { AuditEntry } from './audit-entry';
 import { IdempotencyKey } from './idempotency-key';
+import { installAddedByHooks } from './added-by';
 
 WebSession.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
@@ -58,5 +59,17 @@ Token.belongsTo(Share, { foreignKey: 'shareId', as: 'share' });
 Token.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
 AuditEntry.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
+
+// Who added a build, a session or a mark (migrations 0060–0062; hooks in added-by.ts).
+ArrowBuild.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
+SightSession.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
+SessionMark.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
+installAddedByHooks(ArrowBuild, async (build, transaction) => (await Bow.findByPk(build.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null);
+installAddedByHooks(SightSession, async (session, transaction) => (await Bow.findByPk(session.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null);
+installAddedByHooks(SessionMark, async (mark, transaction) => {
+  const session = await SightSession.findByPk(mark.sessionId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
+  if (!session) return null;
+  return (await Bow.findByPk(session.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null;
+});
 
 export { User, WebSession, Bow, ArrowBuild, SightSession, SessionMark, Tape, Photo, LevelCheck, LevelStep, BowChange, Share, Token, AuditEntry, IdempotencyKey };

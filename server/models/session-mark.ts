@@ -21,6 +21,8 @@ export class SessionMark extends Model<InferAttributes<SessionMark>, InferCreati
   declare note: string;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+  /** Who added it (set on create: server/models/added-by.ts; null once that account is deleted). */
+  declare addedById: CreationOptional<number | null>;
 }
 
 SessionMark.init(
@@ -34,6 +36,7 @@ SessionMark.init(
     note: { type: DataTypes.STRING(200), allowNull: false, defaultValue: '' },
     createdAt: DataTypes.DATE(3),
     updatedAt: DataTypes.DATE(3),
+    addedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
   },
   { sequelize, tableName: 'session_marks' },
 );

@@ -30,6 +30,8 @@ export class SightSession extends Model<InferAttributes<SightSession>, InferCrea
   declare fitRmsMm: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+  /** Who added it (set on create: server/models/added-by.ts; null once that account is deleted). */
+  declare addedById: CreationOptional<number | null>;
   declare marks?: NonAttribute<SessionMark[]>;
 }
 
@@ -46,6 +48,7 @@ SightSession.init(
     fitRmsMm: { type: DataTypes.DOUBLE, allowNull: true },
     createdAt: DataTypes.DATE(3),
     updatedAt: DataTypes.DATE(3),
+    addedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
   },
   { sequelize, tableName: 'sight_sessions' },
 );

@@ -5,6 +5,8 @@
  *            with an active share of it;
  *   write  — add records to it (sessions, marks, level checks, changes,
  *            notes): the same people as read;
+ *   add-build — add an arrow build (a new, attributed entry: the archer's
+ *            builds are never changed): the same people as read;
  *   delete — delete or change the archer's records, edit the bow itself,
  *            share it: its owner only.
  * A share is checked on every request, so revoking it takes effect at once.
@@ -14,7 +16,7 @@
 import { Bow, Share, type User } from '@/server/models';
 import { ApiError } from '@/server/errors';
 
-export type BowCapability = 'read' | 'write' | 'delete';
+export type BowCapability = 'read' | 'write' | 'add-build' | 'delete';
 
 /** How a user reaches a bow: as its owner, or through the active share `shareId`. */
 export type BowAccess = { bow: Bow; owner: boolean; shareId: number | null };

@@ -16,6 +16,7 @@ import {
   type BowUpdate,
 } from '@/shared/bow';
 import { buildOut, sessionCounts } from './build-service';
+import { addedByNames } from './added-by';
 import { markStats, sessionListItems } from './session-service';
 import { tapeOut } from './tape-service';
 import { levelSummaryForBows } from './level-service';
@@ -129,11 +130,12 @@ export async function getBow(user: User, id: number): Promise<BowDetail> {
     }),
   ]);
   const counts = await sessionCounts(builds.map((build) => build.id));
+  const names = await addedByNames(builds);
   return {
     ...bowOut(bow),
     ownerName: owner?.name ?? '',
     readiness: readiness.get(bow.id)!,
-    builds: builds.map((build) => buildOut(build, counts.get(build.id) ?? 0)),
+    builds: builds.map((build) => buildOut(build, counts.get(build.id) ?? 0, names)),
     sessions: await sessionListItems(sessions),
     tapes: tapes.map((tape) => tapeOut(tape, bow.id)),
   };

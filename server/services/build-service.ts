@@ -14,9 +14,10 @@ import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
 import { ArrowBuild, Bow, SightSession, type User } from '@/server/models';
 import { buildInputSchema, type Build, type BuildInput, type BuildUpdate } from '@/shared/build';
-import { findBow, findOwnBow } from './bow-service';
+import { findBow } from './bow-service';
 import { bowFor, type BowCapability } from './bow-access';
 import { arrowQuantities } from './fit-service';
+import { addedByNames, addedByOf } from './added-by';
 
 /** The build with this id if `user` may use `capability` on its bow (default: owns it); otherwise 404 (403 for a technician asking to change it). */
 export async function findOwnBuild(user: User, id: number, transaction?: Transaction, capability: BowCapability = 'delete'): Promise<ArrowBuild> {
@@ -31,7 +32,8 @@ export async function findOwnBuild(user: User, id: number, transaction?: Transac
   return build;
 }
 
-export function buildOut(build: ArrowBuild, sessionCount: number): Build {
+/** The build as the API sends it; with `names` (addedByNames), who added it. */
+export function buildOut(build: ArrowBuild, sessionCount: number, names?: Map<number, string>): Build {
   return {
     id: build.id,
     bowId: build.bowId,
@@ -60,6 +62,7 @@ export function buildOut(build: ArrowBuild, sessionCount: number): Build {
       momentumKgMPerS: build.momentumKgMPerS,
     },
     sessionCount,
+    ...(names ? { addedBy: addedByOf(build, names) } : {}),
     createdAt: build.createdAt.toISOString(),
     updatedAt: build.updatedAt.toISOString(),
   };
@@ -90,19 +93,26 @@ export async function listBuilds(user: User, bowId: number): Promise<Build[]> {
   const bow = await findBow(user, bowId, 'read');
   const builds = await ArrowBuild.findAll({ where: { bowId: bow.id }, order: [['id', 'ASC']] });
   const counts = await sessionCounts(builds.map((build) => build.id));
-  return builds.map((build) => buildOut(build, counts.get(build.id) ?? 0));
+  const names = await addedByNames(builds);
+  return builds.map((build) => buildOut(build, counts.get(build.id) ?? 0, names));
 }
 
 export async function getBuild(user: User, id: number): Promise<Build> {
   const build = await findOwnBuild(user, id, undefined, 'read');
   const counts = await sessionCounts([build.id]);
-  return buildOut(build, counts.get(build.id) ?? 0);
+  return buildOut(build, counts.get(build.id) ?? 0, await addedByNames([build]));
 }
 
+/**
+ * A new build on the bow: by its owner, or by a technician with an active
+ * share ('add-build' in bow-access.ts), attributed to whoever added it. A
+ * technician adds builds but never changes or deletes one (updateBuild and
+ * deleteBuild need the owner).
+ */
 export async function createBuild(user: User, bowId: number, input: BuildInput): Promise<Build> {
-  const bow = await findOwnBow(user, bowId);
-  const build = await ArrowBuild.create({ ...withDerived(input), bowId: bow.id });
-  return buildOut(build, 0);
+  const { bow } = await bowFor(user, bowId, 'add-build');
+  const build = await ArrowBuild.create({ ...withDerived(input), bowId: bow.id, addedById: user.id });
+  return buildOut(build, 0, await addedByNames([build]));
 }
 
 /**
@@ -118,7 +128,7 @@ export async function updateBuild(user: User, id: number, update: BuildUpdate): 
     build.set(withDerived(merged.data));
     await build.save({ transaction });
     const counts = await sessionCounts([build.id], transaction);
-    return buildOut(build, counts.get(build.id) ?? 0);
+    return buildOut(build, counts.get(build.id) ?? 0, await addedByNames([build], transaction));
   });
 }
 

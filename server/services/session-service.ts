@@ -21,6 +21,7 @@ import {
 import { findBow } from './bow-service';
 import { bowFor, type BowCapability } from './bow-access';
 import { fitSession } from './fit-service';
+import { addedByNames, addedByOf } from './added-by';
 
 /** Yards → metres, exact (international yard and pound, 1959): for comparing distances only. */
 const YARD_M = 0.9144;
@@ -70,6 +71,17 @@ function checkAppendOnly(update: SessionUpdate, stored: SessionMark[]): void {
   });
 }
 
+/** The same mark content (distance, unit, reading, arrows, note). */
+function sameMark(a: MarkInput, b: MarkInput): boolean {
+  return (
+    Math.abs(a.distance - b.distance) < 1e-9 &&
+    a.unit === b.unit &&
+    Math.abs(a.scaleMm - b.scaleMm) < 1e-9 &&
+    (a.arrowsShot ?? null) === (b.arrowsShot ?? null) &&
+    (a.note ?? '') === (b.note ?? '')
+  );
+}
+
 async function marksOf(sessionId: number, transaction?: Transaction): Promise<SessionMark[]> {
   return SessionMark.findAll({ where: { sessionId }, order: [['position', 'ASC']], transaction });
 }
@@ -78,7 +90,9 @@ function markInputOf(mark: SessionMark): MarkInput {
   return { distance: mark.distance, unit: mark.unit, scaleMm: mark.scaleMm, arrowsShot: mark.arrowsShot, note: mark.note };
 }
 
-export function sessionOut(session: SightSession, marks: SessionMark[]): Session {
+/** The session as the API sends it; with `names` (addedByNames), each mark and the session say who added them. */
+export function sessionOut(session: SightSession, marks: SessionMark[], names?: Map<number, string>): Session {
+  const by = (row: { addedById?: number | null }) => (names ? { addedBy: addedByOf(row, names) } : {});
   return {
     id: session.id,
     bowId: session.bowId,
@@ -88,8 +102,9 @@ export function sessionOut(session: SightSession, marks: SessionMark[]): Session
     altitudeM: session.altitudeM,
     temperatureC: session.temperatureC,
     notes: session.notes,
-    marks: marks.map((mark) => ({ id: mark.id, position: mark.position, ...markInputOf(mark) })),
+    marks: marks.map((mark) => ({ id: mark.id, position: mark.position, ...markInputOf(mark), ...by(mark) })),
     fit: session.fit as StoredFit,
+    ...by(session),
     createdAt: session.createdAt.toISOString(),
     updatedAt: session.updatedAt.toISOString(),
   };
@@ -122,6 +137,7 @@ export async function markStats(
 /** Sessions as list items: no mark rows, a summary of each fit. */
 export async function sessionListItems(sessions: SightSession[]): Promise<SessionListItem[]> {
   const stats = await markStats(sessions.map((session) => session.id));
+  const names = await addedByNames(sessions);
   return sessions.map((session) => {
     const stat = stats.get(session.id);
     const fit = session.fit as Partial<StoredFit> | null;
@@ -142,10 +158,16 @@ export async function sessionListItems(sessions: SightSession[]): Promise<Sessio
         longestUnit: stat?.longestUnit ?? null,
         warningCount: Array.isArray(fit?.warnings) ? fit.warnings.length : 0,
       },
+      addedBy: addedByOf(session, names),
       createdAt: session.createdAt.toISOString(),
       updatedAt: session.updatedAt.toISOString(),
     };
   });
+}
+
+/** The session with who added it and each mark. */
+async function sessionWithNames(session: SightSession, marks: SessionMark[], transaction?: Transaction): Promise<Session> {
+  return sessionOut(session, marks, await addedByNames([session, ...marks], transaction));
 }
 
 /** The build, which must be on `bow`: a field error on buildId otherwise (also for another account's build). */
@@ -157,11 +179,20 @@ async function buildOnBow(bow: Bow, buildId: number, transaction: Transaction): 
   return build;
 }
 
-/** Writes the session's mark set, in entry order, replacing any it had. */
-async function replaceMarks(sessionId: number, marks: MarkInput[], transaction: Transaction): Promise<SessionMark[]> {
+/**
+ * Writes the session's mark set, in entry order, replacing any it had. A mark
+ * given back as it was stored keeps who added it (`stored`); the others are
+ * the current user's (server/models/added-by.ts).
+ */
+async function replaceMarks(sessionId: number, marks: MarkInput[], transaction: Transaction, stored: SessionMark[] = []): Promise<SessionMark[]> {
+  const unclaimed = [...stored];
+  const addedByOf = (mark: MarkInput) => {
+    const index = unclaimed.findIndex((old) => sameMark(markInputOf(old), mark));
+    return index < 0 ? undefined : unclaimed.splice(index, 1)[0].addedById;
+  };
   await SessionMark.destroy({ where: { sessionId }, transaction });
   await SessionMark.bulkCreate(
-    marks.map((mark, position) => ({ ...mark, sessionId, position })),
+    marks.map((mark, position) => ({ ...mark, sessionId, position, addedById: addedByOf(mark) })),
     { transaction, validate: true },
   );
   return marksOf(sessionId, transaction);
@@ -175,7 +206,7 @@ export async function listSessions(user: User, bowId: number): Promise<SessionLi
 
 export async function getSession(user: User, id: number): Promise<Session> {
   const session = await findOwnSession(user, id, undefined, 'read');
-  return sessionOut(session, await marksOf(session.id));
+  return sessionWithNames(session, await marksOf(session.id));
 }
 
 export async function createSession(user: User, bowId: number, input: SessionInput): Promise<Session> {
@@ -188,7 +219,7 @@ export async function createSession(user: User, bowId: number, input: SessionInp
       { ...fields, bowId: bow.id, fit, fitSpeedFps: fit.speedFps, fitRmsMm: fit.rmsMm },
       { transaction },
     );
-    return sessionOut(session, await replaceMarks(session.id, marks, transaction));
+    return sessionWithNames(session, await replaceMarks(session.id, marks, transaction), transaction);
   });
 }
 
@@ -216,8 +247,8 @@ export async function updateSession(user: User, id: number, update: SessionUpdat
     // A changed fit is a change even when no column of the row differs.
     session.changed('fit', true);
     await session.save({ transaction });
-    const written = update.marks ? await replaceMarks(session.id, marks, transaction) : storedMarks;
-    return sessionOut(session, written);
+    const written = update.marks ? await replaceMarks(session.id, marks, transaction, storedMarks) : storedMarks;
+    return sessionWithNames(session, written, transaction);
   });
 }
 

@@ -1,0 +1,72 @@
+/**
+ * One name for a sight-in session wherever one is named (bow lists, Before a
+ * trip, Predict's "carried on the sight of", the tape and sight-in screens,
+ * the server's trip warnings), so that two of one day can be told apart:
+ * the day, then the time it was recorded when another sight-in of the bow has
+ * the same day, then the place and the arrow build.
+ *
+ * Example: sightInName({ id: 7, date: '2026-12-02', placeLabel: 'Larch Hollow range', buildId: 3, createdAt: '2026-12-02T14:05:00Z' },
+ *   { builds: [{ id: 3, name: 'Elk heavy' }], siblings, timeZone: 'UTC' })
+ *   → '2 Dec 2026, 14:05 UTC · Larch Hollow range · Elk heavy' (when a sibling is of 2 Dec 2026 too)
+ */
+
+/** What naming a sight-in needs: its day, place, build and when it was recorded. */
+export interface NameableSightIn {
+  id: number;
+  date: string;
+  placeLabel: string;
+  buildId: number;
+  /** ISO time the session was recorded (its date is a calendar day only). */
+  createdAt?: string;
+}
+
+export interface SightInNameOptions {
+  /** The bow's builds (to name the session's), or the build name itself. */
+  builds?: ReadonlyArray<{ id: number; name: string }>;
+  buildName?: string;
+  /** The bow's other sight-ins: the time is added when one of them has the same day. */
+  siblings?: ReadonlyArray<NameableSightIn>;
+  /** Time zone for the time of day (IANA name); default: the runtime's own. "UTC" is written out. */
+  timeZone?: string;
+  /** Leave the build out (e.g. in a list already under the build's name). */
+  withoutBuild?: boolean;
+}
+
+/** "2 Dec 2026" from "2026-12-02" (a calendar date: no zone shift). */
+export function sightInDay(isoDate: string): string {
+  const date = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
+  if (Number.isNaN(date.getTime())) return isoDate;
+  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+}
+
+/** "14:05" (24-hour) of an ISO time in `timeZone`, or '' when it is not a time. */
+function timeOfDay(iso: string | undefined, timeZone?: string): string {
+  if (!iso) return '';
+  const when = new Date(iso);
+  if (Number.isNaN(when.getTime())) return '';
+  const words = when.toLocaleTimeString('en-GB', { hour: '2-digit', minute: '2-digit', hour12: false, ...(timeZone ? { timeZone } : {}) });
+  return timeZone === 'UTC' ? `${words} UTC` : words;
+}
+
+/** The session's name (see the module comment). */
+export function sightInName(session: NameableSightIn, options: SightInNameOptions = {}): string {
+  const sameDay = (options.siblings ?? []).filter((other) => other.id !== session.id && other.date.slice(0, 10) === session.date.slice(0, 10));
+  let day = sightInDay(session.date);
+  if (sameDay.length > 0) {
+    const time = timeOfDay(session.createdAt, options.timeZone);
+    if (time) day += `, ${time}`;
+  }
+  const build = options.withoutBuild ? '' : (options.buildName ?? options.builds?.find((b) => b.id === session.buildId)?.name ?? '');
+  const parts = [day, session.placeLabel.trim(), build].filter(Boolean);
+  const name = parts.join(' · ');
+  // Same day, place, build and minute: number them in the order they were recorded.
+  const twins = sameDay.filter(
+    (other) =>
+      other.placeLabel.trim() === session.placeLabel.trim() &&
+      other.buildId === session.buildId &&
+      timeOfDay(other.createdAt, options.timeZone) === timeOfDay(session.createdAt, options.timeZone),
+  );
+  if (twins.length === 0) return name;
+  const order = [...twins, session].sort((a, b) => (a.createdAt ?? '').localeCompare(b.createdAt ?? '') || a.id - b.id);
+  return `${name} (${order.indexOf(session) + 1} of ${order.length})`;
+}

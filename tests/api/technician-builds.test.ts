@@ -1,0 +1,116 @@
+import { CSRF, closeDb, signedInAgent, testApp } from '@/tests/helpers/api';
+import { bowBody, bowWithSession, buildBody, knownMarks } from '@/tests/api/bow-fixtures';
+import { AuditEntry, Share, User } from '@/server/models';
+
+const app = testApp();
+
+afterAll(closeDb);
+
+/** An archer with a bow (one build, one session) shared with a technician through an active share. */
+async function sharedBow() {
+  const archer = await signedInAgent(app, { name: 'Ilse Brackenridge' });
+  const tech = await signedInAgent(app, { name: 'Oren Hallowfield' });
+  await User.update({ role: 'tech' }, { where: { id: tech.user.id } });
+  const made = await bowWithSession(archer.agent, [20, 40, 60]);
+  const share = await Share.create({
+    bowId: made.bow.id,
+    archerId: archer.user.id,
+    techId: tech.user.id,
+    invitedEmail: tech.email,
+    state: 'active',
+    acceptedAt: new Date(),
+    revokedAt: null,
+  });
+  return { archer, tech, share, ...made };
+}
+
+describe('a technician adds an arrow build to a shared bow', () => {
+  it('adds it as a new entry, attributed, that the archer sees and the audit log records', async () => {
+    const { archer, tech, bow, build } = await sharedBow();
+    const added = await tech.agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Shop test 480', pointGr: 100 }));
+    expect(added.status).toBe(201);
+    expect(added.body.build).toMatchObject({ bowId: bow.id, name: 'Shop test 480', addedBy: { id: tech.user.id, name: 'Oren Hallowfield' } });
+
+    // The archer sees it on the bow, beside their own build, each naming who added it.
+    const detail = await archer.agent.get(`/api/bows/${bow.id}`);
+    expect(detail.status).toBe(200);
+    const byName = Object.fromEntries(detail.body.bow.builds.map((b: { name: string; addedBy: unknown }) => [b.name, b.addedBy]));
+    expect(byName['Shop test 480']).toEqual({ id: tech.user.id, name: 'Oren Hallowfield' });
+    expect(byName[build.name]).toEqual({ id: archer.user.id, name: 'Ilse Brackenridge' });
+    const listed = await archer.agent.get(`/api/bows/${bow.id}/builds`);
+    expect(listed.body.builds.find((b: { id: number }) => b.id === added.body.build.id).addedBy.name).toBe('Oren Hallowfield');
+
+    // The audit log names the technician and the build.
+    const entries = await AuditEntry.findAll({ where: { bowId: bow.id, recordType: 'arrow-build' } });
+    expect(entries).toHaveLength(1);
+    expect(entries[0]).toMatchObject({ actorId: tech.user.id, action: 'created', recordId: added.body.build.id });
+    expect(entries[0].summary).toContain('Shop test 480');
+  });
+
+  it('never changes or deletes a build, the archer’s or its own', async () => {
+    const { tech, build, bow } = await sharedBow();
+    expect((await tech.agent.patch(`/api/builds/${build.id}`).set(CSRF).send({ name: 'Renamed' })).status).toBe(403);
+    expect((await tech.agent.delete(`/api/builds/${build.id}`).set(CSRF)).status).toBe(403);
+    const own = await tech.agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Mine' }));
+    expect(own.status).toBe(201);
+    expect((await tech.agent.patch(`/api/builds/${own.body.build.id}`).set(CSRF).send({ name: 'Renamed' })).status).toBe(403);
+    expect((await tech.agent.delete(`/api/builds/${own.body.build.id}`).set(CSRF)).status).toBe(403);
+  });
+
+  it('is refused once the archer revokes the share, and on a bow never shared (404, nothing written)', async () => {
+    const { archer, tech, bow, share } = await sharedBow();
+    const revoked = await archer.agent.post(`/api/shares/${share.id}/revoke`).set(CSRF);
+    expect(revoked.status).toBe(200);
+    const after = await tech.agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Too late' }));
+    expect(after.status).toBe(404);
+
+    const other = await signedInAgent(app, { name: 'Unshared Archer' });
+    const unshared = await other.agent.post('/api/bows').set(CSRF).send(bowBody({ nickname: 'Not shared' }));
+    const refused = await tech.agent.post(`/api/bows/${unshared.body.bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Sneaky' }));
+    expect(refused.status).toBe(404);
+
+    const names = (await archer.agent.get(`/api/bows/${bow.id}/builds`)).body.builds.map((b: { name: string }) => b.name);
+    expect(names).not.toContain('Too late');
+    expect((await other.agent.get(`/api/bows/${unshared.body.bow.id}/builds`)).body.builds).toEqual([]);
+  });
+
+  it('still checks the build like the archer’s own (a field error names the field)', async () => {
+    const { tech, bow } = await sharedBow();
+    const bad = await tech.agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Bad', grainsPerInch: -3 }));
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toContain('grainsPerInch');
+  });
+});
+
+describe('who added each mark and sight-in', () => {
+  it('names the technician on the marks they add, and keeps it when the archer saves the session again', async () => {
+    const { archer, tech, session, bow } = await sharedBow();
+    expect(session.addedBy).toEqual({ id: archer.user.id, name: 'Ilse Brackenridge' });
+    expect(session.marks.every((mark: { addedBy: unknown }) => (mark.addedBy as { id: number }).id === archer.user.id)).toBe(true);
+
+    const stored = session.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note }));
+    const extra = knownMarks([50])[0];
+    const appended = await tech.agent.patch(`/api/sessions/${session.id}`).set(CSRF).send({ marks: [...stored, extra] });
+    expect(appended.status).toBe(200);
+    const techMark = appended.body.session.marks.find((mark: { distance: number }) => mark.distance === 50);
+    expect(techMark.addedBy).toEqual({ id: tech.user.id, name: 'Oren Hallowfield' });
+
+    // The archer edits the note of a session and saves all marks back: each keeps who added it.
+    const again = await archer.agent
+      .patch(`/api/sessions/${session.id}`)
+      .set(CSRF)
+      .send({ notes: 'Windy', marks: appended.body.session.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note })) });
+    expect(again.status).toBe(200);
+    const byDistance = Object.fromEntries(again.body.session.marks.map((mark: { distance: number; addedBy: { name: string } }) => [mark.distance, mark.addedBy.name]));
+    expect(byDistance).toEqual({ 20: 'Ilse Brackenridge', 40: 'Ilse Brackenridge', 60: 'Ilse Brackenridge', 50: 'Oren Hallowfield' });
+
+    // A sight-in the technician adds is theirs in the bow's list.
+    const techSession = await tech.agent
+      .post(`/api/bows/${bow.id}/sessions`)
+      .set(CSRF)
+      .send({ buildId: session.buildId, date: '2026-11-30', placeLabel: 'Shop lane', marks: knownMarks([20, 30]) });
+    expect(techSession.status).toBe(201);
+    const list = (await archer.agent.get(`/api/bows/${bow.id}/sessions`)).body.sessions;
+    expect(list.find((s: { id: number }) => s.id === techSession.body.session.id).addedBy.name).toBe('Oren Hallowfield');
+  });
+});
