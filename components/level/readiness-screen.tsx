@@ -1,8 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { isApiError } from '@/components/api/client';
-import { formatDay } from '@/components/bows/readiness-words';
-import { useReadiness } from '@/components/level/api';
+import { useTripByBuild } from '@/components/level/trip-api';
 import { formatWhen, levelStateLabels } from '@/components/level/level-words';
 import { PrintButton, PrintOnly } from '@/components/level/print-support';
 import { cardInPrint, hideInPrint } from '@/components/level/print-marks';
@@ -18,13 +17,13 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { Text } from '@/components/ui/text';
 import { TextLink } from '@/components/ui/text-link';
 import { borders, colors, space } from '@/components/theme';
-import type { TripReadiness } from '@/shared/level';
+import type { TripBuild } from '@/shared/trip';
 
 const sheetId = 'trip-sheet';
 
-function Marks({ marks }: { marks: NonNullable<TripReadiness['marks']> }) {
+function Marks({ marks, label }: { marks: NonNullable<TripBuild['marks']>['marks']; label: string }) {
   return (
-    <View style={styles.table} role="table" aria-label="Confirmed marks">
+    <View style={styles.table} role="table" aria-label={label}>
       <View style={[styles.tr, styles.th]} role="row">
         <Text variant="label" style={styles.td} role="columnheader">
           Distance
@@ -33,7 +32,7 @@ function Marks({ marks }: { marks: NonNullable<TripReadiness['marks']> }) {
           Scale
         </Text>
       </View>
-      {marks.marks.map((mark, index) => (
+      {marks.map((mark, index) => (
         <View key={index} style={[styles.tr, index % 2 === 1 && styles.stripe]} role="row">
           <Text variant="numeral" style={styles.td} role="cell">
             {mark.distance} {mark.unit}
@@ -47,21 +46,80 @@ function Marks({ marks }: { marks: NonNullable<TripReadiness['marks']> }) {
   );
 }
 
+/** One build's card: its latest sight-in's marks, its own tape, and what to look at for it. */
+function BuildPart({ part }: { part: TripBuild }) {
+  const { build, marks, tape, warnings } = part;
+  return (
+    <View {...cardInPrint}>
+      <Card testID={`readiness-build-${build.id}`}>
+        <SectionHeading level={2} title={`Arrows: ${build.name}`} />
+        <View style={styles.part}>
+          <Text variant="label">Tape</Text>
+          {tape ? (
+            <>
+              <Text testID={`readiness-build-${build.id}-tape`}>
+                {tape.label ? `“${tape.label}”, ` : ''}
+                {tape.fromDistance}–{tape.toDistance} {tape.unit}, printed from the sight-in of {tape.sessionName}
+                {tape.fromLatestSession ? ' (this build’s latest).' : '.'}
+              </Text>
+              <Text variant="small" tone="soft">
+                Saved {formatWhen(tape.savedAt)}.
+              </Text>
+            </>
+          ) : (
+            <Text tone="soft">No tape saved for this build.</Text>
+          )}
+        </View>
+        <View style={styles.part}>
+          <Text variant="label">Confirmed marks</Text>
+          {marks ? (
+            <>
+              <Text tone="soft">Latest sight-in of this build: {marks.name}.</Text>
+              {marks.longestDistance !== null ? (
+                <Text variant="lead" testID={`readiness-build-${build.id}-longest`}>
+                  Longest confirmed: <Text variant="numeralLarge">{marks.longestDistance}</Text> {marks.longestUnit}
+                </Text>
+              ) : null}
+              <Marks marks={marks.marks} label={`Confirmed marks of ${build.name}`} />
+            </>
+          ) : (
+            <Text tone="soft">Not sighted in with this build yet.</Text>
+          )}
+        </View>
+        {warnings.length > 0 ? (
+          <Banner tone="warn" title={`Look at before you go: ${build.name}`} testID={`readiness-build-${build.id}-warnings`}>
+            <View style={styles.list}>
+              {warnings.map((warning) => (
+                <Text key={warning}>• {warning}</Text>
+              ))}
+            </View>
+          </Banner>
+        ) : (
+          <Text tone="soft">Nothing open for this build.</Text>
+        )}
+      </Card>
+    </View>
+  );
+}
+
 /**
- * Before a trip: one bow's level state, its latest confirmed marks and the
- * longest of them, the saved tape and where it came from, and what to look at.
- * Fits on one printed page (web: a print button and a print stylesheet).
+ * Before a trip: one bow's level state, then each arrow build on its own: its
+ * latest confirmed marks and the longest of them, its saved tape and the
+ * sight-in it came from (never another build's), and what to look at.
+ * Fits on printed pages (web: a print button and a print stylesheet).
  * Example: `<ReadinessScreen bowId={3} />`
  */
 export function ReadinessScreen({ bowId }: { bowId: number }) {
-  const readiness = useReadiness(bowId);
+  const readiness = useTripByBuild(bowId);
   if (readiness.isPending) return <LoadingView label="Gathering the bow's records…" />;
   if (readiness.isError) {
     if (isApiError(readiness.error, 404) || isApiError(readiness.error, 400)) return <NotFoundScreen />;
     return <ErrorView title="The summary could not be loaded" error={readiness.error} onRetry={() => readiness.refetch()} retrying={readiness.isFetching} />;
   }
   const data = readiness.data;
-  const { level, marks, tape } = data;
+  const { level } = data;
+  const sighted = data.builds.filter((part) => part.marks !== null);
+  const unsighted = data.builds.filter((part) => part.marks === null);
 
   return (
     <Screen testID="readiness-screen">
@@ -79,8 +137,7 @@ export function ReadinessScreen({ bowId }: { bowId: number }) {
           </Text>
         </View>
 
-        <View style={styles.grid}>
-          <View style={styles.cell} {...cardInPrint}>
+        <View {...cardInPrint}>
           <Card testID="readiness-level">
             <Text variant="label">Level</Text>
             <ReadinessBadge state={level.state} label={levelStateLabels[level.state]} subject="Level" />
@@ -91,65 +148,38 @@ export function ReadinessScreen({ bowId }: { bowId: number }) {
               </Text>
             ) : null}
           </Card>
-          </View>
-
-          <View style={styles.cell} {...cardInPrint}>
-          <Card testID="readiness-tape">
-            <Text variant="label">Tape</Text>
-            {tape ? (
-              <>
-                <Text>
-                  {tape.label ? `“${tape.label}”, ` : ''}
-                  {tape.fromDistance}–{tape.toDistance} {tape.unit}, printed from the sight-in of {formatDay(tape.sessionDate)}
-                  {tape.fromLatestSession ? ' (the latest).' : '.'}
-                </Text>
-                <Text variant="small" tone="soft">
-                  Saved {formatWhen(tape.savedAt)}.
-                </Text>
-              </>
-            ) : (
-              <Text tone="soft">No tape saved.</Text>
-            )}
-          </Card>
-          </View>
         </View>
 
-        <View {...cardInPrint}>
-        <Card testID="readiness-marks">
-          <Text variant="label">Confirmed marks</Text>
-          {marks ? (
-            <>
-              <Text tone="soft">
-                Sight-in of {formatDay(marks.date)}
-                {marks.placeLabel ? ` at ${marks.placeLabel}` : ''}
-                {marks.buildName ? `, arrows: ${marks.buildName}` : ''}.
-              </Text>
-              {marks.longestDistance !== null ? (
-                <Text variant="lead" testID="readiness-longest">
-                  Longest confirmed: <Text variant="numeralLarge">{marks.longestDistance}</Text> {marks.longestUnit}
-                </Text>
-              ) : null}
-              <Marks marks={marks} />
-            </>
-          ) : (
-            <Text tone="soft">No sight-in yet.</Text>
-          )}
-        </Card>
-          </View>
-
-        {data.warnings.length > 0 ? (
+        {data.bowWarnings.length > 0 ? (
           <Banner tone="warn" title="Look at before you go" testID="readiness-warnings">
             <View style={styles.list}>
-              {data.warnings.map((warning) => (
+              {data.bowWarnings.map((warning) => (
                 <Text key={warning}>• {warning}</Text>
               ))}
             </View>
           </Banner>
-        ) : (
+        ) : null}
+
+        {sighted.length > 1 ? (
+          <Text tone="soft">
+            {sighted.length} arrow builds are sighted in on this bow. Each tape below is checked against its own build’s sight-ins only: take the tape of the arrows
+            you will shoot.
+          </Text>
+        ) : null}
+        {sighted.map((part) => (
+          <BuildPart key={part.build.id} part={part} />
+        ))}
+        {unsighted.length > 0 ? (
+          <Text tone="soft" testID="readiness-unsighted">
+            Not sighted in yet: {unsighted.map((part) => part.build.name).join(', ')}.
+          </Text>
+        ) : null}
+
+        {data.bowWarnings.length === 0 && sighted.every((part) => part.warnings.length === 0) ? (
           <Banner tone="info" title="Nothing open">
             No open warnings for this bow.
           </Banner>
-        )}
+        ) : null}
 
         <Banner tone="caution">
           A printed tape is an estimate until every distance you will shoot has been confirmed at the range. Slope and altitude
@@ -164,12 +194,11 @@ const styles = StyleSheet.create({
   tools: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'center', gap: space.md },
   sheet: { gap: space.lg },
   header: { gap: space.xs },
-  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
-  cell: { flexGrow: 1, flexBasis: 280 },
   table: { borderTopWidth: borders.hairline, borderColor: colors.line },
   tr: { flexDirection: 'row', borderBottomWidth: borders.hairline, borderColor: colors.line, paddingVertical: space.xs },
   th: { backgroundColor: colors.sunken },
   stripe: { backgroundColor: colors.paper },
   td: { flex: 1, paddingHorizontal: space.sm },
   list: { gap: space.xs },
+  part: { gap: space.xs },
 });

@@ -1,16 +1,18 @@
 /**
- * Before a trip: one bow's readiness on one page — the level state, the marks
- * of the latest sight-in session (each one shot at the range, so confirmed)
- * and the longest of them, the saved tape and the session it was printed
- * from (the newest sight-in with a tape), and plain warnings about what to
- * look at before leaving.
+ * Before a trip: one bow's readiness on one page — the level state, then for
+ * each arrow build on its own: the marks of its latest sight-in (each one shot
+ * at the range, so confirmed) and the longest of them, its saved tape and the
+ * sight-in it was printed from (the newest of that build's sight-ins with a
+ * tape: never another build's), and plain warnings about what to look at
+ * before leaving. Sight-ins are named by shared/sight-in-name.ts.
  */
 import { Op } from 'sequelize';
 import { ArrowBuild, BowChange, SessionMark, SightSession, Tape, type User } from '@/server/models';
 import { readableBow } from '@/server/services/bow-access';
 import { levelSummaryForBows } from '@/server/services/level-service';
 import { bowChangeLabels } from '@/shared/level-status';
-import type { TripReadiness } from '@/shared/level';
+import type { TripBuild, TripByBuild } from '@/shared/trip';
+import { sightInName } from '@/shared/sight-in-name';
 
 /** 1 yd = 0.9144 m exactly (international yard and pound agreement, 1959). */
 const metresPerYard = 0.9144;
@@ -62,47 +64,35 @@ function fitWarnings(fit: unknown, span: { from: number; to: number } | null): s
   return sentences;
 }
 
-/**
- * GET /api/bows/:bowId/readiness
- * Example: (await tripReadiness(marit, 3)).level.state → 'verified'
- */
-export async function tripReadiness(user: User, bowId: number, now = new Date()): Promise<TripReadiness> {
-  const bow = await readableBow(user, bowId);
-  const level = (await levelSummaryForBows([bowId], now)).get(bowId)!;
+type SessionRow = Pick<SightSession, 'id' | 'date' | 'placeLabel' | 'buildId' | 'fit' | 'createdAt'>;
 
-  // The latest session by date, then id (the same order the bench uses).
-  const sessions = await SightSession.findAll({
-    where: { bowId },
-    attributes: ['id', 'date', 'placeLabel', 'buildId', 'fit', 'createdAt'],
-    order: [['date', 'DESC'], ['id', 'DESC']],
-  });
+/** One build's part: its latest sight-in's marks, its latest tape and its warnings. */
+async function buildPart(
+  bowId: number,
+  build: { id: number; name: string },
+  sessions: SessionRow[],
+  allSessions: SessionRow[],
+  tapes: Tape[],
+): Promise<TripBuild> {
+  // Model instances keep their values behind getters: copy the fields the name needs.
+  const nameable = (s: SessionRow) => ({ id: s.id, date: s.date, placeLabel: s.placeLabel, buildId: s.buildId, createdAt: s.createdAt.toISOString() });
+  const siblings = allSessions.map(nameable);
+  const nameOf = (session: SessionRow) => sightInName(nameable(session), { buildName: build.name, siblings, timeZone: 'UTC' });
   const latest = sessions[0] ?? null;
-  const [marks, build] = latest
-    ? await Promise.all([
-        SessionMark.findAll({ where: { sessionId: latest.id }, order: [['position', 'ASC']] }),
-        ArrowBuild.findByPk(latest.buildId, { attributes: ['id', 'name'] }),
-      ])
-    : [[], null];
+  const marks = latest ? await SessionMark.findAll({ where: { sessionId: latest.id }, order: [['position', 'ASC']] }) : [];
   let longest: SessionMark | null = null;
   for (const mark of marks) {
     if (!longest || inMetres(mark.distance, mark.unit) > inMetres(longest.distance, longest.unit)) longest = mark;
   }
-
-  // The tape for the trip: from the newest sight-in that has one (a newer sight-in supersedes
-  // older tapes), the last saved of that session's tapes.
-  const tapes = sessions.length
-    ? await Tape.findAll({ where: { sessionId: { [Op.in]: sessions.map((s) => s.id) } }, order: [['createdAt', 'DESC'], ['id', 'DESC']] })
-    : [];
+  // The build's tape: from the newest of its sight-ins that has one, the last saved of that sight-in's tapes.
   const tapeRow = sessions.map((session) => tapes.find((t) => t.sessionId === session.id)).find(Boolean) ?? null;
   const tapeSession = tapeRow ? sessions.find((s) => s.id === tapeRow.sessionId)! : null;
 
   const warnings: string[] = [];
-  if (level.state !== 'verified') warnings.push(`Level: ${level.reason}`);
-  else if (!level.rangeConfirmed) warnings.push('The level was verified on the bench only; confirm with a long shot and a steep shot at the range.');
   if (!latest) {
-    warnings.push('No sight-in session yet: there are no confirmed marks for this bow.');
+    warnings.push('Not sighted in yet: no confirmed marks and no tape for this build.');
   } else {
-    if (marks.length < 2) warnings.push('The latest session has fewer than two marks; a tape needs at least two.');
+    if (marks.length < 2) warnings.push('The latest sight-in has fewer than two marks; a tape needs at least two.');
     // Sessions carry a calendar date only: a change on a later date (UTC) is after it.
     const changedSinceSession = await BowChange.findAll({
       where: { bowId, changedAt: { [Op.gte]: new Date(new Date(`${latest.date}T00:00:00.000Z`).getTime() + dayMs) } },
@@ -114,18 +104,15 @@ export async function tripReadiness(user: User, bowId: number, now = new Date())
         `${bowChangeLabels[first.kind]} after the latest sight-in (${dayWords(latest.date)}): the marks may have moved; confirm them at the range.`,
       );
     }
-  }
-  if (latest) {
     const span = tapeRow && tapeRow.sessionId === latest.id && tapeRow.unit === ((latest.fit as { distanceUnit?: string })?.distanceUnit ?? 'yd')
       ? { from: tapeRow.fromDistance, to: tapeRow.toDistance }
       : null;
     warnings.push(...fitWarnings(latest.fit, span));
+    if (!tapeRow) warnings.push('No tape saved for this build yet.');
   }
-  if (!tapeRow) {
-    if (latest) warnings.push('No tape saved for this bow yet.');
-  } else {
-    if (latest && tapeRow.sessionId !== latest.id) {
-      warnings.push(`The saved tape was printed from an older sight-in (${dayWords(tapeSession!.date)}); print one from the latest marks (${dayWords(latest.date)}).`);
+  if (tapeRow && latest) {
+    if (tapeRow.sessionId !== latest.id) {
+      warnings.push(`The saved tape was printed from an older sight-in (${nameOf(tapeSession!)}); print one from the latest marks (${nameOf(latest)}).`);
     }
     if (longest && inMetres(tapeRow.toDistance, tapeRow.unit) > inMetres(longest.distance, longest.unit) + 1e-6) {
       warnings.push(
@@ -133,16 +120,14 @@ export async function tripReadiness(user: User, bowId: number, now = new Date())
       );
     }
   }
-
   return {
-    bow: { id: bow.id, nickname: bow.nickname, sightDescription: bow.sightDescription },
-    level,
+    build,
     marks: latest
       ? {
           sessionId: latest.id,
+          name: nameOf(latest),
           date: latest.date,
           placeLabel: latest.placeLabel,
-          buildName: build?.name ?? null,
           marks: marks.map((m) => ({ distance: m.distance, unit: m.unit, scaleMm: m.scaleMm })),
           longestDistance: longest?.distance ?? null,
           longestUnit: longest?.unit ?? null,
@@ -152,6 +137,7 @@ export async function tripReadiness(user: User, bowId: number, now = new Date())
       ? {
           id: tapeRow.id,
           sessionId: tapeRow.sessionId,
+          sessionName: nameOf(tapeSession!),
           sessionDate: tapeSession!.date,
           fromDistance: tapeRow.fromDistance,
           toDistance: tapeRow.toDistance,
@@ -162,6 +148,82 @@ export async function tripReadiness(user: User, bowId: number, now = new Date())
         }
       : null,
     warnings,
+  };
+}
+
+/**
+ * GET /api/bows/:bowId/readiness
+ * Example: (await tripReadiness(marit, 3)).builds[0].tape?.fromLatestSession → true
+ */
+export async function tripReadiness(user: User, bowId: number, now = new Date()): Promise<TripByBuild> {
+  const bow = await readableBow(user, bowId);
+  const level = (await levelSummaryForBows([bowId], now)).get(bowId)!;
+
+  // Sessions newest first by date, then id (the same order the bench uses).
+  const [sessions, builds] = await Promise.all([
+    SightSession.findAll({
+      where: { bowId },
+      attributes: ['id', 'date', 'placeLabel', 'buildId', 'fit', 'createdAt'],
+      order: [['date', 'DESC'], ['id', 'DESC']],
+    }),
+    ArrowBuild.findAll({ where: { bowId }, attributes: ['id', 'name'], order: [['id', 'ASC']] }),
+  ]);
+  const tapes = sessions.length
+    ? await Tape.findAll({ where: { sessionId: { [Op.in]: sessions.map((s) => s.id) } }, order: [['createdAt', 'DESC'], ['id', 'DESC']] })
+    : [];
+  // Builds with sight-ins in the order of their latest sight-in, then the others.
+  const order = (build: ArrowBuild) => {
+    const index = sessions.findIndex((session) => session.buildId === build.id);
+    return index < 0 ? sessions.length + build.id : index;
+  };
+  const sorted = [...builds].sort((a, b) => order(a) - order(b));
+  const parts = await Promise.all(
+    sorted.map((build) => buildPart(bowId, { id: build.id, name: build.name }, sessions.filter((s) => s.buildId === build.id), sessions, tapes)),
+  );
+
+  const bowWarnings: string[] = [];
+  if (level.state !== 'verified') bowWarnings.push(`Level: ${level.reason}`);
+  else if (!level.rangeConfirmed) bowWarnings.push('The level was verified on the bench only; confirm with a long shot and a steep shot at the range.');
+  if (sessions.length === 0) bowWarnings.push('No sight-in session yet: there are no confirmed marks for this bow.');
+
+  // The older single-build fields: the build of the latest sight-in.
+  const main = sessions.length ? parts[0] : null;
+  const sighted = parts.filter((part) => part.marks !== null);
+  const warnings = [
+    ...bowWarnings,
+    ...sighted.flatMap((part) => (part === main ? part.warnings : part.warnings.map((warning) => `${part.build.name}: ${warning}`))),
+  ];
+
+  return {
+    bow: { id: bow.id, nickname: bow.nickname, sightDescription: bow.sightDescription },
+    level,
+    marks: main?.marks
+      ? {
+          sessionId: main.marks.sessionId,
+          date: main.marks.date,
+          placeLabel: main.marks.placeLabel,
+          buildName: main.build.name,
+          marks: main.marks.marks,
+          longestDistance: main.marks.longestDistance,
+          longestUnit: main.marks.longestUnit,
+        }
+      : null,
+    tape: main?.tape
+      ? {
+      id: main.tape.id,
+      sessionId: main.tape.sessionId,
+      sessionDate: main.tape.sessionDate,
+      fromDistance: main.tape.fromDistance,
+      toDistance: main.tape.toDistance,
+      unit: main.tape.unit,
+      label: main.tape.label,
+      savedAt: main.tape.savedAt,
+      fromLatestSession: main.tape.fromLatestSession,
+        }
+      : null,
+    warnings,
+    bowWarnings,
+    builds: parts,
     generatedAt: now.toISOString(),
   };
 }
