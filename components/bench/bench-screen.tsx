@@ -1,8 +1,10 @@
 import { StyleSheet, View } from 'react-native';
 
+import { useMe } from '@/components/auth/api';
 import { useBenchBows } from '@/components/bench/api';
 import { BenchArt } from '@/components/bench/bench-art';
 import { BowCard } from '@/components/bench/bow-card';
+import { ClientList } from '@/components/clients/client-list';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorView } from '@/components/ui/error-view';
@@ -16,9 +18,14 @@ import { space } from '@/components/theme';
 
 const title = <ScreenTitle name="Bench" />;
 
-/** The home: the archer's bows with their readiness, or the first step when there are none. */
+/**
+ * The home: the archer's bows with their readiness, or the first step when
+ * there are none. A technician's home is their clients and the bows shared
+ * with them (and their own bows, if they keep any, below).
+ */
 export function BenchScreen() {
   const bows = useBenchBows();
+  const me = useMe();
   const wide = useWide();
 
   if (bows.isPending) {
@@ -44,6 +51,31 @@ export function BenchScreen() {
   }
 
   const list = bows.data;
+  if (me.data?.role === 'tech') {
+    return (
+      <Screen testID="tech-bench">
+        {title}
+        <SectionHeading
+          level={1}
+          title="Bench"
+          description="The bows archers share with you. Open one to read its records and add a build, a sight-in, marks, a level check or a change: each is shown to the archer as yours."
+        />
+        <ClientList />
+        {list.length > 0 ? (
+          <>
+            <SectionHeading level={2} title="Your own bows" action={<Button label="Add a bow" icon={PlusIcon} variant="quiet" href="/bows/new" />} />
+            <View style={[styles.grid, wide && styles.gridWide]}>
+              {list.map((bow) => (
+                <View key={bow.id} style={wide ? styles.cellWide : styles.cell}>
+                  <BowCard bow={bow} />
+                </View>
+              ))}
+            </View>
+          </>
+        ) : null}
+      </Screen>
+    );
+  }
   return (
     <Screen>
       {title}
