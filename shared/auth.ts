@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { altitudePrefSchema, massPrefSchema, speedPrefSchema, temperaturePrefSchema } from './units';
+
 /**
  * Account schemas shared by the sign-up/sign-in forms and the server's
  * validate() middleware. Imports only zod.
@@ -38,6 +40,8 @@ export const signUpSchema = z.object({
     .string({ required_error: 'Enter a password', invalid_type_error: 'Enter a password' })
     .min(passwordMinLength, `Password must be at least ${passwordMinLength} characters`)
     .max(passwordMaxLength, `Password must be at most ${passwordMaxLength} characters`),
+  /** The first unit choice; the others follow from it (shared/units.ts unitDefaultsFor). Absent: yards. */
+  distanceUnit: z.enum(['yd', 'm'], { errorMap: () => ({ message: 'Choose yards or metres' }) }).optional(),
 });
 
 /** Sign-in: e-mail and any non-empty password (length rules apply at sign-up only). */
@@ -64,6 +68,12 @@ export const userSchema = z.object({
   role: roleSchema,
   distanceUnit: distanceUnitSchema,
   lengthUnit: lengthUnitSchema,
+  // The server always sends these (migration 0065); optional so that a user kept
+  // from before them (an offline cache) still reads, shown in m, °C, fps and grains.
+  altitudeUnit: altitudePrefSchema.optional(),
+  temperatureUnit: temperaturePrefSchema.optional(),
+  speedUnit: speedPrefSchema.optional(),
+  massUnit: massPrefSchema.optional(),
 });
 
 export type SignUpInput = z.infer<typeof signUpSchema>;
@@ -79,9 +89,13 @@ export const profileUpdateSchema = z
     name: signUpSchema.shape.name.optional(),
     distanceUnit: distanceUnitSchema.optional(),
     lengthUnit: lengthUnitSchema.optional(),
+    altitudeUnit: altitudePrefSchema.optional(),
+    temperatureUnit: temperaturePrefSchema.optional(),
+    speedUnit: speedPrefSchema.optional(),
+    massUnit: massPrefSchema.optional(),
   })
-  .strict('Only name, distance unit and length unit can be changed here')
-  .refine((v) => v.name !== undefined || v.distanceUnit !== undefined || v.lengthUnit !== undefined, {
+  .strict('Only your name and units can be changed here')
+  .refine((v) => Object.values(v).some((value) => value !== undefined), {
     message: 'Nothing to change: give a name or a unit',
   });
 

@@ -294,7 +294,7 @@ export function dateWords(iso: string): string {
 }
 
 /** A typed date read: the ISO date (with a note saying how a two-way form was read), or a message. */
-export type ParsedDate = { iso: string; note?: string; error?: undefined } | { iso?: undefined; error: string };
+export type ParsedDate = { iso: string; note?: string; error?: undefined } | { iso?: undefined; note?: undefined; error: string };
 
 /**
  * A typed date → YYYY-MM-DD. Accepts ISO (2026-12-02) and the numeric forms

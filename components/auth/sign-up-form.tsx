@@ -8,10 +8,16 @@ import { useSignUp } from '@/components/auth/api';
 import { applyServerErrors } from '@/components/auth/server-errors';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { FormChoice } from '@/components/ui/form-choice';
 import { FormField } from '@/components/ui/form-field';
 import { space } from '@/components/theme';
 import { passwordMinLength, signUpSchema, type SignUpInput, type User } from '@/shared/auth';
 import { emailInputProps } from '@/components/ui/email-input-props';
+
+const unitOptions = [
+  { value: 'yd', label: 'Yards' },
+  { value: 'm', label: 'Metres' },
+] as const;
 
 export interface SignUpFormProps {
   /** Called after the account is made and signed in (the user is already in the useMe cache). */
@@ -19,8 +25,9 @@ export interface SignUpFormProps {
 }
 
 /**
- * Name, e-mail and password, validated with the shared sign-up schema. A taken
- * e-mail (409) is shown under the e-mail field.
+ * Name, e-mail, password and the first unit choice (yards or metres, which
+ * sets the account's other units), validated with the shared sign-up schema.
+ * A taken e-mail (409) is shown under the e-mail field.
  * Example: `<SignUpForm />`
  */
 export function SignUpForm({ onSignedUp }: SignUpFormProps) {
@@ -28,7 +35,7 @@ export function SignUpForm({ onSignedUp }: SignUpFormProps) {
   const [general, setGeneral] = useState<string | null>(null);
   const { control, handleSubmit, setError, setFocus } = useForm<SignUpInput>({
     resolver: zodResolver(signUpSchema),
-    defaultValues: { name: '', email: '', password: '' },
+    defaultValues: { name: '', email: '', password: '', distanceUnit: 'yd' },
   });
 
   const submit = handleSubmit((values) => {
@@ -40,7 +47,7 @@ export function SignUpForm({ onSignedUp }: SignUpFormProps) {
           setError('email', { type: 'server', message: error.message });
           return;
         }
-        setGeneral(applyServerErrors(error, ['name', 'email', 'password'], setError));
+        setGeneral(applyServerErrors(error, ['name', 'email', 'password', 'distanceUnit'], setError));
       },
     });
   });
@@ -78,6 +85,14 @@ export function SignUpForm({ onSignedUp }: SignUpFormProps) {
         secureTextEntry
         returnKeyType="go"
         onSubmitEditing={submit}
+      />
+      <FormChoice
+        control={control}
+        name="distanceUnit"
+        label="You shoot in"
+        hint="Yards: lengths in inches, altitude in feet, °F, fps. Metres: mm, metres, °C, m/s. Arrow weights in grains either way; change any of them later on your account page."
+        options={unitOptions}
+        testID="sign-up-units"
       />
       <Button
         label="Create account"

@@ -4,16 +4,20 @@ import {
   lengthTextToMm,
   mmToLengthText,
   numberToText,
+  optionalQuantityTextToStored,
   optionalTextToNumber,
+  storedToInputText,
   textToNumber,
+  type FormUnits,
 } from '@/components/bows/form-numbers';
-import type { DistanceUnit, LengthUnit } from '@/shared/auth';
+import type { DistanceUnit } from '@/shared/auth';
 import { bowInputSchema, type Bow, type Hand, type ScaleDirection, type SightKind } from '@/shared/bow';
 
 /**
- * What the bow form holds: text for every number (lengths in the archer's
- * unit, despite the "Mm" names kept so that schema errors land on the right
- * field), choices as their values, pin distances as one list "20, 30, 40".
+ * What the bow form holds: text for every number (lengths and the rated speed
+ * in the archer's units, despite the "Mm" and "Fps" names kept so that schema
+ * errors land on the right field), choices as their values, pin distances as
+ * one list "20, 30, 40".
  */
 export interface BowFormText {
   nickname: string;
@@ -45,11 +49,11 @@ export function pinListToNumbers(text: string): number[] {
 const roundTenth = (mm: number | undefined) => (mm === undefined || !Number.isFinite(mm) ? mm : Math.round(mm * 10) / 10);
 
 /**
- * The form schema for one length unit: text → the API's bow input (mm), then
- * the shared bowInputSchema.
+ * The form schema for the archer's units (a length unit, or an account's
+ * choices): text → the API's bow input (mm, fps), then the shared bowInputSchema.
  * Example: bowFormSchema('in').parse({ …, sightRadiusMm: '33' }).sightRadiusMm → 838.2
  */
-export function bowFormSchema(unit: LengthUnit) {
+export function bowFormSchema(unit: FormUnits) {
   const optionalLengthMm = (text: string) => {
     const value = lengthTextToMm(text, unit);
     return value === undefined ? null : value;
@@ -78,7 +82,7 @@ export function bowFormSchema(unit: LengthUnit) {
       drawWeightLb: textToNumber(text.drawWeightLb),
       drawLengthMm: lengthTextToMm(text.drawLengthMm, unit),
       letOffPct: optionalTextToNumber(text.letOffPct),
-      ratedSpeedFps: optionalTextToNumber(text.ratedSpeedFps),
+      ratedSpeedFps: optionalQuantityTextToStored(text.ratedSpeedFps, 'speed', unit),
       sightDescription: text.sightDescription,
       sightKind: text.sightKind,
       sightRadiusMm: lengthTextToMm(text.sightRadiusMm, unit),
@@ -98,7 +102,7 @@ export function bowFormSchema(unit: LengthUnit) {
  * The form's starting text: a stored bow in the archer's unit, or a new bow's defaults.
  * Example: bowFormDefaults(undefined, 'mm', 'yd').tapeWidthMm → '8'
  */
-export function bowFormDefaults(bow: Bow | undefined, unit: LengthUnit, distanceUnit: DistanceUnit): BowFormText {
+export function bowFormDefaults(bow: Bow | undefined, unit: FormUnits, distanceUnit: DistanceUnit): BowFormText {
   if (!bow) {
     return {
       nickname: '',
@@ -124,7 +128,7 @@ export function bowFormDefaults(bow: Bow | undefined, unit: LengthUnit, distance
     drawWeightLb: numberToText(bow.drawWeightLb, 1),
     drawLengthMm: mmToLengthText(bow.drawLengthMm, unit),
     letOffPct: numberToText(bow.letOffPct, 1),
-    ratedSpeedFps: numberToText(bow.ratedSpeedFps, 1),
+    ratedSpeedFps: storedToInputText(bow.ratedSpeedFps, 'speed', unit),
     sightDescription: bow.sightDescription,
     sightKind: bow.sightKind,
     sightRadiusMm: mmToLengthText(bow.sightRadiusMm, unit),

@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
+import { useUnits } from '@/components/account/use-units';
 import { useSaveBow } from '@/components/bows/api';
 import { bowFormDefaults, bowFormFields, bowFormSchema, type BowFormText } from '@/components/bows/bow-form-values';
 import { FieldGrid } from '@/components/bows/field-grid';
@@ -16,6 +17,7 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { space } from '@/components/theme';
 import type { DistanceUnit, LengthUnit } from '@/shared/auth';
 import type { Bow, BowInput } from '@/shared/bow';
+import { shownUnit, type UnitsLike } from '@/shared/units';
 
 export interface BowFormProps {
   /** The bow to edit; absent for a new bow. */
@@ -55,14 +57,18 @@ const distanceOptions = [
  */
 export function BowForm({ bow, lengthUnit, distanceUnit, onSaved, onCancel }: BowFormProps) {
   const save = useSaveBow();
+  const me = useUnits();
   const [general, setGeneral] = useState<string | null>(null);
+  // The account's speed choice beside the length unit the screen passes (altitude left out: pin distances may be in metres).
+  const speedUnit = me?.speedUnit;
+  const units = useMemo<UnitsLike>(() => ({ lengthUnit, speedUnit }), [lengthUnit, speedUnit]);
   const resolver = useMemo(
-    () => textFormResolver<BowFormText, BowInput>(bowFormSchema(lengthUnit), { inches: lengthUnit === 'in', flatten: ['pinDistances'] }),
-    [lengthUnit],
+    () => textFormResolver<BowFormText, BowInput>(bowFormSchema(units), { units, flatten: ['pinDistances'] }),
+    [units],
   );
   const { control, handleSubmit, setError, formState } = useForm<BowFormText, unknown, BowInput>({
     resolver,
-    defaultValues: bowFormDefaults(bow, lengthUnit, distanceUnit),
+    defaultValues: bowFormDefaults(bow, units, distanceUnit),
   });
   // Read in render: react-hook-form tracks dirty fields only for a formState that is read.
   const { dirtyFields } = formState;
@@ -108,7 +114,7 @@ export function BowForm({ bow, lengthUnit, distanceUnit, onSaved, onCancel }: Bo
           <FormField control={control} name="drawWeightLb" label="Draw weight" hint="Peak weight" unit="lb" numeric />
           <FormField control={control} name="drawLengthMm" label="Draw length" hint="As the bow is set" unit={unit} numeric />
           <FormField control={control} name="letOffPct" label="Let-off" hint="Optional" unit="%" numeric />
-          <FormField control={control} name="ratedSpeedFps" label="Rated speed" hint="Optional" unit="fps" numeric />
+          <FormField control={control} name="ratedSpeedFps" label="Rated speed" hint="Optional" unit={shownUnit('speed', units)} numeric />
         </FieldGrid>
       </Card>
 

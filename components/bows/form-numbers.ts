@@ -1,4 +1,5 @@
-import { inchesToMm, mmToInches, type LengthUnit } from '@/math/units/convert';
+import { mmToInches, type LengthUnit } from '@/math/units/convert';
+import { messageInUnits, parseQuantity, storedToText, type Quantity, type UnitsLike } from '@/shared/units';
 
 /**
  * The edge between what an archer types and what the API stores. Forms hold
@@ -29,18 +30,52 @@ export function optionalTextToNumber(text: string | undefined | null): number | 
   return value === undefined ? null : value;
 }
 
+/** A form's units: a bare length unit (older callers) or an account's choices. */
+export type FormUnits = LengthUnit | UnitsLike;
+
+/** FormUnits → the choices shared/units reads. Example: unitsOf('in') → { lengthUnit: 'in' } */
+export function unitsOf(units: FormUnits): UnitsLike {
+  return typeof units === 'string' ? { lengthUnit: units } : units;
+}
+
 /**
- * A length typed in `unit` → millimetres (undefined / NaN pass through).
+ * A quantity typed in the archer's unit (or with a unit of its own after it,
+ * "28.5 in", "9200 ft") → its stored unit (shared/units.ts); '' → undefined;
+ * unreadable → NaN (the schema then says "… must be a number").
+ * Example: quantityTextToStored('50', 'temperature', { temperatureUnit: 'F' }) → 10
+ */
+export function quantityTextToStored(text: string | undefined | null, quantity: Quantity, units: FormUnits): number | undefined {
+  const parsed = parseQuantity(text, quantity, unitsOf(units));
+  return parsed.error !== undefined ? NaN : parsed.value;
+}
+
+/** As quantityTextToStored, but '' → null (an optional measurement left empty). */
+export function optionalQuantityTextToStored(text: string | undefined | null, quantity: Quantity, units: FormUnits): number | null {
+  const value = quantityTextToStored(text, quantity, units);
+  return value === undefined ? null : value;
+}
+
+/** A stored value → input text in the archer's unit. Example: storedToInputText(723.9, 'length', 'in') → '28.5' */
+export function storedToInputText(stored: number | null | undefined, quantity: Quantity, units: FormUnits, digits?: number): string {
+  return storedToText(stored, quantity, unitsOf(units), digits);
+}
+
+/** A schema message with stored units → the archer's units ("at least 500 mm" → "at least 19.69 in"). */
+export function messageForUnits(message: string, units: FormUnits, only?: readonly Quantity[]): string {
+  return messageInUnits(message, unitsOf(units), only);
+}
+
+/**
+ * A length typed in `unit` → millimetres (undefined / NaN pass through); a
+ * unit typed after the number is honoured ("28.5 in" in a mm field).
  * Example: lengthTextToMm('4.5', 'in') → 114.3
  */
-export function lengthTextToMm(text: string | undefined | null, unit: LengthUnit): number | undefined {
-  const value = textToNumber(text);
-  if (value === undefined || Number.isNaN(value)) return value;
-  return unit === 'in' ? inchesToMm(value) : value;
+export function lengthTextToMm(text: string | undefined | null, unit: FormUnits): number | undefined {
+  return quantityTextToStored(text, 'length', unit);
 }
 
 /** As lengthTextToMm, but '' → null. Example: optionalLengthTextToMm('', 'mm') → null */
-export function optionalLengthTextToMm(text: string | undefined | null, unit: LengthUnit): number | null {
+export function optionalLengthTextToMm(text: string | undefined | null, unit: FormUnits): number | null {
   const value = lengthTextToMm(text, unit);
   return value === undefined ? null : value;
 }
@@ -59,9 +94,8 @@ export function numberToText(value: number | null | undefined, digits = 2): stri
  * A stored length (mm) → text in the archer's unit: mm to 0.1 mm, inches to 1/1000 in.
  * Example: mmToLengthText(838.2, 'in') → '33'
  */
-export function mmToLengthText(mm: number | null | undefined, unit: LengthUnit): string {
-  if (mm === null || mm === undefined) return '';
-  return unit === 'in' ? numberToText(mmToInches(mm), 3) : numberToText(mm, 1);
+export function mmToLengthText(mm: number | null | undefined, unit: FormUnits): string {
+  return storedToText(mm, 'length', unitsOf(unit));
 }
 
 /**

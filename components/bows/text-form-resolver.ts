@@ -1,11 +1,13 @@
 import { set, type FieldErrors, type FieldValues, type Resolver } from 'react-hook-form';
 import type { ZodIssue, ZodType, ZodTypeDef } from 'zod';
 
-import { withInches } from '@/components/bows/form-numbers';
+import { messageForUnits, type FormUnits } from '@/components/bows/form-numbers';
 
 export interface TextFormResolverOptions {
-  /** Add inch equivalents to messages that name millimetres (the archer types inches). */
+  /** Messages that name millimetres state inches instead (the archer types inches). */
   inches?: boolean;
+  /** The archer's units: limits in messages are stated in them ("at least 19.69 in", "at most 122 °F"). */
+  units?: FormUnits;
   /** Fields whose nested issues (e.g. pinDistances[2]) are shown on the field itself. */
   flatten?: readonly string[];
   /** Maps an issue's path in the API input to the form field it belongs to (default: the path joined with dots). */
@@ -44,7 +46,11 @@ export function textFormResolver<TText extends FieldValues, TOut extends FieldVa
       const path = pathOf(issue, flatten, options.mapPath) || 'root';
       if (seen.has(path)) continue;
       seen.add(path);
-      const message = options.inches ? withInches(issue.message) : issue.message;
+      const message = options.units
+        ? messageForUnits(issue.message, options.units)
+        : options.inches
+          ? messageForUnits(issue.message, 'in', ['length'])
+          : issue.message;
       set(errors, path === 'root' ? 'root.form' : path, { type: issue.code, message });
     }
     return { values: {}, errors };

@@ -5,18 +5,24 @@ import {
   mmToLengthText,
   numberToText,
   optionalLengthTextToMm,
+  optionalQuantityTextToStored,
   optionalTextToNumber,
+  quantityTextToStored,
+  storedToInputText,
   textToNumber,
+  unitsOf,
+  type FormUnits,
 } from '@/components/bows/form-numbers';
 import { mmToInches } from '@/math/units/convert';
-import type { LengthUnit } from '@/shared/auth';
 import { buildInputSchema, type Build } from '@/shared/build';
 import { buildNumberFields } from '@/shared/predict';
 
 /**
- * What the build form holds: text for every number; cut length, diameter and
- * balance point in the archer's length unit (the "Mm" names are kept so schema
- * errors land on the right field); weights in grains; speed in fps.
+ * What the build form holds: text for every number, each in the archer's
+ * unit (shared/units.ts): cut length, diameter and balance point in inches or
+ * mm, part weights in grains or grams, speed in fps or m/s (the "Mm", "Gr"
+ * and "Fps" names are kept so schema errors land on the right field). Grains
+ * per inch stays gr/in, as shafts are labelled.
  */
 export interface BuildFormText {
   name: string;
@@ -45,7 +51,9 @@ export const buildFormFields: readonly (keyof BuildFormText)[] = ['name', 'shaft
  * schema's default of 0; empty optional measurements become null).
  * Example: buildTextToInput({ …, cutLengthMm: '29' }, 'in').cutLengthMm → 736.6
  */
-export function buildTextToInput(text: BuildFormText, unit: LengthUnit) {
+export function buildTextToInput(text: BuildFormText, unit: FormUnits) {
+  // A part's weight: '' → undefined (the schema's default 0), else grains.
+  const mass = (value: string) => quantityTextToStored(value, 'mass', unit);
   return {
     name: text.name,
     shaftLabel: text.shaftLabel,
@@ -53,15 +61,15 @@ export function buildTextToInput(text: BuildFormText, unit: LengthUnit) {
     grainsPerInch: textToNumber(text.grainsPerInch),
     cutLengthMm: lengthTextToMm(text.cutLengthMm, unit),
     diameterMm: lengthTextToMm(text.diameterMm, unit),
-    pointGr: textToNumber(text.pointGr),
-    insertGr: textToNumber(text.insertGr),
-    collarGr: textToNumber(text.collarGr),
-    nockGr: textToNumber(text.nockGr),
+    pointGr: mass(text.pointGr),
+    insertGr: mass(text.insertGr),
+    collarGr: mass(text.collarGr),
+    nockGr: mass(text.nockGr),
     vaneCount: textToNumber(text.vaneCount),
-    vaneWeightGr: textToNumber(text.vaneWeightGr),
-    wrapGr: textToNumber(text.wrapGr),
+    vaneWeightGr: mass(text.vaneWeightGr),
+    wrapGr: mass(text.wrapGr),
     balancePointMm: optionalLengthTextToMm(text.balancePointMm, unit),
-    speedFps: optionalTextToNumber(text.speedFps),
+    speedFps: optionalQuantityTextToStored(text.speedFps, 'speed', unit),
     dragCoefficient: optionalTextToNumber(text.dragCoefficient),
   };
 }
@@ -70,7 +78,7 @@ export function buildTextToInput(text: BuildFormText, unit: LengthUnit) {
  * The form schema for one length unit: text → API input → the shared buildInputSchema.
  * Example: buildFormSchema('mm').safeParse(text).success
  */
-export function buildFormSchema(unit: LengthUnit) {
+export function buildFormSchema(unit: FormUnits) {
   const text = z.string();
   return z
     .object(Object.fromEntries(buildFormFields.map((field) => [field, text])) as Record<keyof BuildFormText, z.ZodString>)
@@ -82,15 +90,15 @@ export function buildFormSchema(unit: LengthUnit) {
  * Diameter text in the archer's unit: mm to 0.01, inches to 0.001 (the trade
  * writes shaft diameters as e.g. .246 in).
  */
-function diameterText(mm: number, unit: LengthUnit): string {
-  return unit === 'in' ? numberToText(mmToInches(mm), 4) : numberToText(mm, 2);
+function diameterText(mm: number, unit: FormUnits): string {
+  return unitsOf(unit)?.lengthUnit === 'in' ? numberToText(mmToInches(mm), 4) : numberToText(mm, 2);
 }
 
 /**
  * The form's starting text: a stored build, or a new build's defaults (three vanes, zeros for parts not fitted).
  * Example: buildFormDefaults(undefined, 'mm').vaneCount → '3'
  */
-export function buildFormDefaults(build: Build | undefined, unit: LengthUnit): BuildFormText {
+export function buildFormDefaults(build: Build | undefined, unit: FormUnits): BuildFormText {
   if (!build) {
     return {
       name: '',
@@ -118,15 +126,15 @@ export function buildFormDefaults(build: Build | undefined, unit: LengthUnit): B
     grainsPerInch: numberToText(build.grainsPerInch, 2),
     cutLengthMm: mmToLengthText(build.cutLengthMm, unit),
     diameterMm: diameterText(build.diameterMm, unit),
-    pointGr: numberToText(build.pointGr, 1),
-    insertGr: numberToText(build.insertGr, 1),
-    collarGr: numberToText(build.collarGr, 1),
-    nockGr: numberToText(build.nockGr, 1),
+    pointGr: storedToInputText(build.pointGr, 'mass', unit),
+    insertGr: storedToInputText(build.insertGr, 'mass', unit),
+    collarGr: storedToInputText(build.collarGr, 'mass', unit),
+    nockGr: storedToInputText(build.nockGr, 'mass', unit),
     vaneCount: numberToText(build.vaneCount, 0),
-    vaneWeightGr: numberToText(build.vaneWeightGr, 1),
-    wrapGr: numberToText(build.wrapGr, 1),
+    vaneWeightGr: storedToInputText(build.vaneWeightGr, 'mass', unit),
+    wrapGr: storedToInputText(build.wrapGr, 'mass', unit),
     balancePointMm: mmToLengthText(build.balancePointMm, unit),
-    speedFps: numberToText(build.speedFps, 1),
+    speedFps: storedToInputText(build.speedFps, 'speed', unit),
     dragCoefficient: numberToText(build.dragCoefficient, 2),
   };
 }

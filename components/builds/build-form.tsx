@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
+import { useUnits } from '@/components/account/use-units';
 import { FieldGrid } from '@/components/bows/field-grid';
 import { applyFieldErrors, flatFieldPath } from '@/components/bows/server-field-errors';
 import { textFormResolver } from '@/components/bows/text-form-resolver';
@@ -17,6 +18,7 @@ import { useWide } from '@/components/ui/use-wide';
 import { space } from '@/components/theme';
 import type { LengthUnit } from '@/shared/auth';
 import type { Build, BuildInput } from '@/shared/build';
+import { shownUnit, type UnitsLike } from '@/shared/units';
 
 export interface BuildFormProps {
   /** The bow the build belongs to (new builds). */
@@ -39,17 +41,19 @@ export interface BuildFormProps {
 export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel, readOnly = false }: BuildFormProps) {
   const save = useSaveBuild();
   const wide = useWide();
+  const me = useUnits();
   const [general, setGeneral] = useState<string | null>(null);
-  const resolver = useMemo(
-    () => textFormResolver<BuildFormText, BuildInput>(buildFormSchema(lengthUnit), { inches: lengthUnit === 'in' }),
-    [lengthUnit],
-  );
+  // The account's speed and mass choices beside the length unit the screen passes.
+  const { speedUnit, massUnit } = me ?? {};
+  const units = useMemo<UnitsLike>(() => ({ lengthUnit, speedUnit, massUnit }), [lengthUnit, speedUnit, massUnit]);
+  const resolver = useMemo(() => textFormResolver<BuildFormText, BuildInput>(buildFormSchema(units), { units }), [units]);
   const { control, handleSubmit, setError } = useForm<BuildFormText, unknown, BuildInput>({
     resolver,
-    defaultValues: buildFormDefaults(build, lengthUnit),
+    defaultValues: buildFormDefaults(build, units),
   });
   const text = useWatch({ control }) as BuildFormText;
   const unit = lengthUnit;
+  const mass = shownUnit('mass', units);
 
   const submit = handleSubmit(
     (input) => {
@@ -82,17 +86,17 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel, readOnl
       </Card>
 
       <Card style={styles.section}>
-        <SectionHeading title="Components" description="Weights in grains. Leave a part you do not use empty." />
+        <SectionHeading title="Components" description={`Weights in ${mass === 'g' ? 'grams' : 'grains'}. Leave a part you do not use empty.`} />
         <FieldGrid minWidth={120}>
-          <FormField control={control} disabled={readOnly} name="pointGr" label="Point" hint="Or broadhead" unit="gr" numeric />
-          <FormField control={control} disabled={readOnly} name="insertGr" label="Insert" hint="If any" unit="gr" numeric />
-          <FormField control={control} disabled={readOnly} name="collarGr" label="Collar" hint="If any" unit="gr" numeric />
-          <FormField control={control} disabled={readOnly} name="nockGr" label="Nock" hint="With its bushing" unit="gr" numeric />
+          <FormField control={control} disabled={readOnly} name="pointGr" label="Point" hint="Or broadhead" unit={mass} numeric />
+          <FormField control={control} disabled={readOnly} name="insertGr" label="Insert" hint="If any" unit={mass} numeric />
+          <FormField control={control} disabled={readOnly} name="collarGr" label="Collar" hint="If any" unit={mass} numeric />
+          <FormField control={control} disabled={readOnly} name="nockGr" label="Nock" hint="With its bushing" unit={mass} numeric />
         </FieldGrid>
         <FieldGrid minWidth={150}>
           <FormField control={control} disabled={readOnly} name="vaneCount" label="Vanes" hint="How many" numeric />
-          <FormField control={control} disabled={readOnly} name="vaneWeightGr" label="Each vane" hint="One vane" unit="gr" numeric />
-          <FormField control={control} disabled={readOnly} name="wrapGr" label="Wrap" hint="If any" unit="gr" numeric />
+          <FormField control={control} disabled={readOnly} name="vaneWeightGr" label="Each vane" hint="One vane" unit={mass} numeric />
+          <FormField control={control} disabled={readOnly} name="wrapGr" label="Wrap" hint="If any" unit={mass} numeric />
         </FieldGrid>
       </Card>
 
@@ -108,7 +112,7 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel, readOnl
             unit={unit}
             numeric
           />
-          <FormField control={control} disabled={readOnly} name="speedFps" label="Chronographed speed" hint="From this bow. Gives energy." unit="fps" numeric />
+          <FormField control={control} disabled={readOnly} name="speedFps" label="Chronographed speed" hint="From this bow. Gives energy." unit={shownUnit('speed', units)} numeric />
           <FormField
             control={control}
             disabled={readOnly}
@@ -122,7 +126,7 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel, readOnl
     </View>
   );
 
-  const totals = <BuildTotals text={text} lengthUnit={lengthUnit} />;
+  const totals = <BuildTotals text={text} lengthUnit={units} />;
 
   return (
     <View style={styles.form}>
@@ -138,7 +142,7 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel, readOnl
         </View>
       ) : (
         <>
-          <BuildTotalsStrip text={text} lengthUnit={lengthUnit} />
+          <BuildTotalsStrip text={text} lengthUnit={units} />
           {fields}
           {totals}
         </>

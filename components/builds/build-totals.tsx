@@ -7,7 +7,7 @@ import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import { colors, radii, space } from '@/components/theme';
 import { grainsToGrams } from '@/math/units/convert';
-import type { LengthUnit } from '@/shared/auth';
+import type { FormUnits } from '@/components/bows/form-numbers';
 
 /** The caution shown beside every energy figure. */
 export const ENERGY_CAUTION_TEXT =
@@ -44,7 +44,7 @@ function Figure({ label, value, unit, testID, second }: { label: string; value: 
  * the full card below the fields).
  * Example: `<BuildTotalsStrip text={watchedText} lengthUnit="mm" />`
  */
-export function BuildTotalsStrip({ text, lengthUnit }: { text: BuildFormText; lengthUnit: LengthUnit }) {
+export function BuildTotalsStrip({ text, lengthUnit }: { text: BuildFormText; lengthUnit: FormUnits }) {
   const live = liveQuantities(text, lengthUnit);
   const parts = [
     live.totalGr === null ? '— gr' : `${live.totalGr.toFixed(1)} gr`,
@@ -64,7 +64,7 @@ export function BuildTotalsStrip({ text, lengthUnit }: { text: BuildFormText; le
  * grains, FOC, kinetic energy (J and ft·lbf) and momentum, with the energy caution.
  * Example: `<BuildTotals text={watchedText} lengthUnit="in" />`
  */
-export function BuildTotals({ text, lengthUnit }: { text: BuildFormText; lengthUnit: LengthUnit }) {
+export function BuildTotals({ text, lengthUnit }: { text: BuildFormText; lengthUnit: FormUnits }) {
   const live = liveQuantities(text, lengthUnit);
   const fixed = (value: number | null, digits: number) => (value === null ? null : value.toFixed(digits));
   return (

@@ -1,7 +1,7 @@
 import { buildTextToInput, type BuildFormText } from '@/components/builds/build-form-values';
 import { focPercent, kineticEnergy, momentum, totalArrowGrains } from '@/math/arrow';
 import { mmToInches } from '@/math/units/convert';
-import type { LengthUnit } from '@/shared/auth';
+import type { FormUnits } from '@/components/bows/form-numbers';
 
 /** What the build form shows as the archer types; null where an input is missing or out of range. */
 export interface LiveQuantities {
@@ -23,7 +23,7 @@ const usable = (value: number | null | undefined): value is number => typeof val
  * empty count as zero; a figure whose inputs are missing is null.
  * Example: liveQuantities({ …, grainsPerInch: '9.5', cutLengthMm: '28.5', pointGr: '100', … }, 'in').totalGr → 413.75
  */
-export function liveQuantities(text: BuildFormText, unit: LengthUnit): LiveQuantities {
+export function liveQuantities(text: BuildFormText, unit: FormUnits): LiveQuantities {
   const input = buildTextToInput(text, unit);
   const needs: string[] = [];
   const weight = (value: number | undefined) => (usable(value) ? value : 0);

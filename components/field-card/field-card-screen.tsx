@@ -2,7 +2,9 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, View, useWindowDimensions } from 'react-native';
 import { SvgXml } from 'react-native-svg';
 
-import { textToNumber } from '@/components/bows/form-numbers';
+import { useUnits } from '@/components/account/use-units';
+import { quantityTextToStored } from '@/components/bows/form-numbers';
+import { messageInUnits, shownUnit } from '@/shared/units';
 import { formatDay } from '@/components/bows/readiness-words';
 import { formatFixed, formatSigned } from '@/components/compare/format';
 import { useFieldCard, fieldCardQueryString, type FieldCardParams } from '@/components/field-card/api';
@@ -58,11 +60,16 @@ export function FieldCardScreen({ sessionId }: { sessionId: number }) {
   const [distances, setDistances] = useState<keyof typeof distanceSets>('20-60');
   const [altitudeText, setAltitudeText] = useState('');
   const [temperatureText, setTemperatureText] = useState('');
-  const altitude = textToNumber(altitudeText);
-  const temperature = textToNumber(temperatureText);
-  const altitudeError = altitude !== undefined && (Number.isNaN(altitude) || altitude < -500 || altitude > 5000) ? 'Enter an altitude between -500 and 5000 m' : undefined;
+  // Typed in the account's units (feet or metres, °F or °C: shared/units.ts); asked for in m and °C.
+  const units = useUnits();
+  const altitude = quantityTextToStored(altitudeText, 'altitude', units);
+  const temperature = quantityTextToStored(temperatureText, 'temperature', units);
+  const altitudeError =
+    altitude !== undefined && (Number.isNaN(altitude) || altitude < -500 || altitude > 5000) ? messageInUnits('Enter an altitude between -500 and 5000 m', units) : undefined;
   const temperatureError =
-    temperature !== undefined && (Number.isNaN(temperature) || temperature < -40 || temperature > 50) ? 'Enter a temperature between -40 and 50 °C' : undefined;
+    temperature !== undefined && (Number.isNaN(temperature) || temperature < -40 || temperature > 50)
+      ? messageInUnits('Enter a temperature between -40 and 50 °C', units)
+      : undefined;
   const params: FieldCardParams = { angles: [...angleSets[angles]], distances: [...distanceSets[distances]] };
   if (altitude !== undefined && !altitudeError) params.altitudeM = altitude;
   if (temperature !== undefined && !temperatureError) params.temperatureC = temperature;
@@ -103,13 +110,13 @@ export function FieldCardScreen({ sessionId }: { sessionId: number }) {
         <SectionHeading title="Where you will hunt" level={2} description={`Sight-in air: ${airWords(data.sightIn)}. Leave the altitude empty for that air.`} />
         <View style={styles.airFields}>
           <View style={styles.airField}>
-            <TextField label="Altitude" unit="m" numeric value={altitudeText} onChangeText={setAltitudeText} error={altitudeError} placeholder="sight-in" testID="field-card-altitude" />
+            <TextField label="Altitude" unit={shownUnit('altitude', units)} numeric value={altitudeText} onChangeText={setAltitudeText} error={altitudeError} placeholder="sight-in" testID="field-card-altitude" />
           </View>
           <View style={styles.airField}>
             <TextField
               label="Temperature"
               hint="Empty: the standard air’s at that altitude"
-              unit="°C"
+              unit={shownUnit('temperature', units)}
               numeric
               value={temperatureText}
               onChangeText={setTemperatureText}

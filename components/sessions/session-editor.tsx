@@ -3,6 +3,7 @@ import { useDeferredValue, useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
+import { useUnits } from '@/components/account/use-units';
 import { FieldGrid } from '@/components/bows/field-grid';
 import { applyFieldErrors } from '@/components/bows/server-field-errors';
 import { buildLine } from '@/components/builds/build-words';
@@ -12,11 +13,13 @@ import { liveFit, type LiveFit, type LiveFitText } from '@/components/sessions/l
 import { MarkTable, type RowFit } from '@/components/sessions/mark-table';
 import { PredictedMarks } from '@/components/sessions/predicted-marks';
 import { useDeleteSession, useSaveSession } from '@/components/sessions/api';
+import { DateField } from '@/components/sessions/date-field';
 import {
+  airInStoredUnits,
   appendOnlyUpdate,
   keptRows,
   sessionFormDefaults,
-  sessionFormResolver,
+  sessionFormResolverFor,
   tablePath,
   type SessionFormText,
 } from '@/components/sessions/session-form-values';
@@ -32,6 +35,7 @@ import { space } from '@/components/theme';
 import type { DistanceUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import type { Session, SessionInput } from '@/shared/session';
+import { shownUnit } from '@/shared/units';
 
 export interface SessionEditorProps {
   bow: BowDetail;
@@ -117,9 +121,12 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
   const keepSaved = addOnly && session !== undefined;
   const lockedRows = keepSaved ? session.marks.length : 0;
   const firstBuild = initialBuildId && bow.builds.some((build) => build.id === initialBuildId) ? initialBuildId : bow.builds[0]?.id;
+  // Altitude and temperature are typed in the account's units (shared/units.ts) and stored in m and °C.
+  const units = useUnits();
+  const resolver = useMemo(() => sessionFormResolverFor(units), [units]);
   const { control, handleSubmit, setError, formState, reset } = useForm<SessionFormText, unknown, SessionInput>({
-    resolver: sessionFormResolver,
-    defaultValues: sessionFormDefaults(session, firstBuild, distanceUnit),
+    resolver,
+    defaultValues: sessionFormDefaults(session, firstBuild, distanceUnit, units),
   });
 
   const [buildId, altitudeM, temperatureC, unit, marks] = useWatch({
@@ -127,7 +134,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
     name: ['buildId', 'altitudeM', 'temperatureC', 'unit', 'marks'],
   });
   // The fit reruns on each keystroke; a deferred key lets typing stay ahead of it.
-  const key = JSON.stringify({ buildId, altitudeM, temperatureC, unit, marks });
+  const key = JSON.stringify({ buildId, ...airInStoredUnits({ altitudeM, temperatureC }, units), unit, marks });
   const deferredKey = useDeferredValue(key);
   const live = useMemo(() => liveFit(JSON.parse(deferredKey) as LiveFitText, bow, bow.builds), [deferredKey, bow]);
   const rowFits = useMemo(() => rowFitsOf(live), [live]);
@@ -143,7 +150,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
         { id: session?.id, bowId: bow.id, input: keepSaved ? appendOnlyUpdate(session, input) : input },
         {
           onSuccess: (saved) => {
-            if (session) reset(sessionFormDefaults(saved, undefined, distanceUnit));
+            if (session) reset(sessionFormDefaults(saved, undefined, distanceUnit, units));
             else router.replace(`/sessions/${saved.id}`);
           },
           onError: (error) =>
@@ -176,12 +183,12 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
         </Text>
       ) : null}
       <FieldGrid minWidth={170}>
-        <FormField control={control} name="date" label="Date" hint="YYYY-MM-DD" disabled={keepSaved} testID="session-date" />
+        <DateField control={control} name="date" label="Date" disabled={keepSaved} testID="session-date" />
         <FormField control={control} name="placeLabel" label="Place" hint="Optional, e.g. “home range”" disabled={keepSaved} />
       </FieldGrid>
       <FieldGrid minWidth={140}>
-        <FormField control={control} name="altitudeM" label="Altitude" hint="Optional" unit="m" numeric disabled={keepSaved} />
-        <FormField control={control} name="temperatureC" label="Temperature" hint="Optional" unit="°C" numeric disabled={keepSaved} />
+        <FormField control={control} name="altitudeM" label="Altitude" hint="Optional" unit={shownUnit('altitude', units)} numeric disabled={keepSaved} testID="session-altitude" />
+        <FormField control={control} name="temperatureC" label="Temperature" hint="Optional" unit={shownUnit('temperature', units)} numeric disabled={keepSaved} testID="session-temperature" />
       </FieldGrid>
       <FormChoice control={control} name="unit" label="Distances in" options={unitOptions} disabled={keepSaved} testID="session-unit" />
     </Card>

@@ -1,9 +1,10 @@
 import { set, type FieldErrors, type Resolver } from 'react-hook-form';
 
-import { numberToText, optionalTextToNumber, textToNumber } from '@/components/bows/form-numbers';
+import { numberToText, optionalQuantityTextToStored, optionalTextToNumber, storedToInputText, textToNumber } from '@/components/bows/form-numbers';
 import { distanceToMetres, metresToDistance } from '@/math/units/convert';
 import type { DistanceUnit } from '@/shared/auth';
 import { sessionInputSchema, type Session, type SessionInput, type SessionUpdate } from '@/shared/session';
+import { localeDateOrder, messageInUnits, parseDateText, type DateOrder, type UnitsLike } from '@/shared/units';
 
 /** One row of the marks table, as typed. */
 export interface MarkRowText {
@@ -15,8 +16,10 @@ export interface MarkRowText {
 }
 
 /**
- * What the sight-in form holds: the header as text, one distance unit for the
- * whole table, and the rows of the marks table.
+ * What the sight-in form holds: the header as text (the date as typed or
+ * picked; altitude and temperature in the archer's units despite the "M" and
+ * "C" names, kept so schema errors land on the right field), one distance unit
+ * for the whole table, and the rows of the marks table.
  */
 export interface SessionFormText {
   buildId: string;
@@ -53,17 +56,34 @@ export function todayIso(now = new Date()): string {
 }
 
 /**
- * The form's text → the API's session input (the blank rows left out).
+ * The air as typed in the archer's units → metres and °C, as text for the live
+ * fit (which reads the stored units); unreadable text stays as typed.
+ * Example: airInStoredUnits({ altitudeM: '9200', temperatureC: '41' }, { altitudeUnit: 'ft', temperatureUnit: 'F' }) → { altitudeM: '2804.16', temperatureC: '5' }
+ */
+export function airInStoredUnits(text: { altitudeM?: string; temperatureC?: string }, units: UnitsLike): { altitudeM: string; temperatureC: string } {
+  const stored = (value: string | undefined, quantity: 'altitude' | 'temperature') => {
+    const number = optionalQuantityTextToStored(value, quantity, units);
+    return number === null || !Number.isFinite(number) ? (value ?? '') : String(number);
+  };
+  return { altitudeM: stored(text.altitudeM, 'altitude'), temperatureC: stored(text.temperatureC, 'temperature') };
+}
+
+/**
+ * The form's text → the API's session input (the blank rows left out):
+ * altitude and temperature from the archer's units to m and °C, the date from
+ * ISO or the locale's numeric form to YYYY-MM-DD (left as typed when it cannot
+ * be read, for the schema to refuse).
  * Example: sessionTextToInput({ …, unit: 'yd', marks: [{ distance: '20', scaleMm: '12.4', … }] }).marks[0] → { distance: 20, unit: 'yd', scaleMm: 12.4, arrowsShot: null, note: '' }
  */
-export function sessionTextToInput(text: SessionFormText) {
+export function sessionTextToInput(text: SessionFormText, units?: UnitsLike, order: DateOrder | null = localeDateOrder()) {
   const rows = text.marks ?? [];
+  const date = parseDateText(text.date, order);
   return {
     buildId: textToNumber(text.buildId),
-    date: text.date,
+    date: date.iso ?? text.date,
     placeLabel: text.placeLabel,
-    altitudeM: optionalTextToNumber(text.altitudeM),
-    temperatureC: optionalTextToNumber(text.temperatureC),
+    altitudeM: optionalQuantityTextToStored(text.altitudeM, 'altitude', units),
+    temperatureC: optionalQuantityTextToStored(text.temperatureC, 'temperature', units),
     notes: text.notes,
     marks: keptRows(rows).map((index) => {
       const row = rows[index];
@@ -94,32 +114,46 @@ export function tablePath(path: readonly (string | number)[], kept: readonly num
 }
 
 /**
- * The sight-in form's resolver: blank rows are left out, the rest is checked
- * with the shared sessionInputSchema (the server's own), and each message goes
- * back to the table row it belongs to.
- * Example: `useForm<SessionFormText, unknown, SessionInput>({ resolver: sessionFormResolver })`
+ * The sight-in form's resolver for the archer's units: blank rows are left
+ * out, the rest is checked with the shared sessionInputSchema (the server's
+ * own), each message goes back to the table row it belongs to, altitude and
+ * temperature limits are stated in the archer's units, and a date that cannot
+ * be read says why (e.g. both readings of 12/02/2026 when the order is unknown).
+ * Example: `useForm<SessionFormText, unknown, SessionInput>({ resolver: sessionFormResolverFor(me) })`
  */
-export const sessionFormResolver: Resolver<SessionFormText, unknown, SessionInput> = async (values) => {
-  const kept = keptRows(values.marks ?? []);
-  const result = sessionInputSchema.safeParse(sessionTextToInput(values));
-  if (result.success) return { values: result.data, errors: {} };
-  const errors: FieldErrors<SessionFormText> = {};
-  const seen = new Set<string>();
-  for (const issue of result.error.issues) {
-    const path = tablePath(issue.path, kept);
-    if (seen.has(path)) continue;
-    seen.add(path);
-    set(errors, path, { type: issue.code, message: issue.message });
-  }
-  return { values: {}, errors };
-};
+export function sessionFormResolverFor(units?: UnitsLike, order: DateOrder | null = localeDateOrder()): Resolver<SessionFormText, unknown, SessionInput> {
+  return async (values) => {
+    const kept = keptRows(values.marks ?? []);
+    const result = sessionInputSchema.safeParse(sessionTextToInput(values, units, order));
+    if (result.success) return { values: result.data, errors: {} };
+    const errors: FieldErrors<SessionFormText> = {};
+    const seen = new Set<string>();
+    const date = parseDateText(values.date, order);
+    for (const issue of result.error.issues) {
+      const path = tablePath(issue.path, kept);
+      if (seen.has(path)) continue;
+      seen.add(path);
+      const message =
+        path === 'date' && date.error !== undefined
+          ? date.error
+          : path === 'altitudeM' || path === 'temperatureC'
+            ? messageInUnits(issue.message, units, ['altitude', 'temperature'])
+            : issue.message;
+      set(errors, path, { type: issue.code, message });
+    }
+    return { values: {}, errors };
+  };
+}
+
+/** The resolver in stored units (m, °C) and the device's date order. */
+export const sessionFormResolver: Resolver<SessionFormText, unknown, SessionInput> = sessionFormResolverFor();
 
 /**
  * The form's starting text: a saved session's marks in entry order (in their
  * own unit: the first mark's), or a new session for `buildId` with two empty rows.
  * Example: sessionFormDefaults(undefined, 4, 'yd').marks.length → 2
  */
-export function sessionFormDefaults(session: Session | undefined, buildId: number | undefined, unit: DistanceUnit): SessionFormText {
+export function sessionFormDefaults(session: Session | undefined, buildId: number | undefined, unit: DistanceUnit, units?: UnitsLike): SessionFormText {
   if (!session) {
     return {
       buildId: buildId ? String(buildId) : '',
@@ -140,8 +174,8 @@ export function sessionFormDefaults(session: Session | undefined, buildId: numbe
     buildId: String(session.buildId),
     date: session.date,
     placeLabel: session.placeLabel,
-    altitudeM: numberToText(session.altitudeM, 0),
-    temperatureC: numberToText(session.temperatureC, 1),
+    altitudeM: storedToInputText(session.altitudeM, 'altitude', units),
+    temperatureC: storedToInputText(session.temperatureC, 'temperature', units),
     notes: session.notes,
     unit: tableUnit,
     marks: marks.map((mark) => ({

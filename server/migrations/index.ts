@@ -20,6 +20,7 @@ import * as m0030 from './0030-shares';
 import * as m0031 from './0031-tokens';
 import * as m0032 from './0032-audit-entries';
 import * as m0040 from './0040-idempotency-keys';
+import * as m0065 from './0065-users-unit-choices';
 import * as m0060 from './0060-arrow-builds-added-by';
 import * as m0061 from './0061-sight-sessions-added-by';
 import * as m0062 from './0062-session-marks-added-by';
@@ -43,6 +44,7 @@ export const migrations: Array<[string, Step]> = [
   ['0031-tokens', m0031],
   ['0032-audit-entries', m0032],
   ['0040-idempotency-keys', m0040],
+  ['0065-users-unit-choices', m0065],
   ['0060-arrow-builds-added-by', m0060],
   ['0061-sight-sessions-added-by', m0061],
   ['0062-session-marks-added-by', m0062],

@@ -17,6 +17,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare disabled: CreationOptional<boolean>;
   declare distanceUnit: CreationOptional<'yd' | 'm'>;
   declare lengthUnit: CreationOptional<'mm' | 'in'>;
+  declare altitudeUnit: CreationOptional<'ft' | 'm'>;
+  declare temperatureUnit: CreationOptional<'F' | 'C'>;
+  declare speedUnit: CreationOptional<'fps' | 'mps'>;
+  declare massUnit: CreationOptional<'gr' | 'g'>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -29,6 +33,10 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
       role: this.role,
       distanceUnit: this.distanceUnit,
       lengthUnit: this.lengthUnit,
+      altitudeUnit: this.altitudeUnit,
+      temperatureUnit: this.temperatureUnit,
+      speedUnit: this.speedUnit,
+      massUnit: this.massUnit,
     };
   }
 }
@@ -43,6 +51,11 @@ User.init(
     disabled: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     distanceUnit: { type: DataTypes.ENUM('yd', 'm'), allowNull: false, defaultValue: 'yd' },
     lengthUnit: { type: DataTypes.ENUM('mm', 'in'), allowNull: false, defaultValue: 'mm' },
+    // Migration 0065 (shared/units.ts): the rest of the unit choices.
+    altitudeUnit: { type: DataTypes.ENUM('ft', 'm'), allowNull: false, defaultValue: 'm' },
+    temperatureUnit: { type: DataTypes.ENUM('F', 'C'), allowNull: false, defaultValue: 'C' },
+    speedUnit: { type: DataTypes.ENUM('fps', 'mps'), allowNull: false, defaultValue: 'fps' },
+    massUnit: { type: DataTypes.ENUM('gr', 'g'), allowNull: false, defaultValue: 'gr' },
     createdAt: DataTypes.DATE(3),
     updatedAt: DataTypes.DATE(3),
   },

@@ -7,6 +7,7 @@ import { config } from '@/server/config';
 import { ApiError } from '@/server/errors';
 import { User, WebSession } from '@/server/models';
 import type { SignInInput, SignUpInput } from '@/shared/auth';
+import { unitDefaultsFor } from '@/shared/units';
 
 export async function hashPassword(password: string): Promise<string> {
   return bcrypt.hash(password, config.bcryptCost);
@@ -20,7 +21,10 @@ export async function signUp(input: SignUpInput, role: User['role'] = 'archer'):
     });
   }
   const passwordHash = await hashPassword(input.password);
-  return User.create({ name: input.name, email: input.email, passwordHash, role });
+  // The first unit choice sets the rest (yards → inches, feet, °F, fps; metres → mm, m, °C, m/s);
+  // without one (an older client), the columns' defaults: yards, mm, m, °C, fps, grains.
+  const units = input.distanceUnit ? unitDefaultsFor(input.distanceUnit) : {};
+  return User.create({ name: input.name, email: input.email, passwordHash, role, ...units });
 }
 
 // A hash to compare against when the e-mail is unknown, so both paths take as long.

@@ -35,7 +35,21 @@ describe('SignUpForm', () => {
     await waitFor(() => expect(queryClient.getQueryData(authKeys.me)).toEqual(user));
     const [path, init] = fetchMock.mock.calls[0];
     expect(path).toBe('/api/auth/sign-up');
-    expect(JSON.parse(init.body)).toEqual({ name: 'Ada Corrie', email: 'ada@example.org', password: 'ten or more letters' });
+    // The first unit choice goes with it (yards unless changed); the server sets the rest from it.
+    expect(JSON.parse(init.body)).toEqual({ name: 'Ada Corrie', email: 'ada@example.org', password: 'ten or more letters', distanceUnit: 'yd' });
+  });
+
+  it('sends metres when the archer picks them', async () => {
+    const fetchMock = mockFetch();
+    fetchMock.mockResolvedValue(jsonResponse(201, { user: { id: 9, name: 'Ada Corrie', email: 'ada@example.org', role: 'archer', distanceUnit: 'm', lengthUnit: 'mm' } }));
+    renderWithClient(<SignUpForm />);
+    fill('Name', 'Ada Corrie');
+    fill('E-mail', 'ada@example.org');
+    fill('Password', 'ten or more letters');
+    fireEvent.click(screen.getByRole('radio', { name: 'Metres' }));
+    submit();
+    await waitFor(() => expect(fetchMock).toHaveBeenCalled());
+    expect(JSON.parse(fetchMock.mock.calls[0][1].body).distanceUnit).toBe('m');
   });
 
   it('shows a taken e-mail (409) under the e-mail field', async () => {
