@@ -93,7 +93,7 @@ const fitFields = {
   air: airSchema.optional(),
   marks: z
     .array(markSchema, { required_error: 'Enter at least two marks', invalid_type_error: 'Enter the marks as a list' })
-    .min(2, 'Enter at least two marks')
+    .min(1, 'Enter at least two marks')
     .max(maxMarks, `Enter at most ${maxMarks} marks`)
     .superRefine((marks, context) => {
       // Numeric care: distances typed twice compare equal after parsing; a
@@ -111,10 +111,24 @@ const fitFields = {
   shots: z.array(shotSchema, { invalid_type_error: 'Enter the shots as a list' }).max(50, 'Ask for at most 50 shots').optional(),
 };
 
-/** What a fit needs: the command line's `pinwright fit` input, exactly. */
+/** The refusal of one mark without a chronographed speed (the field is `marks`). */
+export const ONE_MARK_NEEDS_SPEED = 'Enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)';
+
+/**
+ * One mark fits only with a chronographed speed: the mark fixes the scale zero,
+ * the speed carries the trajectory's shape (see math/fit/fit-sight.ts).
+ */
+function oneMarkNeedsSpeed(value: { marks?: unknown[]; arrow?: { speedFps?: number } }, context: z.RefinementCtx) {
+  if (Array.isArray(value.marks) && value.marks.length === 1 && value.arrow?.speedFps === undefined) {
+    context.addIssue({ code: z.ZodIssueCode.custom, path: ['marks'], message: ONE_MARK_NEEDS_SPEED });
+  }
+}
+
+/** What a fit needs: the command line's `pinwright fit` input, exactly. Two or more marks, or one mark with arrow.speedFps. */
 export const fitInputSchema = z
   .object(fitFields, { required_error: 'Send one JSON object', invalid_type_error: 'Send one JSON object' })
-  .strict();
+  .strict()
+  .superRefine(oneMarkNeedsSpeed);
 
 /** Tape layout: range and step (in `unit`, default the marks' unit), width, orientation, mirror, numeral height. */
 export const tapeOptionsSchema = z
@@ -164,12 +178,14 @@ export const sheetOptionsSchema = z.object(sheetFields, { invalid_type_error: 'E
 /** `pinwright tape` input: a fit's input plus the tape options. */
 export const tapeInputSchema = z
   .object({ ...fitFields, tape: tapeOptionsSchema.optional() }, { required_error: 'Send one JSON object', invalid_type_error: 'Send one JSON object' })
-  .strict();
+  .strict()
+  .superRefine(oneMarkNeedsSpeed);
 
 /** `pinwright sheet` input: a fit's input plus the sheet options (paper, labels, variants, tape). */
 export const sheetInputSchema = z
   .object({ ...fitFields, ...sheetFields }, { required_error: 'Send one JSON object', invalid_type_error: 'Send one JSON object' })
-  .strict();
+  .strict()
+  .superRefine(oneMarkNeedsSpeed);
 
 /**
  * A zod path as people write it: ['marks', 1, 'distance'] → "marks[1].distance"; [] → "input".

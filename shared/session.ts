@@ -20,8 +20,14 @@ import { distanceLimits } from './fit';
  *   → the same with placeLabel '', altitudeM null, temperatureC null, notes '', each mark arrowsShot null and note ''
  */
 
-/** Fewest marks a session may hold: two marks are the least a fit can use. */
-export const minMarks = 2;
+/**
+ * Fewest marks a session may hold: one, which fits only when the build has a
+ * chronographed speed (an estimate from one mark; the server refuses it
+ * otherwise, with ONE_MARK_SESSION_MESSAGE); two or more fit any build.
+ */
+export const minMarks = 1;
+/** The server's refusal of one mark when the build has no chronographed speed (field `marks`). */
+export const ONE_MARK_SESSION_MESSAGE = 'Enter at least 2 marks to fit, or one mark with a chronographed speed on the arrow build';
 /** Most marks a session may hold. */
 export const maxMarks = 30;
 
@@ -49,7 +55,7 @@ const sessionFields = z.object({
   notes: textSchema('Notes', 2000),
   marks: z
     .array(markInputSchema, { required_error: 'Enter the marks', invalid_type_error: 'Marks must be a list' })
-    .min(minMarks, `Enter at least ${minMarks} marks to fit`)
+    .min(minMarks, 'Enter at least 2 marks to fit (or one, with a chronographed speed on the arrow build)')
     .max(maxMarks, `Enter at most ${maxMarks} marks`),
 });
 
@@ -104,7 +110,8 @@ export const storedFitSchema = z
     scaleZeroMm: z.number(),
     /** RMS of the residuals, mm (0 for an exact two-mark fit). */
     rmsMm: z.number(),
-    method: z.enum(['two-mark', 'least-squares']),
+    /** 'one-mark': one mark and the build's chronographed speed, every other distance an estimate. */
+    method: z.enum(['one-mark', 'two-mark', 'least-squares']),
     airDensityKgM3: z.number(),
     /** Predicted marks with one-sigma bands (mm, and in distance); `verify`: confirm at the range. */
     marks: z.array(

@@ -1,10 +1,11 @@
 import { fitInputSchema, fitIssueOf, speedLimitsFps, type FitInput } from '@/shared/fit';
-import { distanceToMetres, mpsToFps, type DistanceUnit } from '@/math/units/convert';
+import { distanceToMetres, fpsToMps, mpsToFps, type DistanceUnit } from '@/math/units/convert';
 import { STANDARD_GRAVITY_MPS2 } from '@/math/units/constants';
 import { airDensityKgM3 } from '@/math/air/standard-atmosphere';
 import { dragFactorPerM } from '@/math/flight/drag-factor';
 import { type SightModel } from '@/math/flight/sight-model';
-import { inverseSpd } from '@/math/numeric/symmetric-matrix';
+import { solveElevation } from '@/math/flight/solve-elevation';
+import { inverseSpd, quadraticForm } from '@/math/numeric/symmetric-matrix';
 import { FitInputError, isFitInputError } from '@/math/fit/fit-input-error';
 import { FIT_PRIORS, FIT_THRESHOLDS } from '@/math/fit/priors';
 import { solveTwoMarks } from '@/math/fit/solve-two-marks';
@@ -12,12 +13,17 @@ import { mapFit, modelOf, type MapProblem, type Prior } from '@/math/fit/map-fit
 import { markBand, type MarkBand } from '@/math/fit/mark-band';
 import { nextDistance } from '@/math/fit/next-distance';
 import { slopeShot, type SlopeShot } from '@/math/slope/slope-shot';
-import { SLOPE_CAUTION } from '@/math/cautions';
+import { ONE_MARK_CAUTION, SLOPE_CAUTION } from '@/math/cautions';
 
 /**
  * From two or more sighted marks, the fitted sight and the mark for every
  * distance asked, with its one-sigma band.
  *
+ * - One mark and a chronographed speed: the MAP fit below with the mark fixing
+ *   the scale zero and the speed, drag, peep height and sight radius as priors
+ *   (their means are the answer; the mark's only redundancy-free job is s0).
+ *   Every other distance is an estimate with its band; the model carries
+ *   `oneMark` so tapes and sheets say so, with the distance to shoot next.
  * - Two marks: speed and scale zero solved exactly (solveTwoMarks), drag, peep
  *   height and sight radius as entered.
  * - Three or more (or a chronographed speed): the maximum-a-posteriori fit of
@@ -60,7 +66,7 @@ export interface MarkResidual {
 
 /** Something the archer should know, in plain words; `distance` when it concerns one. */
 export interface FitWarning {
-  code: 'verify' | 'outlier' | 'scatter' | 'chronograph' | 'peep-height' | 'sight-radius' | 'drag' | 'out-of-reach' | 'slope-estimate';
+  code: 'one-mark' | 'verify' | 'outlier' | 'scatter' | 'chronograph' | 'peep-height' | 'sight-radius' | 'drag' | 'out-of-reach' | 'slope-estimate';
   message: string;
   distance?: number;
 }
@@ -75,8 +81,8 @@ export interface FitResult {
   scaleZeroMm: number;
   /** RMS of the residuals, mm (0 for an exact two-mark fit). */
   rmsMm: number;
-  /** 'two-mark': exact solve; 'least-squares': the MAP fit. */
-  method: 'two-mark' | 'least-squares';
+  /** 'one-mark': one mark and a chronographed speed (an estimate); 'two-mark': exact solve; 'least-squares': the MAP fit. */
+  method: 'one-mark' | 'two-mark' | 'least-squares';
   airDensityKgM3: number;
   marks: PredictedMark[];
   /** One per sighted mark, nearest first. */
@@ -88,6 +94,9 @@ export interface FitResult {
   /** The fitted model, serialisable: evaluate with predictMarkMm / predictMarksMm / markBand. */
   model: SightModel;
 }
+
+/** How many marks' worth of belief the assumed mark sigma carries when pooled with the marks' own scatter. */
+const POOLED_PRIOR_DOF = 4;
 
 /** Distances predicted when the input asks for none: every 10 from 10 to 100 (input unit). */
 export const DEFAULT_PREDICT = [10, 20, 30, 40, 50, 60, 70, 80, 90, 100];
@@ -113,24 +122,33 @@ export function fitSight(input: FitInput): FitResult {
     gravityMps2: STANDARD_GRAVITY_MPS2,
   };
 
-  // Start (and, for two marks, answer): speed and scale zero from the nearest and farthest marks.
-  const near = marks[0];
-  const far = marks[marks.length - 1];
-  const exact = solveTwoMarks(
-    {
-      near: { rangeM: rangesM[0], markMm: near.markMm, label: label(near.distance) },
-      far: { rangeM: rangesM[rangesM.length - 1], markMm: far.markMm, label: label(far.distance) },
-    },
-    {
-      dragPerM: dragFactorPerM({ airDensityKgM3: density, dragCoefficient, diameterMm: data.arrow.diameterMm, massGr: data.arrow.massGr }),
-      peepHeightM: data.sight.peepHeightMm / 1000,
-      gravityMps2: STANDARD_GRAVITY_MPS2,
-    },
-    data.sight.radiusMm,
-    speedLimitsFps,
-  );
-
   const chronograph = data.arrow.speedFps;
+  const peepHeightM = data.sight.peepHeightMm / 1000;
+  const dragPerM = dragFactorPerM({ airDensityKgM3: density, dragCoefficient, diameterMm: data.arrow.diameterMm, massGr: data.arrow.massGr });
+  const oneMark = marks.length === 1;
+  let start: { speedMps: number; scaleZeroMm: number };
+  if (oneMark) {
+    // One mark and a chronographed speed (the schema refuses one mark without):
+    // the mark fixes the scale zero, the priors carry everything else.
+    const shot = { speedMps: fpsToMps(chronograph!), dragPerM, peepHeightM, gravityMps2: STANDARD_GRAVITY_MPS2 };
+    const solved = solveElevation(shot, rangesM[0], 0);
+    if (!solved) throw new FitInputError('marks[0].distance', `At ${chronograph} fps the arrow cannot reach ${label(marks[0].distance)}; check the speed and the distance`);
+    start = { speedMps: shot.speedMps, scaleZeroMm: marks[0].markMm - data.sight.radiusMm * Math.tan(solved.elevationRad) };
+  } else {
+    // Start (and, for two marks, answer): speed and scale zero from the nearest and farthest marks.
+    const near = marks[0];
+    const far = marks[marks.length - 1];
+    start = solveTwoMarks(
+      {
+        near: { rangeM: rangesM[0], markMm: near.markMm, label: label(near.distance) },
+        far: { rangeM: rangesM[rangesM.length - 1], markMm: far.markMm, label: label(far.distance) },
+      },
+      { dragPerM, peepHeightM, gravityMps2: STANDARD_GRAVITY_MPS2 },
+      data.sight.radiusMm,
+      speedLimitsFps,
+    );
+  }
+
   const priors: (Prior | null)[] = [
     chronograph === undefined ? null : { mean: chronograph, sigma: FIT_PRIORS.speedSigmaFraction * chronograph },
     null,
@@ -138,18 +156,18 @@ export function fitSight(input: FitInput): FitResult {
     { mean: data.sight.peepHeightMm, sigma: FIT_PRIORS.peepHeightSigmaMm },
     { mean: data.sight.radiusMm, sigma: FIT_PRIORS.sightRadiusSigmaFraction * data.sight.radiusMm },
   ];
-  const speedFps = mpsToFps(exact.speedMps);
+  const speedFps = mpsToFps(start.speedMps);
   const solution = mapFit({
     rangesM,
     marksMm: marks.map((mark) => mark.markMm),
     markSigmaMm: FIT_PRIORS.markSigmaMm,
     base,
     priors,
-    start: [speedFps, exact.scaleZeroMm, dragCoefficient, data.sight.peepHeightMm, data.sight.radiusMm],
+    start: [speedFps, start.scaleZeroMm, dragCoefficient, data.sight.peepHeightMm, data.sight.radiusMm],
     lower: [speedLimitsFps.min, -1e4, 0.05 * dragCoefficient, 20, 100],
     upper: [speedLimitsFps.max, 1e4, 10 * dragCoefficient, 300, 2500],
   });
-  const method = marks.length === 2 && chronograph === undefined ? 'two-mark' : 'least-squares';
+  const method = oneMark ? 'one-mark' : marks.length === 2 && chronograph === undefined ? 'two-mark' : 'least-squares';
   const parameters = solution.parameters;
 
   // Residuals and the posterior covariance.
@@ -157,9 +175,6 @@ export function fitSight(input: FitInput): FitResult {
   const rmsMm = Math.sqrt(residualsMm.reduce((sum, r) => sum + r * r, 0) / residualsMm.length);
   const sigma = FIT_PRIORS.markSigmaMm;
   const chiSquare = residualsMm.reduce((sum, r) => sum + (r / sigma) ** 2, 0);
-  // With four or more marks, trust the marks' own scatter when it exceeds the assumed σ
-  // (n − 2: speed and scale zero are always free; the rest lean on their priors).
-  const sigmaEffective = marks.length >= 4 ? sigma * Math.max(1, Math.sqrt(chiSquare / (marks.length - 2))) : sigma;
   const covarianceAt = (markSigma: number) => {
     const size = parameters.length;
     const information = Array.from({ length: size }, (_, j) =>
@@ -172,16 +187,22 @@ export function fitSight(input: FitInput): FitResult {
     if (!inverse) throw new FitInputError('marks', 'These marks do not pin down a fit; add a mark at another distance');
     return inverse;
   };
-  const covariance = covarianceAt(sigmaEffective);
-  const unscaled = sigmaEffective === sigma ? covariance : covarianceAt(sigma);
+  const unscaled = covarianceAt(sigma);
+  const leverages = solution.jacobian.map((row) => quadraticForm(unscaled, row));
   const standardised = residualsMm.map((residual, i) => {
-    const row = solution.jacobian[i];
-    let leverage = 0;
-    for (let j = 0; j < row.length; j++) for (let k = 0; k < row.length; k++) leverage += row[j] * unscaled[j][k] * row[k];
-    const variance = sigma * sigma - leverage;
+    const variance = sigma * sigma - leverages[i];
     // Numeric care: a mark the fit passes through exactly has no residual variance.
     return variance > 1e-6 * sigma * sigma ? residual / Math.sqrt(variance) : 0;
   });
+  // With four or more marks, let the marks' own scatter speak: the mark sigma
+  // pooled from the assumed one (worth POOLED_PRIOR_DOF marks) and the
+  // residuals' χ² over their effective degrees of freedom ν = n − Σ leverage/σ²
+  // (a scaled-inverse-χ² prior on σ², A. Gelman et al., Bayesian Data
+  // Analysis, 3rd ed., §2.6). Raising σ only when the scatter is larger, as
+  // before, gave 75 % one-sigma coverage for four marks (tests/math/band-coverage.test.ts).
+  const freedom = marks.length - leverages.reduce((sum, leverage) => sum + leverage, 0) / (sigma * sigma);
+  const sigmaEffective = marks.length >= 4 && freedom > 0.5 ? sigma * Math.sqrt((POOLED_PRIOR_DOF + chiSquare) / (POOLED_PRIOR_DOF + freedom)) : sigma;
+  const covariance = sigmaEffective === sigma ? unscaled : covarianceAt(sigmaEffective);
   let outlierIndex = -1;
   if (marks.length >= 4) {
     standardised.forEach((z, i) => {
@@ -208,7 +229,7 @@ export function fitSight(input: FitInput): FitResult {
       return { distance, markMm: NaN, sigmaMm: NaN, sigmaDistance: null, verify: true };
     }
     const verify = band.sigmaMm > FIT_THRESHOLDS.verifyBandMm;
-    if (verify) {
+    if (verify && !oneMark) {
       warnings.push({ code: 'verify', distance, message: `Confirm at ${label(distance)}: the predicted mark there is uncertain by ±${band.sigmaMm.toFixed(1)} mm` });
     }
     return { distance, markMm: band.markMm, sigmaMm: band.sigmaMm, sigmaDistance: band.sigmaDistance, verify };
@@ -223,6 +244,20 @@ export function fitSight(input: FitInput): FitResult {
   }
   const marked = (distance: number) => marks.some((mark) => Math.abs(mark.distance - distance) < 1e-9);
   const next = nextDistance(covariance, grid, (band) => !marked(band.distance), sigmaEffective);
+
+  if (oneMark) {
+    const at = (distance: number) => predicted.find((mark) => Math.abs(mark.distance - distance) < 1e-9 && Number.isFinite(mark.sigmaMm));
+    const widest = predicted.filter((mark) => Number.isFinite(mark.sigmaMm)).reduce<PredictedMark | null>((a, b) => (a && a.sigmaMm >= b.sigmaMm ? a : b), null);
+    const shown = (next !== null ? at(next) : undefined) ?? widest;
+    model.oneMark = { distance: marks[0].distance, nextDistance: next };
+    warnings.unshift({
+      code: 'one-mark',
+      message: `${ONE_MARK_CAUTION} Only ${label(marks[0].distance)} is sighted${
+        shown ? `; at ${label(shown.distance)} the mark is uncertain by ±${shown.sigmaMm.toFixed(1)} mm` : ''
+      }${next !== null ? `. Shoot ${label(next)} next` : ''}.`,
+      ...(next !== null ? { distance: next } : {}),
+    });
+  }
 
   const residuals: MarkResidual[] = marks.map((mark, i) => ({
     distance: mark.distance,
@@ -287,7 +322,7 @@ export type FitAttempt = { ok: true; fit: FitResult } | { ok: false; error: { fi
 
 /**
  * For a UI refitting on every keystroke: the fit, or the field at fault and a plain message.
- * Example: trySightFit({ ...input, marks: [input.marks[0]] }) → { ok: false, error: { field: 'marks', message: 'Enter at least two marks' } }
+ * Example: trySightFit({ ...input, marks: [input.marks[0]] }) → { ok: false, error: { field: 'marks', message: 'Enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)' } } (no speed given)
  */
 export function trySightFit(input: FitInput): FitAttempt {
   try {

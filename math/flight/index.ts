@@ -4,3 +4,4 @@ export * from '@/math/flight/solve-elevation';
 export * from '@/math/flight/sight-model';
 export * from '@/math/flight/predict-mark';
 export * from '@/math/flight/mark-gradient';
+export * from '@/math/flight/crosswind';

@@ -42,6 +42,12 @@ export interface SightModel {
    * MODEL_PARAMETERS and their units (fps, mm, 1, mm, mm); absent if unknown.
    */
   covariance?: number[][];
+  /**
+   * Present when the fit had one sighted mark and a chronographed speed: every
+   * other distance is an estimate. `distance` is the sighted one, `nextDistance`
+   * where to shoot next (both model.distanceUnit). Tapes and sheets mark it.
+   */
+  oneMark?: { distance: number; nextDistance: number | null };
 }
 
 /** The fitted parameters, in covariance order, with their units. */

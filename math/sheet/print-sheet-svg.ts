@@ -8,7 +8,7 @@ import { tapeLayouts } from '@/math/tape/tape-layout';
 import { tapeGroup } from '@/math/tape/tape-svg';
 import { PAPER_SIZES_MM } from '@/math/sheet/paper';
 import { wrapText } from '@/math/sheet/wrap-text';
-import { PRINT_INSTRUCTION, TAPE_CAUTION } from '@/math/cautions';
+import { ONE_MARK_CAUTION, ONE_MARK_STRIP, PRINT_INSTRUCTION, TAPE_CAUTION } from '@/math/cautions';
 
 /**
  * The print sheet: a page (A4 or US Letter) in millimetres with the tape at
@@ -68,6 +68,16 @@ export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): s
     y += LINE_MM;
   }
   y += 1.5;
+  if (model.oneMark) {
+    // A tape from one mark is an estimate everywhere but that mark: say so first, large, with where to shoot next.
+    const next = model.oneMark.nextDistance;
+    const words = `${ONE_MARK_STRIP}. ${ONE_MARK_CAUTION} Sighted: ${trim(model.oneMark.distance)} ${unit} only.${next !== null ? ` Shoot ${trim(next)} ${unit} next and fit again before you trust this tape.` : ''}`;
+    for (const line of wrapText(words, NUMERAL_FONT, TITLE_MM * 0.8, usableMm)) {
+      text(line, NUMERAL_FONT, MARGIN_MM, y + 1, TITLE_MM * 0.8, 'class="caution" data-caution="one-mark"');
+      y += TITLE_MM * 1.1;
+    }
+    y += 1;
+  }
   for (const line of wrapText(PRINT_INSTRUCTION, SMALL_PRINT_FONT, SMALL_MM * 1.2, usableMm)) {
     text(line, SMALL_PRINT_FONT, MARGIN_MM, y, SMALL_MM * 1.2, 'class="instruction"');
     y += LINE_MM * 1.2;

@@ -57,6 +57,8 @@ export interface TapeLayout {
   /** Where numerals start across the tape (their left edge; their right edge when mirrored), mm. */
   numeralXMm: number;
   ticks: TapeTick[];
+  /** Set when the model was fitted from one mark and a chronographed speed: the tape is drawn as an estimate (model.oneMark). */
+  estimate?: { kind: 'one-mark'; distance: number; nextDistance: number | null };
 }
 
 /** Stroke widths of the ticks, mm: fine enough to read to a tenth of a yard, bold enough to print. */
@@ -138,6 +140,7 @@ export function tapeLayouts(model: SightModel, options: TapeOptionsInput, scales
       numeralHeightMm,
       numeralXMm: majorMm + gapMm,
       ticks,
+      ...(model.oneMark ? { estimate: { kind: 'one-mark' as const, ...model.oneMark } } : {}),
     };
   });
 }

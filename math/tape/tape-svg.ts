@@ -1,7 +1,8 @@
 import type { TapeOptionsInput } from '@/shared/fit';
 import type { SightModel } from '@/math/flight/sight-model';
-import { NUMERAL_FONT } from '@/math/tape/glyphs';
-import { textElement } from '@/math/tape/text-path';
+import { NUMERAL_FONT, SMALL_PRINT_FONT } from '@/math/tape/glyphs';
+import { measureTextMm, textElement } from '@/math/tape/text-path';
+import { ONE_MARK_STRIP } from '@/math/cautions';
 import { formatTapeNumber, tapeLayout, type TapeLayout } from '@/math/tape/tape-layout';
 
 /**
@@ -11,6 +12,9 @@ import { formatTapeNumber, tapeLayout, type TapeLayout } from '@/math/tape/tape-
  * top edge); numerals are outline paths (no fonts needed), each with
  * data-numeral and its text in aria-label. The outline is the
  * cut line. Geometry and alignment: see tape-layout.ts and math/README.md.
+ * A tape fitted from one mark and a chronographed speed (model.oneMark) says
+ * so along its free edge ("ESTIMATE FROM ONE MARK · 20 yd SIGHTED"), in every
+ * copy, so a cut-out tape is never taken for a sighted one.
  *
  * Example: tapeSvg(fit, { from: 20, to: 100, widthMm: 12 }) → '<svg xmlns="http://www.w3.org/2000/svg" width="12mm" height="49.0419mm" …'
  */
@@ -51,8 +55,9 @@ export function tapeGroup(layout: TapeLayout, extraAttributes = ''): string {
     { x: across(layout.numeralXMm), y: 0.4 + layout.numeralHeightMm / 2, sizeMm: layout.numeralHeightMm, anchor: layout.mirror ? 'end' : 'start', baseline: 'middle' },
     'class="unit"',
   );
+  const estimate = layout.estimate ? estimateStrip(layout) : '';
   return [
-    `<g class="tape" data-unit="${layout.unit}" data-scale="${layout.scale}" data-orientation="${layout.orientation}" data-mirror="${layout.mirror}"${extraAttributes ? ` ${extraAttributes}` : ''}>`,
+    `<g class="tape" data-unit="${layout.unit}" data-scale="${layout.scale}" data-orientation="${layout.orientation}" data-mirror="${layout.mirror}"${layout.estimate ? ' data-estimate="one-mark"' : ''}${extraAttributes ? ` ${extraAttributes}` : ''}>`,
     `<rect class="cut-line" x="0" y="0" width="${mm(width)}" height="${fixed(layout.lengthMm)}" fill="#fff" stroke="#8a8a8a" stroke-width="0.1"/>`,
     `<g class="ticks" stroke="#000" stroke-linecap="butt">`,
     ...lines,
@@ -61,8 +66,45 @@ export function tapeGroup(layout: TapeLayout, extraAttributes = ''): string {
     ...numerals,
     unitLabel,
     '</g>',
+    estimate,
     '</g>',
   ].join('\n');
+}
+
+/**
+ * The words of a one-mark estimate down the tape's free edge (beyond the
+ * numerals), read bottom to top, repeated along the length; on a tape too
+ * narrow for them, a hatched edge band instead (still unmistakable).
+ */
+function estimateStrip(layout: TapeLayout): string {
+  const estimate = layout.estimate!;
+  const widest = Math.max(
+    0,
+    ...layout.ticks.filter((tick) => tick.numeral).map((tick) => measureTextMm(formatTapeNumber(tick.distance), NUMERAL_FONT, layout.numeralHeightMm)),
+  );
+  const freeMm = layout.widthMm - (layout.numeralXMm + widest) - 0.3;
+  const sizeMm = Math.min(1.8, freeMm - 0.6);
+  const centreX = layout.mirror ? freeMm / 2 + 0.15 : layout.widthMm - freeMm / 2 - 0.15;
+  if (sizeMm < 1.2) {
+    const x = layout.mirror ? 0.15 : layout.widthMm - Math.max(0.6, freeMm) - 0.15;
+    return `<rect class="estimate-strip" x="${mm(x)}" y="0" width="${mm(Math.max(0.6, freeMm))}" height="${fixed(layout.lengthMm)}" fill="#000" fill-opacity="0.35" aria-label="${ONE_MARK_STRIP}"/>`;
+  }
+  // The longest wording that fits the tape's length, shrunk (to 1.2 mm at least) if even the short one is too long.
+  const room = layout.lengthMm - 2;
+  const long = `${ONE_MARK_STRIP} · ${formatTapeNumber(estimate.distance)} ${layout.unit} SIGHTED`;
+  const word = measureTextMm(long, SMALL_PRINT_FONT, sizeMm) <= room ? long : ONE_MARK_STRIP;
+  const size = Math.max(1.2, Math.min(sizeMm, (sizeMm * room) / measureTextMm(word, SMALL_PRINT_FONT, sizeMm)));
+  const wordMm = measureTextMm(word, SMALL_PRINT_FONT, size);
+  const repeats = Math.max(1, Math.floor((layout.lengthMm - 4) / (wordMm + 8)));
+  const pitch = layout.lengthMm / repeats;
+  const parts = ['<g class="estimate-strip" fill="#000" data-estimate="one-mark">'];
+  for (let i = 0; i < repeats; i++) {
+    parts.push(
+      `<g transform="translate(${fixed(centreX)} ${fixed(pitch * (i + 0.5))}) rotate(-90)">${textElement(word, SMALL_PRINT_FONT, { x: 0, y: 0, sizeMm: size, anchor: 'middle', baseline: 'middle' })}</g>`,
+    );
+  }
+  parts.push('</g>');
+  return parts.join('\n');
 }
 
 /** Lengths to 0.1 µm: far below print resolution, so nothing visible is rounded. */

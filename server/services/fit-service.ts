@@ -30,7 +30,7 @@ import { ApiError } from '@/server/errors';
 import type { ArrowBuild, Bow } from '@/server/models';
 import type { FitInput, SheetInput, SheetLabels, TapeInput, TapeOptionsInput } from '@/shared/fit';
 import type { BuildDerived, BuildInput } from '@/shared/build';
-import type { MarkInput, StoredFit } from '@/shared/session';
+import { ONE_MARK_SESSION_MESSAGE, type MarkInput, type StoredFit } from '@/shared/session';
 import type { TapeLayout } from '@/shared/tape';
 
 /** Yards → metres, exact (international yard and pound, 1959). */
@@ -155,7 +155,9 @@ const SESSION_FIELDS: Record<string, string> = {
 
 /**
  * Fits a session's marks with its bow and build; a fit the marks cannot give
- * (e.g. an impossible gap) is a 400 with the fit's own field message.
+ * (e.g. an impossible gap) is a 400 with the fit's own field message. One mark
+ * fits only when the build has a chronographed speed (method 'one-mark': every
+ * other distance an estimate); without one it is a 400 on `marks`.
  * Example: fitSession(bow, build, { altitudeM: null, temperatureC: null, marks }).speedFps → ≈ 283
  */
 export function fitSession(
@@ -163,6 +165,7 @@ export function fitSession(
   build: Pick<ArrowBuild, 'totalGr' | 'diameterMm' | 'dragCoefficient' | 'speedFps'>,
   session: { altitudeM: number | null; temperatureC: number | null; marks: MarkInput[] },
 ): StoredFit {
+  if (session.marks.length === 1 && build.speedFps === null) throw ApiError.badRequest(ONE_MARK_SESSION_MESSAGE, { marks: ONE_MARK_SESSION_MESSAGE });
   const input = fitInputFor(bow, build, session);
   const fit = refusingInputErrors(() => fitSight(input), SESSION_FIELDS);
   return storedFitOf(fit, bow.scaleDirection);

@@ -38,7 +38,10 @@ describe('POST /api/bows/:bowId/sessions', () => {
       'marks.2.scaleMm': 'Scale reading must be at most 200 mm',
     });
     const few = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20]) });
-    expect(few.body.error.fields).toEqual({ marks: 'Enter at least 2 marks to fit' });
+    // One mark needs a chronographed speed on the build (this build has none).
+    expect(few.body.error.fields).toEqual({ marks: 'Enter at least 2 marks to fit, or one mark with a chronographed speed on the arrow build' });
+    const none = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: [] });
+    expect(none.body.error.fields).toEqual({ marks: 'Enter at least 2 marks to fit (or one, with a chronographed speed on the arrow build)' });
     const twice = await agent
       .post(`/api/bows/${bow.id}/sessions`)
       .set(CSRF)
@@ -55,6 +58,28 @@ describe('POST /api/bows/:bowId/sessions', () => {
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({ buildId: 'Choose one of this bow’s arrow builds' });
     expect(await SightSession.count({ where: { bowId: first.bow.id } })).toBe(0);
+  });
+
+  it('saves one mark when the build has a chronographed speed: an estimate, and its tape says so', async () => {
+    const { agent } = await signedInAgent(app);
+    const { bow, build } = await bowWithBuild(agent, {}, { speedFps: knownSight.speedFps });
+    const res = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20]) });
+    expect(res.status).toBe(201);
+    const fit = sessionSchema.parse(res.body.session).fit;
+    expect(fit.method).toBe('one-mark');
+    expect(fit.warnings[0]).toEqual(expect.objectContaining({ code: 'one-mark' }));
+    expect(fit.nextDistance).not.toBeNull();
+    expect((fit.model as { oneMark?: unknown }).oneMark).toEqual({ distance: 20, nextDistance: fit.nextDistance });
+    const tape = await agent
+      .get(`/api/sessions/${res.body.session.id}/tape.svg`)
+      .buffer(true)
+      .parse(((stream: NodeJS.ReadableStream, done: (error: Error | null, body: Buffer) => void) => {
+        const chunks: Buffer[] = [];
+        stream.on('data', (chunk: Buffer) => chunks.push(chunk));
+        stream.on('end', () => done(null, Buffer.concat(chunks)));
+      }) as never);
+    expect(tape.status).toBe(200);
+    expect((tape.body as Buffer).toString()).toContain('data-estimate="one-mark"');
   });
 
   it('saves the session with its marks and the fit math/ computes from them', async () => {

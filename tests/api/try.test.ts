@@ -44,7 +44,7 @@ describe('POST /api/try/fit (no account)', () => {
       .set(CSRF)
       .send({ ...fitInput(), marks: [{ distance: 20, markMm: 18 }] });
     expect(res.status).toBe(400);
-    expect(res.body.error.fields).toEqual({ marks: 'Enter at least two marks' });
+    expect(res.body.error.fields).toEqual({ marks: 'Enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)' });
     const gap = await request(app)
       .post('/api/try/fit')
       .set(CSRF)

@@ -35,7 +35,7 @@ describe('pinwright command line', () => {
   });
 
   it.each([
-    ['one mark', { ...good, marks: [good.marks[0]] }, 'marks: enter at least two marks'],
+    ['one mark and no chronographed speed', { ...good, arrow: { massGr: 420, diameterMm: 6.5 }, marks: [good.marks[0]] }, 'marks: enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)'],
     ['a duplicate distance', { ...good, marks: [good.marks[0], { distance: 20, markMm: 15 }] }, 'marks[1].distance: each distance may appear only once'],
     ['an impossible gap', { ...good, marks: [good.marks[0], { distance: 60, markMm: 15.3 }] }, /^marks: the 60 yd mark is only 0\.4 mm below/],
     ['a negative mass', { ...good, arrow: { massGr: -3, diameterMm: 6.5 } }, /^arrow\.massGr: /],
@@ -48,6 +48,27 @@ describe('pinwright command line', () => {
     expect(stderr.trimEnd().split('\n')).toHaveLength(1);
     if (typeof message === 'string') expect(stderr.trimEnd()).toBe(message);
     else expect(stderr).toMatch(message);
+  });
+
+  it('fit, tape and sheet take one mark with a chronographed speed: an estimate, said so, with the distance to shoot next', () => {
+    const oneMark = { ...good, marks: [good.marks[0]], shots: undefined };
+    const result = run(['fit'], JSON.stringify(oneMark));
+    expect(result.stderr.toString()).toBe('');
+    expect(result.status).toBe(0);
+    const fit = JSON.parse(result.stdout.toString());
+    expect(fit.method).toBe('one-mark');
+    expect(fit.model.oneMark).toEqual({ distance: 20, nextDistance: fit.nextDistance });
+    expect(typeof fit.nextDistance).toBe('number');
+    expect(fit.warnings[0]).toEqual(expect.objectContaining({ code: 'one-mark', message: expect.stringMatching(/^Estimate from one mark .* Shoot \d+ yd next\.$/) }));
+    // Every distance but the sighted one carries a band wider than the mark's own 0.2 mm beyond 40 yd.
+    for (const mark of fit.marks.filter((m: { distance: number }) => m.distance >= 40)) expect(mark.sigmaMm).toBeGreaterThan(0.3);
+    const tape = run(['tape'], JSON.stringify({ ...oneMark, tape: { from: 20, to: 80 } }));
+    expect(tape.status).toBe(0);
+    expect(tape.stdout.toString()).toMatch(/data-estimate="one-mark"/);
+    expect(tape.stdout.toString()).toMatch(/aria-label="ESTIMATE FROM ONE MARK/);
+    const sheet = run(['sheet'], JSON.stringify(oneMark));
+    expect(sheet.status).toBe(0);
+    expect(sheet.stdout.toString()).toMatch(/data-caution="one-mark"/);
   });
 
   it('refuses broken JSON and unknown commands with exit 2', () => {

@@ -16,7 +16,8 @@ function refusal(input: unknown): FitInputError {
 
 describe('bad input is refused with a message naming the field', () => {
   it('one mark, or none', () => {
-    expect(refusal({ ...good, marks: [good.marks[0]] }).message).toBe('marks: enter at least two marks');
+    // One mark needs a chronographed speed (none in `good`).
+    expect(refusal({ ...good, marks: [good.marks[0]] }).message).toBe('marks: enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)');
     expect(refusal({ ...good, marks: [] }).field).toBe('marks');
     const { marks: _marks, ...withoutMarks } = good;
     expect(refusal(withoutMarks).message).toBe('marks: enter at least two marks');

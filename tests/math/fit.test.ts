@@ -180,7 +180,7 @@ describe('bands and the next distance', () => {
 describe('non-throwing variant', () => {
   it('returns the field and message instead of throwing', () => {
     const attempt = trySightFit(inputWith([{ distance: 20, markMm: 14.9 }]));
-    expect(attempt).toEqual({ ok: false, error: { field: 'marks', message: 'Enter at least two marks' } });
+    expect(attempt).toEqual({ ok: false, error: { field: 'marks', message: 'Enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)' } });
     const good = trySightFit(inputWith(marksOf(TRUE_MODEL, [20, 60])));
     expect(good.ok && good.fit.speedFps).toBeCloseTo(285, 5);
   });
