@@ -11,6 +11,7 @@ import type { Sequelize } from 'sequelize';
 import { config } from './config';
 import { sequelize as defaultSequelize } from './db';
 import { errorHandler, notFoundHandler } from './errors';
+import { createRateLimits } from './middleware/rate-limits';
 import { csrfGuard } from './middleware/csrf';
 import { apiRoutes } from './routes';
 import { createSessionMiddleware } from './session';
@@ -53,6 +54,7 @@ export function createApp(options: AppOptions = {}) {
     expiryTimer: options.sessionExpiryTimer ?? true,
   });
   app.locals.sessionStore = store;
+  app.locals.rateLimits = createRateLimits(); // one counter per limit for the whole app (sign-up is shared by two routes)
 
   app.use('/api', express.json({ limit: '1mb' }), sessionMiddleware, csrfGuard, apiRoutes(sequelize));
   app.use('/api', notFoundHandler);

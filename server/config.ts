@@ -65,6 +65,19 @@ export const config = {
   mailDir: path.resolve(root, process.env.MAIL_DIR || '.data/mail'),
   /** The development mail reader (GET /api/dev/mail); never in production. */
   devMail: !production,
+  /** Rate limits (server/middleware/rate-limits.ts): how many requests per window, counted in this process. */
+  limits: {
+    /** Failed sign-ins from one client address, whatever the e-mail (password spraying), per 15 minutes. */
+    signInFailuresPerAddress: int('SIGN_IN_FAILURES_PER_ADDRESS', 20),
+    /** Sign-in attempts from one address for one e-mail, per 15 minutes. */
+    signInPerAddressAndEmail: int('SIGN_IN_PER_ADDRESS_AND_EMAIL', 10),
+    /** Failed sign-ins for one e-mail, from any address (guessing spread over many addresses), per 15 minutes. */
+    signInFailuresPerEmail: int('SIGN_IN_FAILURES_PER_EMAIL', 30),
+    /** New accounts from one address, per hour, over every route that creates one (sign-up, invitation acceptance). */
+    signUpsPerAddress: int('SIGN_UPS_PER_ADDRESS', 30),
+    /** Invitations sent by one account, per hour. */
+    invitesPerAccount: int('INVITES_PER_ACCOUNT', 20),
+  },
 };
 
 export type Config = typeof config;

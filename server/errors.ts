@@ -56,12 +56,43 @@ export const notFoundHandler: RequestHandler = (req, _res, next) => {
   next(new ApiError(404, 'not_found', `No such API path: ${req.method} ${req.originalUrl.split("?")[0]}`));
 };
 
+/** Status of an error thrown by the body parser, the URL decoder or another library (http-errors), when it is a 4xx. */
+function statusOf(err: unknown): number | null {
+  if (!err || typeof err !== 'object') return null;
+  const status = (err as { status?: unknown; statusCode?: unknown }).status ?? (err as { statusCode?: unknown }).statusCode;
+  return typeof status === 'number' && status >= 400 && status < 500 ? status : null;
+}
+
+/**
+ * What the body parser (raw-body, http-errors), the router's URL decoder and
+ * the like throw for a request they cannot read, as an ApiError; null for
+ * anything else. Their own messages are not sent (they name internals).
+ * Example: clientError({ status: 415, type: 'charset.unsupported' }).message → 'Send the request body as UTF-8 JSON.'
+ */
+export function clientError(err: unknown): ApiError | null {
+  const type = (err as { type?: unknown } | null)?.type;
+  if (type === 'charset.unsupported') return new ApiError(415, 'unsupported_charset', 'Send the request body as UTF-8 JSON.');
+  if (type === 'encoding.unsupported') {
+    return new ApiError(415, 'unsupported_encoding', 'The request body\'s Content-Encoding is not supported; send it plain or gzip, deflate or br.');
+  }
+  if (err instanceof URIError) return new ApiError(400, 'bad_url', 'The address has broken percent-encoding.');
+  const status = statusOf(err);
+  if (status === null) return null;
+  if (status === 413) return new ApiError(413, 'too_large', 'The request is too large.');
+  if (status === 415) return new ApiError(415, 'unsupported_type', 'The request\'s content type or encoding is not supported.');
+  if (status === 400 && /decod|param/i.test(String((err as Error).message))) {
+    return new ApiError(400, 'bad_request', 'The request could not be read: its address or body is not encoded correctly.');
+  }
+  return new ApiError(status, status === 404 ? 'not_found' : 'bad_request', 'The request could not be read.');
+}
+
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   let apiError: ApiError;
   if (err instanceof ApiError) apiError = err;
   else if (err instanceof ZodError) apiError = validationError(err);
   else if (err?.type === 'entity.parse.failed') apiError = new ApiError(400, 'bad_json', 'The request body is not valid JSON.');
   else if (err?.type === 'entity.too.large') apiError = new ApiError(413, 'too_large', 'The request is too large.');
+  else if (clientError(err)) apiError = clientError(err)!;
   else if (err?.name === 'SequelizeUniqueConstraintError') apiError = ApiError.conflict('That record already exists.');
   else if (err?.name === 'SequelizeConnectionRefusedError' || err?.name === 'SequelizeConnectionError') {
     apiError = new ApiError(503, 'db_unavailable', 'The database is not reachable; try again shortly.');

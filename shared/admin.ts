@@ -1,10 +1,11 @@
 import { z } from 'zod';
+import { maxRecordId, pageSchema } from './common';
 import { roleSchema } from './auth';
 
 /** Admin account search: optional text matched against name and e-mail. */
 export const accountSearchSchema = z.object({
   q: z.string().trim().max(100, 'Search text must be at most 100 characters').optional(),
-  page: z.coerce.number({ invalid_type_error: 'Page must be a number' }).int().min(1, 'Page starts at 1').default(1),
+  page: pageSchema,
   /** Only accounts with this role. */
   role: z.enum(['archer', 'tech', 'admin'], { errorMap: () => ({ message: 'Role must be archer, tech or admin' }) }).optional(),
 });
@@ -38,7 +39,7 @@ export const accountUpdateSchema = z
   });
 
 export const idParamSchema = z.object({
-  id: z.coerce.number({ invalid_type_error: 'The id must be a number' }).int().positive('The id must be a positive number'),
+  id: z.coerce.number({ invalid_type_error: 'The id must be a number' }).int().positive('The id must be a positive number').max(maxRecordId, 'There is no account with so large an id'),
 });
 
 export type AccountSearch = z.infer<typeof accountSearchSchema>;

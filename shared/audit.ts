@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { pageSchema } from './common';
 
 /**
  * The audit log as the API returns it (a bow's log for its archer, the whole
@@ -22,7 +23,7 @@ export const auditEntrySchema = z.object({
 });
 
 export const auditQuerySchema = z.object({
-  page: z.coerce.number({ invalid_type_error: 'Page must be a number' }).int().min(1, 'Page starts at 1').default(1),
+  page: pageSchema,
 });
 
 export const auditListResponseSchema = z.object({

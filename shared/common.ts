@@ -65,13 +65,31 @@ export const distanceUnitSchema = z.enum(['yd', 'm'], {
   errorMap: () => ({ message: 'Choose yards (yd) or metres (m)' }),
 });
 
+/** Largest record id: the id columns are MariaDB INT (signed 32-bit). */
+export const maxRecordId = 2_147_483_647;
+
 /** A record id in a URL path, e.g. /api/bows/12. */
 function idSchema(what: string) {
   return z.coerce
     .number({ invalid_type_error: `The ${what} id must be a number` })
     .int(`The ${what} id must be a whole number`)
-    .positive(`The ${what} id must be a positive number`);
+    .positive(`The ${what} id must be a positive number`)
+    .max(maxRecordId, `There is no ${what} with so large an id`);
 }
+
+/** Highest page number a list accepts (far beyond any real list; keeps OFFSET inside the database's range). */
+export const maxPage = 100_000;
+
+/**
+ * A `page` query parameter: a whole number from 1 to maxPage, 1 when absent.
+ * Example: pageSchema.safeParse('4e17').success → false ('Page must be at most 100000')
+ */
+export const pageSchema = z.coerce
+  .number({ invalid_type_error: 'Page must be a number' })
+  .int('Page must be a whole number')
+  .min(1, 'Page starts at 1')
+  .max(maxPage, `Page must be at most ${maxPage}`)
+  .default(1);
 
 /** Params of /…/:id routes. */
 export const idParamSchema = z.object({ id: idSchema('record') });
@@ -85,7 +103,8 @@ export function refIdSchema(what: string) {
   return z
     .number({ required_error: `Choose the ${what}`, invalid_type_error: `Choose the ${what}` })
     .int(`Choose the ${what}`)
-    .positive(`Choose the ${what}`);
+    .positive(`Choose the ${what}`)
+    .max(maxRecordId, `Choose the ${what}`);
 }
 
 /** Timestamps as the API sends them (ISO 8601 strings). */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { distanceUnitSchema, measureSchema } from './common';
+import { distanceUnitSchema, maxRecordId, measureSchema } from './common';
 
 /**
  * Build comparison schemas: the query of GET /api/bows/:bowId/compare and the
@@ -33,7 +33,8 @@ export const queryNumberList = <T extends z.ZodTypeAny>(schema: T) =>
 const buildIdSchema = z
   .number({ invalid_type_error: 'Each build id must be a number' })
   .int('Each build id must be a whole number')
-  .positive('Each build id must be a positive number');
+  .positive('Each build id must be a positive number')
+  .max(maxRecordId, 'There is no build with so large an id');
 
 /**
  * Query of GET /api/bows/:bowId/compare: `builds` (2–4 build ids, comma

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { maxRecordId } from './common';
 import { emailSchema } from './auth';
 import { paperSchema } from './tape';
 
@@ -17,7 +18,7 @@ import { paperSchema } from './tape';
 export const sendTapeSchema = z.object({
   to: emailSchema,
   paper: paperSchema.optional(),
-  tape: z.number({ invalid_type_error: 'Choose a saved tape' }).int().positive().optional(),
+  tape: z.number({ invalid_type_error: 'Choose a saved tape' }).int().positive().max(maxRecordId, 'Choose a saved tape').optional(),
   layout: z.string({ invalid_type_error: 'The layout must be a query string' }).max(500, 'The layout is too long').optional(),
 });
 

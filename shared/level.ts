@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDateSchema, textSchema } from './common';
+import { isoDateSchema, maxRecordId, textSchema } from './common';
 import {
   bowChangeKinds,
   levelResults,
@@ -126,7 +126,7 @@ export const checkUpdateSchema = z
 
 /** Params of /api/checks/:id/steps/:step/photo. */
 export const stepPhotoParamsSchema = z.object({
-  id: z.coerce.number({ invalid_type_error: 'The check id must be a number' }).int('The check id must be a whole number').positive('The check id must be a positive number'),
+  id: z.coerce.number({ invalid_type_error: 'The check id must be a number' }).int('The check id must be a whole number').positive('The check id must be a positive number').max(maxRecordId, 'There is no check with so large an id'),
   step: levelStepKeySchema,
 });
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { distanceUnitSchema, measureSchema, textSchema, timestampsSchema } from './common';
+import { distanceUnitSchema, maxRecordId, measureSchema, textSchema, timestampsSchema } from './common';
 import { distanceLimits } from './fit';
 
 /**
@@ -75,7 +75,7 @@ const queryBoolean = z.preprocess(
  */
 export const tapeQuerySchema = z
   .object({
-    tape: queryNumber(z.number({ invalid_type_error: 'The tape id must be a number' }).int('The tape id must be a whole number').positive('The tape id must be a positive number')),
+    tape: queryNumber(z.number({ invalid_type_error: 'The tape id must be a number' }).int('The tape id must be a whole number').positive('The tape id must be a positive number').max(maxRecordId, 'There is no tape with so large an id')),
     from: queryNumber(measureSchema('From distance', '', distanceLimits.min, distanceLimits.max)),
     to: queryNumber(measureSchema('To distance', '', distanceLimits.min, distanceLimits.max)),
     step: queryNumber(tickStepSchema),

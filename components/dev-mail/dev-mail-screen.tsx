@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 
 import { isApiError } from '@/components/api/client';
+import { useMe } from '@/components/auth/api';
 import { useClearDevMail, useDevMail, useDevMailMessage } from '@/components/dev-mail/api';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -86,6 +87,8 @@ function MessageView({ id }: { id: string }) {
  */
 export function DevMailScreen() {
   const mail = useDevMail();
+  const me = useMe();
+  const admin = me.data?.role === 'admin';
   const clear = useClearDevMail();
   const wide = useWide();
   const [selected, setSelected] = useState<string | null>(null);
@@ -97,11 +100,23 @@ export function DevMailScreen() {
       <Banner tone="info" title="Not available">
         The mail reader is only there in development; this server sends real e-mail.
       </Banner>
+    ) : isApiError(mail.error, 401) ? (
+      <View style={styles.signIn} testID="mail-sign-in">
+        <Banner tone="info" title="Sign in to read your e-mail">
+          Like a mail program, this reader shows only the messages sent to the address you are signed in with.
+        </Banner>
+        <Button label="Sign in" href="/sign-in" />
+      </View>
     ) : (
       <ErrorView title="The mailbox could not be read" error={mail.error} onRetry={() => mail.refetch()} />
     );
   } else if (mail.data.length === 0) {
-    content = <EmptyState title="No e-mail yet" message="Messages the app sends (invitations, reset links, tapes) appear here within a few seconds." />;
+    content = (
+      <EmptyState
+        title="No e-mail yet"
+        message={`Messages the app sends to ${admin ? 'anyone' : (me.data?.email ?? 'your address')} (invitations, reset links, tapes) appear here within a few seconds.`}
+      />
+    );
   } else {
     const openId = selected ?? (wide ? mail.data[0].id : null);
     const list = (
@@ -133,9 +148,11 @@ export function DevMailScreen() {
         <SectionHeading
           level={1}
           title="Sent e-mail"
-          description="Development only: what the app sent, caught by the local mail service. Nothing here was delivered."
+          description={`Development only: what the app sent${admin ? '' : ' to your address'}, caught by the local mail service. Nothing here was delivered.`}
           action={
-            mail.data?.length ? <Button label="Empty the mailbox" variant="secondary" pending={clear.isPending} onPress={() => clear.mutate()} /> : undefined
+            admin && mail.data?.length ? (
+              <Button label="Empty the mailbox" variant="secondary" pending={clear.isPending} onPress={() => clear.mutate()} />
+            ) : undefined
           }
         />
         <Button label="Back to the app" variant="quiet" href="/" />
@@ -164,6 +181,7 @@ const styles = StyleSheet.create({
   listColumn: { flexBasis: 360, flexShrink: 1 },
   detailColumn: { flex: 1, minWidth: 0 },
   phone: { gap: space.md },
+  signIn: { gap: space.md, alignItems: 'flex-start' },
   message: { gap: space.md },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   body: { padding: space.lg, borderRadius: radii.md, backgroundColor: colors.surface, borderWidth: borders.hairline, borderColor: colors.line },

@@ -19,7 +19,8 @@ const receivePhoto: RequestHandler = (req, res, next) => {
       if (err.code === 'LIMIT_FILE_SIZE') return next(new ApiError(413, 'too_large', 'The photo is larger than 5 MB; send a smaller one.'));
       return next(ApiError.badRequest('Send one photo in the "photo" field.', { photo: 'Send one photo' }));
     }
-    next(err);
+    // busboy's own errors (no boundary, a truncated part, a malformed part header, …) are the client's upload, not ours.
+    next(new ApiError(400, 'bad_upload', 'The upload could not be read; send the photo again as multipart/form-data in the "photo" field.', { photo: 'The upload could not be read' }));
   });
 };
 

@@ -1,6 +1,5 @@
 import { Router } from 'express';
-import { rateLimit } from 'express-rate-limit';
-import { ApiError } from '@/server/errors';
+import { limit } from '@/server/middleware/rate-limits';
 import { currentUser, requireUser } from '@/server/middleware/auth';
 import { validate } from '@/server/middleware/validate';
 import * as shares from '@/server/services/share-service';
@@ -30,25 +29,11 @@ function startSession(req: Express.Request, userId: number) {
  */
 export function shareRoutes() {
   const router = Router();
-  const inviteLimit = rateLimit({
-    windowMs: 60 * 60 * 1000,
-    limit: 30,
-    handler: (_req, _res, next) => next(new ApiError(429, 'rate_limited', 'Too many invitations in an hour. Try again later.')),
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-  });
-  const signUpLimit = rateLimit({
-    windowMs: 60 * 60 * 1000,
-    limit: 30,
-    handler: (_req, _res, next) => next(new ApiError(429, 'rate_limited', 'Too many new accounts from this address. Try again in an hour.')),
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-  });
-
+  // Invitations per inviting account; new accounts share the sign-up limit (server/middleware/rate-limits.ts).
   router.get('/bows/:bowId/shares', requireUser, validate({ params: bowIdParamSchema }), async (req, res) => {
     res.json({ shares: await shares.listBowShares(currentUser(req), bowIdOf(req)) });
   });
-  router.post('/bows/:bowId/shares', requireUser, inviteLimit, validate({ params: bowIdParamSchema, body: shareInviteSchema }), async (req, res) => {
+  router.post('/bows/:bowId/shares', requireUser, limit('invite'), validate({ params: bowIdParamSchema, body: shareInviteSchema }), async (req, res) => {
     res.status(201).json({ share: await shares.inviteTech(currentUser(req), bowIdOf(req), req.body.email) });
   });
   router.get('/shares', requireUser, async (req, res) => {
@@ -64,7 +49,7 @@ export function shareRoutes() {
   router.post('/invites/accept', requireUser, validate({ body: inviteAcceptSchema }), async (req, res) => {
     res.json({ share: await shares.acceptInvite(currentUser(req), req.body.token) });
   });
-  router.post('/invites/accept-new', signUpLimit, validate({ body: inviteSignUpSchema }), async (req, res) => {
+  router.post('/invites/accept-new', limit('signUp'), validate({ body: inviteSignUpSchema }), async (req, res) => {
     const { user, share } = await shares.acceptWithNewAccount(req.body);
     await startSession(req, user.id);
     res.status(201).json({ user: user.toPublic(), share });

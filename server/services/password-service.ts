@@ -3,7 +3,8 @@
  * answer and about the same time whether or not the address has an account
  * (the work is done after the answer is sent); a random single-use token,
  * valid one hour, stored as its SHA-256; a successful reset ends every
- * signed-in session of the account and every other reset link.
+ * signed-in session of the account and every other reset link; a newer link
+ * ends the older ones.
  *
  * Example: startReset('marit@demo.pinwright.test')  // e-mails a link when the account exists
  *          await resetPassword({ token, password: 'a new long password' })
@@ -33,6 +34,8 @@ export function resetLink(raw: string): string {
 export async function sendResetLink(email: string, now = new Date()): Promise<boolean> {
   const user = await User.findOne({ where: { email } });
   if (!user || user.disabled) return false;
+  // A new link ends the older ones: only the latest e-mail works.
+  await retireTokens({ purpose: 'password-reset', userId: user.id }, now);
   const { raw } = await issueToken({ purpose: 'password-reset', userId: user.id, validMs: resetValidMinutes * 60_000, now });
   await sendMail({ to: user.email, ...resetMessage({ name: user.name, link: resetLink(raw) }) });
   return true;

@@ -1,10 +1,12 @@
 /**
- * Photos of level-check steps: accepted by their content (JPEG, PNG or WebP,
- * recognised from the file's first bytes by file-type, never by its name or
- * the browser's claim), at most 5 MB, stored by the photo storage under a
- * random name, and served only to someone who may read the bow.
+ * Photos of level-check steps: decoded as images (JPEG, PNG or WebP, told by
+ * their content, never by their name or the browser's claim), at most 5 MB,
+ * turned upright by their EXIF orientation and re-encoded, so nothing of the
+ * file's metadata (EXIF with GPS position, XMP, comments, text chunks) is
+ * stored; stored by the photo storage under a random name, and served only to
+ * someone who may read the bow.
  */
-import FileType from 'file-type';
+import sharp from 'sharp';
 import { ApiError } from '@/server/errors';
 import { Photo, type User } from '@/server/models';
 import { canReadBow } from '@/server/services/bow-access';
@@ -16,23 +18,44 @@ import type { PhotoMimeType } from '@/server/models/photo';
 /** Largest photo accepted, in bytes (5 MB = 5 × 1024 × 1024). */
 export const maxPhotoBytes = 5 * 1024 * 1024;
 
-const accepted: Record<string, { mime: PhotoMimeType; extension: 'jpg' | 'png' | 'webp' }> = {
-  'image/jpeg': { mime: 'image/jpeg', extension: 'jpg' },
-  'image/png': { mime: 'image/png', extension: 'png' },
-  'image/webp': { mime: 'image/webp', extension: 'webp' },
+/** Most pixels decoded (a 50-megapixel phone photo); a small file that claims far more is a decompression bomb. */
+export const maxPhotoPixels = 50_000_000;
+
+type PhotoType = { mime: PhotoMimeType; extension: 'jpg' | 'png' | 'webp' };
+
+const accepted: Record<string, PhotoType> = {
+  jpeg: { mime: 'image/jpeg', extension: 'jpg' },
+  png: { mime: 'image/png', extension: 'png' },
+  webp: { mime: 'image/webp', extension: 'webp' },
 };
 
+const notAnImage = () =>
+  new ApiError(415, 'unsupported_type', 'The photo must be a JPEG, PNG or WebP image; this file is not one (or is damaged), whatever its name says.');
+
 /**
- * The photo's type from its content, or a 415 when it is not a JPEG, PNG or WebP image.
- * Example: await photoTypeOf(jpegBytes) → { mime: 'image/jpeg', extension: 'jpg' }
+ * The photo decoded, turned upright and re-encoded in its own format with no
+ * metadata at all (sharp writes none unless asked to), or a 415 when the
+ * bytes do not decode completely as a JPEG, PNG or WebP image.
+ * Example: await cleanPhoto(phoneJpeg) → { type: { mime: 'image/jpeg', extension: 'jpg' }, bytes: <JPEG without EXIF> }
  */
-export async function photoTypeOf(bytes: Buffer) {
-  const detected = await FileType.fromBuffer(bytes);
-  const type = detected ? accepted[detected.mime] : undefined;
-  if (!type) {
-    throw new ApiError(415, 'unsupported_type', 'The photo must be a JPEG, PNG or WebP image; this file is not one, whatever its name says.');
+export async function cleanPhoto(bytes: Buffer): Promise<{ type: PhotoType; bytes: Buffer }> {
+  let format: string | undefined;
+  try {
+    format = (await sharp(bytes, { limitInputPixels: maxPhotoPixels }).metadata()).format;
+  } catch {
+    throw notAnImage();
   }
-  return type;
+  const type = format ? accepted[format] : undefined;
+  if (!type) throw notAnImage();
+  try {
+    // failOn 'truncated': a cut-off file is refused rather than stored half grey.
+    const image = sharp(bytes, { failOn: 'truncated', limitInputPixels: maxPhotoPixels }).rotate();
+    const encoded =
+      type.extension === 'jpg' ? image.jpeg({ quality: 90, mozjpeg: false }) : type.extension === 'png' ? image.png() : image.webp({ quality: 90 });
+    return { type, bytes: await encoded.toBuffer() };
+  } catch {
+    throw notAnImage();
+  }
 }
 
 /** POST /api/checks/:id/steps/:step/photo: the step's photo (replacing an earlier one). */
@@ -40,18 +63,20 @@ export async function attachStepPhoto(user: User, checkId: number, stepKey: stri
   const { check, step } = await workableStep(user, checkId, stepKey);
   if (!file || file.size === 0) throw ApiError.badRequest('Choose a photo to upload.', { photo: 'Choose a photo to upload' });
   if (file.size > maxPhotoBytes) throw new ApiError(413, 'too_large', 'The photo is larger than 5 MB; send a smaller one.');
-  const type = await photoTypeOf(file.buffer);
-  const storageKey = await photoStorage.put(file.buffer, type.extension);
-  let photo: Photo;
+  const { type, bytes } = await cleanPhoto(file.buffer);
+  const storageKey = await photoStorage.put(bytes, type.extension);
+  let photo: Photo | null = null;
+  const previous = step.photo ?? null;
   try {
-    photo = await Photo.create({ bowId: check.bowId, userId: user.id, storageKey, mimeType: type.mime, sizeBytes: file.size });
+    photo = await Photo.create({ bowId: check.bowId, userId: user.id, storageKey, mimeType: type.mime, sizeBytes: bytes.length });
+    step.photoId = photo.id;
+    await step.save();
   } catch (error) {
+    // Nothing half-stored: neither a row nobody points at nor a file without a row.
+    await photo?.destroy().catch(() => {});
     await photoStorage.remove(storageKey);
     throw error;
   }
-  const previous = step.photo ?? null;
-  step.photoId = photo.id;
-  await step.save();
   if (previous) await removePhoto(previous);
   return photoJson(photo);
 }

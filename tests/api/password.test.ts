@@ -144,14 +144,15 @@ describe('choosing a new password from the link', () => {
 
 describe('the development mail reader', () => {
   it('lists what was sent to an address and gives the links that open in this app', async () => {
-    const { email } = await signedInAgent(app);
+    // Read as the addressee would: signed in (tests/api/mailbox.test.ts has the rules).
+    const { agent, email } = await signedInAgent(app);
     const { mail, token } = await resetLinkFor(email);
-    const list = await request(app).get('/api/dev/mail').query({ to: email.toUpperCase() });
+    const list = await agent.get('/api/dev/mail').query({ to: email.toUpperCase() });
     expect(list.status).toBe(200);
     expect(list.body.messages).toEqual([expect.objectContaining({ id: mail.id, to: [email], subject: 'Reset your Pinwright password', attachmentCount: 0 })]);
-    const one = await request(app).get(`/api/dev/mail/${mail.id}`);
+    const one = await agent.get(`/api/dev/mail/${mail.id}`);
     expect(one.body.message.links).toEqual([{ href: `${config.publicUrl}/reset-password?token=${token}`, appPath: `/reset-password?token=${token}` }]);
-    expect((await request(app).get('/api/dev/mail/..%2F..%2Fetc%2Fpasswd')).status).toBe(400);
+    expect((await agent.get('/api/dev/mail/..%2F..%2Fetc%2Fpasswd')).status).toBe(400);
   });
 
   it('is not there in production', async () => {
