@@ -83,7 +83,8 @@ export function liveFitInput(text: LiveFitText, bow: Pick<Bow, 'sightRadiusMm' |
 
 /**
  * Refits the marks typed so far (pure; call it from a memo). Fewer than two
- * usable marks → 'waiting'; marks no arrow can give → 'refused' with the math
+ * usable marks → 'waiting', except one mark with a build that has a
+ * chronographed speed (fit.method 'one-mark', an estimate); marks no arrow can give → 'refused' with the math
  * core's plain message (e.g. an impossible gap).
  * Example: liveFit(text, bow, builds).state → 'fit'
  */
@@ -91,10 +92,17 @@ export function liveFit(text: LiveFitText, bow: Pick<Bow, 'sightRadiusMm' | 'pee
   const marks = usableMarks(text.marks ?? []);
   const build = builds.find((item) => String(item.id) === text.buildId);
   if (!build) return { state: 'waiting', message: 'Choose the arrow build you shot.', marks };
-  if (marks.length < 2) {
+  // One mark fits when the build has a chronographed speed: an estimate from one mark (the fit says so).
+  const chronographed = build.speedFps !== null;
+  if (marks.length === 0 || (marks.length === 1 && !chronographed)) {
     return {
       state: 'waiting',
-      message: marks.length === 0 ? 'Enter two marks (a short and a long distance) to see the fit.' : 'Enter one more mark, at another distance, to see the fit.',
+      message:
+        marks.length === 0
+          ? chronographed
+            ? 'Enter a mark to see an estimate from it and the build’s chronographed speed; two marks (a short and a long distance) make a fit.'
+            : 'Enter two marks (a short and a long distance) to see the fit.'
+          : 'Enter one more mark, at another distance, to see the fit (or give the build a chronographed speed for an estimate from one mark).',
       marks,
     };
   }

@@ -254,7 +254,7 @@ export function fitSight(input: FitInput): FitResult {
       code: 'one-mark',
       message: `${ONE_MARK_CAUTION} Only ${label(marks[0].distance)} is sighted${
         shown ? `; at ${label(shown.distance)} the mark is uncertain by ±${shown.sigmaMm.toFixed(1)} mm` : ''
-      }${next !== null ? `. Shoot ${label(next)} next` : ''}.`,
+      }${next !== null ? `. Shoot ${label(next)} next` : ''}`,
       ...(next !== null ? { distance: next } : {}),
     });
   }
