@@ -12,6 +12,8 @@ import { useBowRole } from '@/components/bows/use-bow-role';
 import { BowSharingLink } from '@/components/shares/bow-sharing-link';
 import { BuildToolsLinks } from '@/components/compare/build-tools-links';
 import { buildName } from '@/components/builds/build-words';
+import { addedByNote } from '@/components/clients/added-by';
+import { sightInName } from '@/shared/sight-in-name';
 import { Button } from '@/components/ui/button';
 import { ErrorView } from '@/components/ui/error-view';
 import { PlusIcon } from '@/components/ui/icons';
@@ -75,14 +77,14 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
           title="Arrow builds"
           level={2}
           action={
-            isOwner ? <Button label="Add a build" icon={PlusIcon} variant="secondary" href={`/bows/${bow.id}/builds/new`} testID="add-build" /> : undefined
+            canAdd ? <Button label="Add a build" icon={PlusIcon} variant="secondary" href={`/bows/${bow.id}/builds/new`} testID="add-build" /> : undefined
           }
         />
         {bow.builds.length === 0 ? (
           <Text tone="soft">
             {isOwner
               ? 'No builds yet. A build gives the fit the arrow’s weight and diameter.'
-              : `No builds yet. Only ${bow.ownerName || 'the archer'} can add one; the fit needs the arrow’s weight and diameter.`}
+              : `No builds yet. Add the arrow ${bow.ownerName || 'the archer'} shoots: it is shown to them as added by you.`}
           </Text>
         ) : (
           bow.builds.map((build) => (
@@ -90,7 +92,7 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
               key={build.id}
               testID={`build-row-${build.id}`}
               title={build.name}
-              detail={buildRowDetail(build)}
+              detail={`${buildRowDetail(build)}${addedByNote(build.addedBy, bow)}`}
               href={split ? undefined : `/builds/${build.id}`}
               selected={isSelected('build', build.id)}
               onSelect={() => onSelect({ kind: 'build', id: build.id })}
@@ -123,8 +125,8 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
           <RecordRow
             key={session.id}
             testID={`session-row-${session.id}`}
-            title={`${formatDay(session.date)}${session.placeLabel ? ` · ${session.placeLabel}` : ''}`}
-            detail={`${buildName(bow.builds, session.buildId)} · ${fitWords(session.summary).detail}`}
+            title={sightInName(session, { builds: bow.builds, siblings: bow.sessions, withoutBuild: true })}
+            detail={`${buildName(bow.builds, session.buildId)} · ${fitWords(session.summary).detail}${addedByNote(session.addedBy, bow)}`}
             href={split ? undefined : `/sessions/${session.id}`}
             selected={isSelected('session', session.id)}
             onSelect={() => onSelect({ kind: 'session', id: session.id })}

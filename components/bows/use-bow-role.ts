@@ -5,7 +5,7 @@ import type { Bow } from '@/shared/bow';
 export interface BowRole {
   /** The bow is theirs: they may edit it, add builds, change and delete its records, share it. */
   isOwner: boolean;
-  /** They may add sight-ins, marks, tapes, level checks and change notes (the owner, or a technician it is shared with). */
+  /** They may add arrow builds, sight-ins, marks, tapes, level checks and change notes (the owner, or a technician it is shared with), each attributed to them. */
   canAdd: boolean;
 }
 

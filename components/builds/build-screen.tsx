@@ -6,6 +6,7 @@ import { useBow } from '@/components/bows/api';
 import { useBowRole } from '@/components/bows/use-bow-role';
 import { useBuild, useDeleteBuild } from '@/components/builds/api';
 import { BuildForm } from '@/components/builds/build-form';
+import { AddedByLine } from '@/components/clients/added-by';
 import { Button } from '@/components/ui/button';
 import { ConfirmBar } from '@/components/ui/confirm-bar';
 import { ErrorView } from '@/components/ui/error-view';
@@ -65,6 +66,7 @@ export function BuildScreen({ buildId }: { buildId: number }) {
         }
         action={<Button label="Back to the bow" variant="quiet" href={`/bows/${data.bowId}`} />}
       />
+      <AddedByLine addedBy={data.addedBy} meId={me.data.id} testID="build-added-by" />
       <BuildForm key={data.updatedAt} bowId={data.bowId} build={data} lengthUnit={me.data.lengthUnit} onSaved={back} onCancel={back} readOnly={!isOwner} />
       {!isOwner ? null : used ? (
         <Text variant="small" tone="soft">

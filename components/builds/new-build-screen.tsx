@@ -12,8 +12,8 @@ export function NewBuildScreen({ bowId }: { bowId: number }) {
   const router = useRouter();
   return (
     <BowLoader bowId={bowId} title="Add a build">
-      {({ me, bow, role: { isOwner } }) => {
-        if (!isOwner) {
+      {({ me, bow, role: { isOwner, canAdd } }) => {
+        if (!canAdd) {
           return (
             <Screen>
               <ScreenTitle name="Add a build" />
@@ -25,7 +25,15 @@ export function NewBuildScreen({ bowId }: { bowId: number }) {
         return (
           <Screen>
             <ScreenTitle name="Add a build" />
-            <SectionHeading level={1} title="Add an arrow build" description={`For ${bow.nickname}. The fit uses the arrow's weight and diameter.`} />
+            <SectionHeading
+              level={1}
+              title="Add an arrow build"
+              description={
+                isOwner
+                  ? `For ${bow.nickname}. The fit uses the arrow's weight and diameter.`
+                  : `For ${bow.ownerName || 'the archer'}’s ${bow.nickname}. It is added as a new build, shown to them as added by you; their own builds stay as they are.`
+              }
+            />
             <BuildForm bowId={bowId} lengthUnit={me.lengthUnit} onSaved={back} onCancel={back} />
           </Screen>
         );

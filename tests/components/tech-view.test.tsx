@@ -143,7 +143,7 @@ function writes(fetchMock: jest.Mock) {
 const disabled = (testID: string) => (screen.getByTestId(testID) as HTMLInputElement).readOnly || (screen.getByTestId(testID) as HTMLInputElement).disabled;
 
 describe('a technician on a shared bow', () => {
-  it('sees whose bow it is and no Edit, Delete or Add a build; can still start a sight-in', async () => {
+  it('sees whose bow it is and no Edit or Delete; can add a build and start a sight-in', async () => {
     serveAs(tech);
     renderWithClient(<BowScreen bowId={3} />);
     const banner = await screen.findByTestId('shared-with-you');
@@ -155,7 +155,8 @@ describe('a technician on a shared bow', () => {
     expect(screen.queryByTestId('bow-edit')).toBeNull();
     expect(screen.queryByTestId('bow-delete')).toBeNull();
     expect(screen.queryByText('Delete this bow')).toBeNull();
-    expect(screen.queryByTestId('add-build')).toBeNull();
+    // Adding a build is a technician's right since issue 15 (a new, attributed entry).
+    expect(screen.getByTestId('add-build')).toBeTruthy();
     expect(screen.queryByTestId('open-sharing')).toBeNull();
     expect(screen.getByTestId('start-session')).toBeTruthy();
     expect(screen.getByTestId('open-level')).toBeTruthy();
