@@ -5,6 +5,7 @@
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
 import { authRoutes, meRoutes } from './auth';
+import { accountRoutes } from './account';
 import { healthRoutes } from './health';
 import { adminRoutes } from './admin';
 import { bowRoutes } from './bows';
@@ -34,6 +35,7 @@ export function apiRoutes(sequelize: Sequelize) {
   api.use('/health', healthRoutes(sequelize));
   api.use('/auth', authRoutes());
   api.use('/me', meRoutes());
+  api.use('/me', accountRoutes()); // /me/password, /me/export.json, /me/delete
   api.use('/admin', adminRoutes());
   api.use(bowRoutes()); // /bows, /bows/:id
   api.use(buildRoutes()); // /bows/:bowId/builds, /builds/:id

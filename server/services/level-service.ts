@@ -48,7 +48,7 @@ export function levelMaxAgeDays(): number {
 
 // ---- JSON shapes ----
 
-const person = (user: User | null | undefined) => (user ? { id: user.id, name: user.name } : { id: 0, name: 'A removed account' });
+const person = (user: User | null | undefined) => (user ? { id: user.id, name: user.name } : { id: 0, name: 'A former account' });
 
 export function photoJson(photo: Photo): PhotoJson {
   return { id: photo.id, url: `/api/photos/${photo.id}`, mimeType: photo.mimeType, sizeBytes: photo.sizeBytes };
