@@ -3,8 +3,7 @@
  * API, then the exported web app. No port is opened here (see index.ts), so
  * tests import it directly.
  */
-import fs from 'node:fs';
-import path from 'node:path';
+import compression from 'compression';
 import express from 'express';
 import helmet from 'helmet';
 import type { Sequelize } from 'sequelize';
@@ -15,6 +14,7 @@ import { createRateLimits } from './middleware/rate-limits';
 import { csrfGuard } from './middleware/csrf';
 import { apiRoutes } from './routes';
 import { createSessionMiddleware } from './session';
+import { webStatic } from './web-static';
 
 export type AppOptions = {
   sequelize?: Sequelize;
@@ -56,18 +56,13 @@ export function createApp(options: AppOptions = {}) {
   app.locals.sessionStore = store;
   app.locals.rateLimits = createRateLimits(); // one counter per limit for the whole app (sign-up is shared by two routes)
 
+  // API responses: brotli or gzip as the client accepts (compression 1.8; small bodies stay plain).
+  app.use('/api', compression());
   app.use('/api', express.json({ limit: '1mb' }), sessionMiddleware, csrfGuard, apiRoutes(sequelize));
   app.use('/api', notFoundHandler);
 
-  const webDir = options.webDir ?? config.webDir;
-  const indexHtml = path.join(webDir, 'index.html');
-  app.use(express.static(webDir, { index: false, maxAge: '1h' }));
-  // Single-page app: every other GET gets index.html; the router takes it from there.
-  app.get(/^(?!\/api\/).*/, (_req, res, next) => {
-    if (!fs.existsSync(indexHtml)) return next();
-    res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(indexHtml);
-  });
+  // The exported web app: precompressed files, long-lived hashed assets, index.html for app routes.
+  app.use(webStatic(options.webDir ?? config.webDir));
   app.use(errorHandler);
   return app;
 }

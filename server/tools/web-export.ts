@@ -1,12 +1,14 @@
 /**
  * Builds the web app into dist/ with the Expo CLI, offline, when dist/ is
- * older than any of its sources. Shared by `npm start` and `npm test`.
+ * older than any of its sources, then makes it an installable, offline-ready
+ * app with precompressed files (web-pwa.ts). Shared by `npm start` and `npm test`.
  */
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
+import { finishWebExport } from './web-pwa';
 
-const SOURCES = ['app', 'components', 'shared', 'math', 'assets', 'app.json', 'babel.config.js', 'package-lock.json'];
+const SOURCES = ['app', 'components', 'shared', 'math', 'assets', 'app.json', 'babel.config.js', 'package-lock.json', 'server/tools/web-pwa.ts'];
 
 function newestMtime(target: string): number {
   if (!fs.existsSync(target)) return 0;
@@ -44,6 +46,7 @@ export async function exportWeb(root: string, log: (line: string) => void = cons
     child.stderr.on('data', keep);
     child.on('exit', (code) => (code === 0 ? resolve() : reject(new Error(`expo export failed (exit ${code}):\n${output.slice(-4000)}`))));
   });
+  await finishWebExport(root, log);
   const stamp = path.join(root, 'dist', '.built-at');
   fs.writeFileSync(stamp, stampStart.toISOString());
   fs.utimesSync(stamp, stampStart, stampStart);

@@ -1,0 +1,192 @@
+/**
+ * The web section of `npm run bench` (also runs alone:
+ * `flock /tmp/pinwright-heavy.lock npx tsx tests/bench/web.ts`).
+ *
+ * Builds the export when stale, serves it with the real app on a scratch
+ * database seeded with the invented demo, then:
+ *  1. a cold load at 390×844 on emulated slow 4G (Chrome DevTools Protocol
+ *     Network.emulateNetworkConditions: 150 ms latency, 1.6 Mbit/s down,
+ *     0.75 Mbit/s up — the profile of issue 10): time until the sign-in form is
+ *     visible, bytes moved by the page, compressed JS bytes before the form
+ *     shows, and what the service worker fetches afterwards in the background;
+ *  2. Lighthouse 12.2.3 (mobile preset: simulated slow 4G and 4× CPU slowdown)
+ *     performance and accessibility on the sign-in page and on the Bench of the
+ *     demo archer (signed in by passing the session cookie as an extra header).
+ * Goals (issue 10): sign-in visible ≤ 3.5 s, ≤ 500 KB moved, ≤ 250 KB of
+ * compressed JS before sign-in, Lighthouse performance ≥ 90, accessibility 100.
+ */
+import { spawn } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+
+const root = path.resolve(__dirname, '../..');
+const CHROME = process.env.CHROME_PATH || process.env.CHROMIUM_PATH || '/usr/bin/chromium';
+const SLOW_4G = { offline: false, latency: 150, downloadThroughput: 1.6e6 / 8, uploadThroughput: 0.75e6 / 8 };
+
+export type ColdLoad = {
+  signInVisibleMs: number;
+  pageBytes: number;
+  jsBytesBeforeSignIn: number;
+  requests: number;
+  workerBytes: number;
+  workerRequests: number;
+};
+
+export type LighthouseScores = { performance: number; accessibility: number; lcpMs: number; tbtMs: number; failing: string[] };
+
+async function coldLoad(baseUrl: string): Promise<ColdLoad> {
+  // Service-worker requests reach the context's request events only with this set (playwright-core 1.55).
+  process.env.PW_EXPERIMENTAL_SERVICE_WORKER_NETWORK_EVENTS = '1';
+  const { chromium } = await import('playwright-core');
+  const browser = await chromium.launch({
+    executablePath: CHROME,
+    headless: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+  try {
+    const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    const page = await context.newPage();
+    const cdp = await context.newCDPSession(page);
+    await cdp.send('Network.enable');
+    await cdp.send('Network.setCacheDisabled', { cacheDisabled: true });
+    await cdp.send('Network.emulateNetworkConditions', SLOW_4G);
+    const types = new Map<string, string>();
+    const finished: { type: string; bytes: number; at: number }[] = [];
+    cdp.on('Network.responseReceived', (e) => types.set(e.requestId, e.type));
+    cdp.on('Network.loadingFinished', (e) => finished.push({ type: types.get(e.requestId) ?? 'Other', bytes: e.encodedDataLength, at: Date.now() }));
+
+    // The service worker (if any) fetches in its own target: count what it moves, on the same emulated network.
+    let workerBytes = 0;
+    let workerRequests = 0;
+    // Playwright exposes service-worker requests on the context (request.serviceWorker()).
+    context.on('requestfinished', async (request) => {
+      if (!request.serviceWorker()) return;
+      const sizes = await request.sizes().catch(() => null);
+      workerRequests += 1;
+      workerBytes += sizes ? sizes.responseBodySize + sizes.responseHeadersSize : 0;
+    });
+
+    const started = Date.now();
+    await page.goto(`${baseUrl}/`, { waitUntil: 'commit', timeout: 120_000 });
+    await page.getByLabel('E-mail').first().waitFor({ state: 'visible', timeout: 120_000 });
+    const visibleAt = Date.now();
+    // Let the page settle (fonts, late chunks, the service worker's own downloads).
+    await page.waitForLoadState('networkidle', { timeout: 120_000 }).catch(() => {});
+    await page.waitForTimeout(4000);
+    return {
+      signInVisibleMs: visibleAt - started,
+      pageBytes: finished.reduce((sum, f) => sum + f.bytes, 0),
+      jsBytesBeforeSignIn: finished.filter((f) => f.type === 'Script' && f.at <= visibleAt).reduce((sum, f) => sum + f.bytes, 0),
+      requests: finished.length,
+      workerBytes,
+      workerRequests,
+    };
+  } finally {
+    await browser.close();
+  }
+}
+
+function lighthouse(url: string, cookie?: string): Promise<LighthouseScores> {
+  const out = path.join(os.tmpdir(), `pinwright-lh-${process.pid}-${Date.now()}.json`);
+  const args = [
+    path.join(root, 'node_modules/lighthouse/cli/index.js'),
+    url,
+    '--quiet',
+    '--chrome-flags=--headless=new --no-sandbox --disable-gpu',
+    '--only-categories=performance,accessibility',
+    '--output=json',
+    `--output-path=${out}`,
+  ];
+  if (cookie) args.push(`--extra-headers=${JSON.stringify({ Cookie: cookie })}`);
+  return new Promise((resolve, reject) => {
+    const child = spawn(process.execPath, args, { cwd: root, env: { ...process.env, CHROME_PATH: CHROME }, stdio: ['ignore', 'ignore', 'pipe'] });
+    let err = '';
+    child.stderr.on('data', (c) => (err += c.toString()));
+    child.on('exit', (code) => {
+      if (code !== 0 || !fs.existsSync(out)) return reject(new Error(`lighthouse failed (${code}): ${err.slice(-2000)}`));
+      const report = JSON.parse(fs.readFileSync(out, 'utf8'));
+      fs.rmSync(out, { force: true });
+      const audits = report.audits as Record<string, { score: number | null; numericValue?: number; scoreDisplayMode: string; title: string }>;
+      const a11yRefs = report.categories.accessibility.auditRefs as { id: string; weight: number }[];
+      resolve({
+        performance: Math.round(report.categories.performance.score * 100),
+        accessibility: Math.round(report.categories.accessibility.score * 100),
+        lcpMs: audits['largest-contentful-paint']?.numericValue ?? NaN,
+        tbtMs: audits['total-blocking-time']?.numericValue ?? NaN,
+        failing: a11yRefs.filter((r) => r.weight > 0 && audits[r.id]?.score === 0).map((r) => r.id),
+      });
+    });
+  });
+}
+
+const kb = (bytes: number) => `${Math.round(bytes / 1024).toLocaleString('en')} KB`;
+const verdict = (ok: boolean) => (ok ? 'met' : 'NOT met');
+
+export async function runWebBench(options: { lighthouse?: boolean } = {}): Promise<void> {
+  const dbName = `pinwright_bench_${Date.now().toString(36)}_${process.pid}`;
+  process.env.DB_NAME = dbName;
+  process.env.NODE_ENV ||= 'test';
+  const { exportWebIfStale } = await import('@/server/tools/web-export');
+  await exportWebIfStale(root);
+  const { startLocalDatabase, createDatabase, dropDatabase } = await import('@/server/tools/database');
+  const db = await startLocalDatabase(() => {});
+  let server: Server | undefined;
+  try {
+    await createDatabase(db, dbName);
+    const { sequelize } = await import('@/server/db');
+    await (await import('@/server/migrations')).migrate(sequelize);
+    const { seedDemo, demoAccounts } = await import('@/server/seed/demo');
+    await seedDemo();
+    const { createApp } = await import('@/server/app');
+    const app = createApp({ sessionExpiryTimer: false });
+    server = await new Promise<Server>((resolve) => {
+      const s = app.listen(0, '127.0.0.1', () => resolve(s));
+    });
+    const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+
+    const cold = await coldLoad(baseUrl);
+    console.log('\nweb: cold load at 390×844, emulated slow 4G (150 ms, 1.6/0.75 Mbit/s)');
+    console.log(`  sign-in form visible        ${(cold.signInVisibleMs / 1000).toFixed(1).padStart(8)} s   goal ≤ 3.5 s — ${verdict(cold.signInVisibleMs <= 3500)}`);
+    console.log(`  bytes moved by the page     ${kb(cold.pageBytes).padStart(10)}   goal ≤ 500 KB — ${verdict(cold.pageBytes <= 500 * 1024)} (${cold.requests} responses)`);
+    console.log(`  compressed JS before sign-in${kb(cold.jsBytesBeforeSignIn).padStart(10)}   goal ≤ 250 KB — ${verdict(cold.jsBytesBeforeSignIn <= 250 * 1024)}`);
+    console.log(`  then, in the background, the service worker's precache: ${kb(cold.workerBytes)} in ${cold.workerRequests} requests`);
+
+    if (options.lighthouse !== false) {
+      const archer = demoAccounts.find((a) => a.role === 'archer')!;
+      const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json', 'X-Pinwright-Csrf': '1' },
+        body: JSON.stringify({ email: archer.email, password: archer.password }),
+      });
+      const cookie = (res.headers.get('set-cookie') ?? '').split(';')[0];
+      if (!res.ok || !cookie) throw new Error(`demo sign-in failed: ${res.status}`);
+      console.log('\nweb: Lighthouse 12.2.3, mobile preset (simulated slow 4G, 4× CPU)');
+      for (const [name, url, c] of [['sign-in page', `${baseUrl}/sign-in`, undefined], ['Bench, signed in', `${baseUrl}/`, cookie]] as const) {
+        const s = await lighthouse(url, c);
+        console.log(
+          `  ${name.padEnd(18)} performance ${String(s.performance).padStart(3)} (goal ≥ 90 — ${verdict(s.performance >= 90)}), ` +
+            `accessibility ${String(s.accessibility).padStart(3)} (goal 100 — ${verdict(s.accessibility === 100)}); ` +
+            `LCP ${(s.lcpMs / 1000).toFixed(1)} s, TBT ${Math.round(s.tbtMs)} ms${s.failing.length ? `; failing: ${s.failing.join(', ')}` : ''}`,
+        );
+      }
+    }
+    await sequelize.close();
+  } finally {
+    if (server) {
+      server.closeAllConnections();
+      await new Promise<void>((resolve) => server!.close(() => resolve()));
+    }
+    await dropDatabase(db, dbName).catch(() => {});
+    await db.stop();
+  }
+}
+
+if (require.main === module) {
+  runWebBench({ lighthouse: !process.argv.includes('--no-lighthouse') }).catch((error) => {
+    console.error(error);
+    process.exitCode = 1;
+  });
+}
