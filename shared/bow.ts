@@ -10,6 +10,7 @@ import {
 import { buildSchema } from './build';
 import { sessionListItemSchema } from './session';
 import { tapeSchema } from './tape';
+import { bowConfirmSchema } from './staleness-api';
 
 /**
  * Bow schemas: the create/update bodies (used by the bow form as its resolver
@@ -116,6 +117,11 @@ export const bowReadinessSchema = z.object({
   hasTape: z.boolean(),
   /** Level-check status; filled in by the level-check feature (null until then). */
   level: z.unknown().nullable(),
+  /**
+   * The tape (or latest sight-in) to confirm at the range after a change that
+   * moves the point of impact, with the reason (shared/staleness.ts); null when current.
+   */
+  confirm: bowConfirmSchema.nullable().optional(),
 });
 
 /** An item of GET /api/bows: the bow with its readiness. */

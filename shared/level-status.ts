@@ -55,7 +55,11 @@ export const levelResults = ['pass', 'adjusted', 'fail', 'skipped'] as const;
 export type LevelResult = (typeof levelResults)[number];
 
 /** What can be logged as changed on a bow. */
-export const bowChangeKinds = ['string', 'cables', 'sight-moved', 'sight-remounted', 'rest', 'peep', 'arrows', 'other'] as const;
+export const bowChangeKinds = [
+  'string', 'cables', 'sight-moved', 'sight-remounted', 'rest', 'peep', 'arrows', 'other',
+  // Tuning changes (migration 0050): a set-up entry or a paper-tune adjustment logs one of these.
+  'nock-height', 'd-loop', 'cams', 'sight-radius',
+] as const;
 export type BowChangeKind = (typeof bowChangeKinds)[number];
 
 /** Labels of the change kinds, as a sentence subject ("New string 12 days after the last check"). */
@@ -68,6 +72,10 @@ export const bowChangeLabels: Record<BowChangeKind, string> = {
   peep: 'Peep moved',
   arrows: 'Arrows changed',
   other: 'Other change',
+  'nock-height': 'Nock height changed',
+  'd-loop': 'D-loop changed',
+  cams: 'Cams adjusted',
+  'sight-radius': 'Sight radius changed',
 };
 
 /** The states a bow's level can be in (the same four the readiness badge draws). */

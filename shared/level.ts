@@ -131,7 +131,7 @@ export const stepPhotoParamsSchema = z.object({
 });
 
 export const bowChangeKindSchema = z.enum(bowChangeKinds, {
-  errorMap: () => ({ message: 'Choose what changed: string, cables, sight moved, sight re-mounted, rest, peep, arrows or other' }),
+  errorMap: () => ({ message: 'Choose what changed: string, cables, sight moved, sight re-mounted, rest, peep, arrows, nock height, D-loop, cams, sight radius or other' }),
 });
 
 /** Body of POST /api/bows/:bowId/changes. `changedAt` is a full ISO 8601 timestamp with zone. */

@@ -30,6 +30,10 @@ const kindWords: Record<BowChangeKind, string> = {
   peep: 'Peep',
   arrows: 'Arrows',
   other: 'Other',
+  'nock-height': 'Nock height',
+  'd-loop': 'D-loop',
+  cams: 'Cams',
+  'sight-radius': 'Sight radius',
 };
 const kindOptions = bowChangeKinds.map((value) => ({ value, label: kindWords[value] }));
 

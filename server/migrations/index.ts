@@ -20,11 +20,18 @@ import * as m0030 from './0030-shares';
 import * as m0031 from './0031-tokens';
 import * as m0032 from './0032-audit-entries';
 import * as m0040 from './0040-idempotency-keys';
-import * as m0065 from './0065-users-unit-choices';
 import * as m0060 from './0060-arrow-builds-added-by';
 import * as m0061 from './0061-sight-sessions-added-by';
 import * as m0062 from './0062-session-marks-added-by';
 import * as m0065 from './0065-users-unit-choices';
+import * as m0050 from './0050-tuning-change-kinds';
+import * as m0051 from './0051-setup-entries';
+import * as m0052 from './0052-paper-tune-runs';
+import * as m0053 from './0053-paper-tune-shots';
+import * as m0054 from './0054-arrow-sets';
+import * as m0055 from './0055-arrows';
+import * as m0056 from './0056-arrow-fliers';
+import * as m0057 from './0057-range-confirmations';
 
 type Step = { up: (p: { context: QueryInterface }) => Promise<void>; down: (p: { context: QueryInterface }) => Promise<void> };
 
@@ -44,11 +51,18 @@ export const migrations: Array<[string, Step]> = [
   ['0031-tokens', m0031],
   ['0032-audit-entries', m0032],
   ['0040-idempotency-keys', m0040],
-  ['0065-users-unit-choices', m0065],
   ['0060-arrow-builds-added-by', m0060],
   ['0061-sight-sessions-added-by', m0061],
   ['0062-session-marks-added-by', m0062],
   ['0065-users-unit-choices', m0065],
+  ['0050-tuning-change-kinds', m0050],
+  ['0051-setup-entries', m0051],
+  ['0052-paper-tune-runs', m0052],
+  ['0053-paper-tune-shots', m0053],
+  ['0054-arrow-sets', m0054],
+  ['0055-arrows', m0055],
+  ['0056-arrow-fliers', m0056],
+  ['0057-range-confirmations', m0057],
 ];
 
 export function migrator(sequelize: Sequelize) {

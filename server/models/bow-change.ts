@@ -7,7 +7,7 @@ import {
   type NonAttribute,
 } from 'sequelize';
 import { sequelize } from '@/server/db';
-import type { BowChangeKind } from '@/shared/level';
+import { bowChangeKinds, type BowChangeKind } from '@/shared/level-status';
 import type { User } from './user';
 
 /** A logged change on a bow (new string, sight moved, …); one after the last level check makes the bow due. */
@@ -31,7 +31,8 @@ BowChange.init(
     bowId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
     userId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
     kind: {
-      type: DataTypes.ENUM('string', 'cables', 'sight-moved', 'sight-remounted', 'rest', 'peep', 'arrows', 'other'),
+      // Kinds from 0050 on: see shared/level-status.ts.
+      type: DataTypes.ENUM(...bowChangeKinds),
       allowNull: false,
     },
     changedAt: { type: DataTypes.DATE(3), allowNull: false },

@@ -18,6 +18,13 @@ import { Token } from './token';
 import { AuditEntry } from './audit-entry';
 import { IdempotencyKey } from './idempotency-key';
 import { installAddedByHooks } from './added-by';
+import { SetupEntry } from './setup-entry';
+import { PaperTuneRun } from './paper-tune-run';
+import { PaperTuneShot } from './paper-tune-shot';
+import { ArrowSet } from './arrow-set';
+import { Arrow } from './arrow';
+import { ArrowFlier } from './arrow-flier';
+import { RangeConfirmation } from './range-confirmation';
 
 WebSession.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 
@@ -72,4 +79,28 @@ installAddedByHooks(SessionMark, async (mark, transaction) => {
   return (await Bow.findByPk(session.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null;
 });
 
+// Tuning: set-up entries, paper-tune runs and shots, arrow sets, arrows and fliers,
+// range confirmations (migrations 0051–0057).
+Bow.hasMany(SetupEntry, { foreignKey: 'bowId', as: 'setupEntries' });
+SetupEntry.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
+SetupEntry.belongsTo(User, { foreignKey: 'userId', as: 'addedBy' });
+Bow.hasMany(PaperTuneRun, { foreignKey: 'bowId', as: 'paperTuneRuns' });
+PaperTuneRun.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
+PaperTuneRun.belongsTo(User, { foreignKey: 'userId', as: 'addedBy' });
+PaperTuneRun.hasMany(PaperTuneShot, { foreignKey: 'runId', as: 'shots' });
+PaperTuneShot.belongsTo(PaperTuneRun, { foreignKey: 'runId', as: 'run' });
+PaperTuneShot.belongsTo(User, { foreignKey: 'userId', as: 'addedBy' });
+ArrowBuild.hasMany(ArrowSet, { foreignKey: 'buildId', as: 'arrowSets' });
+ArrowSet.belongsTo(ArrowBuild, { foreignKey: 'buildId', as: 'build' });
+ArrowSet.belongsTo(User, { foreignKey: 'userId', as: 'addedBy' });
+ArrowSet.hasMany(Arrow, { foreignKey: 'setId', as: 'arrows' });
+Arrow.belongsTo(ArrowSet, { foreignKey: 'setId', as: 'set' });
+Arrow.hasMany(ArrowFlier, { foreignKey: 'arrowId', as: 'fliers' });
+ArrowFlier.belongsTo(Arrow, { foreignKey: 'arrowId', as: 'arrow' });
+ArrowFlier.belongsTo(User, { foreignKey: 'userId', as: 'addedBy' });
+SightSession.hasMany(RangeConfirmation, { foreignKey: 'sessionId', as: 'rangeConfirmations' });
+RangeConfirmation.belongsTo(SightSession, { foreignKey: 'sessionId', as: 'session' });
+RangeConfirmation.belongsTo(User, { foreignKey: 'userId', as: 'confirmedBy' });
+
 export { User, WebSession, Bow, ArrowBuild, SightSession, SessionMark, Tape, Photo, LevelCheck, LevelStep, BowChange, Share, Token, AuditEntry, IdempotencyKey };
+export { SetupEntry, PaperTuneRun, PaperTuneShot, ArrowSet, Arrow, ArrowFlier, RangeConfirmation };

@@ -26,6 +26,7 @@ import { photoRoutes } from './photos';
 import { compareRoutes } from './compare';
 import { fieldCardRoutes } from './field-card';
 import { predictRoutes } from './predict';
+import { tuningRoutes } from './tuning';
 import { idempotency } from '@/server/middleware/idempotency';
 
 export function apiRoutes(sequelize: Sequelize) {
@@ -53,5 +54,6 @@ export function apiRoutes(sequelize: Sequelize) {
   api.use(compareRoutes()); // /bows/:bowId/compare
   api.use(fieldCardRoutes()); // /sessions/:id/field-card, field-card.svg, field-card.pdf
   api.use(predictRoutes()); // /bows/:bowId/predict, /bows/:bowId/predict/tape.svg
+  api.use(tuningRoutes()); // /bows/:bowId/{setup,paper-tunes,tuning.csv}, /paper-tunes/:id, /builds/:id/arrow-sets, /arrows/:id, /sessions/:id/{staleness,confirm-range}
   return api;
 }

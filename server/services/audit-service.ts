@@ -14,7 +14,7 @@
  */
 import type { Model, ModelStatic, Sequelize, Transaction } from 'sequelize';
 import { ApiError } from '@/server/errors';
-import { AuditEntry, Bow, LevelCheck, SightSession, User } from '@/server/models';
+import { ArrowBuild, ArrowSet, AuditEntry, Bow, LevelCheck, PaperTuneRun, SightSession, User } from '@/server/models';
 import { bowFor } from '@/server/services/bow-access';
 import type { AuditEntry as AuditEntryJson, AuditList } from '@/shared/audit';
 import { auditContext, currentActor } from './audit-context';
@@ -114,6 +114,22 @@ const viaCheck = async (values: Values, transaction?: Transaction | null) => {
   const check = await LevelCheck.findByPk(values.checkId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
   return check?.bowId ?? null;
 };
+const viaRun = async (values: Values, transaction?: Transaction | null) => {
+  if (typeof values.runId !== 'number') return null;
+  const run = await PaperTuneRun.findByPk(values.runId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
+  return run?.bowId ?? null;
+};
+const bowOfBuild = async (buildId: unknown, transaction?: Transaction | null) => {
+  if (typeof buildId !== 'number') return null;
+  const build = await ArrowBuild.findByPk(buildId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
+  return build?.bowId ?? null;
+};
+const viaBuild = async (values: Values, transaction?: Transaction | null) => bowOfBuild(values.buildId, transaction);
+const viaSet = async (values: Values, transaction?: Transaction | null) => {
+  if (typeof values.setId !== 'number') return null;
+  const set = await ArrowSet.findByPk(values.setId, { attributes: ['id', 'buildId'], transaction: transaction ?? undefined });
+  return set ? bowOfBuild(set.buildId, transaction) : null;
+};
 const text = (value: unknown) => (value === null || value === undefined || value === '' ? '' : String(value));
 const number = (value: unknown) => (typeof value === 'number' ? String(Math.round(value * 100) / 100) : text(value));
 
@@ -154,6 +170,24 @@ const audited: Record<string, Audited> = {
     describe: (v) => [text(v.kind), text(v.note)].filter(Boolean).join(': '),
     bowOf: direct,
   },
+  // Tuning records (migrations 0051–0057).
+  SetupEntry: {
+    type: 'setup-entry',
+    noun: 'a set-up entry',
+    describe: (v) => [text(v.measure).replace(/-/g, ' '), v.valueMm !== null && v.valueMm !== undefined ? `${number(v.valueMm)} mm` : '', text(v.choice)].filter(Boolean).join(' '),
+    bowOf: direct,
+  },
+  PaperTuneRun: { type: 'paper-tune-run', noun: 'a paper-tune run', describe: (v) => text(v.outcome), bowOf: direct },
+  PaperTuneShot: {
+    type: 'paper-tune-shot',
+    noun: 'a paper-tune shot',
+    describe: (v) => [text(v.tear), v.lengthMm ? `${number(v.lengthMm)} mm` : ''].filter(Boolean).join(' '),
+    bowOf: viaRun,
+  },
+  ArrowSet: { type: 'arrow-set', noun: 'an arrow set', describe: (v) => text(v.name), bowOf: viaBuild },
+  Arrow: { type: 'arrow', noun: 'an arrow', describe: (v) => (v.number !== undefined ? `arrow ${text(v.number)}` : ''), bowOf: viaSet },
+  ArrowFlier: { type: 'arrow-flier', noun: 'an arrow that flew out at a sight-in', describe: () => '', bowOf: viaSession },
+  RangeConfirmation: { type: 'range-confirmation', noun: 'marks confirmed at the range', describe: () => '', bowOf: viaSession },
 };
 
 const verbs = { created: 'Added', updated: 'Changed', deleted: 'Deleted' } as const;

@@ -5,7 +5,7 @@
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
-import { ArrowBuild, Bow, SightSession, Tape, User } from '@/server/models';
+import { ArrowBuild, Bow, BowChange, SightSession, Tape, User } from '@/server/models';
 import {
   bowInputSchema,
   type Bow as BowOut,
@@ -22,6 +22,7 @@ import { tapeOut } from './tape-service';
 import { levelSummaryForBows } from './level-service';
 import { photoKeysOfBow, removeStoredPhotos } from './photo-service';
 import { bowFor, type BowCapability } from './bow-access';
+import { stalenessForBows } from './staleness-service';
 
 /**
  * The bow with this id if `user` may use `capability` on it (bow-access.ts:
@@ -70,7 +71,7 @@ async function readinessOf(bows: Bow[]): Promise<Map<number, BowReadiness>> {
   const bowIds = bows.map((bow) => bow.id);
   const result = new Map<number, BowReadiness>();
   if (bowIds.length === 0) return result;
-  const [builds, sessions, tapes, levels] = await Promise.all([
+  const [builds, sessions, tapes, levels, staleness] = await Promise.all([
     ArrowBuild.findAll({ where: { bowId: { [Op.in]: bowIds } }, attributes: ['id', 'bowId'] }),
     SightSession.findAll({
       where: { bowId: { [Op.in]: bowIds } },
@@ -82,6 +83,7 @@ async function readinessOf(bows: Bow[]): Promise<Map<number, BowReadiness>> {
       include: [{ model: SightSession, as: 'session', attributes: ['bowId'], where: { bowId: { [Op.in]: bowIds } } }],
     }),
     levelSummaryForBows(bowIds),
+    stalenessForBows(bowIds),
   ]);
   const latest = new Map<number, SightSession>();
   for (const session of sessions) if (!latest.has(session.bowId)) latest.set(session.bowId, session);
@@ -104,6 +106,7 @@ async function readinessOf(bows: Bow[]): Promise<Map<number, BowReadiness>> {
       sessionCount: sessions.filter((s) => s.bowId === bow.id).length,
       hasTape: tapes.some((tape) => (tape as Tape & { session: SightSession }).session.bowId === bow.id),
       level: levels.get(bow.id) ?? null,
+      confirm: staleness.get(bow.id)?.confirm ?? null,
     });
   }
   return result;
@@ -157,10 +160,31 @@ export async function updateBow(user: User, id: number, update: BowUpdate): Prom
     const bow = await findOwnBow(user, id, transaction);
     const merged = bowInputSchema.safeParse({ ...bowOut(bow), ...update });
     if (!merged.success) throw validationError(merged.error);
+    const moved = impactEdits(bow, merged.data);
     bow.set(merged.data);
     await bow.save({ transaction });
+    // An edit of the peep height or sight radius moves the point of impact: logged as a change (shared/staleness.ts).
+    for (const change of moved) await BowChange.create({ bowId: bow.id, userId: user.id, changedAt: new Date(), ...change }, { transaction });
     return bowOut(bow);
   });
+}
+
+/**
+ * The bow-form edits that move the point of impact (peep height, sight radius),
+ * as changes to log; a difference under 0.05 mm is rounding through inches, not an edit.
+ * Example: impactEdits({ peepHeightMm: 110, sightRadiusMm: 840 }, { peepHeightMm: 113, sightRadiusMm: 840 })
+ *   → [{ kind: 'peep', note: 'Peep height edited on the bow: 110 → 113 mm' }]
+ */
+export function impactEdits(before: Pick<BowInput, 'peepHeightMm' | 'sightRadiusMm'>, after: Pick<BowInput, 'peepHeightMm' | 'sightRadiusMm'>) {
+  const edits: Array<{ kind: 'peep' | 'sight-radius'; note: string }> = [];
+  const mm = (value: number) => Number(value.toFixed(1));
+  if (Math.abs(before.peepHeightMm - after.peepHeightMm) > 0.05) {
+    edits.push({ kind: 'peep', note: `Peep height edited on the bow: ${mm(before.peepHeightMm)} → ${mm(after.peepHeightMm)} mm` });
+  }
+  if (Math.abs(before.sightRadiusMm - after.sightRadiusMm) > 0.05) {
+    edits.push({ kind: 'sight-radius', note: `Sight radius edited on the bow: ${mm(before.sightRadiusMm)} → ${mm(after.sightRadiusMm)} mm` });
+  }
+  return edits;
 }
 
 /** Deletes the bow; its builds, sessions, marks and tapes go with it (foreign-key cascade, migrations 0011–0014). */

@@ -3,7 +3,9 @@
  * JSON (the whole structure, as the API returns it) or as one CSV table (one
  * row per mark, with its session and build beside it; a build without
  * sessions or a session without marks gets a row with the mark cells empty),
- * and a tape's print sheet sent by e-mail as a PDF.
+ * and a tape's print sheet sent by e-mail as a PDF. The JSON carries the
+ * tuning records too (set-up entries, paper-tune runs, arrow sets, range
+ * confirmations); GET /api/bows/:id/tuning.csv gives them as their own table.
  *
  * Example: (await exportBowCsv(marit, 12)).body.split('\r\n')[0]
  *   → 'bow,build_id,build,shaft,spine,…,distance,unit,reading_mm,arrows,mark_note'
@@ -18,6 +20,8 @@ import { bowFor } from '@/server/services/bow-access';
 import { bowOut } from '@/server/services/bow-service';
 import { buildOut, sessionCounts } from '@/server/services/build-service';
 import { sendMail } from '@/server/services/mail-service';
+import { listArrowSets } from '@/server/services/arrow-set-service';
+import { confirmationsOf, listRuns, listSetup, personJson } from '@/server/services/tuning-service';
 import { findOwnSession, sessionOut } from '@/server/services/session-service';
 import { sheetDownload } from '@/server/services/tape-service';
 import type { SendTape } from '@/shared/export';
@@ -61,8 +65,59 @@ export async function exportBowJson(user: User, bowId: number, now = new Date())
     bow: bowOut(bow),
     builds: builds.map((build) => buildOut(build, counts.get(build.id) ?? 0)),
     sessions: sessions.map((session) => sessionOut(session, marks.filter((mark) => mark.sessionId === session.id))),
+    ...(await tuningRecords(user, bowId, builds)),
   };
   return { body: `${JSON.stringify(document, null, 2)}\n`, contentType: 'application/json; charset=utf-8', fileName: `${slug(bow.nickname)}-export.json` };
+}
+
+/** The bow's tuning records for the JSON export: set-up entries, paper-tune runs, arrow sets, range confirmations. */
+async function tuningRecords(user: User, bowId: number, builds: ArrowBuild[]) {
+  const [setup, paperTunes, arrowSetsByBuild, confirmations] = await Promise.all([
+    listSetup(user, bowId),
+    listRuns(user, bowId),
+    Promise.all(builds.map((build) => listArrowSets(user, build.id))),
+    SightSession.findAll({ where: { bowId }, attributes: ['id'] }).then((rows) => confirmationsOf(rows.map((row) => row.id))),
+  ]);
+  return {
+    setupEntries: setup.entries,
+    paperTuneRuns: paperTunes,
+    arrowSets: arrowSetsByBuild.flat(),
+    rangeConfirmations: confirmations.map((c) => ({ sessionId: c.sessionId, confirmedAt: c.confirmedAt.toISOString(), note: c.note, confirmedBy: personJson(c.confirmedBy) })),
+  };
+}
+
+const tuningCsvHeader = ['bow', 'record', 'record_id', 'date', 'item', 'value_mm', 'choice', 'weight_gr', 'detail', 'added_by'];
+
+/**
+ * GET /api/bows/:id/tuning.csv — the tuning records as one long table: a row per
+ * set-up entry, paper-tune shot (and run end), arrow, range confirmation.
+ */
+export async function exportTuningCsv(user: User, bowId: number): Promise<ExportFile> {
+  const { bow } = await bowFor(user, bowId, 'read');
+  const builds = await ArrowBuild.findAll({ where: { bowId }, order: [['id', 'ASC']] });
+  const records = await tuningRecords(user, bowId, builds);
+  const rows: CsvCell[][] = [tuningCsvHeader];
+  for (const entry of [...records.setupEntries].reverse()) {
+    rows.push([bow.nickname, 'setup', entry.id, entry.measuredOn, entry.measure, entry.valueMm, entry.choice, null, entry.note, entry.addedBy.name]);
+  }
+  for (const run of [...records.paperTuneRuns].reverse()) {
+    for (const shot of run.shots) {
+      const detail = [`${run.distance} ${run.unit}`, shot.changedBefore !== 'none' ? `changed before: ${shot.changedBefore} ${shot.changeNote}`.trim() : '', shot.note].filter(Boolean).join('; ');
+      rows.push([bow.nickname, 'paper-tune-shot', run.id, shot.createdAt.slice(0, 10), `shot ${shot.position + 1}: ${shot.tear}`, shot.lengthMm, null, null, detail, shot.addedBy.name]);
+    }
+    if (run.outcome !== 'open') rows.push([bow.nickname, 'paper-tune-end', run.id, run.endedAt?.slice(0, 10) ?? null, run.outcome, null, null, null, run.endNote, run.addedBy.name]);
+  }
+  for (const set of records.arrowSets) {
+    for (const arrow of set.arrows) {
+      const spin = arrow.spinKind === 'thou' ? `runout ${arrow.runout} thou` : arrow.spinKind === 'mm' ? `runout ${arrow.runout} mm` : arrow.spinKind;
+      const detail = [`set ${set.name} (±${set.toleranceGr} gr)`, `spin ${spin}`, arrow.status, arrow.note, arrow.fliers.length ? `flew out at ${arrow.fliers.length} sight-in(s)` : ''].filter(Boolean).join('; ');
+      rows.push([bow.nickname, 'arrow', arrow.id, set.createdAt.slice(0, 10), `arrow ${arrow.number}`, null, null, arrow.weightGr, detail, set.addedBy.name]);
+    }
+  }
+  for (const c of records.rangeConfirmations) {
+    rows.push([bow.nickname, 'range-confirmation', c.sessionId, c.confirmedAt.slice(0, 10), 'marks confirmed at the range', null, null, null, c.note, c.confirmedBy.name]);
+  }
+  return { body: toCsv(rows), contentType: 'text/csv; charset=utf-8', fileName: `${slug(bow.nickname)}-tuning.csv` };
 }
 
 const csvHeader = [

@@ -1,0 +1,34 @@
+import { z } from 'zod';
+import { textSchema } from './common';
+import { personSchema } from './setup-measures';
+
+/**
+ * What the API sends about the staleness rule (shared/staleness.ts): the
+ * Bench's one line per bow, and one sight-in's state with its confirmations.
+ */
+
+/** A bow's tape (or latest sight-in) that must be confirmed at the range, with the reason. */
+export const bowConfirmSchema = z.object({
+  reason: z.string(),
+  /** When the first change that counts happened (ISO). */
+  since: z.string().nullable(),
+  sessionId: z.number().int(),
+  tapeId: z.number().int().nullable(),
+});
+
+export const sessionStalenessSchema = z.object({
+  sessionId: z.number().int(),
+  state: z.enum(['current', 'confirm']),
+  reason: z.string(),
+  since: z.string().nullable(),
+  changeIds: z.array(z.union([z.number(), z.string()])),
+  /** True when the user may record a confirmation (the archer, or a technician with the share). */
+  canConfirm: z.boolean(),
+  confirmations: z.array(z.object({ id: z.number().int(), confirmedAt: z.string(), note: z.string(), confirmedBy: personSchema })),
+});
+
+/** Body of POST /api/sessions/:id/confirm-range. */
+export const confirmRangeInputSchema = z.object({ note: textSchema('Note', 300) });
+
+export type BowConfirm = z.infer<typeof bowConfirmSchema>;
+export type SessionStaleness = z.infer<typeof sessionStalenessSchema>;
