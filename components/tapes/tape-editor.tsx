@@ -194,6 +194,11 @@ export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit, addOn
 
   return (
     <View style={styles.editor}>
+      {fit.method === 'one-mark' ? (
+        <Banner tone="warn" title="Estimate from one mark: not a sighted tape" testID="tape-one-mark">
+          {oneMarkWords(fit)}
+        </Banner>
+      ) : null}
       <Banner tone="caution" testID="tape-caution">
         {TAPE_VIEW_CAUTION}
       </Banner>
@@ -229,6 +234,23 @@ export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit, addOn
       )}
     </View>
   );
+}
+
+/**
+ * What a one-mark tape is, in words: the sighted distance, the band where it
+ * matters most, and the distance to shoot next (from the stored fit).
+ * Example: oneMarkWords(fit) → 'Only 20 yd is sighted; every other tick comes from the chronographed speed and is uncertain by up to ±2.5 mm (100 yd). Shoot 90 yd next, save the sight-in and print again.'
+ */
+export function oneMarkWords(fit: Session['fit']): string {
+  const unit = fit.distanceUnit;
+  const sighted = fit.residuals[0]?.distance;
+  const widest = fit.marks.reduce<(typeof fit.marks)[number] | null>((a, b) => (b.sigmaMm !== null && (!a || (a.sigmaMm ?? 0) < b.sigmaMm) ? b : a), null);
+  return [
+    sighted !== undefined ? `Only ${sighted} ${unit} is sighted;` : 'One mark is sighted;',
+    `every other tick comes from the chronographed speed${widest?.sigmaMm ? ` and is uncertain by up to ±${widest.sigmaMm.toFixed(1)} mm (${widest.distance} ${unit})` : ''}.`,
+    fit.nextDistance !== null ? `Shoot ${fit.nextDistance} ${unit} next, save the sight-in and print again.` : 'Shoot another distance, save the sight-in and print again.',
+    'The printed tape says ESTIMATE FROM ONE MARK along its edge.',
+  ].join(' ');
 }
 
 const styles = StyleSheet.create({
