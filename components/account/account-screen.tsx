@@ -1,20 +1,25 @@
 import { StyleSheet, View } from 'react-native';
 
 import { AccountDetails } from '@/components/account/account-details';
+import { accountExportHref } from '@/components/account/api';
+import { DeleteAccount } from '@/components/account/delete-account';
+import { PasswordChangeForm } from '@/components/account/password-change-form';
 import { AccountShares } from '@/components/shares/account-shares';
 import { UnitChoices } from '@/components/account/unit-choices';
 import { useMe, useSignOut } from '@/components/auth/api';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { DownloadLink } from '@/components/ui/download-link';
 import { SignOutIcon } from '@/components/ui/icons';
 import { LoadingView } from '@/components/ui/loading-view';
 import { Screen } from '@/components/ui/screen';
 import { ScreenTitle } from '@/components/ui/screen-title';
 import { SectionHeading } from '@/components/ui/section-heading';
+import { Text } from '@/components/ui/text';
 import { space } from '@/components/theme';
 
-/** The account page: who is signed in, their units, and signing out. */
+/** The account page: who is signed in, their units, shares, password, a download of everything, signing out and deleting the account. */
 export function AccountScreen() {
   const me = useMe();
   const signOut = useSignOut();
@@ -29,11 +34,22 @@ export function AccountScreen() {
       <Card>
         <AccountDetails user={me.data} />
       </Card>
-      <SectionHeading level={2} title="Units" description="How Pinwright shows distances and lengths to you." />
+      <SectionHeading level={2} title="Units" description="How Pinwright shows and takes measurements. Records are kept in one unit underneath, so changing these changes no record." />
       <Card>
         <UnitChoices user={me.data} />
       </Card>
       <AccountShares />
+      <SectionHeading level={2} title="Password" />
+      <Card>
+        <PasswordChangeForm />
+      </Card>
+      <SectionHeading level={2} title="Your records" />
+      <Card style={styles.card}>
+        <Text tone="soft">Every bow with its builds, sight-ins, marks, tapes, level checks and changes, in one JSON file.</Text>
+        <View style={styles.actions}>
+          <DownloadLink label="Download everything" href={accountExportHref} fileName="pinwright-everything.json" testID="account-export" />
+        </View>
+      </Card>
       {signOut.isError ? (
         <Banner tone="error" title="Could not sign out">
           {signOut.error.message}
@@ -49,10 +65,15 @@ export function AccountScreen() {
           onPress={() => signOut.mutate()}
         />
       </View>
+      <SectionHeading level={2} title="Delete the account" />
+      <Card>
+        <DeleteAccount />
+      </Card>
     </Screen>
   );
 }
 
 const styles = StyleSheet.create({
-  actions: { flexDirection: 'row', gap: space.md },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  card: { gap: space.md },
 });
