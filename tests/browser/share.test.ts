@@ -1,7 +1,8 @@
 /**
  * Sharing a bow, as the people would do it: an archer invites a technician
- * from the bow; the technician opens the e-mail in the development mail
- * reader, follows its link, creates a technician account from the invitation
+ * from the bow; an administrator finds the e-mail in the development mail
+ * reader (the technician has no account yet to read it with), the technician
+ * follows its link, creates a technician account from the invitation
  * and adds a level check on the shared bow; the archer sees it in the bow's
  * log and ends the share; the technician's next look at the bow is refused.
  * Then the account basics around it: a password reset from the e-mailed
@@ -81,14 +82,26 @@ for (const size of [PHONE, DESKTOP]) {
     await archer.page.getByText('Invited, not yet accepted').waitFor();
     await screenshot(archer.page, 'share-invited');
 
-    // The technician reads the e-mail and follows its link.
-    const tech = await newPage(stack, size);
-    await tech.page.goto('/dev-mail');
+    // The development mailbox shows an account only its own mail; the technician has no
+    // account yet, so an administrator reads the invitation there, and the technician
+    // opens its link in their own browser, as they would from their mail program.
+    const mailbox = await newPage(stack, size);
+    await signUpInContext(mailbox.context, stack.baseUrl, `Mailbox Admin ${tag}`).then(({ email }) => User.update({ role: 'admin' }, { where: { email } }));
+    await mailbox.page.goto('/dev-mail');
     const subject = `${archerName} shared a bow with you on Pinwright`;
-    await tech.page.getByText(subject).first().click();
-    await tech.page.getByTestId('mail-text').getByText(new RegExp(`"${nickname}"`)).waitFor();
-    await screenshot(tech.page, 'share-mail');
-    await tech.page.getByTestId('mail-open-link').click();
+    await mailbox.page.getByText(subject).first().click();
+    await mailbox.page.getByTestId('mail-text').getByText(new RegExp(`"${nickname}"`)).waitFor();
+    await screenshot(mailbox.page, 'share-mail');
+    const inviteLink = await mailbox.page.getByTestId('mail-open-link').getAttribute('href');
+    expect(inviteLink).toMatch(/^\/invite\?token=/);
+    await mailbox.context.close();
+    const tech = await newPage(stack, size);
+    // Signed out, the mailbox asks for a sign-in and shows nothing.
+    await tech.page.goto('/dev-mail');
+    await tech.page.getByTestId('mail-sign-in').waitFor();
+    expect(await tech.page.getByText(subject).count()).toBe(0);
+    await screenshot(tech.page, 'dev-mail-signed-out');
+    await tech.page.goto(inviteLink!);
     await tech.page.waitForURL(/\/invite\?token=/);
     await tech.page.getByText(`${archerName} would like you to see the records of the bow “${nickname}”`, { exact: false }).waitFor();
     await screenshot(tech.page, 'share-invite-page');
@@ -173,19 +186,22 @@ for (const size of [PHONE, DESKTOP]) {
     await visitor.page.getByRole('button', { name: 'Send the link' }).click();
     await visitor.page.getByTestId('forgot-sent').waitFor();
     await screenshot(visitor.page, 'password-forgot');
-    await visitor.page.goto('/dev-mail');
-    await visitor.page.getByText(`To ${email}`, { exact: false }).first().click();
-    await visitor.page.getByTestId('mail-text').getByText(`Hello Oswin Brae ${tag},`).waitFor();
-    await visitor.page.getByTestId('mail-open-link').click();
-    await visitor.page.waitForURL(/\/reset-password\?token=/);
-    await visitor.page.getByLabel('New password', { exact: true }).fill('a fresh long passphrase');
-    await visitor.page.getByLabel('New password again').fill('a different passphrase');
-    await visitor.page.getByRole('button', { name: 'Change the password' }).click();
-    await visitor.page.getByText('The two passwords are not the same').waitFor();
-    await visitor.page.getByLabel('New password again').fill('a fresh long passphrase');
-    await visitor.page.getByRole('button', { name: 'Change the password' }).click();
-    await visitor.page.getByTestId('reset-done').waitFor();
-    await screenshot(visitor.page, 'password-reset');
+    // The archer reads the e-mail where they are still signed in (the development
+    // mailbox shows an account the mail sent to its own address) and follows the link.
+    await archer.page.goto('/dev-mail');
+    await archer.page.getByText(`To ${email}`, { exact: false }).first().click();
+    await archer.page.getByTestId('mail-text').getByText(`Hello Oswin Brae ${tag},`).waitFor();
+    await screenshot(archer.page, 'password-mail');
+    await archer.page.getByTestId('mail-open-link').click();
+    await archer.page.waitForURL(/\/reset-password\?token=/);
+    await archer.page.getByLabel('New password', { exact: true }).fill('a fresh long passphrase');
+    await archer.page.getByLabel('New password again').fill('a different passphrase');
+    await archer.page.getByRole('button', { name: 'Change the password' }).click();
+    await archer.page.getByText('The two passwords are not the same').waitFor();
+    await archer.page.getByLabel('New password again').fill('a fresh long passphrase');
+    await archer.page.getByRole('button', { name: 'Change the password' }).click();
+    await archer.page.getByTestId('reset-done').waitFor();
+    await screenshot(archer.page, 'password-reset');
     // The archer's open session ended with the reset; the new password signs in.
     await archer.page.goto('/');
     await archer.page.getByLabel('E-mail').waitFor();
