@@ -5,6 +5,10 @@ import { useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { isApiError } from '@/components/api/client';
+import { reportNoNetwork } from '@/components/offline/connectivity';
+import { OfflineNotice } from '@/components/offline/offline-notice';
+import { OfflineProvider } from '@/components/offline/offline-provider';
+import { cacheMaxAgeMs } from '@/components/offline/query-persistence';
 import { colors, fonts } from '@/components/theme';
 
 const fontFiles = {
@@ -33,9 +37,15 @@ const navigationTheme: NavigationTheme = {
   },
 };
 
-/** Retry network and server failures twice; never retry a 4xx (it will fail the same way). */
+/**
+ * Retry network and server failures twice; never retry a 4xx (it will fail the
+ * same way). A failure for want of a network marks the app offline, so the
+ * retry waits for the signal (react-query pauses it) and the screen keeps the
+ * records this phone already has instead of an error.
+ */
 function shouldRetry(failureCount: number, error: unknown): boolean {
   if (isApiError(error) && error.status >= 400 && error.status < 500) return false;
+  if (isApiError(error) && error.status === 0) reportNoNetwork();
   if (isApiError(error) && error.code === 'bad_response') return false;
   return failureCount < 2;
 }
@@ -44,17 +54,20 @@ function shouldRetry(failureCount: number, error: unknown): boolean {
 export function createQueryClient(): QueryClient {
   return new QueryClient({
     defaultOptions: {
-      queries: { retry: shouldRetry, staleTime: 30_000, refetchOnWindowFocus: false },
+      // gcTime as long as the device keeps its copy: a query dropped from memory would drop from the device too.
+      queries: { retry: shouldRetry, staleTime: 30_000, refetchOnWindowFocus: false, gcTime: cacheMaxAgeMs },
       mutations: { retry: false },
     },
   });
 }
 
 /**
- * Everything the app needs above the router's screens: one QueryClient, the
- * fonts, and the navigation theme in Pinwright's colours. Renders a plain
- * paper-coloured view until the fonts are ready (or have failed: then the
- * CSS fallback faces are used).
+ * Everything the app needs above the router's screens: one QueryClient (its
+ * cache kept on the device per account, and the outbox of offline writes:
+ * components/offline), the fonts, and the navigation theme in Pinwright's
+ * colours. Renders a plain paper-coloured view until the fonts are ready (or
+ * have failed: then the CSS fallback faces are used) and the device's cache
+ * is restored. The offline notice and the outbox sit above every screen.
  */
 export function Providers({ children }: { children: ReactNode }) {
   const [queryClient] = useState(createQueryClient);
@@ -62,13 +75,23 @@ export function Providers({ children }: { children: ReactNode }) {
 
   return (
     <QueryClientProvider client={queryClient}>
-      <ThemeProvider value={navigationTheme}>
-        <View style={styles.root}>{fontsLoaded || fontError ? children : null}</View>
-      </ThemeProvider>
+      <OfflineProvider queryClient={queryClient}>
+        <ThemeProvider value={navigationTheme}>
+          <View style={styles.root}>
+            {fontsLoaded || fontError ? (
+              <>
+                <OfflineNotice />
+                <View style={styles.screens}>{children}</View>
+              </>
+            ) : null}
+          </View>
+        </ThemeProvider>
+      </OfflineProvider>
     </QueryClientProvider>
   );
 }
 
 const styles = StyleSheet.create({
   root: { flex: 1, backgroundColor: colors.paper },
+  screens: { flex: 1 },
 });

@@ -13,7 +13,12 @@ export interface ApiFetchOptions<T> {
   /** When given, the response body is parsed with it (a mismatch throws ApiError "bad_response"). */
   schema?: ZodType<T, ZodTypeDef, unknown>;
   signal?: AbortSignal;
+  /** Extra request headers, e.g. `{ 'Idempotency-Key': id }` on a write the outbox may send again. */
+  headers?: Record<string, string>;
 }
+
+/** Header naming one write, so the server runs it once however often it is sent (server/middleware/idempotency.ts). */
+export const idempotencyHeader = 'Idempotency-Key';
 
 /** Header the server requires on every state-changing request (its CSRF defence). */
 export const csrfHeader = 'X-Pinwright-Csrf';
@@ -68,7 +73,7 @@ function errorFrom(status: number, payload: unknown): ApiError {
  */
 export async function apiFetch<T = unknown>(path: string, options: ApiFetchOptions<T> = {}): Promise<T> {
   const method = options.method ?? 'GET';
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { Accept: 'application/json', ...options.headers };
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
   if (method !== 'GET') headers[csrfHeader] = '1';
 

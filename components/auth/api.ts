@@ -2,6 +2,10 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 
 import { apiFetch, ApiError, isApiError } from '@/components/api/client';
+import { isOnline } from '@/components/offline/connectivity';
+import { clearOutbox } from '@/components/offline/outbox';
+import { forgetDeviceCache } from '@/components/offline/query-persistence';
+import { signedInUserId } from '@/components/offline/send-or-keep';
 import { userSchema, type ProfileUpdate, type SignInInput, type SignUpInput, type User } from '@/shared/auth';
 
 /** Query keys for the account feature. */
@@ -11,8 +15,29 @@ export const authKeys = {
 
 const userResponse = z.object({ user: userSchema });
 
-/** Fetches the signed-in user; resolves to null when nobody is signed in (401). */
+/**
+ * A sign-out made with no signal: the server's session is ended at the next
+ * chance (before anyone is taken as signed in), so a shared phone never
+ * signs the last archer back in. Kept in localStorage (read synchronously).
+ */
+const pendingSignOutKey = 'pinwright-sign-out-pending';
+const storage = () => (typeof localStorage === 'undefined' ? null : localStorage);
+
+/** Ends the server's session left from an offline sign-out; true when none is left. */
+async function finishPendingSignOut(): Promise<boolean> {
+  if (storage()?.getItem(pendingSignOutKey) !== '1') return true;
+  try {
+    await apiFetch<void>('/api/auth/sign-out', { method: 'POST' });
+    storage()?.removeItem(pendingSignOutKey);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/** Fetches the signed-in user; resolves to null when nobody is signed in (401) or a sign-out made offline is still to reach the server. */
 export async function fetchMe(): Promise<User | null> {
+  if (!(await finishPendingSignOut())) return null;
   try {
     const { user } = await apiFetch('/api/me', { schema: userResponse });
     return user;
@@ -44,6 +69,8 @@ export function useSignIn() {
     mutationFn: async (input) =>
       (await apiFetch('/api/auth/sign-in', { method: 'POST', body: input, schema: userResponse })).user,
     onSuccess: (user) => {
+      // A new sign-in replaces the session an offline sign-out meant to end.
+      storage()?.removeItem(pendingSignOutKey);
       queryClient.setQueryData(authKeys.me, user);
     },
   });
@@ -59,19 +86,38 @@ export function useSignUp() {
     mutationFn: async (input) =>
       (await apiFetch('/api/auth/sign-up', { method: 'POST', body: input, schema: userResponse })).user,
     onSuccess: (user) => {
+      // A new sign-in replaces the session an offline sign-out meant to end.
+      storage()?.removeItem(pendingSignOutKey);
       queryClient.setQueryData(authKeys.me, user);
     },
   });
 }
 
 /**
- * Signs out and drops every cached record of the previous user.
+ * Signs out and drops every record of the previous user, in memory and on the
+ * device (its cache and its outbox: a shared phone must not show the last
+ * archer's bows). With no signal it signs out on the phone at once and ends
+ * the server's session when the signal is back.
  * Example: `useSignOut().mutate()`
  */
 export function useSignOut() {
   const queryClient = useQueryClient();
   return useMutation<void, ApiError, void>({
-    mutationFn: () => apiFetch<void>('/api/auth/sign-out', { method: 'POST' }),
+    mutationFn: async () => {
+      const userId = signedInUserId(queryClient);
+      let reached = false;
+      if (isOnline()) {
+        try {
+          await apiFetch<void>('/api/auth/sign-out', { method: 'POST' });
+          reached = true;
+        } catch (error) {
+          if (!isApiError(error) || error.status !== 0) throw error;
+        }
+      }
+      if (!reached) storage()?.setItem(pendingSignOutKey, '1');
+      await forgetDeviceCache(userId);
+      if (userId !== null) await clearOutbox(userId);
+    },
     onSuccess: () => {
       queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== authKeys.me[0] });
       queryClient.setQueryData(authKeys.me, null);

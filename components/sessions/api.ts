@@ -3,6 +3,8 @@ import { z } from 'zod';
 
 import { apiFetch, type ApiError } from '@/components/api/client';
 import { bowKeys } from '@/components/bows/api';
+import type { OutboxItem } from '@/components/offline/outbox';
+import { sendOrKeep } from '@/components/offline/send-or-keep';
 import { sessionSchema, type Session, type SessionInput, type SessionUpdate } from '@/shared/session';
 
 /** Query keys for sight-in sessions. */
@@ -31,24 +33,54 @@ export function useSession(id: number | undefined) {
   });
 }
 
-/** A new session for a bow (bowId, whole input) or an edit of one (id, any subset; marks replace the whole set). */
-export type SaveSessionVariables = { id?: number; bowId?: number; input: SessionInput | SessionUpdate };
+/**
+ * A new session for a bow (bowId, whole input) or an edit of one (id, any
+ * subset; marks replace the whole set). `title` names it in the outbox;
+ * `outboxId`, the item a previous offline save of the same form was kept
+ * as (saving again replaces it while it waits).
+ */
+export type SaveSessionVariables = {
+  id?: number;
+  bowId?: number;
+  input: SessionInput | SessionUpdate;
+  title?: string;
+  outboxId?: string;
+};
+
+/** Saved on the server, or kept on this phone to send when the signal is back (components/offline). */
+export type SaveSessionResult = { kept: false; session: Session } | { kept: true; item: OutboxItem };
 
 /**
  * Saves a session with all its marks in one request (POST /api/bows/:bowId/sessions
- * or PATCH /api/sessions/:id); the server refits and stores the fit.
- * Example: `useSaveSession().mutate({ bowId: 3, input }, { onSuccess: (s) => router.replace(`/sessions/${s.id}`) })`
+ * or PATCH /api/sessions/:id), with an idempotency key; the server refits and
+ * stores the fit. With no signal the save is kept in the outbox instead.
+ * Example: `useSaveSession().mutate({ bowId: 3, input }, { onSuccess: (r) => r.kept || router.replace(`/sessions/${r.session.id}`) })`
  */
 export function useSaveSession() {
   const queryClient = useQueryClient();
-  return useMutation<Session, ApiError, SaveSessionVariables>({
-    mutationFn: async ({ id, bowId, input }) => {
+  return useMutation<SaveSessionResult, ApiError, SaveSessionVariables>({
+    mutationFn: async ({ id, bowId, input, title, outboxId }) => {
       const path = id ? `/api/sessions/${id}` : `/api/bows/${bowId}/sessions`;
-      const { session } = await apiFetch(path, { method: id ? 'PATCH' : 'POST', body: input, schema: sessionResponse });
-      return session;
+      const marks = input.marks?.length ?? 0;
+      const result = await sendOrKeep(
+        queryClient,
+        {
+          id: outboxId,
+          kind: id ? 'marks' : 'sight-in',
+          title: title ?? (id ? `Marks of a sight-in (${marks})` : `New sight-in · ${marks} marks`),
+          method: id ? 'PATCH' : 'POST',
+          path,
+          body: input,
+          bowId: bowId ?? null,
+          recordId: id ?? null,
+        },
+        sessionResponse,
+      );
+      return result.kept ? result : { kept: false, session: result.data.session };
     },
-    onSuccess: (session) => {
-      queryClient.setQueryData(sessionKeys.detail(session.id), session);
+    onSuccess: (result) => {
+      if (result.kept) return;
+      queryClient.setQueryData(sessionKeys.detail(result.session.id), result.session);
       return queryClient.invalidateQueries({ queryKey: bowKeys.all });
     },
   });

@@ -1,5 +1,5 @@
 import { useRouter } from 'expo-router';
-import { useDeferredValue, useMemo, useState } from 'react';
+import { useCallback, useDeferredValue, useMemo, useRef, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
@@ -8,11 +8,13 @@ import { FieldGrid } from '@/components/bows/field-grid';
 import { applyFieldErrors } from '@/components/bows/server-field-errors';
 import { buildLine } from '@/components/builds/build-words';
 import { FitChart } from '@/components/sessions/fit-chart';
-import { FitWarnings } from '@/components/sessions/fit-warnings';
+import { FitStrip, FitWarnings } from '@/components/sessions/fit-warnings';
 import { liveFit, type LiveFit, type LiveFitText } from '@/components/sessions/live-fit';
 import { MarkTable, type RowFit } from '@/components/sessions/mark-table';
 import { PredictedMarks } from '@/components/sessions/predicted-marks';
 import { useDeleteSession, useSaveSession } from '@/components/sessions/api';
+import { useOutbox, useOutboxSent } from '@/components/offline/use-outbox';
+import type { OutboxSent } from '@/components/offline/outbox';
 import { DateField } from '@/components/sessions/date-field';
 import {
   airInStoredUnits,
@@ -34,6 +36,7 @@ import { Text } from '@/components/ui/text';
 import { space } from '@/components/theme';
 import type { DistanceUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
+import { checkMarks, type MarkCheckResult, type MarkProblem } from '@/shared/mark-checks';
 import type { Session, SessionInput } from '@/shared/session';
 import { shownUnit } from '@/shared/units';
 
@@ -76,6 +79,12 @@ function refusedRowOf(live: LiveFit): number | null {
   if (live.state !== 'refused') return null;
   const match = /^marks\[(\d+)\]/.exec(live.field);
   return match ? (live.marks[Number(match[1])]?.row ?? null) : null;
+}
+
+/** The form's text for the fit with each row that has a problem blanked (the fit leaves it out; row numbers stay). */
+function withoutProblemRows(text: LiveFitText, checks: MarkCheckResult): LiveFitText {
+  const flagged = new Set(checks.problems.map((problem) => problem.row));
+  return { ...text, marks: (text.marks ?? []).map((row, index) => (flagged.has(index) ? { distance: '', scaleMm: '', arrowsShot: '', note: '' } : row)) };
 }
 
 function FitSummary({ live }: { live: Extract<LiveFit, { state: 'fit' }> }) {
@@ -136,7 +145,30 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
   // The fit reruns on each keystroke; a deferred key lets typing stay ahead of it.
   const key = JSON.stringify({ buildId, ...airInStoredUnits({ altitudeM, temperatureC }, units), unit, marks });
   const deferredKey = useDeferredValue(key);
-  const live = useMemo(() => liveFit(JSON.parse(deferredKey) as LiveFitText, bow, bow.builds), [deferredKey, bow]);
+  // Each row checked as typed (shared/mark-checks); the fit leaves out the rows with a problem.
+  const checks = useMemo(() => {
+    const text = JSON.parse(deferredKey) as LiveFitText;
+    const build = bow.builds.find((item) => String(item.id) === text.buildId);
+    return checkMarks(text.marks ?? [], { unit: text.unit, scaleDirection: bow.scaleDirection, peepHeightMm: bow.peepHeightMm, speedFps: build?.speedFps ?? null });
+  }, [deferredKey, bow]);
+  const live = useMemo(() => liveFit(withoutProblemRows(JSON.parse(deferredKey) as LiveFitText, checks), bow, bow.builds), [deferredKey, bow, checks]);
+  const problemsByRow = useMemo(() => Object.fromEntries(checks.problems.map((problem) => [problem.row, problem])) as Record<number, MarkProblem>, [checks]);
+  // A save made with no signal is kept on this phone (components/offline) until it is sent.
+  const [keptId, setKeptId] = useState<string | null>(null);
+  const [keptItem] = useOutbox({ ids: keptId ? [keptId] : [] });
+  const [askFalling, setAskFalling] = useState(false);
+  const fallingConfirmed = useRef(false);
+  const onSent = useCallback(
+    (sent: OutboxSent) => {
+      if (sent.id !== keptId) return;
+      setKeptId(null);
+      const saved = (sent.response as { session?: Session } | null)?.session;
+      if (!session && saved) router.replace(`/sessions/${saved.id}`);
+      else reset(undefined, { keepValues: true });
+    },
+    [keptId, session, router, reset],
+  );
+  useOutboxSent(onSent);
   const rowFits = useMemo(() => rowFitsOf(live), [live]);
 
   const buildOptions = bow.builds.map((build) => ({ value: String(build.id), label: build.name }));
@@ -145,11 +177,30 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
   const submit = handleSubmit(
     (input) => {
       setGeneral(null);
+      // A reading that falls with distance is most often a typo: the archer confirms it before it is saved.
+      if (checks.falling.length > 0 && !fallingConfirmed.current) {
+        setAskFalling(true);
+        return;
+      }
+      fallingConfirmed.current = false;
+      setAskFalling(false);
       const kept = keptRows(marks ?? []);
       save.mutate(
-        { id: session?.id, bowId: bow.id, input: keepSaved ? appendOnlyUpdate(session, input) : input },
         {
-          onSuccess: (saved) => {
+          id: session?.id,
+          bowId: bow.id,
+          input: keepSaved ? appendOnlyUpdate(session, input) : input,
+          title: session ? `New marks for the ${session.date} sight-in · ${bow.nickname}` : `New sight-in · ${bow.nickname} · ${input.marks.length} marks`,
+          outboxId: keptItem?.state === 'waiting' ? keptItem.id : undefined,
+        },
+        {
+          onSuccess: (result) => {
+            if (result.kept) {
+              setKeptId(result.item.id);
+              return;
+            }
+            setKeptId(null);
+            const saved = result.session;
             if (session) reset(sessionFormDefaults(saved, undefined, distanceUnit, units));
             else router.replace(`/sessions/${saved.id}`);
           },
@@ -202,7 +253,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
           {`The saved marks and the session’s details are ${bow.ownerName || 'the archer'}’s: you can add marks below them.`}
         </Text>
       ) : null}
-      <MarkTable control={control} unit={unit} rowFits={rowFits} refusedRow={refusedRowOf(live)} lockedRows={lockedRows} />
+      <MarkTable control={control} unit={unit} rowFits={rowFits} refusedRow={refusedRowOf(live)} lockedRows={lockedRows} problems={problemsByRow} />
       <FormField
         control={control}
         name="notes"
@@ -219,7 +270,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
     <Card style={styles.section} testID="live-fit">
       <SectionHeading title="Live fit" description="Refitted as you type, with drag, from your marks and the bow's sight radius and peep height." />
       {live.state === 'waiting' ? <Text tone="soft">{live.message}</Text> : null}
-      <FitWarnings live={live} />
+      <FitWarnings live={live} checks={checks} />
       {live.state === 'fit' ? (
         <>
           <FitSummary live={live} />
@@ -259,7 +310,37 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
           {general}
         </Banner>
       ) : null}
-      {save.isSuccess && session && !formState.isDirty ? (
+      {keptItem ? (
+        <Banner
+          tone={keptItem.state === 'refused' ? 'error' : 'warn'}
+          title={keptItem.state === 'refused' ? 'The server refused this sight-in' : 'On this phone, not sent yet'}
+          testID="session-kept"
+        >
+          {keptItem.state === 'refused'
+            ? `${keptItem.refusal?.message ?? 'It was refused.'} It stays on this phone (see the list at the top) until you copy or discard it.`
+            : 'Saved on this phone. It is sent to Pinwright when the signal is back, even if you close the app; the live fit below works meanwhile.'}
+        </Banner>
+      ) : null}
+      {askFalling ? (
+        <ConfirmBar
+          title="Save a reading that falls with distance?"
+          message={`${checks.falling
+            .map((mark) => checks.problems.find((problem) => problem.row === mark.row)?.message)
+            .filter(Boolean)
+            .join(' ')} Save it only if you read the sight right.`}
+          confirmLabel="Save it as it is"
+          pendingLabel="Saving…"
+          pending={save.isPending}
+          error={null}
+          onConfirm={() => {
+            fallingConfirmed.current = true;
+            void submit();
+          }}
+          onCancel={() => setAskFalling(false)}
+          testID="falling-confirm"
+        />
+      ) : null}
+      {save.isSuccess && !save.data.kept && session && !formState.isDirty ? (
         <Banner tone="info" title="Saved">
           The server refitted the marks and stored the fit. Open the tape to print it.
         </Banner>
@@ -278,6 +359,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
           Unsaved changes: save before opening the tape, which is drawn from the saved fit.
         </Text>
       ) : null}
+      {!split ? <FitStrip live={live} checks={checks} /> : null}
       {split ? (
         <View style={styles.split}>
           <View style={styles.column}>

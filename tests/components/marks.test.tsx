@@ -21,7 +21,7 @@ describe('the marks table and its live fit', () => {
     expect(screen.getByText('Enter two marks (a short and a long distance) to see the fit.')).toBeTruthy();
     type('mark-distance-0', '20');
     type('mark-reading-0', '14.9');
-    expect(await screen.findByText('Enter one more mark, at another distance, to see the fit.')).toBeTruthy();
+    expect(await screen.findByText(/^Enter one more mark, at another distance, to see the fit/)).toBeTruthy();
     type('mark-distance-1', '60');
     type('mark-reading-1', '32.6');
     await screen.findByTestId('predicted-marks');
