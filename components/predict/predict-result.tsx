@@ -18,6 +18,10 @@ export interface PredictResultProps {
   tapeWidthMm: number;
   /** The predicted tape's download address for a range, or null when it cannot be asked for. */
   tapeHref: ((from: number, to: number) => string) | null;
+  /** The predicted print sheet's address (SVG or PDF), or null. */
+  sheetHref?: ((from: number, to: number, format: 'svg' | 'pdf') => string) | null;
+  /** The name of the sight-in it is carried on (shared/sight-in-name.ts), when known. */
+  sightInName?: string | null;
 }
 
 /** Distances shown in the marks table: every 10 from 20. */
@@ -29,7 +33,7 @@ const shown = (distance: number) => distance >= 20 && distance % 10 === 0;
  * caution that none of it is sighted.
  * Example: `<PredictResult result={prediction} bowName="Timberline slider" tapeWidthMm={12} tapeHref={(from, to) => href} />`
  */
-export function PredictResult({ result, bowName, tapeWidthMm, tapeHref }: PredictResultProps) {
+export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHref = null, sightInName = null }: PredictResultProps) {
   const { prediction } = result;
   const unit = prediction.unit ?? 'yd';
   const source =
@@ -85,7 +89,7 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref }: Predic
           <SectionHeading
             title="Predicted marks"
             level={2}
-            description={`On the sight of the ${formatDay(result.session.date)} sight-in with ${result.session.buildName}; mm as your scale reads them.`}
+            description={`On the sight of the sight-in of ${sightInName ?? `${formatDay(result.session.date)} · ${result.session.buildName}`}; mm as your scale reads them.`}
           />
           <View style={styles.table} role="table" aria-label="Predicted marks" testID="predict-marks">
             <View style={[styles.row, styles.head]} role="row">
@@ -128,6 +132,15 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref }: Predic
             labels={{ bow: bowName, build: `${result.build.name}, ${formatFixed(result.build.totalGr, 0)} gr`, speed: speedWords }}
           />
           {tapeHref ? <DownloadLink label="Download the predicted tape (SVG)" href={tapeHref(20, tapeTo)} fileName="predicted-tape.svg" testID="predict-download" /> : null}
+          {sheetHref ? (
+            <View style={styles.downloads}>
+              <Text variant="small" tone="soft">
+                The print sheet: PREDICTED — NOT SIGHTED at its head, calibration bars, the tape at 100 %. Print at actual size.
+              </Text>
+              <DownloadLink label="Print sheet (PDF)" href={sheetHref(20, tapeTo, 'pdf')} fileName="predicted-sheet.pdf" testID="predict-sheet-pdf" />
+              <DownloadLink label="Print sheet (SVG)" href={sheetHref(20, tapeTo, 'svg')} fileName="predicted-sheet.svg" testID="predict-sheet-svg" />
+            </View>
+          ) : null}
         </Card>
       ) : null}
     </View>
@@ -164,4 +177,5 @@ const styles = StyleSheet.create({
   distance: { width: 44 },
   cell: { flex: 1 },
   soft: { color: colors.inkSoft },
+  downloads: { gap: space.xs },
 });

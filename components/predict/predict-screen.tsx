@@ -5,7 +5,6 @@ import { StyleSheet, View } from 'react-native';
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { FieldGrid } from '@/components/bows/field-grid';
-import { formatDay } from '@/components/bows/readiness-words';
 import { applyFieldErrors, flatFieldPath } from '@/components/bows/server-field-errors';
 import { textFormResolver } from '@/components/bows/text-form-resolver';
 import { buildFormDefaults, buildFormFields, buildFormSchema, type BuildFormText } from '@/components/builds/build-form-values';
@@ -31,6 +30,7 @@ import { space } from '@/components/theme';
 import type { LengthUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import type { BuildInput } from '@/shared/build';
+import { sightInName } from '@/shared/sight-in-name';
 
 /** The form's text for a new build started from `build`: its parts, a new name, no speed (that is what we predict). */
 function startingText(build: BowDetail['builds'][number] | undefined, unit: LengthUnit): BuildFormText {
@@ -88,8 +88,17 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
   const startOptions = [...bow.builds.map((build) => ({ value: String(build.id), label: build.name })), { value: 'blank', label: 'Blank' }];
   const sessionOptions = bow.sessions.slice(0, 6).map((session) => ({
     value: String(session.id),
-    label: `${formatDay(session.date)} · ${buildName(bow.builds, session.buildId)}`,
+    label: sightInName(session, { builds: bow.builds, siblings: bow.sessions }),
   }));
+  // What keeps Predict from running, in words (the button stays disabled until none is left).
+  const missing = [
+    chronographed.length < 2
+      ? `Chronograph ${chronographed.length === 0 ? 'two builds' : 'one more build'} of ${chronographed.length === 0 ? 'different weights' : 'another weight'} on this bow: the new build’s speed comes from them.`
+      : null,
+    !text.name?.trim() ? 'Give the new build a name.' : null,
+    live.totalGr === null ? 'Enter the arrow’s grains per inch and cut length: its weight comes from them.' : null,
+    !text.diameterMm?.trim() ? 'Enter the shaft’s diameter.' : null,
+  ].filter((reason): reason is string => reason !== null);
 
   const chooseStart = (value: string) => {
     setStartFrom(value);
@@ -154,7 +163,17 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
           {general}
         </Banner>
       ) : null}
-      <Button label="Predict" pendingLabel="Predicting…" pending={predict.isPending} onPress={submit} testID="predict-submit" />
+      {missing.length > 0 ? (
+        <View style={styles.missing} testID="predict-missing" aria-live="polite">
+          <Text variant="label">Predict needs:</Text>
+          {missing.map((reason) => (
+            <Text key={reason} variant="small">
+              • {reason}
+            </Text>
+          ))}
+        </View>
+      ) : null}
+      <Button label="Predict" pendingLabel="Predicting…" pending={predict.isPending} disabled={missing.length > 0} onPress={submit} testID="predict-submit" />
     </Card>
   );
 
@@ -174,6 +193,15 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
       bowName={bow.nickname}
       tapeWidthMm={bow.tapeWidthMm}
       tapeHref={sent ? (from, to) => predictedTapeHref(bow.id, sent, { sessionId: predict.data!.session?.id, from, to, width: bow.tapeWidthMm }) : null}
+      sheetHref={
+        sent
+          ? (from, to, format) => predictedTapeHref(bow.id, sent, { sessionId: predict.data!.session?.id, from, to, width: bow.tapeWidthMm }).replace('/predict/tape.svg?', `/predict/sheet.${format}?`)
+          : null
+      }
+      sightInName={(() => {
+        const session = predict.data.session ? bow.sessions.find((item) => item.id === predict.data!.session!.id) : undefined;
+        return session ? sightInName(session, { builds: bow.builds, siblings: bow.sessions }) : null;
+      })()}
     />
   ) : null;
 
@@ -205,4 +233,5 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
 const styles = StyleSheet.create({
   split: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
   column: { flex: 1, minWidth: 0, gap: space.xl },
+  missing: { gap: space.xxs },
 });

@@ -8,7 +8,9 @@
  */
 import { ArrowBuild, SightSession, type Bow, type User } from '@/server/models';
 import { ApiError, validationError } from '@/server/errors';
-import { ENERGY_CAUTION, predictBuild, predictedTapeSvg, type SightModel } from '@/math';
+import { ENERGY_CAUTION, predictBuild, predictedSheetSvg, predictedTapeSvg, type SightModel } from '@/math';
+import { sheetPdf } from '@/server/print/sheet-pdf';
+import { sightInName } from '@/shared/sight-in-name';
 import { buildInputSchema, type BuildInput } from '@/shared/build';
 import type { PredictRequest, PredictResponse, PredictTapeQuery } from '@/shared/predict';
 import { readableBow } from './bow-access';
@@ -133,6 +135,32 @@ function requestOfQuery(query: PredictTapeQuery): PredictRequest {
  * marked PREDICTED — not sighted. Without a fitted sight-in on the bow: 409.
  */
 export async function predictedTapeDownload(user: User, bowId: number, query: PredictTapeQuery): Promise<Download> {
+  const { model, tape, labels, slug } = await predictedDrawing(user, bowId, query);
+  const svg = refusingMathInput(() => predictedTapeSvg(model, tape, { bow: labels.bow, build: labels.build, speed: labels.speed }));
+  return { body: svg, contentType: 'image/svg+xml; charset=utf-8', fileName: `predicted-tape-${slug}.svg` };
+}
+
+/**
+ * The predicted tape's print sheet (GET /api/bows/:bowId/predict/sheet.svg and
+ * sheet.pdf): math's predictedSheetSvg on A4 or US Letter — PREDICTED — NOT
+ * SIGHTED at its head, calibration bars, the tape at 100 % — as SVG, or as a
+ * PDF of the paper's size. Without a fitted sight-in on the bow: 409.
+ */
+export async function predictedSheetDownload(
+  user: User,
+  bowId: number,
+  query: PredictTapeQuery & { paper?: 'a4' | 'letter' },
+  format: 'svg' | 'pdf',
+): Promise<Download> {
+  const { model, tape, labels, slug } = await predictedDrawing(user, bowId, query);
+  const paper = query.paper ?? 'a4';
+  const svg = refusingMathInput(() => predictedSheetSvg(model, tape, { paper, labels }));
+  if (format === 'svg') return { body: svg, contentType: 'image/svg+xml; charset=utf-8', fileName: `predicted-sheet-${slug}.svg` };
+  return { body: await sheetPdf(svg, paper), contentType: 'application/pdf', fileName: `predicted-sheet-${slug}.pdf` };
+}
+
+/** What a predicted tape or sheet draws: the predicted model, the tape options, the words and a file-name slug. */
+async function predictedDrawing(user: User, bowId: number, query: PredictTapeQuery) {
   const bow = await readableBow(user, bowId);
   const { response: result, sightModel: model } = await runPrediction(user, bowId, requestOfQuery(query));
   if (!model) throw ApiError.conflict(NO_SIGHT_IN_MESSAGE);
@@ -142,21 +170,23 @@ export async function predictedTapeDownload(user: User, bowId: number, query: Pr
     result.prediction.speedSource === 'chronograph'
       ? `${result.prediction.speedFps.toFixed(0)} fps (chronographed)`
       : `${result.prediction.speedFps.toFixed(0)} fps (predicted from ${result.chronographed.length} chronographed builds)`;
-  const svg = refusingMathInput(() =>
-    predictedTapeSvg(
-      model,
-      {
-        from,
-        to,
-        step: query.step ?? 1,
-        unit: model.distanceUnit,
-        widthMm: query.width ?? bow.tapeWidthMm,
-        orientation: query.orientation ?? 'down',
-        mirror: query.mirror ?? false,
-      },
-      { bow: bow.nickname, build: `${result.build.name}, ${result.build.totalGr.toFixed(0)} gr`, speed },
-    ),
-  );
+  const tape = {
+    from,
+    to,
+    step: query.step ?? 1,
+    unit: model.distanceUnit,
+    widthMm: query.width ?? bow.tapeWidthMm,
+    orientation: query.orientation ?? ('down' as const),
+    mirror: query.mirror ?? false,
+  };
+  let sightIn: string | undefined;
+  if (result.session) {
+    const siblings = await SightSession.findAll({ where: { bowId: bow.id }, attributes: ['id', 'date', 'placeLabel', 'buildId', 'createdAt'] });
+    const nameable = siblings.map((s) => ({ id: s.id, date: s.date, placeLabel: s.placeLabel, buildId: s.buildId, createdAt: s.createdAt.toISOString() }));
+    const own = nameable.find((s) => s.id === result.session!.id);
+    if (own) sightIn = sightInName(own, { buildName: result.session.buildName, siblings: nameable, timeZone: 'UTC' });
+  }
+  const labels = { bow: bow.nickname, build: `${result.build.name}, ${result.build.totalGr.toFixed(0)} gr`, speed, sightIn };
   const slug =
     result.build.name
       .normalize('NFKD')
@@ -165,5 +195,5 @@ export async function predictedTapeDownload(user: User, bowId: number, query: Pr
       .toLowerCase()
       .replace(/[\s_-]+/g, '-')
       .slice(0, 40) || 'build';
-  return { body: svg, contentType: 'image/svg+xml; charset=utf-8', fileName: `predicted-tape-${slug}.svg` };
+  return { model, tape, labels, slug };
 }

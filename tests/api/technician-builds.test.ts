@@ -114,3 +114,22 @@ describe('who added each mark and sight-in', () => {
     expect(list.find((s: { id: number }) => s.id === techSession.body.session.id).addedBy.name).toBe('Oren Hallowfield');
   });
 });
+
+describe('set-up changes a technician records (engineer E’s set-up measures)', () => {
+  it('adds a new peep height entry on a shared bow, attributed to the technician, that the archer reads; never on an unshared bow', async () => {
+    const { archer, tech, bow, share } = await sharedBow();
+    const added = await tech.agent
+      .post(`/api/bows/${bow.id}/setup`)
+      .set(CSRF)
+      .send({ measure: 'peep-height', valueMm: 113, measuredOn: '2026-12-01', note: 'Peep moved up after the new string' });
+    expect(added.status).toBe(201);
+    const read = await archer.agent.get(`/api/bows/${bow.id}/setup`);
+    expect(read.status).toBe(200);
+    const entry = read.body.entries.find((e: { id: number }) => e.id === added.body.entry.id);
+    expect(entry).toMatchObject({ measure: 'peep-height', addedBy: { id: tech.user.id, name: 'Oren Hallowfield' }, byTechnician: true });
+
+    await archer.agent.post(`/api/shares/${share.id}/revoke`).set(CSRF);
+    const refused = await tech.agent.post(`/api/bows/${bow.id}/setup`).set(CSRF).send({ measure: 'peep-height', valueMm: 114, measuredOn: '2026-12-01', note: '' });
+    expect(refused.status).toBe(404);
+  });
+});
