@@ -1,10 +1,11 @@
-import { formatDay } from '@/components/bows/readiness-words';
 import { SessionLoader } from '@/components/sessions/session-loader';
 import { TapeEditor } from '@/components/tapes/tape-editor';
+import { ConfirmAtRangeBanner } from '@/components/tuning/confirm-banner';
 import { Button } from '@/components/ui/button';
 import { Screen } from '@/components/ui/screen';
 import { ScreenTitle } from '@/components/ui/screen-title';
 import { SectionHeading } from '@/components/ui/section-heading';
+import { sightInName } from '@/shared/sight-in-name';
 
 /** The tape of a sight-in: options, preview, print and downloads (a saved layout when `tapeId` is given). */
 export function TapeScreen({ sessionId, tapeId }: { sessionId: number; tapeId?: number }) {
@@ -18,9 +19,10 @@ export function TapeScreen({ sessionId, tapeId }: { sessionId: number; tapeId?: 
             <SectionHeading
               level={1}
               title={tape?.label ? `Tape: ${tape.label}` : 'Sight tape'}
-              description={`${bow.nickname} · sight-in of ${formatDay(session.date)}`}
+              description={`${bow.nickname} · sight-in of ${sightInName(session, { builds: bow.builds, siblings: bow.sessions })}`}
               action={<Button label="Back to the sight-in" variant="quiet" href={`/sessions/${sessionId}`} />}
             />
+            <ConfirmAtRangeBanner sessionId={session.id} subject="tape" />
             <TapeEditor
               key={tape?.id ?? 'new'}
               bow={bow}
