@@ -17,4 +17,4 @@ export const ONE_MARK_CAUTION = 'Estimate from one mark and the chronographed sp
 /** The short form along a one-mark tape's edge. */
 export const ONE_MARK_STRIP = 'ESTIMATE FROM ONE MARK';
 /** Beside every crosswind figure. */
-export const WIND_CAUTION = 'Wind varies along the path and gusts; these holds are estimates from the model, and only practice in wind confirms them.';
+export const WIND_CAUTION = 'Wind varies along the path: wind holds are estimates; only practice in wind confirms them.';

@@ -98,6 +98,24 @@ export const cardShiftRowSchema = z.object({
   shiftMm: finiteOrNull,
 });
 
+/**
+ * The crosswind table: per wind speed (mph for yards, km/h for metres) at full
+ * value (from 3 or 9 o'clock), per card distance on the level, the drift at
+ * the target (cm, in) and the hold as a sideways pin offset at the sight (mm).
+ */
+export const cardWindSchema = z.object({
+  speedUnit: z.enum(['mph', 'km/h']),
+  rows: z.array(
+    z.object({
+      speed: z.number(),
+      crossMps: z.number(),
+      cells: z.array(z.object({ distance: z.number(), driftCm: finiteOrNull, driftIn: finiteOrNull, holdMm: finiteOrNull })),
+    }),
+  ),
+  /** Wind varies along the path; only practice in wind confirms the holds. */
+  caution: z.string(),
+});
+
 /** The card's data (math/card fieldCardData): what the JSON, the SVG and the PDF all show. */
 export const fieldCardDataSchema = z.object({
   unit: distanceUnitSchema,
@@ -113,6 +131,8 @@ export const fieldCardDataSchema = z.object({
   rows: z.array(cardSlopeRowSchema),
   /** Level marks at each distance, sight-in air against the card's air. */
   shift: z.array(cardShiftRowSchema),
+  /** Crosswind drift and hold at each distance, in the card's air. */
+  wind: cardWindSchema,
   cautions: z.array(z.string()),
 });
 
@@ -137,6 +157,7 @@ export type FieldCardQuery = z.infer<typeof fieldCardQuerySchema>;
 export type CardAir = z.infer<typeof cardAirSchema>;
 export type CardSlopeRow = z.infer<typeof cardSlopeRowSchema>;
 export type CardShiftRow = z.infer<typeof cardShiftRowSchema>;
+export type CardWind = z.infer<typeof cardWindSchema>;
 export type FieldCardData = z.infer<typeof fieldCardDataSchema>;
 export type FieldCardLabels = z.infer<typeof fieldCardLabelsSchema>;
 export type FieldCardResponse = z.infer<typeof fieldCardResponseSchema>;

@@ -10,6 +10,7 @@ import { formatFixed, formatSigned } from '@/components/compare/format';
 import { useFieldCard, fieldCardQueryString, type FieldCardParams } from '@/components/field-card/api';
 import { CardPrint } from '@/components/field-card/card-print';
 import { SlopeTable } from '@/components/field-card/slope-table';
+import { WindTable } from '@/components/field-card/wind-table';
 import { useSession } from '@/components/sessions/api';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -142,6 +143,7 @@ export function FieldCardScreen({ sessionId }: { sessionId: number }) {
         ) : null}
         <SlopeTable card={data} />
         <ShiftTable card={data} />
+        <WindTable card={data} />
       </Card>
 
       <Banner tone="caution" title="Estimates" testID="field-card-cautions">

@@ -5,6 +5,7 @@ import { predictMarkMm, predictMarksMm } from '@/math/flight/predict-mark';
 import type { SightModel } from '@/math/flight/sight-model';
 import { levelRangeForMark } from '@/math/slope/slope-shot';
 import { airShift } from '@/math/field/air-shift';
+import { windTable } from '@/math/field/wind-table';
 import { FIELD_CARD_ANGLES_DEG, FIELD_CARD_DISTANCES } from '@/math/field/field-card';
 import { FitInputError } from '@/math/fit/fit-input-error';
 import { SLOPE_CAUTION } from '@/math/cautions';
@@ -12,7 +13,7 @@ import { SLOPE_CAUTION } from '@/math/cautions';
 /** The card's cautions, in the order printed. */
 export const FIELD_CARD_CAUTIONS = [
   SLOPE_CAUTION,
-  'Every figure here is an estimate from the fit: confirm each distance at the range before you rely on it.',
+  'Every figure here is an estimate from the fit: confirm each distance at the range.',
   'Follow the hunting rules where you hunt.',
 ] as const;
 
@@ -30,6 +31,8 @@ export const FIELD_CARD_CAUTIONS = [
  * In the sight-in air this is exactly fieldCard/slopeShot. The shift rows are
  * airShift: the level mark at each distance in the card's air minus the
  * sight-in's (thinner air, less drag: long marks move up the scale, negative).
+ * The wind table (windTable) gives the crosswind drift and hold at each
+ * distance on the level, in the card's air.
  *
  * Air: `air.altitudeM` (m) and `air.temperatureC` (°C; absent: the standard
  * atmosphere's at that altitude, ISO 2533). `sightIn` names the air the
@@ -125,6 +128,7 @@ export function fieldCardData(model: SightModel, options: FieldCardDataOptions =
     sameAirAsSightIn: !asked,
     rows,
     shift,
+    wind: windTable(there, distances),
     cautions: [...FIELD_CARD_CAUTIONS],
   };
 }

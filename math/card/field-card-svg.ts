@@ -19,7 +19,9 @@ const STRIPE = '#ececec';
  * sight-in; the air the marks are for; the slope table (one row per angle, one
  * column per slant distance; each box: the mark to hold, the distance to set
  * on the sight-in tape, the rifleman's-rule distance and the difference); the
- * level marks in the card's air against the sight-in's; the cautions. Each
+ * level marks in the card's air against the sight-in's; the crosswind drift
+ * (in/cm at the target) and hold (mm at the sight) for three wind speeds on
+ * the same distance columns; the cautions, wind's among them. Each
  * box is a <g data-angle data-distance data-mark-mm data-aim-as-if> for
  * tests and tools. The outer rectangle is the cut line.
  *
@@ -45,7 +47,7 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
   text(data.sameAirAsSightIn ? 'Marks for the sight-in air' : `Marks for ${airWords(data.air)}`, NUMERAL_FONT, MARGIN_MM, y, 2.4);
   y += 3.2;
   for (const line of wrapText(
-    `Each box: the mark to hold (mm, large); ≈ the distance to set on your sight-in tape (${unit}); the rifleman's rule, slant × cos(angle), and the set distance minus it (${unit}). ≈ none: no level distance has that mark; hold the mark itself.`,
+    `Each box: mark to hold (mm); ≈ distance to set on the sight-in tape (${unit}); rifleman's rule, slant × cos(angle), and the set distance minus it. ≈ none: hold the mark.`,
     SMALL_PRINT_FONT,
     1.6,
     contentMm,
@@ -65,12 +67,12 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
   data.distances.forEach((distance, index) => text(`${formatDistance(distance)} ${unit}`, NUMERAL_FONT, columnX(index), y + 2.4, 2.2, 'middle'));
   y += 3.6;
   parts.push(`<line x1="${MARGIN_MM}" y1="${fixed(y)}" x2="${widthMm - MARGIN_MM}" y2="${fixed(y)}" stroke="${INK}" stroke-width="0.2"/>`);
-  const rowMm = 8.2;
+  const rowMm = 6.9;
   data.anglesDeg.forEach((angleDeg, row) => {
     const top = y + row * rowMm;
     if (row % 2 === 1) parts.push(`<rect x="${MARGIN_MM}" y="${fixed(top)}" width="${contentMm}" height="${rowMm}" fill="${STRIPE}"/>`);
-    text(angleLabel(angleDeg), NUMERAL_FONT, MARGIN_MM + 0.6, top + 3.4, 2.4);
-    text(angleDeg === 0 ? 'level' : angleDeg > 0 ? 'uphill' : 'downhill', SMALL_PRINT_FONT, MARGIN_MM + 0.6, top + 6.2, 1.6, 'start', SOFT);
+    text(angleLabel(angleDeg), NUMERAL_FONT, MARGIN_MM + 0.6, top + 2.9, 2.3);
+    text(angleDeg === 0 ? 'level' : angleDeg > 0 ? 'uphill' : 'downhill', SMALL_PRINT_FONT, MARGIN_MM + 0.6, top + 5.5, 1.6, 'start', SOFT);
     data.distances.forEach((distance, column) => {
       const cell = data.rows.find((candidate) => candidate.angleDeg === angleDeg && candidate.distance === distance);
       const x = columnX(column);
@@ -80,10 +82,10 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
       if (!cell || cell.markMm === null) {
         text('out of reach', SMALL_PRINT_FONT, x, top + 4.6, 1.6, 'middle', SOFT);
       } else {
-        text(formatNumber(cell.markMm, 1), NUMERAL_FONT, x, top + 3.0, 2.6, 'middle');
-        text(cell.aimAsIf === null ? '≈ none' : `≈ ${formatNumber(cell.aimAsIf, 1)}`, NUMERAL_FONT, x, top + 5.4, 1.8, 'middle');
+        text(formatNumber(cell.markMm, 1), NUMERAL_FONT, x, top + 2.6, 2.4, 'middle');
+        text(cell.aimAsIf === null ? '≈ none' : `≈ ${formatNumber(cell.aimAsIf, 1)}`, NUMERAL_FONT, x, top + 4.6, 1.7, 'middle');
         const difference = cell.aimAsIfMinusHorizontal === null ? '—' : signed(cell.aimAsIfMinusHorizontal, 1);
-        text(`${formatNumber(cell.horizontal, 1)}  ${difference}`, NUMERAL_FONT, x, top + 7.6, 1.6, 'middle', SOFT);
+        text(`${formatNumber(cell.horizontal, 1)}  ${difference}`, NUMERAL_FONT, x, top + 6.5, 1.6, 'middle', SOFT);
       }
       parts.push('</g>');
     });
@@ -92,8 +94,8 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
   parts.push(`<line x1="${MARGIN_MM}" y1="${fixed(y)}" x2="${widthMm - MARGIN_MM}" y2="${fixed(y)}" stroke="${INK}" stroke-width="0.2"/>`);
   parts.push('</g>');
 
-  // Level marks in the card's air against the sight-in's.
-  y += 4.2;
+  // Level marks in the card's air against the sight-in's, and the crosswind, on the same distance columns.
+  y += 3.8;
   text(data.sameAirAsSightIn ? 'Level marks, sight-in air (mm)' : 'Level marks here against the sight-in (mm)', NUMERAL_FONT, MARGIN_MM, y, 2.2);
   const labelColumnMm = 14;
   const shiftColumnMm = (contentMm - labelColumnMm) / Math.max(1, data.shift.length);
@@ -120,10 +122,33 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
   }
   parts.push('</g>');
 
+  // Crosswind: per speed, the drift at the target (in/cm) and the hold at the sight (mm).
+  y += 1.2;
+  parts.push(`<line x1="${MARGIN_MM}" y1="${fixed(y)}" x2="${widthMm - MARGIN_MM}" y2="${fixed(y)}" stroke="${SOFT}" stroke-width="0.15"/>`);
+  const wind = data.wind;
+  for (const line of wrapText(`Crosswind from 3 or 9 o'clock, level: drift in/cm at the target; hold mm at the sight, into the wind (from 1, 5, 7, 11 o'clock: half)`, SMALL_PRINT_FONT, 1.6, contentMm)) {
+    y += 2.3;
+    text(line, SMALL_PRINT_FONT, MARGIN_MM, y, 1.6, 'start', SOFT);
+  }
+  parts.push(`<g class="wind" data-speed-unit="${wind.speedUnit}">`);
+  for (const row of wind.rows) {
+    y += 2.6;
+    text(`${formatDistance(row.speed)} ${wind.speedUnit}`, NUMERAL_FONT, MARGIN_MM, y, 1.9);
+    row.cells.forEach((cell, index) => {
+      parts.push(`<g data-wind="${row.speed}" data-distance="${cell.distance}" data-drift-cm="${cell.driftCm ?? ''}" data-hold-mm="${cell.holdMm ?? ''}">`);
+      text(cell.driftIn === null || cell.driftCm === null ? '—' : `${formatNumber(cell.driftIn, 1)}/${formatNumber(cell.driftCm, Math.abs(cell.driftCm) < 9.95 ? 1 : 0)}`, NUMERAL_FONT, shiftX(index), y, 1.9, 'middle');
+      text(cell.holdMm === null ? '' : formatNumber(cell.holdMm, 1), NUMERAL_FONT, shiftX(index), y + 2.1, 1.6, 'middle', SOFT);
+      parts.push('</g>');
+    });
+    text('hold', SMALL_PRINT_FONT, MARGIN_MM, y + 2.1, 1.6, 'start', SOFT);
+    y += 2.1;
+  }
+  parts.push('</g>');
+
   // Cautions.
-  y += 4.4;
+  y += 3.6;
   parts.push('<g class="cautions">');
-  for (const caution of data.cautions) {
+  for (const caution of [...data.cautions, wind.caution]) {
     for (const line of wrapText(caution, SMALL_PRINT_FONT, 1.6, contentMm)) {
       text(line, SMALL_PRINT_FONT, MARGIN_MM, y, 1.6);
       y += 2.3;

@@ -126,6 +126,15 @@ describe('the printed field card', () => {
     const labels = Array.from(doc.getElementsByTagName('path') as unknown as ArrayLike<Element>).map((path) => path.getAttribute('aria-label'));
     expect(labels).toContain('Marks for 2700 m, standard temperature');
     expect(labels).toContain('Slope and altitude corrections are estimates; confirm on real terrain.');
+    // The crosswind table: 5, 10, 15 mph at each distance, the JSON's holds, and the wind caution.
+    expect(json.wind.rows.map((row) => row.speed)).toEqual([5, 10, 15]);
+    const wind = Array.from(doc.getElementsByTagName('g') as unknown as ArrayLike<Element>).filter((g) => (g.getAttribute('data-wind') ?? '') !== '');
+    expect(wind).toHaveLength(9);
+    for (const box of wind) {
+      const cell = json.wind.rows.find((row) => row.speed === Number(box.getAttribute('data-wind')))!.cells.find((c) => c.distance === Number(box.getAttribute('data-distance')))!;
+      expect(Number(box.getAttribute('data-hold-mm'))).toBeCloseTo(cell.holdMm!, 9);
+    }
+    expect(labels.join(' ')).toMatch(/only practice in wind confirms them/);
     // Everything drawn stays on the card.
     expect(Number(svg.getAttribute('data-content-bottom-mm'))).toBeLessThan(146);
   });

@@ -11,6 +11,8 @@ import {
   FIELD_CARD_SIZE_MM,
   PREDICTED_CAUTION,
   SLOPE_CAUTION,
+  WIND_CAUTION,
+  crosswindDriftM,
   type SightModel,
 } from '@/math';
 import { TRUE_MODEL, inputWith, marksOf } from './helpers';
@@ -135,6 +137,49 @@ describe('field card SVG', () => {
     expect(words.join(' ')).toMatch(/Follow the hunting rules/);
     const shifts = elements(doc, 'g').filter((g) => g.getAttribute('data-row') === 'shift');
     expect(shifts).toHaveLength(6);
+  });
+});
+
+describe('field card wind table', () => {
+  it('gives drift (cm, in) and hold (mm) for 5, 10, 15 mph at each card distance, in the card air, from crosswindDriftM', () => {
+    const card = fieldCardData(fit.model, { distances: [20, 40, 60], air: { altitudeM: 2700 } });
+    expect(card.wind.speedUnit).toBe('mph');
+    expect(card.wind.rows.map((row) => row.speed)).toEqual([5, 10, 15]);
+    const there = { ...fit.model, airDensityKgM3: card.air.airDensityKgM3 };
+    for (const row of card.wind.rows) {
+      expect(row.crossMps).toBeCloseTo(row.speed * 0.44704, 12); // 1 mph = 0.44704 m/s exactly
+      for (const cell of row.cells) {
+        const drift = crosswindDriftM(there, cell.distance, row.crossMps);
+        expect(cell.driftCm!).toBeCloseTo(drift * 100, 9);
+        expect(cell.driftIn!).toBeCloseTo((drift * 1000) / 25.4, 9);
+        expect(cell.holdMm!).toBeCloseTo((drift * 1000 * fit.model.sightRadiusMm) / 1000 / (cell.distance * 0.9144), 9);
+      }
+      // Grows with distance.
+      expect(row.cells[2].driftCm!).toBeGreaterThan(row.cells[1].driftCm!);
+    }
+    expect(card.wind.caution).toBe(WIND_CAUTION);
+  });
+
+  it('uses km/h (8, 16, 24) for an archer in metres', () => {
+    const metric = fieldCardData({ ...fit.model, distanceUnit: 'm' }, { distances: [20, 40] });
+    expect(metric.wind.speedUnit).toBe('km/h');
+    expect(metric.wind.rows.map((row) => row.speed)).toEqual([8, 16, 24]);
+    expect(metric.wind.rows[0].crossMps).toBeCloseTo(8 / 3.6, 12);
+  });
+
+  it('is printed on the card with its caution, inside the card', () => {
+    const card = fieldCardData(fit.model, { distances: [20, 30, 40, 50, 60, 70], air: { altitudeM: 2700, temperatureC: -12 } });
+    const doc = parseSvg(fieldCardSvg(card, labels));
+    const cells = elements(doc, 'g').filter((g) => g.getAttribute('data-wind') !== null && g.getAttribute('data-wind') !== '');
+    expect(cells).toHaveLength(18);
+    const ten60 = cells.find((g) => g.getAttribute('data-wind') === '10' && g.getAttribute('data-distance') === '60')!;
+    const cell = card.wind.rows[1].cells[4];
+    expect(numberAttribute(ten60, 'data-hold-mm')).toBeCloseTo(cell.holdMm!, 9);
+    expect(elements(ten60, 'path').map((path) => path.getAttribute('aria-label'))).toEqual([`${cell.driftIn!.toFixed(1)}/${cell.driftCm! < 9.95 ? cell.driftCm!.toFixed(1) : cell.driftCm!.toFixed(0)}`, cell.holdMm!.toFixed(1)]);
+    const words = elements(doc, 'path').map((path) => path.getAttribute('aria-label') ?? '').join(' ');
+    expect(words).toContain('Wind varies along the path');
+    expect(words).toContain('only practice in wind');
+    expect(numberAttribute(doc.documentElement!, 'data-content-bottom-mm')).toBeLessThan(146);
   });
 });
 
