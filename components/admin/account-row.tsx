@@ -24,14 +24,24 @@ export interface AccountRowProps {
   selfId: number;
 }
 
+const roleWords: Record<Role, string> = { archer: 'an archer', tech: 'a technician', admin: 'an administrator' };
+const roleMeaning: Record<Role, string> = {
+  archer: 'They own bows and their records.',
+  tech: 'They work on bows archers share with them: they may add records there, never change or delete the archer’s.',
+  admin: 'They can change every account’s role, disable accounts and read the whole audit log.',
+};
+
 /**
- * One account in the administrator's list: its role (changed at once) and
- * a disable / enable action (disabling asks first: it signs the person out everywhere).
+ * One account in the administrator's list: its role (a new role is asked
+ * about first, then "Saved" says it took) and a disable / enable action
+ * (disabling asks first: it signs the person out everywhere).
  * Example: `<AccountRow account={account} selfId={me.id} />`
  */
 export function AccountRow({ account, selfId }: AccountRowProps) {
   const update = useUpdateAccount();
   const [asking, setAsking] = useState(false);
+  const [newRole, setNewRole] = useState<Role | null>(null);
+  const [saved, setSaved] = useState<string | null>(null);
   const self = account.id === selfId;
   return (
     <Card testID={`account-${account.id}`}>
@@ -53,11 +63,44 @@ export function AccountRow({ account, selfId }: AccountRowProps) {
         label="Role"
         hint={self ? 'Your own role stays administrator.' : undefined}
         options={roleOptions}
-        value={account.role}
+        value={newRole ?? account.role}
         disabled={self || update.isPending}
-        onChange={(role) => update.mutate({ id: account.id, update: { role } })}
+        onChange={(role) => {
+          setSaved(null);
+          update.reset();
+          setNewRole(role === account.role ? null : role);
+        }}
         testID={`role-${account.id}`}
       />
+      {newRole ? (
+        <ConfirmBar
+          title={`Make ${account.name} ${roleWords[newRole]}?`}
+          message={`${roleMeaning[newRole]} The change takes effect on their next request.`}
+          confirmLabel="Change the role"
+          pendingLabel="Saving…"
+          pending={update.isPending}
+          onConfirm={() =>
+            update.mutate(
+              { id: account.id, update: { role: newRole } },
+              {
+                onSuccess: () => {
+                  setSaved(`Saved: ${account.name} is now ${roleWords[newRole]}.`);
+                  setNewRole(null);
+                },
+              },
+            )
+          }
+          onCancel={() => setNewRole(null)}
+          testID={`role-confirm-${account.id}`}
+        />
+      ) : null}
+      <View accessibilityLiveRegion="polite">
+        {saved ? (
+          <Text variant="small" tone="verified" testID={`role-saved-${account.id}`}>
+            {saved}
+          </Text>
+        ) : null}
+      </View>
       {update.isError ? (
         <Banner tone="error" title="Could not change the account">
           {update.error.message}

@@ -6,10 +6,17 @@ import { accountListResponseSchema, adminAccountSchema, type AccountList, type A
 import { auditListResponseSchema, type AuditList } from '@/shared/audit';
 import type { Role } from '@/shared/auth';
 
+/** The administrator's audit filters: one bow, one account, one kind of record. */
+export interface AuditFilters {
+  bowId?: number;
+  accountId?: number;
+  kind?: string;
+}
+
 export const adminKeys = {
   all: ['admin'] as const,
   accounts: (q: string, role: Role | 'all', page: number) => ['admin', 'accounts', q, role, page] as const,
-  audit: (page: number) => ['admin', 'audit', page] as const,
+  audit: (page: number, filters: AuditFilters = {}) => ['admin', 'audit', page, filters] as const,
 };
 
 /**
@@ -38,11 +45,15 @@ export function useUpdateAccount() {
   });
 }
 
-/** The whole audit log, newest first, 50 a page. */
-export function useAdminAudit(page: number) {
+/** The whole audit log, newest first, 50 a page; narrowed by bow, account and kind when given. */
+export function useAdminAudit(page: number, filters: AuditFilters = {}) {
+  const params = new URLSearchParams({ page: String(page) });
+  if (filters.bowId) params.set('bowId', String(filters.bowId));
+  if (filters.accountId) params.set('accountId', String(filters.accountId));
+  if (filters.kind) params.set('kind', filters.kind);
   return useQuery<AuditList, ApiError>({
-    queryKey: adminKeys.audit(page),
-    queryFn: () => apiFetch(`/api/admin/audit?page=${page}`, { schema: auditListResponseSchema }),
+    queryKey: adminKeys.audit(page, filters),
+    queryFn: () => apiFetch(`/api/admin/audit?${params.toString()}`, { schema: auditListResponseSchema }),
     placeholderData: keepPreviousData,
   });
 }

@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
+import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { borders, colors, radii, space } from '@/components/theme';
 import type { AuditEntry } from '@/shared/audit';
@@ -15,6 +16,7 @@ const actionWords: Record<string, string> = {
   'role-changed': 'Role changed',
   disabled: 'Disabled',
   enabled: 'Enabled',
+  'account-deleted': 'Account deleted',
 };
 
 const roleWords: Record<string, string> = { archer: 'archer', tech: 'technician', admin: 'administrator' };
@@ -23,16 +25,23 @@ const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyl
 
 export interface AuditListProps {
   entries: AuditEntry[];
-  /** Show which bow each entry is about (the administrator's log). */
+  /** Show which bow each entry is about, with its archer (the administrator's log). */
   showBow?: boolean;
+  /** Offer "only this bow" / "only this account" on each entry (the administrator's filters). */
+  onFilter?: (filter: { bow?: { id: number; nickname: string }; account?: { id: number; name: string } }) => void;
   testID?: string;
+}
+
+/** The bow an entry is about, in words: "Fen slider (Rhoswen Alder’s)"; null when it names no bow (or the bow is gone). */
+function bowWords(entry: AuditEntry): string | null {
+  return entry.bow ? `${entry.bow.nickname} (${entry.bow.ownerName || 'a former account'}’s)` : null;
 }
 
 /**
  * Audit entries as a list, newest first: when, who (with their role), what.
  * Example: `<AuditList entries={audit.data.entries} />`
  */
-export function AuditList({ entries, showBow = false, testID }: AuditListProps) {
+export function AuditList({ entries, showBow = false, onFilter, testID }: AuditListProps) {
   return (
     <View style={styles.list} testID={testID}>
       {entries.map((entry) => (
@@ -47,9 +56,27 @@ export function AuditList({ entries, showBow = false, testID }: AuditListProps) 
           </View>
           <Text>{entry.summary}</Text>
           <Text variant="small" tone="soft">
-            {entry.actor ? `By ${entry.actor.name} (${roleWords[entry.actor.role] ?? entry.actor.role})` : 'By a removed account'}
-            {showBow && entry.bowId ? ` · bow ${entry.bowId}` : ''}
+            {entry.actor
+              ? `By ${entry.actor.name} (${roleWords[entry.actor.role] ?? entry.actor.role})`
+              : entry.action === 'account-deleted'
+                ? 'By the account’s owner'
+                : 'By a former account'}
+            {showBow && bowWords(entry) ? ` · on ${bowWords(entry)}` : ''}
+            {showBow && entry.account ? ` · account ${entry.account.name} <${entry.account.email}>` : ''}
           </Text>
+          {onFilter ? (
+            <View style={styles.filters}>
+              {entry.bow ? (
+                <Button label={`Only ${entry.bow.nickname}`} variant="quiet" onPress={() => onFilter({ bow: entry.bow! })} testID={`audit-${entry.id}-only-bow`} />
+              ) : null}
+              {entry.actor ? (
+                <Button label={`Only ${entry.actor.name}`} variant="quiet" onPress={() => onFilter({ account: entry.actor! })} testID={`audit-${entry.id}-only-actor`} />
+              ) : null}
+              {entry.account && entry.account.id !== entry.actor?.id ? (
+                <Button label={`Only ${entry.account.name}`} variant="quiet" onPress={() => onFilter({ account: entry.account! })} />
+              ) : null}
+            </View>
+          ) : null}
         </View>
       ))}
     </View>
@@ -68,4 +95,5 @@ const styles = StyleSheet.create({
   },
   top: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', gap: space.sm },
   action: { color: colors.info },
+  filters: { flexDirection: 'row', flexWrap: 'wrap', marginLeft: -space.md },
 });

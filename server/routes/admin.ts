@@ -4,7 +4,7 @@ import { validate } from '@/server/middleware/validate';
 import { currentUser, requireRole, requireUser } from '@/server/middleware/auth';
 import * as accounts from '@/server/services/account-service';
 import * as audit from '@/server/services/audit-service';
-import { auditQuerySchema } from '@/shared/audit';
+import { adminAuditQuerySchema, type AdminAuditQuery } from '@/shared/audit';
 
 export function adminRoutes() {
   const router = Router();
@@ -16,8 +16,9 @@ export function adminRoutes() {
     const { id } = req.params as unknown as { id: number };
     res.json({ account: await accounts.updateAccount(currentUser(req), id, req.body) });
   });
-  router.get('/audit', validate({ query: auditQuerySchema }), async (req, res) => {
-    res.json(await audit.listAllAudit((req.query as unknown as { page: number }).page));
+  // ?page=&bowId=&accountId=&kind= (kind: a record kind, e.g. "share", "account", "session-mark").
+  router.get('/audit', validate({ query: adminAuditQuerySchema }), async (req, res) => {
+    res.json(await audit.listAllAudit(req.query as unknown as AdminAuditQuery));
   });
   return router;
 }

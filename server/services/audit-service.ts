@@ -12,11 +12,11 @@
  * Example: api.use(auditTrail());   // once, before the routers
  *          await listBowAudit(marit, 12, 1)  → { entries: [{ action: 'created', recordType: 'level-check', … }], … }
  */
-import type { Model, ModelStatic, Sequelize, Transaction } from 'sequelize';
+import { Op, type Model, type ModelStatic, type Sequelize, type Transaction, type WhereOptions } from 'sequelize';
 import { ApiError } from '@/server/errors';
 import { ArrowBuild, ArrowSet, AuditEntry, Bow, LevelCheck, PaperTuneRun, SightSession, User } from '@/server/models';
 import { bowFor } from '@/server/services/bow-access';
-import type { AuditEntry as AuditEntryJson, AuditList } from '@/shared/audit';
+import type { AdminAuditQuery, AuditEntry as AuditEntryJson, AuditList } from '@/shared/audit';
 import { auditContext, currentActor } from './audit-context';
 
 const PAGE_SIZE = 50;
@@ -37,12 +37,19 @@ export async function recordAudit(input: AuditInput, transaction?: Transaction |
   await AuditEntry.create({ ...input, summary }, { transaction: transaction ?? undefined });
 }
 
-function entryJson(entry: AuditEntry): AuditEntryJson {
+type Names = { bows: Map<number, { id: number; nickname: string; userId: number }>; users: Map<number, { id: number; name: string; email: string }> };
+
+function entryJson(entry: AuditEntry, names: Names): AuditEntryJson {
+  const bow = entry.bowId !== null ? names.bows.get(entry.bowId) : undefined;
+  const owner = bow ? names.users.get(bow.userId) : undefined;
+  const subject = entry.recordType === 'account' && entry.recordId !== null ? names.users.get(entry.recordId) : undefined;
   return {
     id: entry.id,
     actor: entry.actor ? { id: entry.actor.id, name: entry.actor.name, role: entry.actor.role } : null,
     action: entry.action,
     bowId: entry.bowId,
+    bow: bow ? { id: bow.id, nickname: bow.nickname, ownerId: bow.userId, ownerName: owner?.name ?? '' } : null,
+    account: subject ? { id: subject.id, name: subject.name, email: subject.email } : null,
     recordType: entry.recordType,
     recordId: entry.recordId,
     summary: entry.summary,
@@ -50,7 +57,20 @@ function entryJson(entry: AuditEntry): AuditEntryJson {
   };
 }
 
-async function page(where: Record<string, unknown>, pageNumber: number): Promise<AuditList> {
+/** The bows (with their archers) and the accounts a page of entries names, in two queries. */
+async function namesOf(entries: readonly AuditEntry[]): Promise<Names> {
+  const bowIds = [...new Set(entries.map((entry) => entry.bowId).filter((id): id is number => id !== null))];
+  const bows = bowIds.length ? await Bow.findAll({ where: { id: { [Op.in]: bowIds } }, attributes: ['id', 'nickname', 'userId'] }) : [];
+  const userIds = new Set(bows.map((bow) => bow.userId));
+  for (const entry of entries) if (entry.recordType === 'account' && entry.recordId !== null) userIds.add(entry.recordId);
+  const users = userIds.size ? await User.findAll({ where: { id: { [Op.in]: [...userIds] } }, attributes: ['id', 'name', 'email'] }) : [];
+  return {
+    bows: new Map(bows.map((bow) => [bow.id, { id: bow.id, nickname: bow.nickname, userId: bow.userId }])),
+    users: new Map(users.map((user) => [user.id, { id: user.id, name: user.name, email: user.email }])),
+  };
+}
+
+async function page(where: WhereOptions, pageNumber: number): Promise<AuditList> {
   const { rows, count } = await AuditEntry.findAndCountAll({
     where,
     include: [{ model: User, as: 'actor', attributes: ['id', 'name', 'role'] }],
@@ -58,7 +78,8 @@ async function page(where: Record<string, unknown>, pageNumber: number): Promise
     limit: PAGE_SIZE,
     offset: (pageNumber - 1) * PAGE_SIZE,
   });
-  return { entries: rows.map(entryJson), total: count, page: pageNumber, pageSize: PAGE_SIZE };
+  const names = await namesOf(rows);
+  return { entries: rows.map((row) => entryJson(row, names)), total: count, page: pageNumber, pageSize: PAGE_SIZE };
 }
 
 /** GET /api/bows/:id/audit — for the bow's archer: every entry about the bow, newest first. */
@@ -68,9 +89,35 @@ export async function listBowAudit(user: User, bowId: number, pageNumber = 1): P
   return page({ bowId }, pageNumber);
 }
 
-/** GET /api/admin/audit — every entry, newest first. */
-export async function listAllAudit(pageNumber = 1): Promise<AuditList> {
-  return page({}, pageNumber);
+/**
+ * GET /api/admin/audit — every entry, newest first; narrowed to one bow, one
+ * account (what it did, what was done to the account, and everything about
+ * its bows) and one kind of record when asked.
+ * Example: await listAllAudit({ page: 1, accountId: 7, kind: 'share' }) → the shares of account 7's bows and of account 7 as technician
+ */
+export async function listAllAudit({ page: pageNumber, bowId, accountId, kind }: AdminAuditQuery = { page: 1 }): Promise<AuditList> {
+  const conditions: WhereOptions[] = [];
+  if (bowId !== undefined) conditions.push({ bowId });
+  if (kind !== undefined) conditions.push({ recordType: kind });
+  let account: { id: number; name: string } | null = null;
+  if (accountId !== undefined) {
+    const found = await User.findByPk(accountId, { attributes: ['id', 'name'] });
+    account = found ? { id: found.id, name: found.name } : null;
+    const owned = (await Bow.findAll({ where: { userId: accountId }, attributes: ['id'] })).map((b) => b.id);
+    conditions.push({
+      [Op.or]: [{ actorId: accountId }, { recordType: 'account', recordId: accountId }, ...(owned.length ? [{ bowId: { [Op.in]: owned } }] : [])],
+    });
+  }
+  const bow = bowId !== undefined ? await Bow.findByPk(bowId, { attributes: ['id', 'nickname'] }) : null;
+  const [list, kinds] = await Promise.all([
+    page(conditions.length ? { [Op.and]: conditions } : {}, pageNumber),
+    AuditEntry.findAll({ attributes: ['recordType'], group: ['recordType'], order: [['recordType', 'ASC']], raw: true }),
+  ]);
+  return {
+    ...list,
+    kinds: kinds.map((row) => row.recordType),
+    filters: { bow: bow ? { id: bow.id, nickname: bow.nickname } : null, account },
+  };
 }
 
 // ---- The audit trail: hooks on the records that hang off a bow ----
