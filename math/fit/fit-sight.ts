@@ -246,9 +246,10 @@ export function fitSight(input: FitInput): FitResult {
   const next = nextDistance(covariance, grid, (band) => !marked(band.distance), sigmaEffective);
 
   if (oneMark) {
-    const at = (distance: number) => predicted.find((mark) => Math.abs(mark.distance - distance) < 1e-9 && Number.isFinite(mark.sigmaMm));
+    // The band where the archer will shoot next (or the widest predicted one).
+    const nextBand = next !== null ? bandAt(next) : null;
     const widest = predicted.filter((mark) => Number.isFinite(mark.sigmaMm)).reduce<PredictedMark | null>((a, b) => (a && a.sigmaMm >= b.sigmaMm ? a : b), null);
-    const shown = (next !== null ? at(next) : undefined) ?? widest;
+    const shown = nextBand && Number.isFinite(nextBand.sigmaMm) ? nextBand : widest;
     model.oneMark = { distance: marks[0].distance, nextDistance: next };
     warnings.unshift({
       code: 'one-mark',
