@@ -1,4 +1,6 @@
-import { DevMailScreen } from '@/components/dev-mail/dev-mail-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const DevMailScreen = lazyScreen('DevMailScreen');
 
 export default function DevMail() {
   return <DevMailScreen />;

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { InviteScreen } from '@/components/shares/invite-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const InviteScreen = lazyScreen('InviteScreen');
 
 export default function Invite() {
   const { token } = useLocalSearchParams<{ token?: string }>();

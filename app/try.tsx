@@ -1,4 +1,6 @@
-import { TryScreen } from '@/components/try/try-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const TryScreen = lazyScreen('TryScreen');
 
 export default function Try() {
   return <TryScreen />;

@@ -1,4 +1,6 @@
-import { AccountScreen } from '@/components/account/account-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const AccountScreen = lazyScreen('AccountScreen');
 
 export default function Account() {
   return <AccountScreen />;

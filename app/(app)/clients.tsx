@@ -1,4 +1,6 @@
-import { ClientsScreen } from '@/components/clients/clients-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const ClientsScreen = lazyScreen('ClientsScreen');
 
 export default function Clients() {
   return <ClientsScreen />;

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { PrintSheetScreen } from '@/components/print/print-sheet-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const PrintSheetScreen = lazyScreen('PrintSheetScreen');
 
 export default function PrintSheet() {
   const { session, source, ...layout } = useLocalSearchParams<Record<string, string>>();

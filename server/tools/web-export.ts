@@ -8,7 +8,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { finishWebExport } from './web-pwa';
 
-const SOURCES = ['app', 'components', 'shared', 'math', 'assets', 'app.json', 'babel.config.js', 'package-lock.json', 'server/tools/web-pwa.ts'];
+const SOURCES = ['app', 'components', 'shared', 'math', 'assets', 'app.json', 'babel.config.js', 'package-lock.json', 'metro.config.js', 'server/tools/web-pwa.ts'];
 
 function newestMtime(target: string): number {
   if (!fs.existsSync(target)) return 0;

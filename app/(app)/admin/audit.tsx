@@ -1,4 +1,6 @@
-import { AdminAuditScreen } from '@/components/admin/audit-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const AdminAuditScreen = lazyScreen('AdminAuditScreen');
 
 export default function AdminAudit() {
   return <AdminAuditScreen />;

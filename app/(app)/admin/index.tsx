@@ -1,4 +1,6 @@
-import { AccountsScreen } from '@/components/admin/accounts-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const AccountsScreen = lazyScreen('AccountsScreen');
 
 export default function AdminAccounts() {
   return <AccountsScreen />;

@@ -1,4 +1,6 @@
-import { NewBowScreen } from '@/components/bows/new-bow-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const NewBowScreen = lazyScreen('NewBowScreen');
 
 export default function NewBow() {
   return <NewBowScreen />;

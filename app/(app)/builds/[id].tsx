@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { BuildScreen } from '@/components/builds/build-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const BuildScreen = lazyScreen('BuildScreen');
 
 export default function Build() {
   const { id } = useLocalSearchParams<{ id: string }>();

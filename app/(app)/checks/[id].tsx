@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { CheckScreen } from '@/components/level/check-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const CheckScreen = lazyScreen('CheckScreen');
 
 export default function LevelCheck() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { CompareScreen } from '@/components/compare/compare-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const CompareScreen = lazyScreen('CompareScreen');
 
 export default function CompareBuilds() {
   const { id, builds } = useLocalSearchParams<{ id: string; builds?: string }>();

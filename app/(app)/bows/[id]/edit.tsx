@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { EditBowScreen } from '@/components/bows/edit-bow-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const EditBowScreen = lazyScreen('EditBowScreen');
 
 export default function EditBow() {
   const { id } = useLocalSearchParams<{ id: string }>();

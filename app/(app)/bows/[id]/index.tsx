@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { BowScreen } from '@/components/bows/bow-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const BowScreen = lazyScreen('BowScreen');
 
 export default function Bow() {
   const { id } = useLocalSearchParams<{ id: string }>();

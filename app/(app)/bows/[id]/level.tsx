@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { LevelScreen } from '@/components/level/level-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const LevelScreen = lazyScreen('LevelScreen');
 
 export default function BowLevel() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { PredictScreen } from '@/components/predict/predict-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const PredictScreen = lazyScreen('PredictScreen');
 
 export default function PredictBuild() {
   const { id, from } = useLocalSearchParams<{ id: string; from?: string }>();

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { ReadinessScreen } from '@/components/level/readiness-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const ReadinessScreen = lazyScreen('ReadinessScreen');
 
 export default function BowReadiness() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { BowSharingScreen } from '@/components/shares/bow-sharing-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const BowSharingScreen = lazyScreen('BowSharingScreen');
 
 export default function BowSharing() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { FieldCardScreen } from '@/components/field-card/field-card-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const FieldCardScreen = lazyScreen('FieldCardScreen');
 
 export default function FieldCard() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { MarksImportScreen } from '@/components/import-export/marks-import-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const MarksImportScreen = lazyScreen('MarksImportScreen');
 
 export default function ImportMarks() {
   const { id } = useLocalSearchParams<{ id: string }>();

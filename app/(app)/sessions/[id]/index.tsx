@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { SessionScreen } from '@/components/sessions/session-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const SessionScreen = lazyScreen('SessionScreen');
 
 export default function Session() {
   const { id } = useLocalSearchParams<{ id: string }>();

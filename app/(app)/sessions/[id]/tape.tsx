@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { TapeScreen } from '@/components/tapes/tape-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const TapeScreen = lazyScreen('TapeScreen');
 
 export default function Tape() {
   const { id, tape } = useLocalSearchParams<{ id: string; tape?: string }>();

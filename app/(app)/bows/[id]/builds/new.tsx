@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { NewBuildScreen } from '@/components/builds/new-build-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const NewBuildScreen = lazyScreen('NewBuildScreen');
 
 export default function NewBuild() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { NewSessionScreen } from '@/components/sessions/new-session-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const NewSessionScreen = lazyScreen('NewSessionScreen');
 
 export default function NewSession() {
   const { id, build } = useLocalSearchParams<{ id: string; build?: string }>();

@@ -1,0 +1,19 @@
+// Expo's default Metro config, plus one redirect that keeps the web bundle small:
+// @hookform/resolvers' zod resolver imports `zod/v4/core` for zod 4 schemas; ours
+// are zod 3, so that import is answered by a stub (components/shell/zod-v4-core-stub.js).
+const path = require('node:path');
+const { getDefaultConfig } = require('expo/metro-config');
+
+const config = getDefaultConfig(__dirname);
+const zodV4CoreStub = path.resolve(__dirname, 'components/shell/zod-v4-core-stub.js');
+const resolversDir = `${path.sep}@hookform${path.sep}resolvers${path.sep}`;
+const upstream = config.resolver.resolveRequest;
+
+config.resolver.resolveRequest = (context, moduleName, platform) => {
+  if (moduleName === 'zod/v4/core' && context.originModulePath.includes(resolversDir)) {
+    return { type: 'sourceFile', filePath: zodV4CoreStub };
+  }
+  return (upstream ?? context.resolveRequest)(context, moduleName, platform);
+};
+
+module.exports = config;
