@@ -44,6 +44,12 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByLabel('Password').fill('a long enough password');
     await page.getByRole('button', { name: /create account/i }).click();
     await page.getByText(/add your first bow/i).first().waitFor({ timeout: 15_000 });
+    // Yards at sign-up brings inches for lengths; this archer measures in millimetres (account page).
+    await page.goto('/account');
+    await page.getByTestId('unit-lengthUnit').getByRole('radio', { name: 'Millimetres' }).click();
+    await page.getByTestId('units-saved').waitFor();
+    await page.goto('/');
+    await page.getByText(/add your first bow/i).first().waitFor({ timeout: 15_000 });
 
     // Add a bow: bad input first (nothing saved), then its sight radius and peep height.
     await page.getByText(/add your first bow/i).first().click();
@@ -152,9 +158,11 @@ for (const size of [PHONE, DESKTOP]) {
     await page.waitForFunction(() => (window as unknown as { printCalls: number }).printCalls > 0, undefined, { timeout: 10_000 });
     const natural = await sheet.evaluate((img: HTMLImageElement) => ({ width: img.naturalWidth, css: img.style.width }));
     expect(natural.width).toBeGreaterThan(0);
-    expect(natural.css).toMatch(/mm$/);
+    // On screen the preview shrinks to fit (min(100%, paper width)); printed, it is the paper's true size.
+    expect(natural.css).toMatch(/^min\(100%, [\d.]+mm\)$/);
     const pageRule = await page.evaluate(() => Array.from(document.querySelectorAll('style')).map((style) => style.textContent ?? '').find((css) => css.includes('@page')) ?? '');
     expect(pageRule).toMatch(/@page \{ size: (A4|letter); margin: 0; \}/);
+    expect(pageRule).toMatch(/\.pw-sheet \{[^}]*width: (210|215\.9)mm !important; height: (297|279\.4)mm !important/);
     await screenshot(page, 'print-sheet');
 
     // Back on the Bench, the bow's card shows its readiness at a glance, and opens the bow.
@@ -296,11 +304,11 @@ it('takes lengths in inches from an archer who prefers them, and stores millimet
   await page.getByLabel('Nickname').fill('Cobble creek hunter');
   await page.getByLabel('Draw weight').fill('55');
   await page.getByLabel('Draw length').fill('28');
-  // Too short a sight radius: the message gives the limit in mm and in inches.
+  // Too short a sight radius: the message gives the limit in the unit typed (400 mm = 15.748 in, rounded up).
   await page.getByLabel('Sight radius').fill('12');
   await page.getByLabel('Peep height').fill('4.25');
   await page.getByTestId('bow-save').click();
-  await page.getByText('Sight radius must be at least 400 mm (15.75 in)').waitFor();
+  await page.getByText('Sight radius must be at least 15.75 in').waitFor();
   await screenshot(page, 'bow-new-inches');
   await page.getByLabel('Sight radius').fill('33');
   await page.getByTestId('bow-save').click();
