@@ -160,9 +160,17 @@ export const paperSchema = z.enum(['a4', 'letter'], { errorMap: () => ({ message
 const label = (what: string) =>
   z.string({ invalid_type_error: `Enter the ${what} as text` }).trim().max(60, `Keep the ${what} to 60 characters`).optional();
 
-/** Small-print labels on the sheet: bow, build and date, free text. */
+/** Small-print labels on the sheet: bow, build and date, free text; `note` is printed large under the title (e.g. "confirm at the range"). */
 export const sheetLabelsSchema = z
-  .object({ bow: label('bow name'), build: label('build name'), date: label('date') }, { invalid_type_error: 'Enter the labels as an object' })
+  .object(
+    {
+      bow: label('bow name'),
+      build: label('build name'),
+      date: label('date'),
+      note: z.string({ invalid_type_error: 'Enter the note as text' }).trim().max(300, 'Keep the note to 300 characters').optional(),
+    },
+    { invalid_type_error: 'Enter the labels as an object' },
+  )
   .strict();
 
 const sheetFields = {

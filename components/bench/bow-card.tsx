@@ -38,6 +38,11 @@ export function BowCard({ bow }: { bow: BowSummary }) {
             <ReadinessBadge state={tape.state} label={tape.label} subject="Tape" />
             <ReadinessBadge state={state} subject="Level" />
           </View>
+          {bow.readiness.confirm ? (
+            <Text variant="small" tone="due" testID={`bow-card-${bow.id}-confirm`}>
+              {bow.readiness.confirm.reason}
+            </Text>
+          ) : null}
           {level.success && level.data.reason ? (
             <Text variant="small" testID={`bow-card-${bow.id}-level-reason`}>
               {level.data.reason}

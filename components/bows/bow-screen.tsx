@@ -48,6 +48,7 @@ function Readiness({ bow }: { bow: BowDetail }) {
       <View style={styles.readinessLinks}>
         <Button label="Level checks and changes" variant="secondary" href={`/bows/${bow.id}/level`} testID="open-level" />
         <Button label="Before a trip" variant="quiet" href={`/bows/${bow.id}/readiness`} />
+        <Button label="Tuning and arrows" variant="secondary" href={`/bows/${bow.id}/tuning`} testID="open-tuning" />
       </View>
     </View>
   );

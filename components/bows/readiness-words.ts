@@ -51,12 +51,16 @@ export function fitWords(summary: Pick<SessionFitSummary, 'rmsMm' | 'markCount' 
 export function sightInWords(readiness: BowReadiness): ReadinessWords {
   const latest = readiness.latestSession;
   if (!latest) return { state: 'none', label: 'Not sighted in', detail: 'No sight-in session yet.' };
+  // A change after it (and no tape to carry the message): shared/staleness.ts.
+  if (readiness.confirm && readiness.confirm.tapeId === null) return { state: 'due', label: 'Confirm at the range', detail: readiness.confirm.reason };
   const words = fitWords(latest);
   return { ...words, detail: `Last sight-in ${formatDay(latest.date)}: ${words.detail}` };
 }
 
 /** The tape part of a bow's readiness. */
 export function tapeWords(readiness: BowReadiness): ReadinessWords {
+  // A change that moves the point of impact came after the tape's sight-in: shared/staleness.ts.
+  if (readiness.confirm && readiness.confirm.tapeId !== null) return { state: 'due', label: 'Confirm at the range', detail: readiness.confirm.reason };
   if (readiness.hasTape) return { state: 'verified', label: 'Tape saved', detail: 'A tape layout is saved; confirm it at the range.' };
   if (readiness.latestSession) return { state: 'due', label: 'No tape yet', detail: 'Sighted in, but no tape layout saved.' };
   return { state: 'none', label: 'No tape', detail: 'A tape comes from a sight-in.' };

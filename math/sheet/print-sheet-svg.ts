@@ -68,6 +68,14 @@ export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): s
     y += LINE_MM;
   }
   y += 1.5;
+  if (labels.note) {
+    // A header note the caller wants read first (e.g. "confirm at the range" after a change to the bow), large.
+    for (const line of wrapText(labels.note, NUMERAL_FONT, TITLE_MM * 0.8, usableMm)) {
+      text(line, NUMERAL_FONT, MARGIN_MM, y + 1, TITLE_MM * 0.8, 'class="caution" data-caution="header-note"');
+      y += TITLE_MM * 1.1;
+    }
+    y += 1;
+  }
   if (model.oneMark) {
     // A tape from one mark is an estimate everywhere but that mark: say so first, large, with where to shoot next.
     const next = model.oneMark.nextDistance;

@@ -215,7 +215,7 @@ function sheetOptionsOf(layout: TapeLayout, labels: SheetLabelsIn) {
   const clip = (text: string | undefined) => (text ? text.slice(0, 60) : undefined);
   return {
     paper: layout.paper,
-    labels: { bow: clip(labels.bow), build: clip(labels.build), date: clip(labels.date) },
+    labels: { bow: clip(labels.bow), build: clip(labels.build), date: clip(labels.date), note: labels.note ? labels.note.slice(0, 300) : undefined },
     variants: true,
     tape: tapeOptionsOf(layout),
   };

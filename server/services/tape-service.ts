@@ -12,6 +12,8 @@ import { tapeLayoutSchema, type Tape as TapeOut, type TapeLayout, type TapeQuery
 import { findOwnSession } from './session-service';
 import { bowFor, type BowCapability } from './bow-access';
 import { sheetPdfFor, sheetSvgFor, tapeSvgFor, type SheetLabelsIn } from './fit-service';
+import { stalenessOfSession } from './staleness-service';
+import { sheetNote } from '@/shared/staleness';
 
 /** Distance unit conversion for defaults: yards ↔ metres, exact (international yard and pound, 1959). */
 const YARD_M = 0.9144;
@@ -142,13 +144,20 @@ function fileStem(bow: Bow, session: SightSession): string {
   return `${slug || 'bow'}-${session.date}`;
 }
 
-/** The small print on a sheet: bow nickname (with the tape's label), build name, session date; the sheet adds the marks. */
+/**
+ * The small print on a sheet: bow nickname (with the tape's label), build name, session date; the sheet adds the marks.
+ * When a change after the sight-in means the marks must be confirmed at the range (shared/staleness.ts), the header says so.
+ */
 async function sheetLabels(session: SightSession & { bow: Bow }, layout: TapeLayout): Promise<SheetLabelsIn> {
-  const build = await ArrowBuild.findByPk(session.buildId, { attributes: ['name'] });
+  const [build, staleness] = await Promise.all([
+    ArrowBuild.findByPk(session.buildId, { attributes: ['name'] }),
+    stalenessOfSession(session.bowId, session.id),
+  ]);
   return {
     bow: layout.label ? `${session.bow.nickname} · ${layout.label}` : session.bow.nickname,
     build: build?.name ?? '',
     date: session.date,
+    note: sheetNote(staleness) ?? undefined,
   };
 }
 

@@ -137,10 +137,17 @@ describe('change → readiness (the staleness rule on the bow and the Bench)', (
     await archer.agent.patch(`/api/bows/${bow.id}`).set(CSRF).send({ nickname: 'Renamed' });
     expect((await archer.agent.get(`/api/bows/${bow.id}/changes`)).body.changes).toHaveLength(1);
 
+    // The printed sheet's header says so too.
+    const staleSheet = await archer.agent.get(`/api/sessions/${session.id}/sheet.svg`).buffer(true);
+    expect(staleSheet.status).toBe(200);
+    expect(String(staleSheet.body)).toContain('data-caution="header-note"');
     const confirmed = await archer.agent.post(`/api/sessions/${session.id}/confirm-range`).set(CSRF).send({ note: '20 and 60 held' });
     expect(confirmed.status).toBe(201);
     expect(confirmed.body).toMatchObject({ state: 'current', confirmations: [{ note: '20 and 60 held' }] });
     expect((await archer.agent.get(`/api/bows/${bow.id}`)).body.bow.readiness.confirm).toBeNull();
+    const sheet = await archer.agent.get(`/api/sessions/${session.id}/sheet.svg`).buffer(true);
+    expect(sheet.status).toBe(200);
+    expect(String(sheet.body)).not.toContain('data-caution="header-note"');
   });
 
   test('a technician’s logged string change marks it too', async () => {
