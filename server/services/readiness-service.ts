@@ -7,16 +7,15 @@
  * before leaving. Sight-ins are named by shared/sight-in-name.ts.
  */
 import { Op } from 'sequelize';
-import { ArrowBuild, BowChange, SessionMark, SightSession, Tape, type User } from '@/server/models';
+import { ArrowBuild, SessionMark, SightSession, Tape, type User } from '@/server/models';
 import { readableBow } from '@/server/services/bow-access';
 import { levelSummaryForBows } from '@/server/services/level-service';
-import { bowChangeLabels } from '@/shared/level-status';
+import { stalenessForBows } from '@/server/services/staleness-service';
 import type { TripBuild, TripByBuild } from '@/shared/trip';
 import { sightInName } from '@/shared/sight-in-name';
 
 /** 1 yd = 0.9144 m exactly (international yard and pound agreement, 1959). */
 const metresPerYard = 0.9144;
-const dayMs = 24 * 60 * 60 * 1000;
 const inMetres = (distance: number, unit: 'yd' | 'm') => (unit === 'yd' ? distance * metresPerYard : distance);
 
 type StoredWarning = { code?: string; distance?: number; message?: string };
@@ -93,16 +92,14 @@ async function buildPart(
     warnings.push('Not sighted in yet: no confirmed marks and no tape for this build.');
   } else {
     if (marks.length < 2) warnings.push('The latest sight-in has fewer than two marks; a tape needs at least two.');
-    // Sessions carry a calendar date only: a change on a later date (UTC) is after it.
-    const changedSinceSession = await BowChange.findAll({
-      where: { bowId, changedAt: { [Op.gte]: new Date(new Date(`${latest.date}T00:00:00.000Z`).getTime() + dayMs) } },
-      order: [['changedAt', 'ASC'], ['id', 'ASC']],
-    });
-    if (changedSinceSession.length > 0) {
-      const first = changedSinceSession[0];
-      warnings.push(
-        `${bowChangeLabels[first.kind]} after the latest sight-in (${dayWords(latest.date)}): the marks may have moved; confirm them at the range.`,
-      );
+    // The one staleness rule (shared/staleness.ts): a change that moves the point of impact after
+    // this build's latest sight-in (or after the sight-in of its tape) means confirming at the range.
+    const staleness = (await stalenessForBows([bowId])).get(bowId);
+    const ofLatest = staleness?.bySession.get(latest.id);
+    if (ofLatest?.state === 'confirm') warnings.push(`Latest sight-in (${dayWords(latest.date)}): ${ofLatest.reason}`);
+    if (tapeRow && tapeSession && tapeSession.id !== latest.id) {
+      const ofTape = staleness?.bySession.get(tapeSession.id);
+      if (ofTape?.state === 'confirm') warnings.push(`Saved tape (${dayWords(tapeSession.date)}): ${ofTape.reason}`);
     }
     const span = tapeRow && tapeRow.sessionId === latest.id && tapeRow.unit === ((latest.fit as { distanceUnit?: string })?.distanceUnit ?? 'yd')
       ? { from: tapeRow.fromDistance, to: tapeRow.toDistance }

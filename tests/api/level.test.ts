@@ -493,10 +493,10 @@ describe('demo seed and the bows list', () => {
     const longest = Math.max(...res.body.marks.marks.map((m: { distance: number }) => m.distance));
     expect(res.body.marks.longestDistance).toBe(longest);
     expect(res.body.tape).not.toBeNull();
-    expect(res.body.warnings).toEqual([
-      'Level: New string 12 days after the last check.',
-      'New string after the latest sight-in (24 Oct 2026): the marks may have moved; confirm them at the range.',
-    ]);
+    expect(res.body.warnings).toHaveLength(2);
+    expect(res.body.warnings[0]).toBe('Level: New string 12 days after the last check.');
+    // The staleness rule's words (shared/staleness.ts): the change, its date, and what to do.
+    expect(res.body.warnings[1]).toMatch(/^Latest sight-in \(24 Oct 2026\): New string on \d{1,2} \w{3} \d{4}, after this sight-in: confirm the marks at the range\.$/);
     // The fit's "confirm at" distances all lie off this tape's span (20–60 yd), so none is listed.
     expect(res.body.tape).toMatchObject({ fromDistance: 20, toDistance: 60, unit: 'yd', fromLatestSession: true });
 
