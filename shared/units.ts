@@ -329,3 +329,14 @@ export function parseDateText(text: string | null | undefined, order: DateOrder 
   }
   return { iso: (dayFirst ?? monthFirst) as string };
 }
+
+/**
+ * The air of a sight-in or a hunt in the archer's units; a missing altitude is
+ * sea level (assumed), a missing temperature the standard one.
+ * Example: airInUnits({ altitudeM: 2804.16, temperatureC: 5 }, { altitudeUnit: 'ft', temperatureUnit: 'F' }) → '9200 ft, 41 °F'
+ */
+export function airInUnits(air: { altitudeM: number | null; temperatureC: number | null }, units: UnitsLike): string {
+  const altitude = air.altitudeM === null ? 'sea level (assumed)' : formatQuantity(air.altitudeM, 'altitude', units);
+  const temperature = air.temperatureC === null ? 'standard temperature' : formatQuantity(air.temperatureC, 'temperature', units).replace(/^-/, '−');
+  return `${altitude}, ${temperature}`;
+}

@@ -4,7 +4,7 @@ import { SvgXml } from 'react-native-svg';
 
 import { useUnits } from '@/components/account/use-units';
 import { quantityTextToStored } from '@/components/bows/form-numbers';
-import { messageInUnits, shownUnit } from '@/shared/units';
+import { airInUnits, messageInUnits, shownUnit } from '@/shared/units';
 import { formatDay } from '@/components/bows/readiness-words';
 import { formatFixed, formatSigned } from '@/components/compare/format';
 import { useFieldCard, fieldCardQueryString, type FieldCardParams } from '@/components/field-card/api';
@@ -108,7 +108,7 @@ export function FieldCardScreen({ sessionId }: { sessionId: number }) {
       />
 
       <Card>
-        <SectionHeading title="Where you will hunt" level={2} description={`Sight-in air: ${airWords(data.sightIn)}. Leave the altitude empty for that air.`} />
+        <SectionHeading title="Where you will hunt" level={2} description={`Sight-in air: ${airInUnits(data.sightIn, units)}. Leave the altitude empty for that air.`} />
         <View style={styles.airFields}>
           <View style={styles.airField}>
             <TextField label="Altitude" unit={shownUnit('altitude', units)} numeric value={altitudeText} onChangeText={setAltitudeText} error={altitudeError} placeholder="sight-in" testID="field-card-altitude" />
@@ -132,7 +132,7 @@ export function FieldCardScreen({ sessionId }: { sessionId: number }) {
 
       <Card>
         <SectionHeading
-          title={data.sameAirAsSightIn ? 'Marks for the sight-in air' : `Marks for ${airWords(data.air)}`}
+          title={data.sameAirAsSightIn ? 'Marks for the sight-in air' : `Marks for ${airInUnits(data.air, units)}`}
           level={2}
           description={`Each box: the mark to hold (mm, large); ≈ the distance to set on your sight-in tape; the rifleman’s rule (slant × cos angle) and how far the set distance differs from it (${data.unit}).`}
         />
@@ -204,7 +204,10 @@ function CardPreview({ card, labels }: { card: FieldCardData; labels: Parameters
   return (
     <View style={styles.preview} testID="field-card-preview">
       <View role="img" accessibilityLabel={`The printed field card for ${labels.bow}, ${labels.build}`} style={styles.paper}>
-        <SvgXml xml={xml} width={shownWidth} height={shownHeight} />
+        {/* The words are on the wrapper (role img + label); the drawing itself is hidden from assistive technology. */}
+        <View aria-hidden>
+          <SvgXml xml={xml} width={shownWidth} height={shownHeight} />
+        </View>
       </View>
     </View>
   );

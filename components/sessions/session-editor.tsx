@@ -19,6 +19,7 @@ import { DateField } from '@/components/sessions/date-field';
 import {
   airInStoredUnits,
   appendOnlyUpdate,
+  liveFitInUnits,
   keptRows,
   sessionFormDefaults,
   sessionFormResolverFor,
@@ -38,7 +39,7 @@ import type { DistanceUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import { checkMarks, type MarkCheckResult, type MarkProblem } from '@/shared/mark-checks';
 import type { Session, SessionInput } from '@/shared/session';
-import { shownUnit } from '@/shared/units';
+import { shownUnit, storedToText } from '@/shared/units';
 
 export interface SessionEditorProps {
   bow: BowDetail;
@@ -151,7 +152,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
     const build = bow.builds.find((item) => String(item.id) === text.buildId);
     return checkMarks(text.marks ?? [], { unit: text.unit, scaleDirection: bow.scaleDirection, peepHeightMm: bow.peepHeightMm, speedFps: build?.speedFps ?? null });
   }, [deferredKey, bow]);
-  const live = useMemo(() => liveFit(withoutProblemRows(JSON.parse(deferredKey) as LiveFitText, checks), bow, bow.builds), [deferredKey, bow, checks]);
+  const live = useMemo(() => liveFitInUnits(liveFit(withoutProblemRows(JSON.parse(deferredKey) as LiveFitText, checks), bow, bow.builds), units), [deferredKey, bow, checks, units]);
   const problemsByRow = useMemo(() => Object.fromEntries(checks.problems.map((problem) => [problem.row, problem])) as Record<number, MarkProblem>, [checks]);
   // A save made with no signal is kept on this phone (components/offline) until it is sent.
   const [keptId, setKeptId] = useState<string | null>(null);
@@ -230,7 +231,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
       ) : null}
       {chosen ? (
         <Text variant="small" tone="soft">
-          {buildLine(chosen.derived, chosen.speedFps)} · {chosen.diameterMm} mm shaft
+          {buildLine(chosen.derived, chosen.speedFps)} · {storedToText(chosen.diameterMm, 'length', units, shownUnit('length', units) === 'in' ? 3 : 1)} {shownUnit('length', units)} shaft
         </Text>
       ) : null}
       <FieldGrid minWidth={170}>

@@ -69,6 +69,18 @@ export function airInStoredUnits(text: { altitudeM?: string; temperatureC?: stri
 }
 
 /**
+ * A live fit refused for its air (altitude or temperature out of range) says
+ * the limits in the archer's units; anything else passes unchanged.
+ * Example: liveFitInUnits({ state: 'refused', field: 'altitudeM', message: 'Enter the altitude between -500 and 5500 m', … }, { altitudeUnit: 'ft' }).message
+ *   → 'Enter the altitude between -1640 and 18044 ft'
+ */
+export function liveFitInUnits<T extends { state: string }>(live: T, units: UnitsLike): T {
+  const refused = live as unknown as { state: string; field?: string; message?: string };
+  if (refused.state !== 'refused' || typeof refused.message !== 'string' || !/altitude|temperature/i.test(refused.field ?? '')) return live;
+  return { ...live, message: messageInUnits(refused.message, units, ['altitude', 'temperature']) };
+}
+
+/**
  * The form's text → the API's session input (the blank rows left out):
  * altitude and temperature from the archer's units to m and °C, the date from
  * ISO or the locale's numeric form to YYYY-MM-DD (left as typed when it cannot

@@ -67,6 +67,7 @@ export function TypedDateField<TValues extends FieldValues>({ control, name, lab
 
 const styles = StyleSheet.create({
   group: { gap: space.xxs },
-  row: { flexDirection: 'row', alignItems: 'flex-end', gap: space.sm },
-  text: { flexGrow: 1, flexShrink: 1 },
+  // The picker sits beside the text when there is room and wraps under it in a narrow column.
+  row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: space.sm },
+  text: { flexGrow: 1, flexShrink: 1, flexBasis: 170, minWidth: 150 },
 });

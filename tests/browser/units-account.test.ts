@@ -97,6 +97,7 @@ it('takes inches, feet and °F from a yards archer and stores mm, m and °C (390
   near(build.diameterMm, 6.2484); // 0.246 × 25.4
   near(build.pointGr, 125);
   near(build.speedFps, 282);
+  await page.getByTestId('start-session').waitFor();
 
   // The sight-in: the date picked on the browser's calendar, then typed month-first; altitude in feet, temperature in °F.
   await page.getByTestId('start-session').click();
@@ -117,6 +118,8 @@ it('takes inches, feet and °F from a yards archer and stores mm, m and °C (390
   await page.getByTestId('session-save').click();
   // 5000 m = 16404.2 ft, stated rounded down.
   await page.getByText('Altitude must be at most 16404 ft').waitFor();
+  // The live fit's own limit (5500 m) is stated in feet too.
+  await page.getByText('Enter the altitude between -1640 and 18044 ft').first().waitFor();
   await shot(page, 'units-session-error');
   await page.getByTestId('session-altitude').fill('9200');
   await page.getByTestId('session-save').click();
@@ -130,7 +133,7 @@ it('takes inches, feet and °F from a yards archer and stores mm, m and °C (390
   // The field card: the hunt's altitude and temperature in feet and °F, asked of the server in m and °C.
   await page.goto(`/sessions/${sessionId}/field-card`);
   await page.getByTestId('field-card-altitude').waitFor();
-  await page.getByText('Altitude').first().waitFor();
+  await page.getByText('Sight-in air: 9200 ft, 41 °F. Leave the altitude empty for that air.').waitFor();
   const asked = page.waitForRequest((request) => /\/field-card\?/.test(request.url()) && /altitudeM=3048(&|$)/.test(request.url()) && /temperatureC=-10(&|$)/.test(request.url()));
   await page.getByTestId('field-card-altitude').fill('10000'); // 3048 m
   await page.getByTestId('field-card-temperature').fill('14'); // −10 °C

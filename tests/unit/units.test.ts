@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 
 import {
+  airInUnits,
   formatQuantity,
   fromStored,
   localeDateOrder,
@@ -113,6 +114,14 @@ describe('shown values', () => {
     expect(formatQuantity(91.44, 'speed', { speedUnit: 'fps' })).toBe('91 fps');
     expect(formatQuantity(300, 'speed', metric)).toBe('91.4 m/s');
     expect(formatQuantity(undefined, 'mass', metric)).toBe('—');
+  });
+});
+
+describe('air in words', () => {
+  it('states a sight-in’s air in the archer’s units, and what is assumed when missing', () => {
+    expect(airInUnits({ altitudeM: 2804.16, temperatureC: 5 }, imperial)).toBe('9200 ft, 41 °F');
+    expect(airInUnits({ altitudeM: 2804.16, temperatureC: -10 }, metric)).toBe('2804 m, −10 °C');
+    expect(airInUnits({ altitudeM: null, temperatureC: null }, imperial)).toBe('sea level (assumed), standard temperature');
   });
 });
 
