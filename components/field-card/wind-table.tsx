@@ -8,8 +8,8 @@ import { Text } from '@/components/ui/text';
 import { colors, fonts, radii, space } from '@/components/theme';
 import type { FieldCardData } from '@/shared/field-card';
 
-const speedColumn = 64;
-const distanceColumn = 58;
+const speedColumn = 56;
+const distanceColumn = 50;
 
 /**
  * The crosswind table on screen, as the printed card has it: one row per wind
@@ -30,7 +30,7 @@ export function WindTable({ card }: { card: FieldCardData }) {
       <SectionHeading
         title="Crosswind"
         level={2}
-        description={`Wind from 3 or 9 o’clock, level shots, in the card’s air. Each box: the drift at the target (in, cm) and the hold at the sight: move the aim that many mm sideways at the pin, into the wind. From 1, 5, 7 or 11 o’clock: half of it; from 2, 4, 8 or 10: 0.87 of it.`}
+        description={`Wind from 3 or 9 o’clock, level shots, in the card’s air. Each box: the drift at the target (in, cm) and the hold at the sight (↔ mm): move the aim that far sideways at the pin, into the wind. From 1, 5, 7 or 11 o’clock: half of it; from 2, 4, 8 or 10: 0.87 of it.`}
       />
       <ScrollView horizontal contentContainerStyle={styles.scroll} onLayout={onLayout}>
         <View style={[styles.table, { width: Math.max(minWidth, roomWidth) }]} role="table" aria-label="Crosswind drift and hold">
@@ -46,9 +46,12 @@ export function WindTable({ card }: { card: FieldCardData }) {
           </View>
           {wind.rows.map((row, rowIndex) => (
             <View key={row.speed} style={[styles.row, rowIndex % 2 === 1 && styles.stripe]} role="row">
-              <Text variant="numeral" style={styles.speed} role="rowheader">
-                {row.speed} {wind.speedUnit}
-              </Text>
+              <View style={styles.speed} role="rowheader">
+                <Text variant="numeral">{row.speed}</Text>
+                <Text variant="caption" tone="soft">
+                  {wind.speedUnit}
+                </Text>
+              </View>
               {row.cells.map((cell) => (
                 <View key={cell.distance} style={styles.cell} role="cell" testID={`field-card-wind-${row.speed}-${cell.distance}`}>
                   {cell.driftIn === null || cell.driftCm === null ? (
@@ -59,7 +62,9 @@ export function WindTable({ card }: { card: FieldCardData }) {
                     <>
                       <Text style={styles.drift}>{formatFixed(cell.driftIn, 1)} in</Text>
                       <Text style={styles.metric}>{formatFixed(cell.driftCm, cell.driftCm < 9.95 ? 1 : 0)} cm</Text>
-                      <Text style={styles.hold}>hold {formatFixed(cell.holdMm, 1)} mm</Text>
+                      <Text style={styles.hold} accessibilityLabel={`hold ${formatFixed(cell.holdMm, 1)} mm at the sight`}>
+                        ↔ {formatFixed(cell.holdMm, 1)}
+                      </Text>
                     </>
                   )}
                 </View>
@@ -85,7 +90,7 @@ const styles = StyleSheet.create({
   speed: { width: speedColumn - space.xs },
   cell: { flex: 1, minWidth: distanceColumn - space.xs, alignItems: 'center' },
   centre: { textAlign: 'center' },
-  drift: { fontFamily: fonts.numeralBold, fontSize: 18, lineHeight: 22, color: colors.ink },
+  drift: { fontFamily: fonts.numeralBold, fontSize: 17, lineHeight: 21, color: colors.ink },
   metric: { fontFamily: fonts.numeral, fontSize: 15, lineHeight: 19, color: colors.ink },
-  hold: { fontFamily: fonts.numeral, fontSize: 14, lineHeight: 18, color: colors.inkSoft },
+  hold: { fontFamily: fonts.numeral, fontSize: 15, lineHeight: 19, color: colors.inkSoft },
 });

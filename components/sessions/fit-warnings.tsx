@@ -75,7 +75,7 @@ export function fitAdvice(live: LiveFit, checks?: MarkCheckResult): FitAdvice[] 
     if (problems.length > 0 && equipmentCodes.includes(warning.code)) continue;
     const title =
       warning.code === 'one-mark'
-        ? 'Estimate from one mark'
+        ? 'Only one distance sighted'
         : warning.code === 'outlier'
         ? 'A mark stands out'
         : warning.code === 'scatter'
@@ -84,7 +84,8 @@ export function fitAdvice(live: LiveFit, checks?: MarkCheckResult): FitAdvice[] 
     advice.push({ tone: 'warn', title, message: `${warning.message}.`, key: `${warning.code}-${warning.distance ?? ''}` });
   }
   const confirm = fit.marks.filter((mark) => mark.verify && Number.isFinite(mark.markMm) && !sighted(mark.distance)).map((mark) => mark.distance);
-  if (confirm.length > 0) {
+  // One mark: every other distance is to confirm, and the one-mark warning says so already.
+  if (confirm.length > 0 && fit.method !== 'one-mark') {
     advice.push({
       tone: 'warn',
       title: `Confirm at ${listDistances(confirm, unit)}`,
