@@ -93,7 +93,7 @@ function FitSummary({ live }: { live: Extract<LiveFit, { state: 'fit' }> }) {
   const figures = [
     { label: 'Arrow speed', value: `${fit.speedFps.toFixed(0)} fps` },
     { label: 'Marks', value: String(fit.residuals.length) },
-    { label: 'RMS off the fit', value: fit.method === 'two-mark' ? 'exact (2 marks)' : `${fit.rmsMm.toFixed(2)} mm` },
+    { label: 'RMS off the fit', value: fit.method === 'one-mark' ? 'estimate (1 mark)' : fit.method === 'two-mark' ? 'exact (2 marks)' : `${fit.rmsMm.toFixed(2)} mm` },
   ];
   return (
     <View style={styles.figures} testID="fit-summary">
