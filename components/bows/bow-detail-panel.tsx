@@ -7,6 +7,7 @@ import { bowSetupItems } from '@/components/bows/bow-setup-items';
 import { formatLength } from '@/components/bows/form-numbers';
 import { KeyValueList } from '@/components/bows/key-value-list';
 import { useBowRole } from '@/components/bows/use-bow-role';
+import { TuningSummary } from '@/components/tuning/tuning-summary';
 import { fitWords, formatDay } from '@/components/bows/readiness-words';
 import { buildLine, buildName } from '@/components/builds/build-words';
 import { Button } from '@/components/ui/button';
@@ -46,6 +47,7 @@ export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) 
         action={isOwner ? <Button label="Edit" variant="secondary" href={`/bows/${bow.id}/edit`} testID="bow-edit" /> : undefined}
       />
       <KeyValueList items={bowSetupItems(bow, unit)} />
+      <TuningSummary bowId={bow.id} unit={unit} />
       {!isOwner ? null : asking ? (
         <ConfirmBar
           title={`Delete ${bow.nickname}?`}

@@ -12,6 +12,7 @@ import { SetupEntryForm } from '@/components/tuning/setup-entry-form';
 import { TuningCautions } from '@/components/tuning/tuning-cautions';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { DownloadLink } from '@/components/ui/download-link';
 import { ErrorView } from '@/components/ui/error-view';
 import { PlusIcon } from '@/components/ui/icons';
 import { LoadingView } from '@/components/ui/loading-view';
@@ -174,6 +175,10 @@ export function TuningScreen({ bowId }: { bowId: number }) {
             {bow.builds.map((build) => (
               <RecordRow key={build.id} testID={`arrow-sets-${build.id}`} title={build.name} detail="Arrow sets" href={`/builds/${build.id}/arrows`} />
             ))}
+          </View>
+          <View style={styles.section}>
+            <SectionHeading title="Take them with you" level={2} description="Set-up entries, paper-tune shots, arrows and range confirmations, one row each (lengths in mm, weights in gr). The bow’s JSON export carries them too." />
+            <DownloadLink label="Download the tuning records (CSV)" href={`/api/bows/${bow.id}/tuning.csv`} fileName={`tuning-${bow.id}.csv`} testID="tuning-csv" />
           </View>
         </Screen>
       )}

@@ -7,6 +7,7 @@ import { hashPassword } from '@/server/services/auth-service';
 import { seedBowsStep } from './bows'; // bows.ts imports only the SeedStep type from here, so no import cycle
 import { seedLevelStep } from './level'; // likewise; runs after the bows it checks
 import { seedSharingStep } from './sharing'; // likewise; shares one of the seeded bows
+import { seedTuningStep } from './tuning'; // likewise; the hunting bow's tuning records
 
 export const demoAccounts = [
   { role: 'archer', name: 'Marit Oakhollow', email: 'marit@demo.pinwright.test', password: 'pinwright-archer' },
@@ -20,6 +21,7 @@ export const seedSteps: SeedStep[] = [];
 seedSteps.push(seedBowsStep);
 seedSteps.push(seedLevelStep);
 seedSteps.push(seedSharingStep);
+seedSteps.push(seedTuningStep);
 
 export async function seedDemo(): Promise<void> {
   const accounts = {} as Record<(typeof demoAccounts)[number]['role'], User>;

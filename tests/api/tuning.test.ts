@@ -1,6 +1,9 @@
 import { CSRF, closeDb, signedInAgent, testApp } from '@/tests/helpers/api';
 import { bowWithBuild, bowWithSession } from './bow-fixtures';
-import { AuditEntry, Share, User } from '@/server/models';
+import { AuditEntry, Bow, SetupEntry, Share, User } from '@/server/models';
+import { seedBows } from '@/server/seed/bows';
+import { seedLevel } from '@/server/seed/level';
+import { seedTuning } from '@/server/seed/tuning';
 
 const app = testApp();
 type Agent = Awaited<ReturnType<typeof signedInAgent>>['agent'];
@@ -233,5 +236,27 @@ describe('arrow sets', () => {
     expect((await archer.agent.post(`/api/arrows/${four.id}/fliers`).set(CSRF).send({ sessionId: other.session.id })).status).toBe(400);
     const json = await archer.agent.get(`/api/bows/${bow.id}/export.json`);
     expect(json.body.arrowSets[0].arrows).toHaveLength(6);
+  });
+});
+
+describe('demo seed', () => {
+  test('the hunting bow gets its invented tuning records once; its tape stays current and its level verified', async () => {
+    const seeded = await signedInAgent(app, { name: 'Seed Archer' });
+    const archer = (await User.findByPk(seeded.user.id))!;
+    await seedBows(archer);
+    await seedLevel(archer);
+    await seedTuning(archer);
+    await seedTuning(archer); // idempotent
+    const bow = (await Bow.findOne({ where: { userId: archer.id, nickname: 'Timberline slider' } }))!;
+    expect(await SetupEntry.count({ where: { bowId: bow.id } })).toBe(9);
+    const runs = (await seeded.agent.get(`/api/bows/${bow.id}/paper-tunes`)).body.runs;
+    expect(runs).toHaveLength(1);
+    expect(runs[0]).toMatchObject({ outcome: 'clean', distance: 5, unit: 'yd' });
+    const detail = (await seeded.agent.get(`/api/bows/${bow.id}`)).body.bow;
+    expect(detail.readiness.confirm).toBeNull();
+    expect(detail.readiness.level.state).toBe('verified');
+    const build = detail.builds.find((b: { name: string }) => b.name === 'Elk heavy');
+    const sets = (await seeded.agent.get(`/api/builds/${build.id}/arrow-sets`)).body.sets;
+    expect(sets[0].arrows).toHaveLength(6);
   });
 });
