@@ -2,7 +2,8 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { useBow } from '@/components/bows/api';
-import { formatLength, textToNumber } from '@/components/bows/form-numbers';
+import { useUnits } from '@/components/account/use-units';
+import { formatLength, quantityTextToStored } from '@/components/bows/form-numbers';
 import { formatDay } from '@/components/bows/readiness-words';
 import { buildLine } from '@/components/builds/build-words';
 import { useCompare, type CompareParams } from '@/components/compare/api';
@@ -25,6 +26,7 @@ import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { space } from '@/components/theme';
 import type { BowDetail } from '@/shared/bow';
+import { airInUnits, messageInUnits, shownUnit, storedToText } from '@/shared/units';
 
 /** Window width (px) from which the chart and the marks table sit side by side. */
 const splitFrom = 1100;
@@ -89,15 +91,21 @@ function CompareBody({ bow, initialBuilds }: { bow: BowDetail; initialBuilds: nu
   const [chosen, setChosen] = useState<number[]>(() => initialChoice(builds, initialBuilds));
   const [at, setAt] = useState('40');
   const [air, setAir] = useState<'sighted' | 'common'>('sighted');
-  const [altitudeText, setAltitudeText] = useState('2700');
+  // Altitude and temperature in the account's units (shared/units.ts); asked for in m and °C.
+  const units = useUnits();
+  const [altitudeText, setAltitudeText] = useState(() => storedToText(2700, 'altitude', units));
   const [temperatureText, setTemperatureText] = useState('');
 
-  const altitude = textToNumber(altitudeText);
-  const temperature = textToNumber(temperatureText);
+  const altitude = quantityTextToStored(altitudeText, 'altitude', units);
+  const temperature = quantityTextToStored(temperatureText, 'temperature', units);
   const altitudeError =
-    air === 'common' && (altitude === undefined || Number.isNaN(altitude) || altitude < -500 || altitude > 5000) ? 'Enter an altitude between -500 and 5000 m' : undefined;
+    air === 'common' && (altitude === undefined || Number.isNaN(altitude) || altitude < -500 || altitude > 5000)
+      ? messageInUnits('Enter an altitude between -500 and 5000 m', units)
+      : undefined;
   const temperatureError =
-    air === 'common' && temperature !== undefined && (Number.isNaN(temperature) || temperature < -40 || temperature > 50) ? 'Enter a temperature between -40 and 50 °C, or leave it empty' : undefined;
+    air === 'common' && temperature !== undefined && (Number.isNaN(temperature) || temperature < -40 || temperature > 50)
+      ? messageInUnits('Enter a temperature between -40 and 50 °C, or leave it empty', units)
+      : undefined;
   const params: CompareParams = { builds: chosen, at: Number(at) };
   if (air === 'common' && !altitudeError && !temperatureError) {
     params.altitudeM = altitude;
@@ -137,13 +145,13 @@ function CompareBody({ bow, initialBuilds }: { bow: BowDetail; initialBuilds: nu
         {air === 'common' ? (
           <View style={styles.airFields}>
             <View style={styles.airField}>
-              <TextField label="Altitude" unit="m" numeric value={altitudeText} onChangeText={setAltitudeText} error={altitudeError} testID="compare-altitude" />
+              <TextField label="Altitude" unit={shownUnit('altitude', units)} numeric value={altitudeText} onChangeText={setAltitudeText} error={altitudeError} testID="compare-altitude" />
             </View>
             <View style={styles.airField}>
               <TextField
                 label="Temperature"
                 hint="Empty: the standard air’s"
-                unit="°C"
+                unit={shownUnit('temperature', units)}
                 numeric
                 value={temperatureText}
                 onChangeText={setTemperatureText}
@@ -176,7 +184,7 @@ function CompareBody({ bow, initialBuilds }: { bow: BowDetail; initialBuilds: nu
             <Text variant="small" tone="soft">
               {compare.data.comparison.commonAirDensityKgM3 === null
                 ? 'Each build in the air of its own sight-in.'
-                : `Every build in one air: ${params.altitudeM} m${params.temperatureC !== undefined ? `, ${params.temperatureC} °C` : ', standard temperature'} (${compare.data.comparison.commonAirDensityKgM3.toFixed(3)} kg/m³).`}
+                : `Every build in one air: ${airInUnits({ altitudeM: params.altitudeM ?? null, temperatureC: params.temperatureC ?? null }, units)} (${compare.data.comparison.commonAirDensityKgM3.toFixed(3)} kg/m³).`}
               {' '}Sight radius {formatLength(bow.sightRadiusMm, 'mm')}, readings as your scale reads them.
             </Text>
           </View>
