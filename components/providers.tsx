@@ -8,14 +8,14 @@ import { isApiError } from '@/components/api/client';
 import { reportNoNetwork } from '@/components/offline/connectivity';
 import { OfflineNotice } from '@/components/offline/offline-notice';
 import { OfflineProvider } from '@/components/offline/offline-provider';
-import { cacheMaxAgeMs } from '@/components/offline/query-persistence';
 import { colors, fonts } from '@/components/theme';
 
+// The web subsets (assets/fonts/web/README.md); the full fonts are the server's, for tapes and PDFs.
 const fontFiles = {
-  AtkinsonHyperlegible_400Regular: require('@/assets/fonts/AtkinsonHyperlegible_400Regular.ttf'),
-  AtkinsonHyperlegible_700Bold: require('@/assets/fonts/AtkinsonHyperlegible_700Bold.ttf'),
-  BarlowCondensed_500Medium: require('@/assets/fonts/BarlowCondensed_500Medium.ttf'),
-  BarlowCondensed_600SemiBold: require('@/assets/fonts/BarlowCondensed_600SemiBold.ttf'),
+  AtkinsonHyperlegible_400Regular: require('@/assets/fonts/web/AtkinsonHyperlegible_400Regular.ttf'),
+  AtkinsonHyperlegible_700Bold: require('@/assets/fonts/web/AtkinsonHyperlegible_700Bold.ttf'),
+  BarlowCondensed_500Medium: require('@/assets/fonts/web/BarlowCondensed_500Medium.ttf'),
+  BarlowCondensed_600SemiBold: require('@/assets/fonts/web/BarlowCondensed_600SemiBold.ttf'),
 };
 
 const navigationTheme: NavigationTheme = {
@@ -54,9 +54,11 @@ function shouldRetry(failureCount: number, error: unknown): boolean {
 export function createQueryClient(): QueryClient {
   return new QueryClient({
     defaultOptions: {
-      // gcTime as long as the device keeps its copy: a query dropped from memory would drop from the device too.
-      queries: { retry: shouldRetry, staleTime: 30_000, refetchOnWindowFocus: false, gcTime: cacheMaxAgeMs },
-      mutations: { retry: false },
+      // Never dropped from memory: a query dropped there would drop from the device's copy too (kept cacheMaxAgeMs).
+      // Infinity, not 30 days: a timer beyond 2^31 − 1 ms (24.8 days) fires at once in browsers (HTML timers spec).
+      queries: { retry: shouldRetry, staleTime: 30_000, refetchOnWindowFocus: false, gcTime: Infinity },
+      // 'always': a write with no signal runs at once (and is kept in the outbox, or fails with a plain message), never hangs paused.
+      mutations: { retry: false, networkMode: 'always' },
     },
   });
 }
