@@ -110,7 +110,16 @@ function linkHead(dist: string, palette: Palette): void {
   const file = path.join(dist, 'index.html');
   let html = fs.readFileSync(file, 'utf8');
   if (html.includes(MANIFEST)) return;
+  // The fonts the first screen waits for (providers.tsx): fetched beside the script, not after it.
+  const fontDir = path.join(dist, 'assets');
+  const fonts = fs.existsSync(fontDir) ? listFiles(fontDir).filter((file) => /\.(ttf|otf|woff2)$/.test(file)) : [];
+  const preloads = fonts.map((file) => {
+    const href = `/${path.relative(dist, file).split(path.sep).join('/')}`;
+    const type = `font/${path.extname(file).slice(1)}`;
+    return `<link rel="preload" href="${href}" as="font" type="${type}" crossorigin />`;
+  });
   const tags = [
+    ...preloads,
     `<link rel="manifest" href="/${MANIFEST}" />`,
     '<link rel="apple-touch-icon" href="/icons/apple-touch-icon.png" />',
     `<meta name="theme-color" content="${palette.slate}" />`,
@@ -150,17 +159,16 @@ async function writeServiceWorker(dist: string): Promise<{ count: number; size: 
 const brotli = promisify(zlib.brotliCompress);
 const gzip = promisify(zlib.gzip);
 
+function listFiles(dir: string): string[] {
+  return fs.readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {
+    const full = path.join(dir, entry.name);
+    return entry.isDirectory() ? listFiles(full) : [full];
+  });
+}
+
 /** Writes <file>.br and <file>.gz beside each compressible file, when smaller. */
 export async function precompress(dist: string): Promise<{ files: number; raw: number; br: number }> {
-  const files: string[] = [];
-  const walk = (dir: string) => {
-    for (const entry of fs.readdirSync(dir, { withFileTypes: true })) {
-      const full = path.join(dir, entry.name);
-      if (entry.isDirectory()) walk(full);
-      else if (COMPRESSIBLE.test(entry.name)) files.push(full);
-    }
-  };
-  walk(dist);
+  const files = listFiles(dist).filter((file) => COMPRESSIBLE.test(file));
   let raw = 0;
   let br = 0;
   await Promise.all(
