@@ -1,0 +1,83 @@
+/**
+ * The "new version is ready" notice: nothing until a new service worker is
+ * waiting; then the notice, and Reload asks the waiting worker to take over
+ * and reloads once it has. workbox-window is replaced by a fake that lets the
+ * test play the browser's part.
+ */
+import { act, fireEvent, render, screen } from '@testing-library/react';
+
+type Listener = (event?: unknown) => void;
+const mockWorkboxes: MockWorkbox[] = [];
+class MockWorkbox {
+  listeners = new Map<string, Listener[]>();
+  register = jest.fn(async () => undefined);
+  update = jest.fn(async () => undefined);
+  messageSkipWaiting = jest.fn();
+  constructor(public url: string) {
+    mockWorkboxes.push(this);
+  }
+  addEventListener(type: string, listener: Listener) {
+    this.listeners.set(type, [...(this.listeners.get(type) ?? []), listener]);
+  }
+  emit(type: string) {
+    for (const listener of this.listeners.get(type) ?? []) listener({ type });
+  }
+}
+jest.mock('workbox-window', () => ({ Workbox: jest.fn((url: string) => new MockWorkbox(url)) }));
+
+import { UpdateNotice } from '@/components/shell/update-notice.web';
+
+const reload = jest.fn();
+beforeAll(() => {
+  (globalThis as { __DEV__?: boolean }).__DEV__ = false; // the notice is off under the Expo dev server
+  Object.defineProperty(navigator, 'serviceWorker', { value: {}, configurable: true });
+  Object.defineProperty(window, 'location', { value: { ...window.location, reload }, configurable: true });
+});
+afterAll(() => {
+  (globalThis as { __DEV__?: boolean }).__DEV__ = true;
+});
+beforeEach(() => {
+  mockWorkboxes.length = 0;
+  reload.mockClear();
+});
+
+it('registers /sw.js once the page has loaded and shows nothing while no update waits', () => {
+  render(<UpdateNotice />);
+  expect(mockWorkboxes).toHaveLength(1);
+  expect(mockWorkboxes[0].url).toBe('/sw.js');
+  // jsdom's document is already "complete": registration happens at once.
+  expect(mockWorkboxes[0].register).toHaveBeenCalledTimes(1);
+  expect(screen.queryByTestId('update-notice')).toBeNull();
+});
+
+it('shows the notice when a new worker waits, and Reload hands over before reloading', () => {
+  jest.useFakeTimers();
+  render(<UpdateNotice />);
+  const wb = mockWorkboxes[0];
+  // A worker taking control before the archer asked (first install) reloads nothing.
+  act(() => wb.emit('controlling'));
+  expect(reload).not.toHaveBeenCalled();
+
+  act(() => wb.emit('waiting'));
+  screen.getByText('A new version of Pinwright is ready.');
+  expect(wb.messageSkipWaiting).not.toHaveBeenCalled();
+  fireEvent.click(screen.getByRole('button', { name: 'Reload for the new version' }));
+  expect(wb.messageSkipWaiting).toHaveBeenCalledTimes(1);
+  screen.getByText('Reloading…');
+  expect(reload).not.toHaveBeenCalled();
+  act(() => wb.emit('controlling'));
+  expect(reload).toHaveBeenCalledTimes(1);
+  jest.useRealTimers();
+});
+
+it('reloads anyway when the hand-over is not reported within 3 s', () => {
+  jest.useFakeTimers();
+  render(<UpdateNotice />);
+  act(() => mockWorkboxes[0].emit('waiting'));
+  fireEvent.click(screen.getByRole('button', { name: 'Reload for the new version' }));
+  act(() => jest.advanceTimersByTime(2999));
+  expect(reload).not.toHaveBeenCalled();
+  act(() => jest.advanceTimersByTime(1));
+  expect(reload).toHaveBeenCalledTimes(1);
+  jest.useRealTimers();
+});
