@@ -16,6 +16,21 @@ const axisStyle = {
 };
 
 /**
+ * The chart in words (its text alternative): each build's fitted mark at the
+ * ends of the range and every 20 between.
+ * Example: compareChartWords(comparison) → 'Fitted marks by distance. Elk heavy: 20 yd 14.9 mm, 40 yd 22.7 mm, … Practice light: …'
+ */
+export function compareChartWords(comparison: BuildComparison): string {
+  const unit = comparison.unit;
+  const parts = comparison.curves.map((curve) => {
+    const points = curve.points.filter((point) => point.markMm !== null);
+    const shown = points.filter((point, index) => index === 0 || index === points.length - 1 || point.distance % 20 === 0);
+    return `${curve.label}: ${shown.map((point) => `${point.distance} ${unit} ${(point.markMm as number).toFixed(1)} mm`).join(', ') || 'no reachable marks'}`;
+  });
+  return `Fitted marks by distance. ${parts.join('. ')}.`;
+}
+
+/**
  * The fitted mark curves of the compared builds on one chart (victory, as the
  * sight-in chart), each in its own colour and dash, with a legend that shows
  * the same line samples.
@@ -38,7 +53,9 @@ export function CompareChart({ comparison }: { comparison: BuildComparison }) {
         Each build’s fitted marks from {first} to {last} {unit}: the higher a line, the lower the pin sits for that distance.
       </Text>
       {width > 0 ? (
-        <View role="img" accessibilityLabel={`Chart of the fitted mark curves of ${curves.map((curve) => curve.label).join(', ')}`}>
+        <View role="img" accessibilityLabel={`Chart: ${compareChartWords(comparison)}`} testID="compare-chart-img">
+          {/* The label above is the chart's text alternative; victory's own svg is hidden from assistive technology. */}
+          <View aria-hidden>
           <VictoryChart width={width} height={height} padding={{ top: 16, bottom: 48, left: 58, right: 16 }} domainPadding={{ y: 4 }}>
             <VictoryAxis crossAxis={false} label={`Distance (${unit})`} style={axisStyle} />
             <VictoryAxis dependentAxis crossAxis={false} label="Reading (mm)" style={axisStyle} />
@@ -50,6 +67,7 @@ export function CompareChart({ comparison }: { comparison: BuildComparison }) {
               />
             ))}
           </VictoryChart>
+          </View>
         </View>
       ) : null}
       <View style={styles.legend}>

@@ -30,7 +30,8 @@ export function SlopeTable({ card }: { card: FieldCardData }) {
   const onLayout = (event: LayoutChangeEvent) => setRoomWidth(Math.floor(event.nativeEvent.layout.width));
   const minWidth = angleColumn + distanceColumn * card.distances.length;
   return (
-    <ScrollView horizontal contentContainerStyle={styles.scroll} onLayout={onLayout}>
+    // Focusable with a name, so a keyboard can scroll it (WCAG 2.1.1; axe "scrollable-region-focusable").
+    <ScrollView horizontal contentContainerStyle={styles.scroll} onLayout={onLayout} tabIndex={0} aria-label="Marks for slopes (scrolls sideways)">
       <View style={[styles.table, { width: Math.max(minWidth, roomWidth) }]} role="table" aria-label="Marks for slopes" testID="field-card-table">
         <View style={[styles.row, styles.head]} role="row">
           <Text variant="label" style={styles.angle} role="columnheader">

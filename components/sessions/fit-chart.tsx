@@ -22,6 +22,32 @@ const axisStyle = {
   axisLabel: { fontFamily: fonts.body, fontSize: 14, fill: colors.inkSoft, padding: 30 },
 };
 
+const mm = (value: number) => `${value.toFixed(1)} mm`;
+const signed = (value: number) => `${value >= 0 ? '+' : '−'}${Math.abs(value).toFixed(2)} mm`;
+
+/**
+ * The first chart in words (its text alternative): the marks, then the fitted
+ * curve at its ends and every 20 between, and the band's width.
+ * Example: fitChartWords(fit, 1, marks) → 'Reading against distance. Your marks: 20 yd at 14.9 mm, … The fitted curve: 10 yd 10.2 mm, 30 yd 18.4 mm, …'
+ */
+export function fitChartWords(fit: FitResult, sign: 1 | -1, marks: UsableMark[]): string {
+  const unit = fit.distanceUnit;
+  const predicted = fit.marks.filter((mark) => Number.isFinite(mark.markMm) && Number.isFinite(mark.sigmaMm));
+  const shown = predicted.filter((mark, index) => index === 0 || index === predicted.length - 1 || mark.distance % 20 === 0);
+  const bands = predicted.map((mark) => mark.sigmaMm);
+  const markWords = marks.map((mark) => `${mark.distance} ${unit} at ${mm(mark.scaleMm)}`).join(', ');
+  const curveWords = shown.map((mark) => `${mark.distance} ${unit} ${mm(sign * mark.markMm)}`).join(', ');
+  const bandWords = bands.length ? ` Its one-sigma band is ±${Math.min(...bands).toFixed(2)} to ±${Math.max(...bands).toFixed(2)} mm wide.` : '';
+  return `Reading against distance. Your marks: ${markWords || 'none'}. The fitted curve: ${curveWords}.${bandWords}`;
+}
+
+/** The residual chart in words: each mark's residual, and whether it lies within the band. */
+export function residualChartWords(fit: FitResult, sign: 1 | -1): string {
+  const unit = fit.distanceUnit;
+  const words = fit.residuals.map((residual) => `${residual.distance} ${unit} ${signed(sign * residual.residualMm)}${residual.outlier ? ' (an outlier)' : ''}`);
+  return `Each mark's distance from the fit: ${words.join(', ') || 'none'}.`;
+}
+
 /**
  * Two charts of the live fit: the sighted marks on the fitted curve with its
  * one-sigma band, and the residuals (mark − fit) against the band around zero,
@@ -51,7 +77,9 @@ export function FitChart({ fit, sign, marks }: FitChartProps) {
         Dots: your marks. Line: the fit. Shading: its one-sigma band.
       </Text>
       {width > 0 ? (
-        <View accessibilityLabel={`Chart of ${marks.length} marks and the fitted curve from ${first} to ${last} ${unit}`} role="img">
+        <View accessibilityLabel={`Chart: ${fitChartWords(fit, sign, marks)}`} role="img" testID="fit-chart-marks">
+          {/* The label above is the chart's text alternative; victory's own svg is hidden from assistive technology. */}
+          <View aria-hidden>
           <VictoryChart width={width} height={height} padding={padding} domainPadding={{ y: 4 }}>
             <VictoryAxis crossAxis={false} offsetY={padding.bottom} label={`Distance (${unit})`} style={axisStyle} />
             <VictoryAxis dependentAxis crossAxis={false} offsetX={padding.left} label="Reading (mm)" style={axisStyle} />
@@ -59,6 +87,7 @@ export function FitChart({ fit, sign, marks }: FitChartProps) {
             <VictoryLine data={curve} style={{ data: { stroke: colors.signal, strokeWidth: 2.5 } }} />
             <VictoryScatter data={points} size={6} style={{ data: { fill: colors.slate, stroke: colors.surface, strokeWidth: 2 } }} />
           </VictoryChart>
+          </View>
         </View>
       ) : null}
 
@@ -69,7 +98,8 @@ export function FitChart({ fit, sign, marks }: FitChartProps) {
         How far each mark sits off the fit, against the band the fit expects (±1 sigma, mm).
       </Text>
       {width > 0 ? (
-        <View accessibilityLabel="Chart of each mark's residual against the fit's band" role="img">
+        <View accessibilityLabel={`Chart: ${residualChartWords(fit, sign)}`} role="img" testID="fit-chart-residuals">
+          <View aria-hidden>
           <VictoryChart width={width} height={Math.round(height * 0.7)} padding={padding} domain={{ x: [first, last], y: [-residualReach, residualReach] }}>
             <VictoryAxis crossAxis={false} offsetY={padding.bottom} label={`Distance (${unit})`} style={axisStyle} />
             <VictoryAxis dependentAxis crossAxis={false} offsetX={padding.left} label="mm" style={axisStyle} tickFormat={(tick: number) => tick.toFixed(2)} />
@@ -87,6 +117,7 @@ export function FitChart({ fit, sign, marks }: FitChartProps) {
               }}
             />
           </VictoryChart>
+          </View>
         </View>
       ) : null}
     </View>
