@@ -16,9 +16,13 @@ function paperOf(query: string): PaperName {
   return new URLSearchParams(query).get('paper') === 'a4' ? 'a4' : 'letter';
 }
 
-/** The print-only CSS: the page size, no margins, nothing but the sheet. */
+/**
+ * The print-only CSS: the page size, no margins, nothing but the sheet, at its
+ * true size (on screen the preview shrinks to fit a phone; on paper it never does).
+ */
 function printCss(paper: PaperName): string {
   const size = paper === 'a4' ? 'A4' : 'letter';
+  const { widthMm, heightMm } = PAPER_SIZES_MM[paper];
   return `
 @page { size: ${size}; margin: 0; }
 @media print {
@@ -26,7 +30,7 @@ function printCss(paper: PaperName): string {
   html, body, #root { height: auto !important; background: #fff !important; }
   .pw-no-print { display: none !important; }
   .pw-print-area { padding: 0 !important; margin: 0 !important; background: #fff !important; height: auto !important; }
-  .pw-sheet { box-shadow: none !important; margin: 0 !important; }
+  .pw-sheet { box-shadow: none !important; margin: 0 !important; width: ${widthMm}mm !important; height: ${heightMm}mm !important; max-width: none !important; }
 }`;
 }
 
@@ -88,7 +92,8 @@ export function PrintSheetScreen({ sessionId, query, source }: PrintSheetScreenP
           {TAPE_VIEW_CAUTION}
         </p>
         <p style={styles.note}>
-          In the print dialog choose {paper === 'a4' ? 'A4' : 'Letter'} paper, scale 100 % (“Actual size”), margins none.
+          In the print dialog choose {paper === 'a4' ? 'A4' : 'Letter'} paper, scale 100 % (“Actual size”), margins none. The preview here is shrunk to fit
+          your screen; the printed sheet is true size.
         </p>
         {sheet.isPending ? <p style={styles.note}>Drawing the sheet…</p> : null}
         {sheet.isError ? (
@@ -105,7 +110,8 @@ export function PrintSheetScreen({ sessionId, query, source }: PrintSheetScreenP
           data-testid="print-sheet"
           data-paper={paper}
           onLoad={onLoad}
-          style={{ ...styles.sheet, width: `${size.widthMm}mm`, height: `${size.heightMm}mm` }}
+          // On screen: as wide as the paper or the screen, whichever is less, keeping its shape; printed: true size (printCss).
+          style={{ ...styles.sheet, width: `min(100%, ${size.widthMm}mm)`, height: 'auto', aspectRatio: `${size.widthMm} / ${size.heightMm}` }}
         />
       ) : null}
     </div>
@@ -139,5 +145,5 @@ const styles: Record<string, CSSProperties> = {
   },
   note: { fontSize: 15, lineHeight: '22px', color: colors.inkSoft },
   error: { fontSize: 17, color: colors.failed, fontFamily: fonts.bold },
-  sheet: { display: 'block', margin: '0 auto', backgroundColor: '#fff', boxShadow: '0 2px 12px rgba(0,0,0,0.2)', maxWidth: 'none' },
+  sheet: { display: 'block', margin: '0 auto', backgroundColor: '#fff', boxShadow: '0 2px 12px rgba(0,0,0,0.2)', maxWidth: '100%' },
 };
