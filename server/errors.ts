@@ -34,6 +34,16 @@ export class ApiError extends Error {
   }
 }
 
+/**
+ * The record read back after a write, or a 404 when another request deleted
+ * it (or its bow) in the meantime, rather than a crash on null.
+ * Example: return checkJson(found(await loadCheck(id), 'That level check'));
+ */
+export function found<T>(value: T | null | undefined, what: string): T {
+  if (value === null || value === undefined) throw ApiError.notFound(what);
+  return value;
+}
+
 /** Zod issues → {"marks.1.distance": "…"}; the first problem per field wins. */
 export function fieldErrors(error: ZodError, prefix = ''): FieldErrors {
   const fields: FieldErrors = {};
@@ -86,6 +96,20 @@ export function clientError(err: unknown): ApiError | null {
   return new ApiError(status, status === 404 ? 'not_found' : 'bad_request', 'The request could not be read.');
 }
 
+/**
+ * Two requests writing the same rows at once: MariaDB picks a deadlock victim
+ * (error 1213) or gives up waiting for a lock (1205), or a row referred to was
+ * deleted by the other request meanwhile (a foreign-key failure). The
+ * transaction was rolled back; the client may simply send it again.
+ */
+function concurrentChange(err: unknown): boolean {
+  const e = err as { name?: string; parent?: { errno?: number }; original?: { errno?: number } } | null;
+  if (!e) return false;
+  if (e.name === 'SequelizeForeignKeyConstraintError' || e.name === 'SequelizeTimeoutError') return true;
+  const errno = e.parent?.errno ?? e.original?.errno;
+  return e.name === 'SequelizeDatabaseError' && (errno === 1213 || errno === 1205);
+}
+
 export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   let apiError: ApiError;
   if (err instanceof ApiError) apiError = err;
@@ -94,6 +118,9 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   else if (err?.type === 'entity.too.large') apiError = new ApiError(413, 'too_large', 'The request is too large.');
   else if (clientError(err)) apiError = clientError(err)!;
   else if (err?.name === 'SequelizeUniqueConstraintError') apiError = ApiError.conflict('That record already exists.');
+  else if (concurrentChange(err)) {
+    apiError = new ApiError(409, 'concurrent_change', 'These records were being changed by another request at the same moment. Nothing was saved; try again.');
+  }
   else if (err?.name === 'SequelizeConnectionRefusedError' || err?.name === 'SequelizeConnectionError') {
     apiError = new ApiError(503, 'db_unavailable', 'The database is not reachable; try again shortly.');
   } else {

@@ -10,7 +10,7 @@
  */
 import { UniqueConstraintError } from 'sequelize';
 import { sequelize } from '@/server/db';
-import { ApiError, validationError } from '@/server/errors';
+import { ApiError, validationError, found } from '@/server/errors';
 import { Arrow, ArrowBuild, ArrowFlier, ArrowSet, SightSession, User } from '@/server/models';
 import { bowFor } from '@/server/services/bow-access';
 import { personJson } from '@/server/services/tuning-service';
@@ -72,7 +72,7 @@ export async function createArrowSet(user: User, buildId: number, input: ArrowSe
     );
     return set.id;
   });
-  return setJson((await ArrowSet.findByPk(id, { include: setIncludes() }))!, build, bow.userId);
+  return setJson(found(await ArrowSet.findByPk(id, { include: setIncludes() }), 'That arrow set'), build, bow.userId);
 }
 
 /** The arrow, its set and build, when the user may change it (the archer, or whoever added the set). */
@@ -102,7 +102,7 @@ export async function updateArrow(user: User, arrowId: number, update: ArrowUpda
   if (!merged.success) throw validationError(merged.error);
   arrow.set({ ...merged.data, runout: merged.data.spinKind === 'thou' || merged.data.spinKind === 'mm' ? merged.data.runout : null });
   await arrow.save();
-  return setJson((await ArrowSet.findByPk(set.id, { include: setIncludes() }))!, build, bow.userId);
+  return setJson(found(await ArrowSet.findByPk(set.id, { include: setIncludes() }), 'That arrow set'), build, bow.userId);
 }
 
 /** POST /api/arrows/:id/fliers: the arrow flew out of the group at that sight-in (of the same bow). */
@@ -119,5 +119,5 @@ export async function addFlier(user: User, arrowId: number, input: { sessionId: 
     if (err instanceof UniqueConstraintError) throw ApiError.conflict(`Arrow ${arrow.number} is already marked as flying out at that sight-in.`);
     throw err;
   }
-  return setJson((await ArrowSet.findByPk(set.id, { include: setIncludes() }))!, build, bow.userId);
+  return setJson(found(await ArrowSet.findByPk(set.id, { include: setIncludes() }), 'That arrow set'), build, bow.userId);
 }

@@ -2,7 +2,7 @@
  * Bows: list with the Bench's readiness, read with everything hanging off it,
  * create, update, delete. Owner-scoped: another account's bow is "not found".
  */
-import { Op, type Transaction } from 'sequelize';
+import type { Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
 import { ArrowBuild, Bow, BowChange, SightSession, Tape, User } from '@/server/models';
@@ -15,14 +15,14 @@ import {
   type BowSummary,
   type BowUpdate,
 } from '@/shared/bow';
-import { buildOut, sessionCounts } from './build-service';
-import { addedByNames } from './added-by';
-import { markStats, sessionListItems } from './session-service';
+import { buildOut } from './build-service';
+import { sessionListItems } from './session-service';
 import { tapeOut } from './tape-service';
-import { levelSummaryForBows } from './level-service';
+import { levelSummaryForBows, type LevelFacts } from './level-service';
 import { photoKeysOfBow, removeStoredPhotos } from './photo-service';
 import { bowFor, type BowCapability } from './bow-access';
-import { stalenessForBows } from './staleness-service';
+import { stalenessForBows, type StalenessFacts } from './staleness-service';
+import { readBowFacts, type BowFacts } from './bow-read';
 
 /**
  * The bow with this id if `user` may use `capability` on it (bow-access.ts:
@@ -66,81 +66,90 @@ export function bowOut(bow: Bow): BowOut {
   };
 }
 
-/** Readiness of each bow in `bows`, in a fixed number of queries whatever the count. */
-async function readinessOf(bows: Bow[]): Promise<Map<number, BowReadiness>> {
-  const bowIds = bows.map((bow) => bow.id);
+/**
+ * Readiness of each bow from its facts (bow-read.ts): no further query but
+ * the level and staleness rules, which read the same facts.
+ */
+async function readinessFrom(all: BowFacts[]): Promise<Map<number, BowReadiness>> {
   const result = new Map<number, BowReadiness>();
-  if (bowIds.length === 0) return result;
-  const [builds, sessions, tapes, levels, staleness] = await Promise.all([
-    ArrowBuild.findAll({ where: { bowId: { [Op.in]: bowIds } }, attributes: ['id', 'bowId'] }),
-    SightSession.findAll({
-      where: { bowId: { [Op.in]: bowIds } },
-      attributes: ['id', 'bowId', 'date', 'fitRmsMm'],
-      order: [['date', 'DESC'], ['id', 'DESC']],
-    }),
-    Tape.findAll({
-      attributes: ['id'],
-      include: [{ model: SightSession, as: 'session', attributes: ['bowId'], where: { bowId: { [Op.in]: bowIds } } }],
-    }),
-    levelSummaryForBows(bowIds),
-    stalenessForBows(bowIds),
-  ]);
-  const latest = new Map<number, SightSession>();
-  for (const session of sessions) if (!latest.has(session.bowId)) latest.set(session.bowId, session);
-  const stats = await markStats([...latest.values()].map((session) => session.id));
-  for (const bow of bows) {
-    const session = latest.get(bow.id);
-    const markStat = session ? stats.get(session.id) : undefined;
-    result.set(bow.id, {
+  if (all.length === 0) return result;
+  const ids = all.map((facts) => facts.bow.id);
+  const levelFacts: LevelFacts = { checks: [], steps: [], performers: [], changes: [] };
+  const stale: StalenessFacts = { sessions: [], changes: [], builds: [], confirmations: [], tapes: [] };
+  const performers = new Map<number, { id: number; name: string }>();
+  for (const facts of all) {
+    levelFacts.checks.push(...facts.checks);
+    levelFacts.steps.push(...facts.steps);
+    levelFacts.changes.push(...facts.changes);
+    for (const person of facts.performers) performers.set(person.id, person);
+    stale.sessions.push(...facts.sessions);
+    stale.changes.push(...facts.changes);
+    stale.builds.push(...facts.builds);
+    stale.confirmations.push(...facts.confirmations);
+    stale.tapes.push(...facts.tapes);
+  }
+  levelFacts.performers = [...performers.values()];
+  // The orders the rules read: checks by completion, start, id (nulls last); changes oldest first; tapes newest first.
+  const time = (date: Date | null) => (date ? date.getTime() : -Infinity);
+  levelFacts.checks.sort((x, y) => time(y.completedAt) - time(x.completedAt) || time(y.startedAt) - time(x.startedAt) || y.id - x.id);
+  levelFacts.changes.sort((x, y) => x.changedAt.getTime() - y.changedAt.getTime() || x.id - y.id);
+  stale.tapes = [...stale.tapes].sort((x, y) => y.createdAt.getTime() - x.createdAt.getTime() || y.id - x.id);
+  const [levels, staleness] = await Promise.all([levelSummaryForBows(ids, new Date(), levelFacts), stalenessForBows(ids, stale)]);
+  for (const facts of all) {
+    const bowId = facts.bow.id;
+    const session = facts.sessions[0]; // newest first
+    result.set(bowId, {
       latestSession: session
         ? {
             id: session.id,
             date: session.date,
             rmsMm: session.fitRmsMm,
-            markCount: markStat?.markCount ?? 0,
-            longestDistance: markStat?.longestDistance ?? null,
-            longestUnit: markStat?.longestUnit ?? null,
+            markCount: session.markCount,
+            longestDistance: session.longestDistance,
+            longestUnit: session.longestUnit,
           }
         : null,
-      buildCount: builds.filter((build) => build.bowId === bow.id).length,
-      sessionCount: sessions.filter((s) => s.bowId === bow.id).length,
-      hasTape: tapes.some((tape) => (tape as Tape & { session: SightSession }).session.bowId === bow.id),
-      level: levels.get(bow.id) ?? null,
-      confirm: staleness.get(bow.id)?.confirm ?? null,
+      buildCount: facts.builds.length,
+      sessionCount: facts.sessions.length,
+      hasTape: facts.tapes.length > 0,
+      level: levels.get(bowId) ?? null,
+      confirm: staleness.get(bowId)?.confirm ?? null,
     });
   }
   return result;
 }
 
-/** GET /api/bows: the account's bows, oldest first, each with its readiness. */
+/** GET /api/bows: the account's bows, oldest first, each with its readiness (one query, bow-read.ts). */
 export async function listBows(user: User): Promise<BowSummary[]> {
-  const bows = await Bow.findAll({ where: { userId: user.id }, order: [['id', 'ASC']] });
-  const readiness = await readinessOf(bows);
-  return bows.map((bow) => ({ ...bowOut(bow), readiness: readiness.get(bow.id)! }));
+  const all = await readBowFacts({ userId: user.id }, user.id);
+  const readiness = await readinessFrom(all);
+  return all.map((facts) => ({ ...bowOut(facts.bow as Bow), readiness: readiness.get(facts.bow.id)! }));
 }
 
-/** GET /api/bows/:id: the bow, its owner's name, its builds, its sessions (newest first, with fit summaries) and its tapes. */
+/**
+ * GET /api/bows/:id: the bow, its owner's name, its builds, its sessions (newest first, with fit summaries) and its tapes.
+ * One query (bow-read.ts) that also answers whether `user` may read it: 404 when not, as bow-access.ts decides.
+ */
 export async function getBow(user: User, id: number): Promise<BowDetail> {
-  const bow = await findBow(user, id, 'read');
-  const [owner, readiness, builds, sessions, tapes] = await Promise.all([
-    bow.userId === user.id ? user : User.findByPk(bow.userId, { attributes: ['id', 'name'] }),
-    readinessOf([bow]),
-    ArrowBuild.findAll({ where: { bowId: bow.id }, order: [['id', 'ASC']] }),
-    SightSession.findAll({ where: { bowId: bow.id }, order: [['date', 'DESC'], ['id', 'DESC']] }),
-    Tape.findAll({
-      include: [{ model: SightSession, as: 'session', attributes: ['bowId'], where: { bowId: bow.id } }],
-      order: [['id', 'ASC']],
-    }),
-  ]);
-  const counts = await sessionCounts(builds.map((build) => build.id));
-  const names = await addedByNames(builds);
+  const [facts] = await readBowFacts({ bowId: id }, user.id);
+  if (!facts || !facts.canRead) throw ApiError.notFound('That bow');
+  const readiness = await readinessFrom([facts]);
+  const names = new Map<number, string>();
+  for (const row of [...facts.builds, ...facts.sessions]) if (row.addedById !== null && row.addedByName !== null) names.set(row.addedById, row.addedByName);
+  const sessionsPerBuild = new Map<number, number>();
+  for (const session of facts.sessions) sessionsPerBuild.set(session.buildId, (sessionsPerBuild.get(session.buildId) ?? 0) + 1);
+  const known = {
+    stats: new Map(facts.sessions.map((s) => [s.id, { markCount: s.markCount, longestDistance: s.longestDistance, longestUnit: s.longestUnit }])),
+    names,
+    warningCounts: new Map(facts.sessions.map((s) => [s.id, s.warningCount])),
+  };
   return {
-    ...bowOut(bow),
-    ownerName: owner?.name ?? '',
-    readiness: readiness.get(bow.id)!,
-    builds: builds.map((build) => buildOut(build, counts.get(build.id) ?? 0, names)),
-    sessions: await sessionListItems(sessions),
-    tapes: tapes.map((tape) => tapeOut(tape, bow.id)),
+    ...bowOut(facts.bow as Bow),
+    ownerName: facts.ownerName,
+    readiness: readiness.get(facts.bow.id)!,
+    builds: facts.builds.map((build) => buildOut(build as unknown as ArrowBuild, sessionsPerBuild.get(build.id) ?? 0, names)),
+    sessions: await sessionListItems(facts.sessions as unknown as SightSession[], known),
+    tapes: facts.tapes.map((tape) => tapeOut(tape as unknown as Tape, facts.bow.id)),
   };
 }
 

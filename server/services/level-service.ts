@@ -10,7 +10,7 @@
 import { config } from '@/server/config';
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
-import { ApiError } from '@/server/errors';
+import { ApiError, found } from '@/server/errors';
 import { BowChange, LevelCheck, LevelStep, Photo, User } from '@/server/models';
 import { canReadBow, canWriteBow, readableBow, writableBow } from '@/server/services/bow-access';
 import { photoStorage } from '@/server/storage';
@@ -98,17 +98,30 @@ const changeIncludes = [{ model: User, as: 'loggedBy', attributes: ['id', 'name'
 // ---- The level state ----
 
 /**
+ * What levelSummaryForBows reads, when the caller has it already (the bow read
+ * path, server/services/bow-read.ts, gets it in its one query): the bows'
+ * checks in levelStatus's order, the steps of each bow's last complete check,
+ * the people who did the checks, the changes (oldest first) with who logged them.
+ */
+export type LevelFacts = {
+  checks: Array<Pick<LevelCheck, 'id' | 'bowId' | 'userId' | 'place' | 'status' | 'startedAt' | 'completedAt'>>;
+  steps: Array<{ checkId: number; step: string; result: string }>;
+  performers: Array<{ id: number; name: string }>;
+  changes: Array<{ id: number; bowId: number; kind: string; changedAt: Date; note: string; createdAt: Date; loggedBy: { id: number; name: string } | null }>;
+};
+
+/**
  * The level summary of each bow (no access check: callers pass bows the user
- * may read). Three queries whatever the number of bows.
+ * may read). Three queries whatever the number of bows, none when `facts` are given.
  * Example: (await levelSummaryForBows([3, 4])).get(3)?.state → 'verified'
  */
-export async function levelSummaryForBows(bowIds: readonly number[], now = new Date()): Promise<Map<number, LevelSummary>> {
+export async function levelSummaryForBows(bowIds: readonly number[], now = new Date(), facts?: LevelFacts): Promise<Map<number, LevelSummary>> {
   const ids = [...new Set(bowIds)];
   const summaries = new Map<number, LevelSummary>();
   if (ids.length === 0) return summaries;
   const maxAgeDays = levelMaxAgeDays();
 
-  const checks = await LevelCheck.findAll({
+  const checks = (facts?.checks as LevelCheck[] | undefined) ?? await LevelCheck.findAll({
     where: { bowId: { [Op.in]: ids } },
     attributes: ['id', 'bowId', 'userId', 'place', 'status', 'startedAt', 'completedAt'],
     // The same order as levelStatus's "last completed" rule: latest completion, then start, then id.
@@ -121,7 +134,9 @@ export async function levelSummaryForBows(bowIds: readonly number[], now = new D
     if (check.status === 'open') openByBow.set(check.bowId, Math.max(openByBow.get(check.bowId) ?? 0, check.id));
   }
   const lastIds = [...lastByBow.values()].map((c) => c.id);
-  const [steps, performers, changes] = await Promise.all([
+  const [steps, performers, changes] = facts
+    ? [facts.steps as LevelStep[], facts.performers as User[], facts.changes as unknown as BowChange[]]
+    : await Promise.all([
     lastIds.length ? LevelStep.findAll({ where: { checkId: { [Op.in]: lastIds } }, attributes: ['checkId', 'step', 'result'] }) : [],
     User.findAll({
       where: { id: { [Op.in]: [...lastByBow.values()].map((c) => c.userId).filter((id): id is number => id !== null) } },
@@ -227,7 +242,7 @@ export async function startCheck(user: User, bowId: number, place: LevelPlace, n
     );
     return check.id;
   });
-  return checkJson((await loadCheck(id))!);
+  return checkJson(found(await loadCheck(id), 'That level check'));
 }
 
 /** GET /api/checks/:id */
@@ -265,7 +280,7 @@ export async function updateCheck(user: User, id: number, update: CheckUpdate, n
     }
     await check.save({ transaction });
   });
-  return checkJson((await loadCheck(check.id))!);
+  return checkJson(found(await loadCheck(check.id), 'That level check'));
 }
 
 /** DELETE /api/checks/:id: discard an open check (a completed one stays on record). */
@@ -304,7 +319,7 @@ export async function logChange(user: User, bowId: number, input: BowChangeInput
     throw ApiError.badRequest('The change cannot be in the future.', { changedAt: 'The change cannot be in the future' });
   }
   const change = await BowChange.create({ bowId, userId: user.id, kind: input.kind, changedAt, note: input.note });
-  const loaded = (await BowChange.findByPk(change.id, { include: changeIncludes }))!;
+  const loaded = found(await BowChange.findByPk(change.id, { include: changeIncludes }), 'That change');
   return { change: changeJson(loaded), level: (await levelSummaryForBows([bowId], now)).get(bowId)! };
 }
 

@@ -134,13 +134,25 @@ export async function markStats(
   return stats;
 }
 
+/**
+ * What sessionListItems reads, when the caller has it already (the bow read
+ * path, server/services/bow-read.ts): mark counts and longest marks, the
+ * adders' names, the fits' warning counts (then the sessions need no `fit`).
+ */
+export type KnownListFacts = {
+  stats: Map<number, { markCount: number; longestDistance: number | null; longestUnit: 'yd' | 'm' | null }>;
+  names: Map<number, string>;
+  warningCounts: Map<number, number>;
+};
+
 /** Sessions as list items: no mark rows, a summary of each fit. */
-export async function sessionListItems(sessions: SightSession[]): Promise<SessionListItem[]> {
-  const stats = await markStats(sessions.map((session) => session.id));
-  const names = await addedByNames(sessions);
+export async function sessionListItems(sessions: SightSession[], known?: KnownListFacts): Promise<SessionListItem[]> {
+  const stats = known?.stats ?? (await markStats(sessions.map((session) => session.id)));
+  const names = known?.names ?? (await addedByNames(sessions));
   return sessions.map((session) => {
     const stat = stats.get(session.id);
     const fit = session.fit as Partial<StoredFit> | null;
+    const warningCount = known ? (known.warningCounts.get(session.id) ?? 0) : Array.isArray(fit?.warnings) ? fit.warnings.length : 0;
     return {
       id: session.id,
       bowId: session.bowId,
@@ -156,7 +168,7 @@ export async function sessionListItems(sessions: SightSession[]): Promise<Sessio
         markCount: stat?.markCount ?? 0,
         longestDistance: stat?.longestDistance ?? null,
         longestUnit: stat?.longestUnit ?? null,
-        warningCount: Array.isArray(fit?.warnings) ? fit.warnings.length : 0,
+        warningCount,
       },
       addedBy: addedByOf(session, names),
       createdAt: session.createdAt.toISOString(),

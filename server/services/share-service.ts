@@ -61,7 +61,10 @@ async function shareJson(share: Share): Promise<ShareJson> {
 }
 
 async function reload(id: number): Promise<ShareJson> {
-  return shareJson((await Share.findByPk(id, { include: shareIncludes }))!);
+  const share = await Share.findByPk(id, { include: shareIncludes });
+  // Gone already when its bow was deleted by another request in the meantime.
+  if (!share) throw ApiError.notFound('That share');
+  return shareJson(share);
 }
 
 /**

@@ -15,6 +15,7 @@ import { bowFor } from '@/server/services/bow-access';
 import { confirmationsOf, personJson } from '@/server/services/tuning-service';
 import { currentStaleness, fitStaleness, type FitFacts, type ImpactChange, type Staleness } from '@/shared/staleness';
 import type { BowConfirm, SessionStaleness } from '@/shared/staleness-api';
+import type { BowChangeKind } from '@/shared/level-status';
 
 /**
  * A build counts as edited when saved more than this after it was created (the
@@ -28,11 +29,20 @@ export interface BowStaleness {
   confirm: BowConfirm | null;
 }
 
-/** Staleness of every sight-in of each bow, and the one line the Bench shows. */
-export async function stalenessForBows(bowIds: readonly number[]): Promise<Map<number, BowStaleness>> {
-  const ids = [...new Set(bowIds)];
-  const result = new Map<number, BowStaleness>();
-  if (ids.length === 0) return result;
+/**
+ * What stalenessForBows reads, when the caller has it already (the bow read
+ * path, server/services/bow-read.ts, gets it in its one query): sight-ins
+ * newest first, changes, builds, range confirmations, tapes newest first.
+ */
+export type StalenessFacts = {
+  sessions: Array<{ id: number; bowId: number; buildId: number; date: string; createdAt: Date }>;
+  changes: Array<{ id: number; bowId: number; kind: string; changedAt: Date; note: string }>;
+  builds: Array<{ id: number; bowId: number; createdAt: Date; updatedAt: Date }>;
+  confirmations: Array<{ sessionId: number; confirmedAt: Date }>;
+  tapes: Array<{ id: number; sessionId: number; createdAt: Date }>;
+};
+
+async function stalenessFacts(ids: number[]): Promise<StalenessFacts> {
   const [sessions, changes, builds] = await Promise.all([
     SightSession.findAll({ where: { bowId: { [Op.in]: ids } }, attributes: ['id', 'bowId', 'buildId', 'date', 'createdAt'], order: [['date', 'DESC'], ['id', 'DESC']] }),
     BowChange.findAll({ where: { bowId: { [Op.in]: ids } }, attributes: ['id', 'bowId', 'kind', 'changedAt', 'note'] }),
@@ -45,11 +55,20 @@ export async function stalenessForBows(bowIds: readonly number[]): Promise<Map<n
       ? Tape.findAll({ where: { sessionId: { [Op.in]: sessionIds } }, attributes: ['id', 'sessionId', 'createdAt'], order: [['createdAt', 'DESC'], ['id', 'DESC']] })
       : [],
   ]);
+  return { sessions, changes, builds, confirmations, tapes } as StalenessFacts;
+}
+
+/** Staleness of every sight-in of each bow, and the one line the Bench shows. */
+export async function stalenessForBows(bowIds: readonly number[], facts?: StalenessFacts): Promise<Map<number, BowStaleness>> {
+  const ids = [...new Set(bowIds)];
+  const result = new Map<number, BowStaleness>();
+  if (ids.length === 0) return result;
+  const { sessions, changes, builds, confirmations, tapes } = facts ?? (await stalenessFacts(ids));
   for (const bowId of ids) {
     const ofBow = sessions.filter((s) => s.bowId === bowId);
     const fits: FitFacts[] = ofBow.map((s) => ({ id: s.id, buildId: s.buildId, date: s.date, createdAt: s.createdAt }));
     const impact: ImpactChange[] = [
-      ...changes.filter((c) => c.bowId === bowId).map((c) => ({ id: c.id, kind: c.kind, at: c.changedAt, note: c.note })),
+      ...changes.filter((c) => c.bowId === bowId).map((c) => ({ id: c.id, kind: c.kind as BowChangeKind, at: c.changedAt, note: c.note })),
       ...builds
         .filter((b) => b.bowId === bowId && b.updatedAt.getTime() - b.createdAt.getTime() > editedAfterMs)
         .map((b) => ({ id: `build-${b.id}`, kind: 'build' as const, at: b.updatedAt, buildId: b.id })),

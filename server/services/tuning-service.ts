@@ -13,7 +13,7 @@
  */
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
-import { ApiError } from '@/server/errors';
+import { ApiError, found } from '@/server/errors';
 import { ArrowBuild, BowChange, PaperTuneRun, PaperTuneShot, RangeConfirmation, SetupEntry, SightSession, User } from '@/server/models';
 import { bowFor } from '@/server/services/bow-access';
 import type { BowChangeKind } from '@/shared/level-status';
@@ -117,7 +117,7 @@ export async function addSetupEntry(user: User, bowId: number, input: SetupEntry
     const entry = await SetupEntry.create({ bowId, userId: user.id, ...input, changeId }, { transaction });
     return entry.id;
   });
-  return { entry: entryJson((await SetupEntry.findByPk(id, { include: byIncludes() }))!, bow.userId) };
+  return { entry: entryJson(found(await SetupEntry.findByPk(id, { include: byIncludes() }), 'That set-up entry'), bow.userId) };
 }
 
 /** The latest rest kind and cam system of each bow (for the paper-tune advice and exports). */

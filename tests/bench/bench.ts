@@ -8,6 +8,7 @@
  */
 import { fitSight, printSheetSvg, predictMarksMm, tapeSvg, type FitInput, type SightModel } from '@/math';
 import { sheetPdf } from '@/server/print/sheet-pdf';
+import { apiReadSection } from './api-read';
 
 const truth: SightModel = {
   distanceUnit: 'yd', speedFps: 290, dragCoefficient: 2.3, airDensityKgM3: 1.225, arrowMassGr: 420, arrowDiameterMm: 6.5,
@@ -66,6 +67,9 @@ async function main() {
   for (const [name, ms] of rows) console.log(`  ${name.padEnd(width)}  ${ms.toFixed(2).padStart(8)}`);
   const frame = rows[5][1];
   console.log(`goal: full refit + tape for 12 marks under 16 ms — ${frame < 16 ? 'met' : 'NOT met'} (${frame.toFixed(2)} ms)`);
+
+  // The API's bow reads against GET /api/me: its own server and scratch database (tests/bench/api-read.ts; also runs alone).
+  await apiReadSection();
 }
 
 main().catch((error) => {
