@@ -4,12 +4,16 @@
  * those units (and limits are stated in them), and the API stores mm, m and
  * °C. The sight-in date takes the US numeric form and the browser's picker.
  * Then the account basics: change the password (another sign-in ends), and
- * delete the account. Screenshots at 390×844 and 1280×800.
+ * delete the account. An administrator's role change asked about and
+ * acknowledged; the audit log naming bows and narrowed to one. Screenshots at
+ * 390×844 and 1280×800.
  *
  * Reference values: 1 in = 25.4 mm, 1 ft = 0.3048 m (international yard and
  * pound agreement, 1959); °C = (°F − 32) × 5/9 (definition of the scales).
  */
 import type { BrowserContext, Page } from 'playwright-core';
+import { User } from '@/server/models';
+import { recordAudit } from '@/server/services/audit-service';
 import { uniqueEmail } from '../helpers/api';
 import { DESKTOP, PHONE, fullScreenshot, pageErrors, stackForFile, type Stack } from '../helpers/browser';
 
@@ -210,6 +214,56 @@ for (const size of [PHONE, DESKTOP]) {
     await page.waitForURL(/\/sign-in/);
     const signIn = await context.request.post(`${stack.baseUrl}/api/auth/sign-in`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { email, password: 'second password here' } });
     expect(signIn.status()).toBe(401);
+    expect(pageErrors(page)).toEqual([]);
+    await context.close();
+  }, 90_000);
+}
+
+for (const size of [PHONE, DESKTOP]) {
+  it(`asks before an admin changes a role, says it was saved, and narrows the audit log to a bow (${size.width}×${size.height})`, async () => {
+    const { context, page } = await usPage(size);
+    const adminEmail = uniqueEmail('admin');
+    const made = await context.request.post(`${stack.baseUrl}/api/auth/sign-up`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { name: 'Ottilie Admin', email: adminEmail, password: 'an admin password' } });
+    await User.update({ role: 'admin' }, { where: { id: (await made.json()).user.id } });
+    // An archer with a bow, and entries about it in the log.
+    const tag = `Gorse${Date.now().toString(36)}${size.width}`;
+    const archer = await stack.browser.newContext({ baseURL: stack.baseUrl });
+    const signed = await archer.request.post(`${stack.baseUrl}/api/auth/sign-up`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { name: `Ysolde ${tag}`, email: uniqueEmail('archer'), password: 'an archer password' } });
+    const archerId = (await signed.json()).user.id as number;
+    const bowRes = await archer.request.post(`${stack.baseUrl}/api/bows`, {
+      headers: { 'X-Pinwright-Csrf': '1' },
+      data: { nickname: `${tag} slider`, hand: 'right', drawWeightLb: 60, drawLengthMm: 720, sightKind: 'single-pin-slider', sightRadiusMm: 820, peepHeightMm: 110 },
+    });
+    expect(bowRes.status()).toBe(201);
+    const bowId = (await bowRes.json()).bow.id as number;
+    await recordAudit({ actorId: archerId, action: 'invited', bowId, recordType: 'share', recordId: null, summary: 'Invited a technician to work on the bow' });
+    await archer.close();
+
+    await page.goto('/admin');
+    await page.getByTestId('account-search').fill(tag);
+    await page.getByTestId(`account-${archerId}`).waitFor();
+    await page.getByTestId(`role-${archerId}`).getByRole('radio', { name: 'Technician' }).click();
+    const confirm = page.getByTestId(`role-confirm-${archerId}`);
+    await confirm.getByText(`Make Ysolde ${tag} a technician?`).waitFor();
+    // Nothing is changed until the change is confirmed.
+    expect((await User.findByPk(archerId))?.role).toBe('archer');
+    await shot(page, 'admin-role-confirm');
+    await confirm.getByRole('button', { name: 'Change the role' }).click();
+    await page.getByTestId(`role-saved-${archerId}`).getByText(`Saved: Ysolde ${tag} is now a technician.`).waitFor();
+    expect((await User.findByPk(archerId))?.role).toBe('tech');
+    await shot(page, 'admin-role-saved');
+
+    // The log names the bow and its archer; "Only …" narrows it to that bow.
+    await page.goto('/admin/audit');
+    await page.getByText(`on ${tag} slider (Ysolde ${tag}’s)`).first().waitFor();
+    await page.getByRole('button', { name: `Only ${tag} slider` }).first().click();
+    await page.getByTestId('audit-clear-bow').getByText(`Bow: ${tag} slider ✕`).waitFor();
+    await page.getByTestId('audit-total').getByText('1 entry').waitFor();
+    await shot(page, 'admin-audit-filtered');
+    await page.getByTestId('audit-kind').getByRole('radio', { name: 'Accounts' }).click();
+    await page.getByText('Nothing has been recorded that matches.').waitFor();
+    await page.getByTestId('audit-clear-bow').click();
+    await page.getByText(`account Ysolde ${tag}`).first().waitFor();
     expect(pageErrors(page)).toEqual([]);
     await context.close();
   }, 90_000);
