@@ -41,7 +41,7 @@ export function AccountsScreen() {
       <SectionHeading level={1} title="Accounts" description="Everyone with a Pinwright account. Role changes take effect on their next request." />
       <AdminTabs current="accounts" />
       <View style={[styles.filters, wide && styles.filtersWide]}>
-        <View style={styles.search}>
+        <View style={wide && styles.searchWide}>
           <TextField
             label="Search"
             hint="Part of a name or e-mail address"
@@ -93,7 +93,8 @@ export function AccountsScreen() {
 const styles = StyleSheet.create({
   filters: { gap: space.md },
   filtersWide: { flexDirection: 'row', alignItems: 'flex-end', flexWrap: 'wrap' },
-  search: { flexGrow: 1, flexBasis: 280 },
+  // A basis only in the row: in the phone's column a basis is a height (it left a 280 px gap).
+  searchWide: { flexGrow: 1, flexBasis: 280 },
   list: { gap: space.sm },
   listWide: { flexDirection: 'row', flexWrap: 'wrap' },
   cellWide: { flexBasis: 460, flexGrow: 1 },
