@@ -9,6 +9,7 @@
 import { fitSight, printSheetSvg, predictMarksMm, tapeSvg, type FitInput, type SightModel } from '@/math';
 import { sheetPdf } from '@/server/print/sheet-pdf';
 import { apiReadSection } from './api-read';
+import { runWebBench } from './web';
 
 const truth: SightModel = {
   distanceUnit: 'yd', speedFps: 290, dragCoefficient: 2.3, airDensityKgM3: 1.225, arrowMassGr: 420, arrowDiameterMm: 6.5,
@@ -70,6 +71,9 @@ async function main() {
 
   // The API's bow reads against GET /api/me: its own server and scratch database (tests/bench/api-read.ts; also runs alone).
   await apiReadSection();
+
+  // The web app: cold first load on slow 4G, static files, Lighthouse (tests/bench/web.ts; also runs alone).
+  await runWebBench();
 }
 
 main().catch((error) => {

@@ -17,6 +17,7 @@
  */
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
+import http from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
 import type { Server } from 'node:http';
@@ -122,6 +123,59 @@ function lighthouse(url: string, cookie?: string): Promise<LighthouseScores> {
   });
 }
 
+export type StaticRun = { name: string; requestsPerSec: number; p50Ms: number; p99Ms: number; bytesPerResponse: number };
+
+/** Bytes on the wire for one response (node:http does not decompress). */
+function rawBytes(url: string, acceptEncoding: string): Promise<number> {
+  return new Promise((resolve, reject) => {
+    http
+      .get(url, { headers: { 'accept-encoding': acceptEncoding } }, (res) => {
+        let bytes = 0;
+        res.on('data', (chunk: Buffer) => (bytes += chunk.length));
+        res.on('end', () => resolve(bytes));
+      })
+      .on('error', reject);
+  });
+}
+
+/**
+ * The entry script served two ways, 5 s each with autocannon (4 connections,
+ * `Accept-Encoding: br, gzip`): the precompressed twin (server/web-static.ts)
+ * against express.static behind the compression middleware, which compresses
+ * each response as it goes (its defaults: brotli quality 4, gzip level 6).
+ */
+async function staticFiles(webDir: string): Promise<StaticRun[]> {
+  const express = (await import('express')).default;
+  const compression = (await import('compression')).default;
+  const autocannon = (await import('autocannon')).default;
+  const { webStatic } = await import('@/server/web-static');
+  const html = fs.readFileSync(path.join(webDir, 'index.html'), 'utf8');
+  const script = html.match(/src="(\/_expo\/static\/js\/web\/entry-[0-9a-f]{32}\.js)"/)?.[1];
+  if (!script) throw new Error('dist/index.html names no entry script');
+  const servers = [
+    ['precompressed (web-static.ts)', express().use(webStatic(webDir))],
+    ['compression middleware', express().use(compression()).use(express.static(webDir))],
+  ] as const;
+  const runs: StaticRun[] = [];
+  for (const [name, app] of servers) {
+    const server = await new Promise<Server>((resolve) => {
+      const s = app.listen(0, '127.0.0.1', () => resolve(s));
+    });
+    const url = `http://127.0.0.1:${(server.address() as AddressInfo).port}${script}`;
+    const result = await autocannon({ url, connections: 4, duration: 5, headers: { 'accept-encoding': 'br, gzip' } });
+    runs.push({
+      name,
+      requestsPerSec: result.requests.average,
+      p50Ms: result.latency.p50,
+      p99Ms: result.latency.p99,
+      bytesPerResponse: await rawBytes(url, 'br, gzip'),
+    });
+    server.closeAllConnections();
+    await new Promise<void>((resolve) => server.close(() => resolve()));
+  }
+  return runs;
+}
+
 const kb = (bytes: number) => `${Math.round(bytes / 1024).toLocaleString('en')} KB`;
 const verdict = (ok: boolean) => (ok ? 'met' : 'NOT met');
 
@@ -131,6 +185,8 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
   process.env.NODE_ENV ||= 'test';
   const { exportWebIfStale } = await import('@/server/tools/web-export');
   await exportWebIfStale(root);
+  const { config } = await import('@/server/config');
+  if (config.db.name !== dbName) throw new Error('the web bench must set DB_NAME before server/config.ts is first loaded');
   const { startLocalDatabase, createDatabase, dropDatabase } = await import('@/server/tools/database');
   const db = await startLocalDatabase(() => {});
   let server: Server | undefined;
@@ -153,6 +209,13 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
     console.log(`  bytes moved by the page     ${kb(cold.pageBytes).padStart(10)}   goal ≤ 500 KB — ${verdict(cold.pageBytes <= 500 * 1024)} (${cold.requests} responses)`);
     console.log(`  compressed JS before sign-in${kb(cold.jsBytesBeforeSignIn).padStart(10)}   goal ≤ 250 KB — ${verdict(cold.jsBytesBeforeSignIn <= 250 * 1024)}`);
     console.log(`  then, in the background, the service worker's precache: ${kb(cold.workerBytes)} in ${cold.workerRequests} requests`);
+
+    console.log('\nweb: the entry script served 5 s each (autocannon, 4 connections, Accept-Encoding: br, gzip)');
+    for (const run of await staticFiles(path.join(root, 'dist'))) {
+      console.log(
+        `  ${run.name.padEnd(30)} ${Math.round(run.requestsPerSec).toString().padStart(5)} req/s, p50 ${run.p50Ms} ms, p99 ${run.p99Ms} ms, ${kb(run.bytesPerResponse)} a response`,
+      );
+    }
 
     if (options.lighthouse !== false) {
       const archer = demoAccounts.find((a) => a.role === 'archer')!;
