@@ -119,7 +119,7 @@ let batchesSinceCheck = 0;
 let accounts: { archer: { id: number; email: string }; tech: { id: number; email: string } };
 
 /** The archer's records (bow, build, sight-in, tape, level check with a photo, change), the bow shared with the technician. */
-async function makeRecords(archerCookie: string): Promise<Ids> {
+async function makeRecords(archerCookie: string): Promise<Record<string, number[]>> {
   const ok = (res: request.Response, what: string) => {
     if (res.status >= 300) throw new Error(`${what}: ${res.status} ${JSON.stringify(res.body)}`);
     return res.body;
@@ -293,7 +293,7 @@ const encodedBody: fc.Arbitrary<Sent> = fc
     fc.oneof({ weight: 9, arbitrary: fc.constant(null) }, { weight: 1, arbitrary: fc.uint8Array({ maxLength: 64 }) }),
   )
   .map(([value, contentType, encoding, raw]) => {
-    let body = raw ? Buffer.from(raw) : value === undefined ? undefined : Buffer.from(JSON.stringify(value));
+    let body: Buffer | undefined = raw ? Buffer.from(raw) : value === undefined ? undefined : Buffer.from(JSON.stringify(value));
     const headers: Record<string, string> = {};
     if (contentType) headers['Content-Type'] = contentType;
     if (body && encoding !== 'none') {
