@@ -1,6 +1,7 @@
 
 import { AuthFrame } from '@/components/auth/auth-frame';
 import { SignInForm } from '@/components/auth/sign-in-form';
+import { Button } from '@/components/ui/button';
 import { TextLink } from '@/components/ui/text-link';
 import { ScreenTitle } from '@/components/ui/screen-title';
 
@@ -11,12 +12,12 @@ export function SignInScreen() {
       <ScreenTitle name="Sign in" />
       <AuthFrame
         title="Sign in"
-        lead="Welcome back to your bench."
+        lead="Pinwright turns a few marks sighted in at the range into a sight tape for every distance, printed true to size, and keeps your bow's set-up, level checks and tapes in one place."
         footer={
           <>
             <TextLink href="/forgot-password" label="Forgot your password?" />
             <TextLink href="/sign-up" label="New here? Create an account" />
-            <TextLink href="/try" label="Try a tape without an account" />
+            <Button label="Try a tape without an account" variant="secondary" href="/try" testID="sign-in-try" />
           </>
         }
       >

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { useMe } from '@/components/auth/api';
@@ -5,6 +6,8 @@ import { useBenchBows } from '@/components/bench/api';
 import { BenchArt } from '@/components/bench/bench-art';
 import { BowCard } from '@/components/bench/bow-card';
 import { ClientList } from '@/components/clients/client-list';
+import { loadTryCarry } from '@/components/try/try-carry';
+import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorView } from '@/components/ui/error-view';
@@ -27,6 +30,7 @@ export function BenchScreen() {
   const bows = useBenchBows();
   const me = useMe();
   const wide = useWide();
+  const [carried] = useState(loadTryCarry);
 
   if (bows.isPending) {
     return (
@@ -85,6 +89,16 @@ export function BenchScreen() {
         description={list.length ? 'Your bows and whether each is ready to shoot.' : undefined}
         action={list.length ? <Button label="Add a bow" icon={PlusIcon} variant="secondary" href="/bows/new" /> : null}
       />
+      {list.length === 0 && carried ? (
+        <Banner
+          tone="info"
+          title="Keep the tape you tried"
+          testID="bench-keep-try"
+          action={<Button label="Make it my first bow" href="/keep-try" testID="bench-keep-try-open" />}
+        >
+          {`The two marks you typed on the try page (${carried.nearDistance} ${carried.distanceUnit} at ${carried.nearReading} mm, ${carried.farDistance} ${carried.distanceUnit} at ${carried.farReading} mm) can become your first bow and its first sight-in.`}
+        </Banner>
+      ) : null}
       {list.length === 0 ? (
         <EmptyState
           testID="bench-empty"

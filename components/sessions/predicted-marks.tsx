@@ -75,13 +75,14 @@ export function PredictedMarks({ fit, sign, marks }: PredictedMarksProps) {
 
 const styles = StyleSheet.create({
   table: { borderRadius: radii.md, borderWidth: borders.hairline, borderColor: colors.line, overflow: 'hidden', backgroundColor: colors.surface },
-  row: { flexDirection: 'row', alignItems: 'center', paddingHorizontal: space.md, paddingVertical: space.xs, gap: space.sm, minHeight: 40 },
+  // Fits a 390 px phone (about 320 px inside its card): the middle columns give way, Status keeps its words.
+  row: { flexDirection: 'row', alignItems: 'center', paddingHorizontal: space.sm, paddingVertical: space.xs, gap: space.xs, minHeight: 40 },
   head: { backgroundColor: colors.sunken, borderBottomWidth: borders.hairline, borderBottomColor: colors.line },
   stripe: { backgroundColor: colors.paper },
   verify: { backgroundColor: colors.dueTint },
   cell: { fontSize: 18, lineHeight: 22 },
   distance: { flexBasis: 56, flexGrow: 0, flexShrink: 0 },
-  mark: { flexBasis: 76, flexGrow: 1, flexShrink: 0 },
-  band: { flexBasis: 96, flexGrow: 1 },
-  status: { flexBasis: 66, flexGrow: 0, flexShrink: 0, textAlign: 'right' },
+  mark: { flexBasis: 64, flexGrow: 1, flexShrink: 1, minWidth: 0 },
+  band: { flexBasis: 72, flexGrow: 1, flexShrink: 1, minWidth: 0 },
+  status: { flexBasis: 78, flexGrow: 0, flexShrink: 0, textAlign: 'right' },
 });

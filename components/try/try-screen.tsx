@@ -14,6 +14,7 @@ import { VisitorBar } from '@/components/shell/visitor-bar';
 import { TAPE_VIEW_CAUTION } from '@/components/tapes/tape-form-values';
 import { TapePreview } from '@/components/tapes/tape-preview';
 import { savePostedFile } from '@/components/try/save-posted-file';
+import { saveTryCarry } from '@/components/try/try-carry';
 import {
   ASSUMED_ARROW,
   tryFieldOf,
@@ -62,6 +63,14 @@ function outcomeOf(text: TryFormText): Outcome {
   if (required.some((value) => value.trim() === '')) {
     return { live: { state: 'waiting', message: 'Enter the sight radius, the peep height and both readings to see your tape.', marks: [] }, tape: null, tapeProblem: null };
   }
+  // Predicted marks, and so the "confirm at" warnings, only for distances on the tape (every 10, and its ends).
+  const from = textToNumber(text.tapeFrom);
+  const to = textToNumber(text.tapeTo);
+  if (from !== undefined && to !== undefined && Number.isFinite(from) && Number.isFinite(to) && to > from) {
+    const tens = [];
+    for (let d = Math.ceil(from / 10) * 10; d <= to; d += 10) tens.push(d);
+    input.predict = [...new Set([from, ...tens, to])].sort((a, b) => a - b);
+  }
   const attempt = trySightFit(input);
   if (!attempt.ok) return { live: { state: 'refused', message: attempt.error.message, field: attempt.error.field, marks }, tape: null, tapeProblem: null };
   try {
@@ -76,6 +85,19 @@ function outcomeOf(text: TryFormText): Outcome {
     if (!isFitInputError(error)) throw error;
     return { live: { state: 'fit', fit: attempt.fit, marks, sign: 1 }, tape: null, tapeProblem: error.detail };
   }
+}
+
+/**
+ * One label each for the two readings: "Reading at 20 yd" and "Reading at 60 yd"
+ * from the distances typed, or "Short-distance reading" / "Long-distance reading"
+ * while a distance is missing or both are the same.
+ */
+function readingLabelsOf(text: TryFormText): { near: string; far: string } {
+  const near = text.nearDistance.trim();
+  const far = text.farDistance.trim();
+  const usable = (value: string) => value !== '' && Number.isFinite(Number(value.replace(',', '.')));
+  if (usable(near) && usable(far) && near !== far) return { near: `Reading at ${near} ${text.distanceUnit}`, far: `Reading at ${far} ${text.distanceUnit}` };
+  return { near: 'Short-distance reading', far: 'Long-distance reading' };
 }
 
 /** The tape-only request for /api/try/tape.svg (no paper or labels: that route's schema is strict). */
@@ -102,6 +124,7 @@ export function TryScreen() {
   const outcome = useMemo(() => outcomeOf(JSON.parse(key) as TryFormText), [key]);
   const unit = text.lengthUnit;
   const distance = text.distanceUnit;
+  const readingLabels = readingLabelsOf(text);
 
   const print = handleSubmit(
     (sheet) => {
@@ -129,7 +152,7 @@ export function TryScreen() {
     )();
 
   const form = (
-    <View style={styles.column}>
+    <View style={[styles.column, wide && styles.columnWide]}>
       <Card style={styles.section}>
         <SectionHeading title="Your sight" />
         <FieldGrid minWidth={200}>
@@ -162,11 +185,11 @@ export function TryScreen() {
         <SectionHeading title="Two marks" description="A short and a long distance you have sighted in; readings from the sight's scale in mm." />
         <FieldGrid minWidth={140}>
           <FormField control={control} name="nearDistance" label="Short distance" unit={distance} numeric testID="try-near-distance" />
-          <FormField control={control} name="nearReading" label="Its reading" unit="mm" numeric testID="try-near-reading" />
+          <FormField control={control} name="nearReading" label={readingLabels.near} unit="mm" numeric testID="try-near-reading" />
         </FieldGrid>
         <FieldGrid minWidth={140}>
           <FormField control={control} name="farDistance" label="Long distance" unit={distance} numeric testID="try-far-distance" />
-          <FormField control={control} name="farReading" label="Its reading" unit="mm" numeric testID="try-far-reading" />
+          <FormField control={control} name="farReading" label={readingLabels.far} unit="mm" numeric testID="try-far-reading" />
         </FieldGrid>
       </Card>
 
@@ -185,7 +208,7 @@ export function TryScreen() {
   );
 
   const result = (
-    <View style={styles.column}>
+    <View style={[styles.column, wide && styles.columnWide]}>
       <Card style={styles.section} testID="try-result">
         <SectionHeading title="Your tape" />
         {outcome.live.state === 'waiting' ? <Text tone="soft">{outcome.live.message}</Text> : null}
@@ -219,9 +242,20 @@ export function TryScreen() {
       <Banner
         tone="info"
         title="Keep it"
-        action={<Button label="Create an account" href="/sign-up" variant="secondary" />}
+        action={
+          <Button
+            label="Create an account"
+            variant="secondary"
+            testID="try-keep"
+            onPress={() => {
+              saveTryCarry(text);
+              router.push('/sign-up');
+            }}
+          />
+        }
       >
-        Nothing here is saved. With an account you keep the bow, every sight-in and its tape, refit as you add marks, and check the sight level.
+        Nothing here is sent or saved. Create an account and what you typed here becomes your first bow and sight-in; then you keep every sight-in and its
+        tape, refit as you add marks, and check the sight level.
       </Banner>
     </View>
   );
@@ -251,7 +285,9 @@ export function TryScreen() {
 const styles = StyleSheet.create({
   root: { flex: 1, backgroundColor: colors.paper },
   split: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
-  column: { flex: 1, minWidth: 0, gap: space.xl },
+  // Stacked on a phone each column takes only its own height (flex 1 there stretched the form into a blank gap).
+  column: { gap: space.xl },
+  columnWide: { flex: 1, minWidth: 0 },
   section: { gap: space.lg },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
 });

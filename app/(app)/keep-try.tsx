@@ -1,0 +1,5 @@
+import { KeepTryScreen } from '@/components/try/keep-try-screen';
+
+export default function KeepTry() {
+  return <KeepTryScreen />;
+}
