@@ -48,8 +48,8 @@ function timeOfDay(iso: string | undefined, timeZone?: string): string {
   return timeZone === 'UTC' ? `${words} UTC` : words;
 }
 
-/** The session's name (see the module comment). */
-export function sightInName(session: NameableSightIn, options: SightInNameOptions = {}): string {
+/** The parts of the name: the day (with the time when needed), the place, the build and "(2 of 2)" for twins of one minute. */
+export function sightInNameParts(session: NameableSightIn, options: SightInNameOptions = {}): { day: string; place: string; build: string; ordinal: string } {
   const sameDay = (options.siblings ?? []).filter((other) => other.id !== session.id && other.date.slice(0, 10) === session.date.slice(0, 10));
   let day = sightInDay(session.date);
   if (sameDay.length > 0) {
@@ -57,8 +57,6 @@ export function sightInName(session: NameableSightIn, options: SightInNameOption
     if (time) day += `, ${time}`;
   }
   const build = options.withoutBuild ? '' : (options.buildName ?? options.builds?.find((b) => b.id === session.buildId)?.name ?? '');
-  const parts = [day, session.placeLabel.trim(), build].filter(Boolean);
-  const name = parts.join(' · ');
   // Same day, place, build and minute: number them in the order they were recorded.
   const twins = sameDay.filter(
     (other) =>
@@ -66,7 +64,17 @@ export function sightInName(session: NameableSightIn, options: SightInNameOption
       other.buildId === session.buildId &&
       timeOfDay(other.createdAt, options.timeZone) === timeOfDay(session.createdAt, options.timeZone),
   );
-  if (twins.length === 0) return name;
-  const order = [...twins, session].sort((a, b) => (a.createdAt ?? '').localeCompare(b.createdAt ?? '') || a.id - b.id);
-  return `${name} (${order.indexOf(session) + 1} of ${order.length})`;
+  let ordinal = '';
+  if (twins.length > 0) {
+    const order = [...twins, session].sort((a, b) => (a.createdAt ?? '').localeCompare(b.createdAt ?? '') || a.id - b.id);
+    ordinal = `(${order.indexOf(session) + 1} of ${order.length})`;
+  }
+  return { day, place: session.placeLabel.trim(), build, ordinal };
+}
+
+/** The session's name (see the module comment). */
+export function sightInName(session: NameableSightIn, options: SightInNameOptions = {}): string {
+  const { day, place, build, ordinal } = sightInNameParts(session, options);
+  const name = [day, place, build].filter(Boolean).join(' · ');
+  return ordinal ? `${name} ${ordinal}` : name;
 }

@@ -30,7 +30,7 @@ import { space } from '@/components/theme';
 import type { LengthUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import type { BuildInput } from '@/shared/build';
-import { sightInName } from '@/shared/sight-in-name';
+import { sightInName, sightInNameParts } from '@/shared/sight-in-name';
 
 /** The form's text for a new build started from `build`: its parts, a new name, no speed (that is what we predict). */
 function startingText(build: BowDetail['builds'][number] | undefined, unit: LengthUnit): BuildFormText {
@@ -86,10 +86,15 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
   const chronographed = bow.builds.filter((build) => build.speedFps !== null);
 
   const startOptions = [...bow.builds.map((build) => ({ value: String(build.id), label: build.name })), { value: 'blank', label: 'Blank' }];
-  const sessionOptions = bow.sessions.slice(0, 6).map((session) => ({
-    value: String(session.id),
-    label: sightInName(session, { builds: bow.builds, siblings: bow.sessions }),
-  }));
+  // Each sight-in on a row of its own: the day (and time, for two of one day) as the label, place and build below.
+  const sessionOptions = bow.sessions.slice(0, 6).map((session) => {
+    const name = sightInNameParts(session, { builds: bow.builds, siblings: bow.sessions });
+    return {
+      value: String(session.id),
+      label: [name.day, name.ordinal].filter(Boolean).join(' '),
+      hint: [name.place, name.build].filter(Boolean).join(' · '),
+    };
+  });
   // What keeps Predict from running, in words (the button stays disabled until none is left).
   const missing = [
     chronographed.length < 2
@@ -156,6 +161,9 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
           options={sessionOptions}
           value={sessionId}
           onChange={setSessionId}
+          size="large"
+          optionBasis={260}
+          testID="predict-sight-in"
         />
       ) : null}
       {general ? (
