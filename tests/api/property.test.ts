@@ -172,7 +172,7 @@ async function keepFixtures(batch: Case[], answers: Answer[]): Promise<void> {
   }
   if (batch.some((c, i) => answers[i].status < 300 && (c.method === 'DELETE' || /\/(revoke|delete)$/.test(c.path.split('?')[0])))) recordsTouched = true;
   batchesSinceCheck += 1;
-  if (!recordsTouched || batchesSinceCheck < 4) return; // looked at every fourth batch at most
+  if (!recordsTouched || batchesSinceCheck < 8) return; // looked at every eighth batch at most
   batchesSinceCheck = 0;
   recordsTouched = false;
   const [bow, build, session, tape, check, change, photo, share] = await Promise.all([
