@@ -168,11 +168,12 @@ it('opens the sign-in page with no network after one visit', async () => {
   await page.reload();
   await page.getByLabel('E-mail').waitFor({ timeout: 15_000 });
   await page.getByRole('button', { name: 'Sign in' }).waitFor();
+  await screenshot(page, 'offline-sign-in');
   // Another of the app's routes, never visited, still opens (navigation falls back to the app shell).
   await page.goto(`${base}/forgot-password`);
   await page.getByLabel('E-mail').waitFor({ timeout: 15_000 });
   expect(await page.evaluate(() => !!navigator.serviceWorker.controller)).toBe(true);
-  await screenshot(page, 'offline-sign-in');
+  await screenshot(page, 'offline-forgot-password');
   expect(pageErrors(page)).toEqual([]);
   await context.close();
 });

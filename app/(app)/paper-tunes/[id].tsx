@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { PaperTuneScreen } from '@/components/tuning/paper-tune-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const PaperTuneScreen = lazyScreen('PaperTuneScreen');
 
 export default function PaperTune() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { TuningScreen } from '@/components/tuning/tuning-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const TuningScreen = lazyScreen('TuningScreen');
 
 export default function BowTuning() {
   const { id } = useLocalSearchParams<{ id: string }>();

@@ -1,6 +1,8 @@
 import { useLocalSearchParams } from 'expo-router';
 
-import { ArrowSetsScreen } from '@/components/arrows/arrow-sets-screen';
+import { lazyScreen } from '@/components/shell/lazy-screen';
+
+const ArrowSetsScreen = lazyScreen('ArrowSetsScreen');
 
 export default function BuildArrows() {
   const { id } = useLocalSearchParams<{ id: string }>();
