@@ -3,6 +3,7 @@ import { z } from 'zod';
 
 import { ApiError, apiFetch, csrfHeader } from '@/components/api/client';
 import { bowKeys } from '@/components/bows/api';
+import { sendOrKeep } from '@/components/offline/send-or-keep';
 import {
   changeListResponseSchema,
   changeResponseSchema,
@@ -89,14 +90,56 @@ export function useStartCheck(bowId: number) {
 }
 
 /**
- * Saves step results / note / completion of a check (PATCH /api/checks/:id).
+ * The check as it will be once `update` is applied, for a save kept on the
+ * phone with no signal (the server applies the same when it is sent).
+ * Example: withUpdate(check, { steps: [{ step: 'setup', result: 'pass', reading: null, readingUnit: null, adjustment: '' }] }).steps[0].result → 'pass'
+ */
+export function withUpdate(check: LevelCheck, update: CheckUpdate, now = new Date().toISOString()): LevelCheck {
+  const steps = check.steps.map((step) => {
+    const entry = update.steps?.find((item) => item.step === step.step);
+    return entry
+      ? { ...step, result: entry.result ?? step.result, reading: entry.reading ?? null, readingUnit: entry.readingUnit ?? null, adjustment: entry.adjustment ?? '', updatedAt: now }
+      : step;
+  });
+  return {
+    ...check,
+    steps,
+    note: update.note ?? check.note,
+    place: update.place ?? check.place,
+    ...(update.complete ? { status: 'complete' as const, completedAt: now } : {}),
+  };
+}
+
+/**
+ * Saves step results / note / completion of a check (PATCH /api/checks/:id),
+ * with an idempotency key. With no signal the save is kept on the phone
+ * (components/offline) and the check is updated in place, so the archer goes
+ * on to the next step; it is sent in order when the signal is back.
  * Example: `useSaveCheck(12).mutate({ steps: [{ step: 'setup', result: 'pass', … }] })`
  */
 export function useSaveCheck(id: number) {
   const queryClient = useQueryClient();
   return useMutation<LevelCheck, ApiError, CheckUpdate>({
-    mutationFn: async (update) =>
-      (await apiFetch(`/api/checks/${id}`, { method: 'PATCH', body: update, schema: checkResponseSchema })).check,
+    mutationFn: async (update) => {
+      const cached = queryClient.getQueryData<LevelCheck>(levelKeys.check(id));
+      const steps = update.steps?.map((step) => step.step).join(', ');
+      const result = await sendOrKeep(
+        queryClient,
+        {
+          kind: 'check-steps',
+          title: update.complete ? 'Level check completed' : `Level check: ${steps ? `step ${steps}` : 'note'}`,
+          method: 'PATCH',
+          path: `/api/checks/${id}`,
+          body: update,
+          bowId: cached?.bowId ?? null,
+          recordId: id,
+        },
+        checkResponseSchema,
+      );
+      if (!result.kept) return result.data.check;
+      if (!cached) throw new ApiError(0, 'network', 'Kept on this phone; it is sent when the signal is back.');
+      return withUpdate(cached, update);
+    },
     onSuccess: (check) => {
       queryClient.setQueryData(levelKeys.check(check.id), check);
       return refreshAfterWrite(queryClient);
@@ -126,13 +169,31 @@ export function useChanges(bowId: number | undefined) {
 }
 
 /**
- * Logs a change on the bow; resolves to the change and the bow's new level state.
+ * Logs a change on the bow, with an idempotency key; resolves to the change
+ * and the bow's new level state. With no signal the change is kept on the
+ * phone (components/offline) and the level shown as due until it is sent.
  * Example: `useLogChange(3).mutate({ kind: 'string', changedAt: new Date().toISOString(), note: '' })`
  */
 export function useLogChange(bowId: number) {
   const queryClient = useQueryClient();
   return useMutation<z.infer<typeof changeResponseSchema>, ApiError, BowChangeInput>({
-    mutationFn: (input) => apiFetch(`/api/bows/${bowId}/changes`, { method: 'POST', body: input, schema: changeResponseSchema }),
+    mutationFn: async (input) => {
+      const result = await sendOrKeep(
+        queryClient,
+        { kind: 'change', title: `Change logged: ${input.kind}`, method: 'POST', path: `/api/bows/${bowId}/changes`, body: input, bowId, recordId: null },
+        changeResponseSchema,
+      );
+      if (!result.kept) return result.data;
+      const me = queryClient.getQueryData<{ id: number; name: string }>(['me']);
+      const summary = queryClient.getQueryData<LevelSummary>(levelKeys.summary(bowId));
+      const now = new Date().toISOString();
+      const change = { id: 0, bowId, kind: input.kind, changedAt: input.changedAt, note: input.note ?? '', loggedBy: { id: me?.id ?? 0, name: me?.name ?? '' }, createdAt: now };
+      const reason = 'A change is kept on this phone, not sent yet: check the level once it is sent.';
+      const level: LevelSummary = summary
+        ? { ...summary, state: summary.state === 'verified' ? 'due' : summary.state, reason }
+        : { state: 'due', reason, lastCheck: null, changesSince: [], openCheckId: null, ageDays: null, maxAgeDays: 0, rangeConfirmed: false };
+      return { change, level };
+    },
     onSuccess: (result) => {
       queryClient.setQueryData(levelKeys.summary(bowId), result.level);
       return refreshAfterWrite(queryClient);
