@@ -254,7 +254,7 @@ export function TryScreen() {
           />
         }
       >
-        Nothing here is sent or saved. Create an account and what you typed here becomes your first bow and sight-in; then you keep every sight-in and its
+        Nothing here is sent or saved. Make an account and what you typed here becomes your first bow and sight-in; then you keep every sight-in and its
         tape, refit as you add marks, and check the sight level.
       </Banner>
     </View>
