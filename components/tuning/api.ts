@@ -103,12 +103,19 @@ export function useEndRun(runId: number) {
   });
 }
 
-/** Whether a sight-in's marks (and its tapes) must be confirmed at the range. */
+/**
+ * Whether a sight-in's marks (and its tapes) must be confirmed at the range.
+ * Asked again every time a screen shows it: a change logged anywhere (the
+ * level screen, a technician's phone) makes it stale, and a cached "current"
+ * must never hide that (the cached answer shows until the new one arrives).
+ */
 export function useSessionStaleness(sessionId: number | undefined) {
   return useQuery<SessionStaleness, ApiError>({
     queryKey: tuningKeys.staleness(sessionId ?? 0),
     queryFn: () => apiFetch(`/api/sessions/${sessionId}/staleness`, { schema: sessionStalenessSchema }),
     enabled: validId(sessionId),
+    staleTime: 0,
+    refetchOnMount: 'always',
   });
 }
 

@@ -71,6 +71,19 @@ async function shoot(page: Page, shot: { tear: string; length?: string; changed?
   );
 }
 
+/**
+ * The Bench in a new browser context with the same sign-in: no cache kept on
+ * the device (the app keeps its last answers for offline use), so the card
+ * shows what the server says now.
+ */
+async function freshBench(context: BrowserContext, bowId: number) {
+  const fresh = await newPage(stack, PHONE);
+  await fresh.context.addCookies(await context.cookies());
+  await fresh.page.goto('/');
+  await fresh.page.getByTestId(`bow-card-${bowId}`).waitFor();
+  return fresh;
+}
+
 it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and keeps the tape honest after changes', async () => {
   const { context, page } = await newPage(stack, PHONE);
   await signUpInContext(context, stack.baseUrl, 'Ilsa Brackwater');
@@ -116,12 +129,13 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
   });
 
   await recording(page, 'tuning-bench-confirm', async () => {
-    await page.goto('/');
-    const confirm = page.getByTestId(`bow-card-${bowId}-confirm`);
+    const bench = await freshBench(context, bowId);
+    const confirm = bench.page.getByTestId(`bow-card-${bowId}-confirm`);
     await confirm.waitFor();
     expect(await confirm.innerText()).toMatch(/^Tape: Rest changed on .*, after this sight-in: confirm the marks at the range\.$/);
-    await page.getByText('Confirm at the range').first().waitFor();
-    await screenshot(page, 'tuning-bench-confirm');
+    await bench.page.getByText('Confirm at the range').first().waitFor();
+    await screenshot(bench.page, 'tuning-bench-confirm');
+    await bench.context.close();
   });
 
   await recording(page, 'paper-tune', async () => {
@@ -194,17 +208,20 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     await banner.waitFor();
     await banner.getByText(/^Peep moved on .*, after this sight-in: confirm the marks at the range\./).waitFor();
     await screenshot(page, 'tape-confirm-at-range');
-    await page.goto('/');
-    expect(await page.getByTestId(`bow-card-${bowId}-confirm`).innerText()).toMatch(/^Tape: Peep moved on /);
+    const stale = await freshBench(context, bowId);
+    expect(await stale.page.getByTestId(`bow-card-${bowId}-confirm`).innerText()).toMatch(/^Tape: Peep moved on /);
+    await stale.context.close();
 
     // A new sight-in with the same build clears it.
     await post(context, `/api/bows/${bowId}/sessions`, { buildId, date: new Date().toISOString().slice(0, 10), placeLabel: 'Gravel pit range', marks: knownMarks([20, 40, 60]) });
-    await page.reload();
-    await page.getByTestId(`bow-card-${bowId}`).waitFor();
-    await page.waitForTimeout(300);
-    expect(await page.getByTestId(`bow-card-${bowId}-confirm`).count()).toBe(0);
+    const cleared = await freshBench(context, bowId);
+    await cleared.page.waitForTimeout(300);
+    expect(await cleared.page.getByTestId(`bow-card-${bowId}-confirm`).count()).toBe(0);
+    await cleared.context.close();
     await page.goto(`/sessions/${sessionId}/tape`);
     await page.getByRole('heading', { name: 'Sight tape' }).waitFor();
+    // The screen asks the server again on every visit; the banner goes once the answer is in.
+    await page.getByTestId('confirm-at-range').waitFor({ state: 'detached' });
     await page.waitForTimeout(500);
     expect(await page.getByTestId('confirm-at-range').count()).toBe(0);
   });
