@@ -48,6 +48,8 @@ for (const size of [PHONE, DESKTOP]) {
     await page.goto('/account');
     await page.getByTestId('unit-lengthUnit').getByRole('radio', { name: 'Millimetres' }).click();
     await page.getByTestId('units-saved').waitFor();
+    // The device cache is written at most every 500 ms (components/offline/query-persistence.ts); reloading sooner would restore the old units.
+    await page.waitForTimeout(1200);
     await page.goto('/');
     await page.getByText(/add your first bow/i).first().waitFor({ timeout: 15_000 });
 
