@@ -39,7 +39,7 @@ export function PasswordChangeForm() {
         </Banner>
       ) : null}
       {change.isSuccess ? (
-        <Banner tone="info" title="Password changed" testID="password-changed">
+        <Banner tone="info" title="Saved" testID="password-changed">
           {change.data.message}
         </Banner>
       ) : null}
