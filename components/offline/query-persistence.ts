@@ -34,7 +34,8 @@ let current: AccountPersister | null = null;
 function persisterFor(userId: number, isClosed: () => boolean): Persister {
   return createAsyncStoragePersister({
     key: queriesKey(userId),
-    throttleTime: 500,
+    // Short: a page left right after its data arrived should still have it saved.
+    throttleTime: 100,
     storage: {
       getItem: async (key) => (await cacheDb.get<string>(key)) ?? null,
       setItem: async (key, value) => {

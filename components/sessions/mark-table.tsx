@@ -318,6 +318,8 @@ const styles = StyleSheet.create({
   cellDisabled: { backgroundColor: colors.sunken },
   cellInput: {
     ...type.numeral,
+    // The input itself is the tap target: 48 px inside the box's border.
+    minHeight: layout.minTap,
     flex: 1,
     minWidth: 0,
     alignSelf: 'stretch',

@@ -282,25 +282,47 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
     </Card>
   );
 
+  // The question about a falling reading sits by the Save button the archer just pressed.
   const actions = (
-    <View style={styles.actions}>
-      <Button
-        label={session ? 'Save the marks' : 'Save the sight-in'}
-        pendingLabel="Saving…"
-        pending={save.isPending}
-        onPress={submit}
-        testID="session-save"
-      />
-      {session ? (
-        <Button
-          label="Tape"
-          variant="secondary"
-          href={`/sessions/${session.id}/tape`}
-          disabled={formState.isDirty}
-          testID="open-tape"
+    <View style={styles.actionsBlock}>
+      {askFalling ? (
+        <ConfirmBar
+          title="Save a reading that falls with distance?"
+          message={`${checks.falling
+            .map((mark) => checks.problems.find((problem) => problem.row === mark.row)?.message)
+            .filter(Boolean)
+            .join(' ')} Save it only if you read the sight right.`}
+          confirmLabel="Save it as it is"
+          pendingLabel="Saving…"
+          pending={save.isPending}
+          error={null}
+          onConfirm={() => {
+            fallingConfirmed.current = true;
+            void submit();
+          }}
+          onCancel={() => setAskFalling(false)}
+          testID="falling-confirm"
         />
       ) : null}
-      <Button label="Back to the bow" variant="quiet" href={`/bows/${bow.id}`} />
+      <View style={styles.actions}>
+        <Button
+          label={session ? 'Save the marks' : 'Save the sight-in'}
+          pendingLabel="Saving…"
+          pending={save.isPending}
+          onPress={submit}
+          testID="session-save"
+        />
+        {session ? (
+          <Button
+            label="Tape"
+            variant="secondary"
+            href={`/sessions/${session.id}/tape`}
+            disabled={formState.isDirty}
+            testID="open-tape"
+          />
+        ) : null}
+        <Button label="Back to the bow" variant="quiet" href={`/bows/${bow.id}`} />
+      </View>
     </View>
   );
 
@@ -321,25 +343,6 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
             ? `${keptItem.refusal?.message ?? 'It was refused.'} It stays on this phone (see the list at the top) until you copy or discard it.`
             : 'Saved on this phone. It is sent to Pinwright when the signal is back, even if you close the app; the live fit below works meanwhile.'}
         </Banner>
-      ) : null}
-      {askFalling ? (
-        <ConfirmBar
-          title="Save a reading that falls with distance?"
-          message={`${checks.falling
-            .map((mark) => checks.problems.find((problem) => problem.row === mark.row)?.message)
-            .filter(Boolean)
-            .join(' ')} Save it only if you read the sight right.`}
-          confirmLabel="Save it as it is"
-          pendingLabel="Saving…"
-          pending={save.isPending}
-          error={null}
-          onConfirm={() => {
-            fallingConfirmed.current = true;
-            void submit();
-          }}
-          onCancel={() => setAskFalling(false)}
-          testID="falling-confirm"
-        />
       ) : null}
       {save.isSuccess && !save.data.kept && session && !formState.isDirty ? (
         <Banner tone="info" title="Saved">
@@ -403,6 +406,7 @@ const styles = StyleSheet.create({
   section: { gap: space.lg },
   split: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
   column: { flex: 1, minWidth: 0, gap: space.xl },
+  actionsBlock: { gap: space.md },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
   topActions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'center' },
   topHint: { flexShrink: 1 },
