@@ -32,6 +32,7 @@ import * as m0054 from './0054-arrow-sets';
 import * as m0055 from './0055-arrows';
 import * as m0056 from './0056-arrow-fliers';
 import * as m0057 from './0057-range-confirmations';
+import * as m0075 from './0075-sight-sessions-warning-count';
 
 type Step = { up: (p: { context: QueryInterface }) => Promise<void>; down: (p: { context: QueryInterface }) => Promise<void> };
 
@@ -63,6 +64,7 @@ export const migrations: Array<[string, Step]> = [
   ['0055-arrows', m0055],
   ['0056-arrow-fliers', m0056],
   ['0057-range-confirmations', m0057],
+  ['0075-sight-sessions-warning-count', m0075],
 ];
 
 export function migrator(sequelize: Sequelize) {

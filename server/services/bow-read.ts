@@ -196,7 +196,7 @@ FROM bows b JOIN arrow_builds ab ON ab.bow_id = b.id LEFT JOIN users adder ON ad
       key: 'sessions',
       sql: `SELECT s.id, s.bow_id AS bowId, s.build_id AS buildId, s.date, s.place_label AS placeLabel, s.altitude_m AS altitudeM,
   s.temperature_c AS temperatureC, s.notes, s.fit_speed_fps AS fitSpeedFps, s.fit_rms_mm AS fitRmsMm,
-  JSON_LENGTH(s.fit, '$.warnings') AS warningCount,
+  s.fit_warning_count AS warningCount,
   s.added_by_id AS addedById, adder.name AS addedByName, s.created_at AS createdAt, s.updated_at AS updatedAt
 FROM bows b JOIN sight_sessions s ON s.bow_id = b.id LEFT JOIN users adder ON adder.id = s.added_by_id WHERE ${scope}`,
     },
