@@ -25,7 +25,11 @@ import { arrowSetStats, buildWeightCheck, defaultToleranceGr } from '@/shared/ar
 import type { BowDetail } from '@/shared/bow';
 
 const gr = (value: number) => `${Number(value.toFixed(1))} gr`;
-const signedGr = (value: number) => `${value > 0 ? '+' : value < 0 ? '−' : '±'}${Number(Math.abs(value).toFixed(1))} gr`;
+/** "+0.4 gr", "−0.3 gr", "±0 gr" (rounded to 0.1 gr first, so −0.04 reads ±0). */
+const signedGr = (value: number) => {
+  const rounded = Number(value.toFixed(1));
+  return `${rounded > 0 ? '+' : rounded < 0 ? '−' : '±'}${Math.abs(rounded)} gr`;
+};
 
 function spinWords(arrow: Arrow): string {
   if (arrow.spinKind === 'thou') return `runout ${arrow.runout} thou`;
