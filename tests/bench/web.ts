@@ -36,7 +36,16 @@ export type ColdLoad = {
   workerRequests: number;
 };
 
-export type LighthouseScores = { performance: number; accessibility: number; lcpMs: number; tbtMs: number; failing: string[] };
+export type LighthouseScores = {
+  performance: number;
+  accessibility: number;
+  fcpMs: number;
+  lcpMs: number;
+  tbtMs: number;
+  siMs: number;
+  cls: number;
+  failing: string[];
+};
 
 async function coldLoad(baseUrl: string): Promise<ColdLoad> {
   // Service-worker requests reach the context's request events only with this set (playwright-core 1.55).
@@ -109,14 +118,20 @@ function lighthouse(url: string, cookie?: string): Promise<LighthouseScores> {
     child.on('exit', (code) => {
       if (code !== 0 || !fs.existsSync(out)) return reject(new Error(`lighthouse failed (${code}): ${err.slice(-2000)}`));
       const report = JSON.parse(fs.readFileSync(out, 'utf8'));
+      // PINWRIGHT_LH_KEEP=<dir> keeps each full report there, to read which audits cost the score.
+      const keep = process.env.PINWRIGHT_LH_KEEP;
+      if (keep) fs.copyFileSync(out, path.join(keep, `lighthouse-${cookie ? 'bench' : 'sign-in'}.json`));
       fs.rmSync(out, { force: true });
       const audits = report.audits as Record<string, { score: number | null; numericValue?: number; scoreDisplayMode: string; title: string }>;
       const a11yRefs = report.categories.accessibility.auditRefs as { id: string; weight: number }[];
       resolve({
         performance: Math.round(report.categories.performance.score * 100),
         accessibility: Math.round(report.categories.accessibility.score * 100),
+        fcpMs: audits['first-contentful-paint']?.numericValue ?? NaN,
         lcpMs: audits['largest-contentful-paint']?.numericValue ?? NaN,
         tbtMs: audits['total-blocking-time']?.numericValue ?? NaN,
+        siMs: audits['speed-index']?.numericValue ?? NaN,
+        cls: audits['cumulative-layout-shift']?.numericValue ?? NaN,
         failing: a11yRefs.filter((r) => r.weight > 0 && audits[r.id]?.score === 0).map((r) => r.id),
       });
     });
@@ -183,8 +198,12 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
   const dbName = `pinwright_bench_${Date.now().toString(36)}_${process.pid}`;
   process.env.DB_NAME = dbName;
   process.env.NODE_ENV ||= 'test';
-  const { exportWebIfStale } = await import('@/server/tools/web-export');
-  await exportWebIfStale(root);
+  // WEB_DIR=<dir> measures an export kept elsewhere (e.g. a copy of dist/ before a change) as it is, unbuilt.
+  const webDir = process.env.WEB_DIR ? path.resolve(process.env.WEB_DIR) : path.join(root, 'dist');
+  if (!process.env.WEB_DIR) {
+    const { exportWebIfStale } = await import('@/server/tools/web-export');
+    await exportWebIfStale(root);
+  }
   const { config } = await import('@/server/config');
   if (config.db.name !== dbName) throw new Error('the web bench must set DB_NAME before server/config.ts is first loaded');
   const { startLocalDatabase, createDatabase, dropDatabase } = await import('@/server/tools/database');
@@ -197,7 +216,7 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
     const { seedDemo, demoAccounts } = await import('@/server/seed/demo');
     await seedDemo();
     const { createApp } = await import('@/server/app');
-    const app = createApp({ sessionExpiryTimer: false });
+    const app = createApp({ sessionExpiryTimer: false, webDir });
     server = await new Promise<Server>((resolve) => {
       const s = app.listen(0, '127.0.0.1', () => resolve(s));
     });
@@ -211,7 +230,7 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
     console.log(`  then, in the background, the service worker's precache: ${kb(cold.workerBytes)} in ${cold.workerRequests} requests`);
 
     console.log('\nweb: the entry script served 5 s each (autocannon, 4 connections, Accept-Encoding: br, gzip)');
-    for (const run of await staticFiles(path.join(root, 'dist'))) {
+    for (const run of await staticFiles(webDir)) {
       console.log(
         `  ${run.name.padEnd(30)} ${Math.round(run.requestsPerSec).toString().padStart(5)} req/s, p50 ${run.p50Ms} ms, p99 ${run.p99Ms} ms, ${kb(run.bytesPerResponse)} a response`,
       );
@@ -232,7 +251,8 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
         console.log(
           `  ${name.padEnd(18)} performance ${String(s.performance).padStart(3)} (goal ≥ 90 — ${verdict(s.performance >= 90)}), ` +
             `accessibility ${String(s.accessibility).padStart(3)} (goal 100 — ${verdict(s.accessibility === 100)}); ` +
-            `LCP ${(s.lcpMs / 1000).toFixed(1)} s, TBT ${Math.round(s.tbtMs)} ms${s.failing.length ? `; failing: ${s.failing.join(', ')}` : ''}`,
+            `FCP ${(s.fcpMs / 1000).toFixed(1)} s, LCP ${(s.lcpMs / 1000).toFixed(1)} s, SI ${(s.siMs / 1000).toFixed(1)} s, ` +
+            `TBT ${Math.round(s.tbtMs)} ms, CLS ${s.cls.toFixed(3)}${s.failing.length ? `; failing: ${s.failing.join(', ')}` : ''}`,
         );
       }
     }
