@@ -1,6 +1,7 @@
 import { Stack } from 'expo-router';
 
 import { Providers } from '@/components/providers';
+import { FirstScreen } from '@/components/shell/first-screen';
 import { UpdateNotice } from '@/components/shell/update-notice';
 
 export { ErrorBoundary } from 'expo-router';
@@ -8,7 +9,9 @@ export { ErrorBoundary } from 'expo-router';
 export default function RootLayout() {
   return (
     <Providers>
-      <Stack screenOptions={{ headerShown: false }} />
+      <FirstScreen>
+        <Stack screenOptions={{ headerShown: false }} />
+      </FirstScreen>
       <UpdateNotice />
     </Providers>
   );

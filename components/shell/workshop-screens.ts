@@ -32,6 +32,7 @@ export { DevMailScreen } from '@/components/dev-mail/dev-mail-screen';
 export { InviteScreen } from '@/components/shares/invite-screen';
 export { PrintSheetScreen } from '@/components/print/print-sheet-screen';
 export { TryScreen } from '@/components/try/try-screen';
+export { KeepTryScreen } from '@/components/try/keep-try-screen';
 export { TuningScreen } from '@/components/tuning/tuning-screen';
 export { ArrowSetsScreen } from '@/components/arrows/arrow-sets-screen';
 export { PaperTuneScreen } from '@/components/tuning/paper-tune-screen';

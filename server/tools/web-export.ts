@@ -6,7 +6,7 @@
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
-import { finishWebExport } from './web-pwa';
+import { finishWebExport, readPalette } from './web-pwa';
 
 const SOURCES = ['app', 'components', 'shared', 'math', 'assets', 'app.json', 'babel.config.js', 'package-lock.json', 'metro.config.js', 'server/tools/web-pwa.ts'];
 
@@ -46,11 +46,41 @@ export async function exportWeb(root: string, log: (line: string) => void = cons
     child.stderr.on('data', keep);
     child.on('exit', (code) => (code === 0 ? resolve() : reject(new Error(`expo export failed (exit ${code}):\n${output.slice(-4000)}`))));
   });
+  addFirstPaintShell(path.join(root, 'dist', 'index.html'), readPalette(root));
   await finishWebExport(root, log);
   const stamp = path.join(root, 'dist', '.built-at');
   fs.writeFileSync(stamp, stampStart.toISOString());
   fs.utimesSync(stamp, stampStart, stampStart);
   log(`Web app built in ${((Date.now() - started) / 1000).toFixed(0)} s.`);
+}
+
+const SHELL_ID = 'pw-first-paint';
+
+/**
+ * Puts a small static first screen into the exported page, beside
+ * `<div id="root">`: the name, what Pinwright is for in one sentence and
+ * "Opening…", in the theme's colours and the system font, covering the page,
+ * so something true shows as soon as the page arrives instead of after the
+ * 300 KB script has downloaded and run. No form, no link. The app removes it
+ * once its first screen has rendered (components/shell/first-screen.tsx).
+ * Runs before web-pwa.ts, so the service worker's copy of index.html and its
+ * .br/.gz twins include it. Idempotent.
+ */
+export function addFirstPaintShell(indexHtml: string, colors: Record<string, string>): void {
+  const html = fs.readFileSync(indexHtml, 'utf8');
+  if (html.includes(`id="${SHELL_ID}"`)) return;
+  for (const name of ['paper', 'ink', 'inkSoft']) if (!colors[name]) throw new Error(`components/theme.ts: colour "${name}" not found for the first-paint shell`);
+  const shell =
+    `<div id="${SHELL_ID}" style="position:fixed;inset:0;z-index:10;box-sizing:border-box;padding:40px 24px;display:flex;flex-direction:column;` +
+    `align-items:center;justify-content:center;gap:12px;background:${colors.paper};color:${colors.ink};` +
+    `font-family:system-ui,-apple-system,'Segoe UI',Roboto,sans-serif;text-align:center">` +
+    `<p style="margin:0;font-size:28px;line-height:34px;font-weight:700;letter-spacing:0.3px">Pinwright</p>` +
+    `<p style="margin:0;max-width:360px;font-size:17px;line-height:26px;color:${colors.inkSoft}">` +
+    `Sight tapes, sight-ins and level checks for compound bows.</p>` +
+    `<p role="status" style="margin:0;font-size:15px;line-height:22px;color:${colors.inkSoft}">Opening…</p></div>`;
+  const withShell = html.replace('<div id="root"></div>', `<div id="root"></div>${shell}`);
+  if (withShell === html) throw new Error('dist/index.html has no empty <div id="root"></div> to put the first-paint shell beside');
+  fs.writeFileSync(indexHtml, withShell);
 }
 
 export async function exportWebIfStale(root: string, log: (line: string) => void = console.log): Promise<void> {
