@@ -40,10 +40,12 @@ for (const size of [PHONE, DESKTOP]) {
     await screenshot(page, 'account');
     // Units are saved as soon as they are picked, and survive a reload.
     const saved = page.waitForResponse((r) => r.url().endsWith('/api/me') && r.request().method() === 'PATCH');
-    await page.getByRole('radio', { name: 'Metres', exact: true }).click();
+    await page.getByTestId('unit-distanceUnit').getByRole('radio', { name: 'Metres', exact: true }).click();
     expect((await saved).status()).toBe(200);
+    // The device cache is written within 0.1 s of new data (components/offline): let it land before reloading.
+    await page.waitForTimeout(600);
     await page.reload();
-    await page.getByRole('radio', { name: 'Metres', exact: true, checked: true }).waitFor();
+    await page.getByTestId('unit-distanceUnit').getByRole('radio', { name: 'Metres', exact: true, checked: true }).waitFor();
     await page.getByRole('button', { name: /sign out/i }).click();
     await page.getByLabel('E-mail').waitFor();
 
