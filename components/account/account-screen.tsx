@@ -6,9 +6,8 @@ import { DeleteAccount } from '@/components/account/delete-account';
 import { PasswordChangeForm } from '@/components/account/password-change-form';
 import { AccountShares } from '@/components/shares/account-shares';
 import { UnitChoices } from '@/components/account/unit-choices';
-import { useMe, useSignOut } from '@/components/auth/api';
-import { Banner } from '@/components/ui/banner';
-import { Button } from '@/components/ui/button';
+import { useMe } from '@/components/auth/api';
+import { SignOutButton } from '@/components/auth/sign-out-button';
 import { Card } from '@/components/ui/card';
 import { DownloadLink } from '@/components/ui/download-link';
 import { SignOutIcon } from '@/components/ui/icons';
@@ -22,7 +21,6 @@ import { space } from '@/components/theme';
 /** The account page: who is signed in, their units, shares, password, a download of everything, signing out and deleting the account. */
 export function AccountScreen() {
   const me = useMe();
-  const signOut = useSignOut();
 
   // The (app) layout only renders this once useMe has a user; this covers the moment after sign-out.
   if (!me.data) return <LoadingView />;
@@ -50,21 +48,7 @@ export function AccountScreen() {
           <DownloadLink label="Download everything" href={accountExportHref} fileName="pinwright-everything.json" testID="account-export" />
         </View>
       </Card>
-      {signOut.isError ? (
-        <Banner tone="error" title="Could not sign out">
-          {signOut.error.message}
-        </Banner>
-      ) : null}
-      <View style={styles.actions}>
-        <Button
-          label="Sign out"
-          pendingLabel="Signing out…"
-          pending={signOut.isPending}
-          variant="secondary"
-          icon={SignOutIcon}
-          onPress={() => signOut.mutate()}
-        />
-      </View>
+      <SignOutButton label="Sign out" variant="secondary" icon={SignOutIcon} />
       <SectionHeading level={2} title="Delete the account" />
       <Card>
         <DeleteAccount />

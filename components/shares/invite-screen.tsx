@@ -3,7 +3,8 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
-import { useMe, useSignOut } from '@/components/auth/api';
+import { useMe } from '@/components/auth/api';
+import { SignOutButton } from '@/components/auth/sign-out-button';
 import { AuthFrame } from '@/components/auth/auth-frame';
 import { applyServerErrors } from '@/components/auth/server-errors';
 import { SignInForm } from '@/components/auth/sign-in-form';
@@ -78,7 +79,6 @@ function NewTechForm({ token, invite, onDone }: { token: string; invite: InviteP
  */
 export function InviteScreen({ token }: { token: string | undefined }) {
   const me = useMe();
-  const signOut = useSignOut();
   const preview = useInvitePreview(token);
   const accept = useAcceptInvite();
   const [mode, setMode] = useState<'new' | 'existing'>('new');
@@ -117,7 +117,7 @@ export function InviteScreen({ token }: { token: string | undefined }) {
           <>
             <Text>{`Signed in as ${user.name} (${user.email}).`}</Text>
             <Button label="Accept the invitation" pendingLabel="Accepting…" pending={accept.isPending} onPress={() => accept.mutate(token, { onSuccess: setAccepted })} fullWidth testID="accept-invite" />
-            <Button label="Sign out and use another account" variant="quiet" onPress={() => signOut.mutate()} />
+            <SignOutButton label="Sign out and use another account" variant="quiet" />
           </>
         ) : null}
         {user && user.role !== 'tech' ? (
@@ -125,7 +125,7 @@ export function InviteScreen({ token }: { token: string | undefined }) {
             <Banner tone="warn" title="Invitations are for technician accounts">
               {`You are signed in as ${user.name} (${user.email}), which is not a technician account. Sign out, then sign in with your technician account or create one here.`}
             </Banner>
-            <Button label="Sign out" variant="secondary" pending={signOut.isPending} onPress={() => signOut.mutate()} />
+            <SignOutButton label="Sign out" variant="secondary" />
           </>
         ) : null}
         {!user ? (
