@@ -161,7 +161,11 @@ for (const size of [PHONE, DESKTOP]) {
     const natural = await sheet.evaluate((img: HTMLImageElement) => ({ width: img.naturalWidth, css: img.style.width }));
     expect(natural.width).toBeGreaterThan(0);
     // On screen the preview shrinks to fit (min(100%, paper width)); printed, it is the paper's true size.
-    expect(natural.css).toMatch(/^min\(100%, [\d.]+mm\)$/);
+    // Chromium may serialise the mm width in px: 1 in = 96 px = 25.4 mm (CSS Values and Units, absolute lengths).
+    const widthMatch = natural.css.match(/^min\(100%, ([\d.]+)(mm|px)\)$/);
+    expect(widthMatch).not.toBeNull();
+    const previewWidthMm = widthMatch![2] === 'mm' ? Number(widthMatch![1]) : (Number(widthMatch![1]) * 25.4) / 96;
+    expect([210, 215.9].some((paperMm) => Math.abs(paperMm - previewWidthMm) < 0.1)).toBe(true);
     const pageRule = await page.evaluate(() => Array.from(document.querySelectorAll('style')).map((style) => style.textContent ?? '').find((css) => css.includes('@page')) ?? '');
     expect(pageRule).toMatch(/@page \{ size: (A4|letter); margin: 0; \}/);
     expect(pageRule).toMatch(/\.pw-sheet \{[^}]*width: (210|215\.9)mm !important; height: (297|279\.4)mm !important/);
