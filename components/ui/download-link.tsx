@@ -1,6 +1,9 @@
-import { Linking } from 'react-native';
+import { Linking, StyleSheet, View } from 'react-native';
 
+import { useOnline } from '@/components/offline/use-online';
 import { Button } from '@/components/ui/button';
+import { Text } from '@/components/ui/text';
+import { space } from '@/components/theme';
 
 export interface DownloadLinkProps {
   label: string;
@@ -18,5 +21,19 @@ export interface DownloadLinkProps {
  * Example: `<DownloadLink label="Download SVG" href="/api/sessions/4/tape.svg" />`
  */
 export function DownloadLink({ label, href, testID }: DownloadLinkProps) {
+  const online = useOnline();
+  // Every file comes from the server: with no signal, a disabled button that says so.
+  if (!online) {
+    return (
+      <View style={styles.offline}>
+        <Button label={label} variant="secondary" disabled testID={testID} />
+        <Text variant="small" tone="soft">Needs a connection</Text>
+      </View>
+    );
+  }
   return <Button label={label} variant="secondary" onPress={() => Linking.openURL(href)} testID={testID} />;
 }
+
+const styles = StyleSheet.create({
+  offline: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
+});

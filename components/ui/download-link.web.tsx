@@ -1,5 +1,6 @@
 import { useState, type CSSProperties } from 'react';
 
+import { useOnline } from '@/components/offline/use-online';
 import type { DownloadLinkProps } from '@/components/ui/download-link';
 import { borders, colors, fonts, layout, radii, space } from '@/components/theme';
 
@@ -10,6 +11,7 @@ import { borders, colors, fonts, layout, radii, space } from '@/components/theme
  * Example: `<DownloadLink label="Download SVG" href="/api/sessions/4/tape.svg" fileName="tape.svg" />`
  */
 export function DownloadLink({ label, href, fileName, testID }: DownloadLinkProps) {
+  const online = useOnline();
   const [hovered, setHovered] = useState(false);
   const [focused, setFocused] = useState(false);
   const style: CSSProperties = {
@@ -31,6 +33,20 @@ export function DownloadLink({ label, href, fileName, testID }: DownloadLinkProp
     outline: focused ? `${borders.focus}px solid ${colors.focus}` : 'none',
     outlineOffset: 2,
   };
+  // Every file comes from the server (PDF, SVG, CSV, JSON): with no signal say so
+  // beside a disabled button instead of offering a link that fails.
+  if (!online) {
+    return (
+      <span style={{ display: 'inline-flex', alignItems: 'center', flexWrap: 'wrap', gap: space.sm }}>
+        <button type="button" disabled aria-describedby={testID ? `${testID}-offline` : undefined} data-testid={testID} style={{ ...style, opacity: 0.6, cursor: 'not-allowed' }}>
+          {label}
+        </button>
+        <span id={testID ? `${testID}-offline` : undefined} style={{ color: colors.inkSoft, fontFamily: fonts.body, fontSize: 15 }}>
+          Needs a connection
+        </span>
+      </span>
+    );
+  }
   return (
     <a
       href={href}
