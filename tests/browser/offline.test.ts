@@ -258,6 +258,12 @@ for (const where of ['online', 'offline'] as const) {
     }
     await page.goto('/account');
     await page.getByRole('button', { name: 'Sign out' }).click();
+    if (where === 'offline') {
+      // Signing out first says what it would delete (components/auth/sign-out-button.tsx).
+      const guard = page.getByTestId('sign-out-guard');
+      await guard.getByText('1 item on this phone is not sent yet; signing out deletes it.').waitFor();
+      await page.getByRole('button', { name: 'Sign out anyway' }).click();
+    }
     await page.getByLabel('E-mail').waitFor({ timeout: 20_000 });
     await page.waitForTimeout(800);
     const left = await deviceContents(page);
