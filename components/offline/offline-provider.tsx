@@ -50,6 +50,10 @@ export function OfflineProvider({ queryClient, children }: { queryClient: QueryC
       .then((userId) => {
         // Nobody kept on this phone and no signal: nobody is signed in here (stale, so it is asked again once online).
         if (userId === null && !onlineManager.isOnline()) queryClient.setQueryData(['me'], null, { updatedAt: 0 });
+        // What the device kept is a last sight, not fresh news: every restored query is stale, so each
+        // screen asks the server again when it mounts (a reload must show changes made elsewhere);
+        // with no signal the ask waits and the kept data stays on screen.
+        void queryClient.invalidateQueries({ refetchType: 'none' });
       })
       .finally(() => {
         if (live) setRestored(true);
