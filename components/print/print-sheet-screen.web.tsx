@@ -22,7 +22,9 @@ function paperOf(query: string): PaperName {
  */
 function printCss(paper: PaperName): string {
   const size = paper === 'a4' ? 'A4' : 'letter';
-  const { widthMm, heightMm } = PAPER_SIZES_MM[paper];
+  // 8.5 in × 25.4 is 215.89999999999998 in binary floating point: write whole micrometres.
+  const widthMm = Number(PAPER_SIZES_MM[paper].widthMm.toFixed(3));
+  const heightMm = Number(PAPER_SIZES_MM[paper].heightMm.toFixed(3));
   return `
 @page { size: ${size}; margin: 0; }
 @media print {
