@@ -72,7 +72,7 @@ export const arrowUpdateSchema = arrowFields.omit({ number: true }).partial();
 
 /** Body of POST /api/arrows/:id/fliers: this arrow flew out of the group at that sight-in. */
 export const arrowFlierInputSchema = z.object({
-  sessionId: z.number({ invalid_type_error: 'Choose the sight-in' }).int().positive('Choose the sight-in'),
+  sightInId: z.number({ invalid_type_error: 'Choose the sight-in' }).int().positive('Choose the sight-in'),
   note: textSchema('Note', 200),
 });
 
@@ -85,7 +85,7 @@ export const arrowSchema = z.object({
   note: z.string(),
   status: z.enum(arrowStatuses),
   /** Sight-ins at which it flew out of the group. */
-  fliers: z.array(z.object({ id: z.number().int(), sessionId: z.number().int(), note: z.string(), addedBy: personSchema })),
+  fliers: z.array(z.object({ id: z.number().int(), sightInId: z.number().int(), note: z.string(), addedBy: personSchema })),
 });
 
 export const arrowSetSchema = z.object({

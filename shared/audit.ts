@@ -19,7 +19,7 @@ export const auditEntrySchema = z.object({
   bow: z.object({ id: z.number().int(), nickname: z.string(), ownerId: z.number().int(), ownerName: z.string() }).nullable().optional(),
   /** For an entry about an account (role changed, disabled…): that account (null once it is deleted). */
   account: z.object({ id: z.number().int(), name: z.string(), email: z.string() }).nullable().optional(),
-  /** The kind of record, e.g. "level-check", "session-mark", "share", "account". */
+  /** The kind of record, e.g. "level-check", "sight-in-mark", "share", "account". */
   recordType: z.string(),
   recordId: z.number().int().nullable(),
   summary: z.string(),
@@ -44,7 +44,7 @@ export const adminAuditQuerySchema = auditQuerySchema.extend({
   kind: z
     .string()
     .trim()
-    .regex(/^[a-z-]{1,40}$/, 'The kind is a record kind such as "share" or "session-mark"')
+    .regex(/^[a-z-]{1,40}$/, 'The kind is a record kind such as "share" or "sight-in-mark"')
     .optional(),
 });
 

@@ -8,7 +8,7 @@ import {
   timestampsSchema,
 } from './common';
 import { buildSchema } from './build';
-import { sessionListItemSchema } from './session';
+import { sightInListItemSchema } from './sight-in';
 import { tapeSchema } from './tape';
 import { bowConfirmSchema } from './staleness-api';
 
@@ -99,8 +99,8 @@ export const bowSchema = bowFields.extend({ id: z.number().int(), userId: z.numb
 
 /** The Bench's readiness summary of one bow. */
 export const bowReadinessSchema = z.object({
-  /** The most recent sight-in session (by date, then id), or null. */
-  latestSession: z
+  /** The most recent sight-in (by date, then id), or null. */
+  latestSightIn: z
     .object({
       id: z.number().int(),
       date: z.string(),
@@ -113,7 +113,7 @@ export const bowReadinessSchema = z.object({
     })
     .nullable(),
   buildCount: z.number().int(),
-  sessionCount: z.number().int(),
+  sightInCount: z.number().int(),
   hasTape: z.boolean(),
   /** Level-check status; filled in by the level-check feature (null until then). */
   level: z.unknown().nullable(),
@@ -131,7 +131,7 @@ export const bowSummarySchema = bowSchema.extend({ readiness: bowReadinessSchema
 export const bowListResponseSchema = z.object({ bows: z.array(bowSummarySchema) });
 
 /**
- * GET /api/bows/:id → { bow: BowDetail }: the bow with its builds, sessions
+ * GET /api/bows/:id → { bow: BowDetail }: the bow with its builds, sight-ins
  * (newest first, with fit summaries) and tapes, and its owner's name (so a
  * technician it is shared with sees whose records they are).
  */
@@ -139,7 +139,7 @@ export const bowDetailSchema = bowSummarySchema.extend({
   /** The archer who owns the bow (User.name of `userId`). */
   ownerName: z.string(),
   builds: z.array(buildSchema),
-  sessions: z.array(sessionListItemSchema),
+  sightIns: z.array(sightInListItemSchema),
   tapes: z.array(tapeSchema),
 });
 

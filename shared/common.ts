@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
 /**
- * Small schema builders shared by the bow, build, session and tape schemas, so
+ * Small schema builders shared by the bow, build, sight-in and tape schemas, so
  * every field message reads the same way: "Sight radius must be at least 400 mm",
  * "Enter the draw weight", "Nickname must be at most 60 characters".
  * Imports only zod.
@@ -95,10 +95,10 @@ export const pageSchema = z.coerce
 export const idParamSchema = z.object({ id: idSchema('record') });
 /** Params of /api/bows/:bowId/… routes. */
 export const bowIdParamSchema = z.object({ bowId: idSchema('bow') });
-/** Params of /api/sessions/:sessionId/… routes. */
-export const sessionIdParamSchema = z.object({ sessionId: idSchema('session') });
+/** Params of /api/sight-ins/:sightInId/… routes. */
+export const sightInIdParamSchema = z.object({ sightInId: idSchema('sightIn') });
 
-/** Body field for a reference to another record (e.g. a session's buildId). */
+/** Body field for a reference to another record (e.g. a sight-in's buildId). */
 export function refIdSchema(what: string) {
   return z
     .number({ required_error: `Choose the ${what}`, invalid_type_error: `Choose the ${what}` })

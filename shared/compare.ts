@@ -157,8 +157,8 @@ export const buildComparisonSchema = z.object({
 export const compareSourceSchema = z.object({
   buildId: z.number().int(),
   name: z.string(),
-  sessionId: z.number().int(),
-  sessionDate: z.string(),
+  sightInId: z.number().int(),
+  sightInDate: z.string(),
   placeLabel: z.string(),
   altitudeM: finiteOrNull,
   temperatureC: finiteOrNull,

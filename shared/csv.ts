@@ -1,9 +1,9 @@
 import { z } from 'zod';
 import { distanceUnitSchema } from './common';
-import { markInputSchema } from './session';
+import { markInputSchema } from './sight-in';
 
 /**
- * Importing marks into a session from a CSV file: the request, and the
+ * Importing marks into a sight-in from a CSV file: the request, and the
  * per-row answer the preview shows before anything is saved. Imports only zod.
  *
  * Example: markImportSchema.parse({ csv: 'distance,reading\n20,12.4\n30,19.8' })
@@ -15,7 +15,7 @@ export const importMaxBytes = 200 * 1024;
 /** Most data rows accepted in one file. */
 export const importMaxRows = 500;
 
-/** Body of POST /api/sessions/:id/marks/import (`?dryRun=1` for the preview). */
+/** Body of POST /api/sight-ins/:id/marks/import (`?dryRun=1` for the preview). */
 export const markImportSchema = z.object({
   csv: z.string({ required_error: 'Choose a CSV file', invalid_type_error: 'The file must be text' }).min(1, 'The file is empty'),
   /** Unit for distances that carry none (no unit column, no "yd"/"m" after the number). */
@@ -40,12 +40,12 @@ export const importRowSchema = z.object({
 
 export const importResultSchema = z.object({
   dryRun: z.boolean(),
-  /** True when the marks were added to the session. */
+  /** True when the marks were added to the sight-in. */
   saved: z.boolean(),
   rows: z.array(importRowSchema),
   okCount: z.number().int(),
   errorCount: z.number().int(),
-  /** A problem with the file as a whole (no distance column, too many marks for the session…), else null. */
+  /** A problem with the file as a whole (no distance column, too many marks for the sight-in…), else null. */
   fileProblem: z.string().nullable(),
 });
 

@@ -10,9 +10,9 @@ import { paperSchema } from './tape';
  */
 
 /**
- * Body of POST /api/sessions/:id/send-tape. The sheet is laid out like the
- * download GET /api/sessions/:id/sheet.pdf: `tape` picks a saved layout of
- * this session, or `layout` carries that download's query string
+ * Body of POST /api/sight-ins/:id/send-tape. The sheet is laid out like the
+ * download GET /api/sight-ins/:id/sheet.pdf: `tape` picks a saved layout of
+ * this sight-in, or `layout` carries that download's query string
  * ("from=20&to=80&step=1…"); otherwise the defaults from the fit. `paper` wins over both.
  */
 export const sendTapeSchema = z.object({

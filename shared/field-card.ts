@@ -4,7 +4,7 @@ import { distanceLimits, maxAngleDeg } from './fit';
 import { queryNumber, queryNumberList } from './compare';
 
 /**
- * Field card schemas: the query of GET /api/sessions/:id/field-card (and its
+ * Field card schemas: the query of GET /api/sight-ins/:id/field-card (and its
  * .svg and .pdf), and the card's data as math/card computes it: for each
  * slope and slant distance the mark to hold and the "aim as if" level
  * distance beside the rifleman's-rule horizontal distance, and how each level
@@ -39,7 +39,7 @@ function distinct(label: string) {
 /**
  * Query of the field card: `angles` (line-of-sight angles, degrees, + uphill,
  * comma separated; default −40 to +40 every 10), `distances` (slant
- * distances in the session's unit; default 20 to 60 every 10), and an
+ * distances in the sight-in's unit; default 20 to 60 every 10), and an
  * optional hunt air: `altitudeM` and `temperatureC` (without a temperature,
  * the standard atmosphere's at that altitude). Without either, the card is
  * for the air of the sight-in.
@@ -145,9 +145,9 @@ export const fieldCardLabelsSchema = z.object({
   place: z.string(),
 });
 
-/** GET /api/sessions/:id/field-card → this. */
+/** GET /api/sight-ins/:id/field-card → this. */
 export const fieldCardResponseSchema = z.object({
-  sessionId: z.number().int(),
+  sightInId: z.number().int(),
   bowId: z.number().int(),
   card: fieldCardDataSchema,
   labels: fieldCardLabelsSchema,

@@ -253,10 +253,10 @@ export const photoResponseSchema = z.object({ photo: photoSchema });
 export const tripReadinessSchema = z.object({
   bow: z.object({ id: z.number().int(), nickname: z.string(), sightDescription: z.string() }),
   level: levelSummarySchema,
-  /** The latest sight-in session's marks (each shot at the range), or null without a session. */
+  /** The latest sight-in's marks (each shot at the range), or null without a sight-in. */
   marks: z
     .object({
-      sessionId: z.number().int(),
+      sightInId: z.number().int(),
       date: z.string(),
       placeLabel: z.string(),
       buildName: z.string().nullable(),
@@ -265,18 +265,18 @@ export const tripReadinessSchema = z.object({
       longestUnit: z.enum(['yd', 'm']).nullable(),
     })
     .nullable(),
-  /** The most recently saved tape and the session it was printed from. */
+  /** The most recently saved tape and the sight-in it was printed from. */
   tape: z
     .object({
       id: z.number().int(),
-      sessionId: z.number().int(),
-      sessionDate: z.string(),
+      sightInId: z.number().int(),
+      sightInDate: z.string(),
       fromDistance: z.number(),
       toDistance: z.number(),
       unit: z.enum(['yd', 'm']),
       label: z.string(),
       savedAt: z.string(),
-      fromLatestSession: z.boolean(),
+      fromLatestSightIn: z.boolean(),
     })
     .nullable(),
   /** Plain sentences: what to look at before leaving. */

@@ -72,7 +72,7 @@ export interface MarkCheckResult {
   falling: CheckedMark[];
 }
 
-/** Highest scale reading the API accepts, mm (shared/session.ts markInputSchema). */
+/** Highest scale reading the API accepts, mm (shared/sightIn.ts markInputSchema). */
 export const maxScaleMm = 200;
 /** Speed assumed for the turning point when the build has no chronographed speed, fps (fast for a hunting arrow). */
 export const turningPointSpeedFps = 350;

@@ -19,16 +19,16 @@ import { queryNumber } from './compare';
  * Body of POST /api/bows/:bowId/predict: either `buildId` (a saved build on
  * this bow) or `build` (a new build's components, as the build form sends
  * them; its chronographed speed, if given, is used instead of a prediction),
- * and optionally `sessionId`, the sight-in whose sight geometry carries the
+ * and optionally `sightInId`, the sight-in whose sight geometry carries the
  * new arrow (default: the bow's most recent).
  */
 export const predictRequestSchema = z
   .object({
     buildId: refIdSchema('arrow build').optional(),
     build: buildInputSchema.optional(),
-    sessionId: refIdSchema('sight-in session').optional(),
+    sightInId: refIdSchema('sight-in').optional(),
   })
-  .strict('Send a buildId or a build, and optionally a sessionId')
+  .strict('Send a buildId or a build, and optionally a sightInId')
   .superRefine((value, ctx) => {
     if ((value.buildId === undefined) === (value.build === undefined)) {
       ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['buildId'], message: 'Choose a saved build or enter a new one (one of the two)' });
@@ -84,7 +84,7 @@ const stepSchema = z
 /**
  * Query of GET /api/bows/:bowId/predict/tape.svg: `buildId`, or a new build's
  * components under their build-form names (name, grainsPerInch, cutLengthMm,
- * diameterMm, pointGr, …), optional `sessionId`, and the tape's layout:
+ * diameterMm, pointGr, …), optional `sightInId`, and the tape's layout:
  * `from`, `to` (default 20 to 80 in the sight-in's unit), `step`, `width`
  * (default the bow's tape width), `orientation`, `mirror`.
  * Example: ?buildId=7&from=20&to=70
@@ -104,7 +104,7 @@ export const predictTapeQuerySchema = z.preprocess(
   z
     .object({
       buildId: queryNumber(refIdSchema('arrow build')),
-      sessionId: queryNumber(refIdSchema('sight-in session')),
+      sightInId: queryNumber(refIdSchema('sight-in')),
       name: z.string().trim().max(60, 'Build name must be at most 60 characters').optional(),
       shaftLabel: z.string().trim().max(80, 'Shaft label must be at most 80 characters').optional(),
       ...componentShape,
@@ -171,7 +171,7 @@ export const predictResponseSchema = z.object({
   /** The chronographed builds the speed was fitted from. */
   chronographed: z.array(z.object({ buildId: z.number().int(), name: z.string(), massGr: z.number(), speedFps: z.number() })),
   /** The sight-in whose geometry carries the new arrow, or null. */
-  session: z
+  sightIn: z
     .object({ id: z.number().int(), date: z.string(), placeLabel: z.string(), buildName: z.string(), altitudeM: finiteOrNull, temperatureC: finiteOrNull })
     .nullable(),
   /** Why there are no marks (no fitted sight-in on the bow), or null. */

@@ -1,5 +1,5 @@
 /**
- * One name for a sight-in session wherever one is named (bow lists, Before a
+ * One name for a sight-in wherever one is named (bow lists, Before a
  * trip, Predict's "carried on the sight of", the tape and sight-in screens,
  * the server's trip warnings), so that two of one day can be told apart:
  * the day, then the time it was recorded when another sight-in of the bow has
@@ -16,12 +16,12 @@ export interface NameableSightIn {
   date: string;
   placeLabel: string;
   buildId: number;
-  /** ISO time the session was recorded (its date is a calendar day only). */
+  /** ISO time the sight-in was recorded (its date is a calendar day only). */
   createdAt?: string;
 }
 
 export interface SightInNameOptions {
-  /** The bow's builds (to name the session's), or the build name itself. */
+  /** The bow's builds (to name the sight-in's), or the build name itself. */
   builds?: ReadonlyArray<{ id: number; name: string }>;
   buildName?: string;
   /** The bow's other sight-ins: the time is added when one of them has the same day. */
@@ -49,32 +49,32 @@ function timeOfDay(iso: string | undefined, timeZone?: string): string {
 }
 
 /** The parts of the name: the day (with the time when needed), the place, the build and "(2 of 2)" for twins of one minute. */
-export function sightInNameParts(session: NameableSightIn, options: SightInNameOptions = {}): { day: string; place: string; build: string; ordinal: string } {
-  const sameDay = (options.siblings ?? []).filter((other) => other.id !== session.id && other.date.slice(0, 10) === session.date.slice(0, 10));
-  let day = sightInDay(session.date);
+export function sightInNameParts(sightIn: NameableSightIn, options: SightInNameOptions = {}): { day: string; place: string; build: string; ordinal: string } {
+  const sameDay = (options.siblings ?? []).filter((other) => other.id !== sightIn.id && other.date.slice(0, 10) === sightIn.date.slice(0, 10));
+  let day = sightInDay(sightIn.date);
   if (sameDay.length > 0) {
-    const time = timeOfDay(session.createdAt, options.timeZone);
+    const time = timeOfDay(sightIn.createdAt, options.timeZone);
     if (time) day += `, ${time}`;
   }
-  const build = options.withoutBuild ? '' : (options.buildName ?? options.builds?.find((b) => b.id === session.buildId)?.name ?? '');
+  const build = options.withoutBuild ? '' : (options.buildName ?? options.builds?.find((b) => b.id === sightIn.buildId)?.name ?? '');
   // Same day, place, build and minute: number them in the order they were recorded.
   const twins = sameDay.filter(
     (other) =>
-      other.placeLabel.trim() === session.placeLabel.trim() &&
-      other.buildId === session.buildId &&
-      timeOfDay(other.createdAt, options.timeZone) === timeOfDay(session.createdAt, options.timeZone),
+      other.placeLabel.trim() === sightIn.placeLabel.trim() &&
+      other.buildId === sightIn.buildId &&
+      timeOfDay(other.createdAt, options.timeZone) === timeOfDay(sightIn.createdAt, options.timeZone),
   );
   let ordinal = '';
   if (twins.length > 0) {
-    const order = [...twins, session].sort((a, b) => (a.createdAt ?? '').localeCompare(b.createdAt ?? '') || a.id - b.id);
-    ordinal = `(${order.indexOf(session) + 1} of ${order.length})`;
+    const order = [...twins, sightIn].sort((a, b) => (a.createdAt ?? '').localeCompare(b.createdAt ?? '') || a.id - b.id);
+    ordinal = `(${order.indexOf(sightIn) + 1} of ${order.length})`;
   }
-  return { day, place: session.placeLabel.trim(), build, ordinal };
+  return { day, place: sightIn.placeLabel.trim(), build, ordinal };
 }
 
-/** The session's name (see the module comment). */
-export function sightInName(session: NameableSightIn, options: SightInNameOptions = {}): string {
-  const { day, place, build, ordinal } = sightInNameParts(session, options);
+/** The sight-in's name (see the module comment). */
+export function sightInName(sightIn: NameableSightIn, options: SightInNameOptions = {}): string {
+  const { day, place, build, ordinal } = sightInNameParts(sightIn, options);
   const name = [day, place, build].filter(Boolean).join(' · ');
   return ordinal ? `${name} ${ordinal}` : name;
 }

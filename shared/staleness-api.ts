@@ -12,12 +12,12 @@ export const bowConfirmSchema = z.object({
   reason: z.string(),
   /** When the first change that counts happened (ISO). */
   since: z.string().nullable(),
-  sessionId: z.number().int(),
+  sightInId: z.number().int(),
   tapeId: z.number().int().nullable(),
 });
 
-export const sessionStalenessSchema = z.object({
-  sessionId: z.number().int(),
+export const sightInStalenessSchema = z.object({
+  sightInId: z.number().int(),
   state: z.enum(['current', 'confirm']),
   reason: z.string(),
   since: z.string().nullable(),
@@ -27,8 +27,8 @@ export const sessionStalenessSchema = z.object({
   confirmations: z.array(z.object({ id: z.number().int(), confirmedAt: z.string(), note: z.string(), confirmedBy: personSchema })),
 });
 
-/** Body of POST /api/sessions/:id/confirm-range. */
+/** Body of POST /api/sight-ins/:id/confirm-range. */
 export const confirmRangeInputSchema = z.object({ note: textSchema('Note', 300) });
 
 export type BowConfirm = z.infer<typeof bowConfirmSchema>;
-export type SessionStaleness = z.infer<typeof sessionStalenessSchema>;
+export type SightInStaleness = z.infer<typeof sightInStalenessSchema>;

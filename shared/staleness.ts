@@ -70,7 +70,7 @@ export interface ImpactChange {
 
 /** "Marks confirmed at the range" on a sight-in. */
 export interface RangeConfirmation {
-  sessionId: number;
+  sightInId: number;
   at: Date;
 }
 
@@ -131,7 +131,7 @@ export function fitStaleness(input: {
         ),
     )
     // Confirmed at the range after the change.
-    .filter((change) => !confirmations.some((c) => c.sessionId === fit.id && c.at.getTime() >= change.at.getTime()))
+    .filter((change) => !confirmations.some((c) => c.sightInId === fit.id && c.at.getTime() >= change.at.getTime()))
     .sort((a, b) => a.at.getTime() - b.at.getTime() || String(a.id).localeCompare(String(b.id)));
   if (counting.length === 0) return currentStaleness;
   const first = counting[0];

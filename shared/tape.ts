@@ -3,7 +3,7 @@ import { distanceUnitSchema, maxRecordId, measureSchema, textSchema, timestampsS
 import { distanceLimits } from './fit';
 
 /**
- * Tape schemas: a saved print layout for a session's fit, and the query options
+ * Tape schemas: a saved print layout for a sight-in's fit, and the query options
  * of the tape/sheet downloads. A printed tape is an estimate until every
  * distance you will shoot has been confirmed at the range.
  *
@@ -50,14 +50,14 @@ function checkRange(value: Partial<LayoutFields>, ctx: z.RefinementCtx) {
   }
 }
 
-/** Body of POST /api/sessions/:sessionId/tapes (and the layout part of the try routes). */
+/** Body of POST /api/sight-ins/:sightInId/tapes (and the layout part of the try routes). */
 export const tapeLayoutSchema = layoutFields.superRefine(checkRange);
 /** Body of PATCH /api/tapes/:id: any subset; the server re-checks the merged layout. */
 export const tapeUpdateSchema = layoutFields.partial().superRefine(checkRange);
 
 /** A saved tape as the API returns it. */
 export const tapeSchema = layoutFields
-  .extend({ id: z.number().int(), sessionId: z.number().int(), bowId: z.number().int() })
+  .extend({ id: z.number().int(), sightInId: z.number().int(), bowId: z.number().int() })
   .merge(timestampsSchema);
 
 const queryNumber = (schema: z.ZodTypeAny) =>
@@ -68,7 +68,7 @@ const queryBoolean = z.preprocess(
 );
 
 /**
- * Query of GET /api/sessions/:id/tape.svg, sheet.svg and sheet.pdf: either
+ * Query of GET /api/sight-ins/:id/tape.svg, sheet.svg and sheet.pdf: either
  * `tape=<saved tape id>` or any layout options (the rest default from the fit:
  * the sighted range, 1 yd steps, the bow's tape width).
  * Example: ?from=20&to=80&unit=yd&orientation=up&mirror=1

@@ -7,7 +7,7 @@ export const tripBuildSchema = z.object({
   /** The build's latest sight-in (each mark shot at the range, so confirmed), or null when it has none. */
   marks: z
     .object({
-      sessionId: z.number().int(),
+      sightInId: z.number().int(),
       /** The sight-in's name (shared/sight-in-name.ts). */
       name: z.string(),
       date: z.string(),
@@ -21,15 +21,15 @@ export const tripBuildSchema = z.object({
   tape: z
     .object({
       id: z.number().int(),
-      sessionId: z.number().int(),
-      sessionName: z.string(),
-      sessionDate: z.string(),
+      sightInId: z.number().int(),
+      sightInName: z.string(),
+      sightInDate: z.string(),
       fromDistance: z.number(),
       toDistance: z.number(),
       unit: z.enum(['yd', 'm']),
       label: z.string(),
       savedAt: z.string(),
-      fromLatestSession: z.boolean(),
+      fromLatestSightIn: z.boolean(),
     })
     .nullable(),
   warnings: z.array(z.string()),

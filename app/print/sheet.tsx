@@ -5,7 +5,7 @@ import { lazyScreen } from '@/components/shell/lazy-screen';
 const PrintSheetScreen = lazyScreen('PrintSheetScreen');
 
 export default function PrintSheet() {
-  const { session, source, ...layout } = useLocalSearchParams<Record<string, string>>();
+  const { sightIn, source, ...layout } = useLocalSearchParams<Record<string, string>>();
   const query = new URLSearchParams(layout).toString();
-  return <PrintSheetScreen sessionId={session ? Number(session) : undefined} source={source === 'try' ? 'try' : undefined} query={query} />;
+  return <PrintSheetScreen sightInId={sightIn ? Number(sightIn) : undefined} source={source === 'try' ? 'try' : undefined} query={query} />;
 }

@@ -36,7 +36,7 @@ export function useAccounts(q: string, role: Role | 'all', page: number) {
 
 const accountResponse = z.object({ account: adminAccountSchema.partial({ createdAt: true }) });
 
-/** Changes an account's role or disabled state (disabling ends its sessions). */
+/** Changes an account's role or disabled state (disabling ends its sign-in sessions). */
 export function useUpdateAccount() {
   const queryClient = useQueryClient();
   return useMutation<Partial<AdminAccount>, ApiError, { id: number; update: AccountUpdate }>({

@@ -43,9 +43,9 @@ export function useUpdateArrow(buildId: number) {
 /** Records that an arrow flew out of the group at a sight-in. */
 export function useAddFlier(buildId: number) {
   const queryClient = useQueryClient();
-  return useMutation<ArrowSet, ApiError, { arrowId: number; sessionId: number }>({
-    mutationFn: async ({ arrowId, sessionId }) =>
-      (await apiFetch(`/api/arrows/${arrowId}/fliers`, { method: 'POST', body: { sessionId, note: '' }, schema: setResponse })).set,
+  return useMutation<ArrowSet, ApiError, { arrowId: number; sightInId: number }>({
+    mutationFn: async ({ arrowId, sightInId }) =>
+      (await apiFetch(`/api/arrows/${arrowId}/fliers`, { method: 'POST', body: { sightInId, note: '' }, schema: setResponse })).set,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: arrowSetKeys.ofBuild(buildId) }),
   });
 }

@@ -45,8 +45,8 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
   const stats = arrowSetStats(set.arrows.filter((a) => a.status !== 'retired'), set.toleranceGr);
   const check = buildWeightCheck(stats.medianGr, set.buildTotalGr, set.toleranceGr);
   const flagOf = (arrow: Arrow) => stats.flags.find((flag) => flag.number === arrow.number);
-  const sessions = bow.sessions.filter((s) => s.buildId === set.buildId);
-  const latestSession = sessions[0] ?? null;
+  const sightIns = bow.sightIns.filter((s) => s.buildId === set.buildId);
+  const latestSightIn = sightIns[0] ?? null;
   return (
     <View style={styles.card} testID={`arrow-set-${set.id}`}>
       <Text variant="title">{set.name}</Text>
@@ -93,12 +93,12 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
               {canChange && arrow.status !== 'retired' ? (
                 <Button label="Retire" variant="quiet" onPress={() => update.mutate({ arrowId: arrow.id, update: { status: 'retired' } })} testID={`retire-${set.id}-${arrow.number}`} />
               ) : null}
-              {canAdd && latestSession && !arrow.fliers.some((f) => f.sessionId === latestSession.id) ? (
+              {canAdd && latestSightIn && !arrow.fliers.some((f) => f.sightInId === latestSightIn.id) ? (
                 <Button
                   label="Flew out"
                   variant="quiet"
-                  accessibilityLabel={`Arrow ${arrow.number} flew out of the group at the sight-in of ${formatDay(latestSession.date)}`}
-                  onPress={() => flier.mutate({ arrowId: arrow.id, sessionId: latestSession.id })}
+                  accessibilityLabel={`Arrow ${arrow.number} flew out of the group at the sight-in of ${formatDay(latestSightIn.date)}`}
+                  onPress={() => flier.mutate({ arrowId: arrow.id, sightInId: latestSightIn.id })}
                   testID={`flier-${set.id}-${arrow.number}`}
                 />
               ) : null}
@@ -106,9 +106,9 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
           );
         })}
       </View>
-      {latestSession && canAdd ? (
+      {latestSightIn && canAdd ? (
         <Text variant="caption" tone="soft">
-          “Flew out” counts the arrow against the latest sight-in of this build ({formatDay(latestSession.date)}).
+          “Flew out” counts the arrow against the latest sight-in of this build ({formatDay(latestSightIn.date)}).
         </Text>
       ) : null}
       {update.isError ? <Text tone="failed">{update.error.message}</Text> : null}

@@ -16,14 +16,14 @@ export const authKeys = {
 const userResponse = z.object({ user: userSchema });
 
 /**
- * A sign-out made with no signal: the server's session is ended at the next
+ * A sign-out made with no signal: the server's sign-in session is ended at the next
  * chance (before anyone is taken as signed in), so a shared phone never
  * signs the last archer back in. Kept in localStorage (read synchronously).
  */
 const pendingSignOutKey = 'pinwright-sign-out-pending';
 const storage = () => (typeof localStorage === 'undefined' ? null : localStorage);
 
-/** Ends the server's session left from an offline sign-out; true when none is left. */
+/** Ends the server's sign-in session left from an offline sign-out; true when none is left. */
 async function finishPendingSignOut(): Promise<boolean> {
   if (storage()?.getItem(pendingSignOutKey) !== '1') return true;
   try {
@@ -69,7 +69,7 @@ export function useSignIn() {
     mutationFn: async (input) =>
       (await apiFetch('/api/auth/sign-in', { method: 'POST', body: input, schema: userResponse })).user,
     onSuccess: (user) => {
-      // A new sign-in replaces the session an offline sign-out meant to end.
+      // A new sign-in replaces the sign-in session an offline sign-out meant to end.
       storage()?.removeItem(pendingSignOutKey);
       queryClient.setQueryData(authKeys.me, user);
     },
@@ -86,7 +86,7 @@ export function useSignUp() {
     mutationFn: async (input) =>
       (await apiFetch('/api/auth/sign-up', { method: 'POST', body: input, schema: userResponse })).user,
     onSuccess: (user) => {
-      // A new sign-in replaces the session an offline sign-out meant to end.
+      // A new sign-in replaces the sign-in session an offline sign-out meant to end.
       storage()?.removeItem(pendingSignOutKey);
       queryClient.setQueryData(authKeys.me, user);
     },
@@ -97,7 +97,7 @@ export function useSignUp() {
  * Signs out and drops every record of the previous user, in memory and on the
  * device (its cache and its outbox: a shared phone must not show the last
  * archer's bows). With no signal it signs out on the phone at once and ends
- * the server's session when the signal is back.
+ * the server's sign-in session when the signal is back.
  * Example: `useSignOut().mutate()`
  */
 export function useSignOut() {

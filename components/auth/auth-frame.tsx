@@ -18,7 +18,7 @@ export interface AuthFrameProps {
 }
 
 const points = [
-  'Keep each bow, arrow build and sight-in session in one place.',
+  'Keep each bow, arrow build and sight-in in one place.',
   'Fit the arrow’s path from the marks you have sighted in.',
   'Print a true-scale sight tape on your own printer.',
 ];

@@ -13,7 +13,7 @@ const count = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : 
 
 /**
  * One bow on the bench: nickname, level readiness in words, and how far its
- * records go (builds, sight-in sessions, a saved tape). Opens the bow.
+ * records go (builds, sight-ins, a saved tape). Opens the bow.
  * Example: `<BowCard bow={summary} />`
  */
 export function BowCard({ bow }: { bow: BowSummary }) {
@@ -24,7 +24,7 @@ export function BowCard({ bow }: { bow: BowSummary }) {
   const tape = tapeWords(bow.readiness);
   const records = [
     count(bow.readiness.buildCount, 'build', 'builds'),
-    count(bow.readiness.sessionCount, 'sight-in', 'sight-ins'),
+    count(bow.readiness.sightInCount, 'sight-in', 'sight-ins'),
   ].join(' · ');
   return (
     <Card href={`/bows/${bow.id}`} accessibilityLabel={`Open ${bow.nickname}`} testID={`bow-card-${bow.id}`}>

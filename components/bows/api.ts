@@ -32,7 +32,7 @@ export async function fetchBows(): Promise<BowSummary[]> {
   return bows;
 }
 
-/** GET /api/bows/:id: one bow with its builds, sessions (newest first) and tapes. */
+/** GET /api/bows/:id: one bow with its builds, sight-ins (newest first) and tapes. */
 export async function fetchBow(id: number): Promise<BowDetail> {
   const { bow } = await apiFetch(`/api/bows/${id}`, { schema: bowDetailResponse });
   return bow;
@@ -47,7 +47,7 @@ export function useBows() {
 }
 
 /**
- * One bow with its builds, sessions and tapes. Disabled until `id` is a number.
+ * One bow with its builds, sight-ins and tapes. Disabled until `id` is a number.
  * Example: `const bow = useBow(3); bow.data?.builds.length`
  */
 export function useBow(id: number | undefined) {
@@ -78,7 +78,7 @@ export function useSaveBow() {
 }
 
 /**
- * Deletes a bow with all its builds, sessions and tapes (DELETE /api/bows/:id).
+ * Deletes a bow with all its builds, sight-ins and tapes (DELETE /api/bows/:id).
  * Example: `useDeleteBow().mutate(3, { onSuccess: () => router.replace('/') })`
  */
 export function useDeleteBow() {

@@ -19,14 +19,14 @@ import { space } from '@/components/theme';
 import type { LengthUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import type { Build } from '@/shared/build';
-import type { SessionListItem } from '@/shared/session';
+import type { SightInListItem } from '@/shared/sight-in';
 import type { Tape } from '@/shared/tape';
 
 /** What the detail pane shows. */
 export type BowSelection =
   | { kind: 'setup' }
   | { kind: 'build'; id: number }
-  | { kind: 'session'; id: number }
+  | { kind: 'sightIn'; id: number }
   | { kind: 'tape'; id: number };
 
 /** The bow's set-up with, for its owner, Edit and Delete (delete asks first and names what is lost). */
@@ -37,7 +37,7 @@ export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) 
   const [asking, setAsking] = useState(false);
   const counts = [
     `${bow.builds.length} ${bow.builds.length === 1 ? 'build' : 'builds'}`,
-    `${bow.sessions.length} ${bow.sessions.length === 1 ? 'sight-in' : 'sight-ins'}`,
+    `${bow.sightIns.length} ${bow.sightIns.length === 1 ? 'sight-in' : 'sight-ins'}`,
     `${bow.tapes.length} ${bow.tapes.length === 1 ? 'tape' : 'tapes'}`,
   ].join(', ');
   return (
@@ -90,30 +90,30 @@ function BuildPanel({ bow, build, unit }: { bow: BowDetail; build: Build; unit: 
       <KeyValueList items={items} />
       <View style={styles.actions}>
         <Button label="Open the build" href={`/builds/${build.id}`} />
-        <Button label="Sight in with it" variant="secondary" href={`/bows/${bow.id}/sessions/new?build=${build.id}`} />
+        <Button label="Sight in with it" variant="secondary" href={`/bows/${bow.id}/sight-ins/new?build=${build.id}`} />
       </View>
     </Card>
   );
 }
 
-/** One sight-in's summary, with links to the session and its tape. */
-function SessionPanel({ bow, session }: { bow: BowDetail; session: SessionListItem }) {
-  const words = fitWords(session.summary);
+/** One sight-in's summary, with links to the sight-in and its tape. */
+function SightInPanel({ bow, sightIn }: { bow: BowDetail; sightIn: SightInListItem }) {
+  const words = fitWords(sightIn.summary);
   const items = [
-    { label: 'Date', value: formatDay(session.date) },
-    { label: 'Build', value: buildName(bow.builds, session.buildId) },
-    { label: 'Place', value: session.placeLabel || '—' },
+    { label: 'Date', value: formatDay(sightIn.date) },
+    { label: 'Build', value: buildName(bow.builds, sightIn.buildId) },
+    { label: 'Place', value: sightIn.placeLabel || '—' },
     { label: 'Marks', value: words.detail },
   ];
-  if (session.summary.speedFps !== null) items.push({ label: 'Fitted speed', value: `${session.summary.speedFps.toFixed(0)} fps` });
+  if (sightIn.summary.speedFps !== null) items.push({ label: 'Fitted speed', value: `${sightIn.summary.speedFps.toFixed(0)} fps` });
   return (
-    <Card style={styles.panel} testID="session-detail">
-      <SectionHeading title={`Sight-in, ${formatDay(session.date)}`} description={session.placeLabel || undefined} />
+    <Card style={styles.panel} testID="sight-in-detail">
+      <SectionHeading title={`Sight-in, ${formatDay(sightIn.date)}`} description={sightIn.placeLabel || undefined} />
       <ReadinessBadge state={words.state} label={words.label} subject="Fit" />
       <KeyValueList items={items} />
       <View style={styles.actions}>
-        <Button label="Open the sight-in" href={`/sessions/${session.id}`} />
-        <Button label="Tape" variant="secondary" href={`/sessions/${session.id}/tape`} />
+        <Button label="Open the sight-in" href={`/sight-ins/${sightIn.id}`} />
+        <Button label="Tape" variant="secondary" href={`/sight-ins/${sightIn.id}/tape`} />
       </View>
     </Card>
   );
@@ -131,7 +131,7 @@ function TapePanel({ tape }: { tape: Tape }) {
     <Card style={styles.panel} testID="tape-detail">
       <SectionHeading title={tape.label || 'Tape layout'} description={`Saved ${formatDay(tape.updatedAt)}`} />
       <KeyValueList items={items} />
-      <Button label="Open the tape" href={`/sessions/${tape.sessionId}/tape?tape=${tape.id}`} />
+      <Button label="Open the tape" href={`/sight-ins/${tape.sightInId}/tape?tape=${tape.id}`} />
     </Card>
   );
 }
@@ -145,9 +145,9 @@ export function BowDetailPanel({ bow, unit, selection }: { bow: BowDetail; unit:
     const build = bow.builds.find((item) => item.id === selection.id);
     if (build) return <BuildPanel bow={bow} build={build} unit={unit} />;
   }
-  if (selection.kind === 'session') {
-    const session = bow.sessions.find((item) => item.id === selection.id);
-    if (session) return <SessionPanel bow={bow} session={session} />;
+  if (selection.kind === 'sightIn') {
+    const sightIn = bow.sightIns.find((item) => item.id === selection.id);
+    if (sightIn) return <SightInPanel bow={bow} sightIn={sightIn} />;
   }
   if (selection.kind === 'tape') {
     const tape = bow.tapes.find((item) => item.id === selection.id);

@@ -13,7 +13,7 @@ import type { BowDetail } from '@/shared/bow';
 /** What a bow's screens draw from, once everything has loaded. */
 export interface LoadedBow {
   me: User;
-  /** The bow, with its builds, sessions and tapes. */
+  /** The bow, with its builds, sight-ins and tapes. */
   bow: BowDetail;
   /** What the signed-in user may do on the bow (see useBowRole). */
   role: BowRole;

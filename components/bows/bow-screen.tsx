@@ -105,7 +105,7 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
 
       <View style={styles.section}>
         <SectionHeading
-          title="Sight-in sessions"
+          title="Sight-ins"
           level={2}
           action={
             canAdd ? (
@@ -114,23 +114,23 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
                 icon={PlusIcon}
                 variant={canSightIn ? 'primary' : 'secondary'}
                 disabled={!canSightIn}
-                href={`/bows/${bow.id}/sessions/new`}
-                testID="start-session"
+                href={`/bows/${bow.id}/sight-ins/new`}
+                testID="start-sight-in"
               />
             ) : undefined
           }
         />
         {!canSightIn && isOwner ? <Text tone="soft">Add an arrow build first: the fit needs the arrow.</Text> : null}
-        {canSightIn && bow.sessions.length === 0 ? <Text tone="soft">No sight-ins yet. Two marks are enough to start.</Text> : null}
-        {bow.sessions.map((session) => (
+        {canSightIn && bow.sightIns.length === 0 ? <Text tone="soft">No sight-ins yet. Two marks are enough to start.</Text> : null}
+        {bow.sightIns.map((sightIn) => (
           <RecordRow
-            key={session.id}
-            testID={`session-row-${session.id}`}
-            title={sightInName(session, { builds: bow.builds, siblings: bow.sessions, withoutBuild: true })}
-            detail={`${buildName(bow.builds, session.buildId)} · ${fitWords(session.summary).detail}${addedByNote(session.addedBy, bow)}`}
-            href={split ? undefined : `/sessions/${session.id}`}
-            selected={isSelected('session', session.id)}
-            onSelect={() => onSelect({ kind: 'session', id: session.id })}
+            key={sightIn.id}
+            testID={`sight-in-row-${sightIn.id}`}
+            title={sightInName(sightIn, { builds: bow.builds, siblings: bow.sightIns, withoutBuild: true })}
+            detail={`${buildName(bow.builds, sightIn.buildId)} · ${fitWords(sightIn.summary).detail}${addedByNote(sightIn.addedBy, bow)}`}
+            href={split ? undefined : `/sight-ins/${sightIn.id}`}
+            selected={isSelected('sightIn', sightIn.id)}
+            onSelect={() => onSelect({ kind: 'sightIn', id: sightIn.id })}
           />
         ))}
       </View>
@@ -144,7 +144,7 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
             testID={`tape-row-${tape.id}`}
             title={tape.label || `Tape ${tape.fromDistance}–${tape.toDistance} ${tape.unit}`}
             detail={`Saved ${formatDay(tape.updatedAt)} · ${tape.widthMm} mm wide`}
-            href={split ? undefined : `/sessions/${tape.sessionId}/tape?tape=${tape.id}`}
+            href={split ? undefined : `/sight-ins/${tape.sightInId}/tape?tape=${tape.id}`}
             selected={isSelected('tape', tape.id)}
             onSelect={() => onSelect({ kind: 'tape', id: tape.id })}
           />

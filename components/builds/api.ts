@@ -70,7 +70,7 @@ export function useSaveBuild() {
 }
 
 /**
- * Deletes a build (DELETE /api/builds/:id); the server refuses one that sessions use.
+ * Deletes a build (DELETE /api/builds/:id); the server refuses one that sight-ins use.
  * Example: `useDeleteBuild().mutate(build)`
  */
 export function useDeleteBuild() {

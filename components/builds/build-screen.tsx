@@ -50,7 +50,7 @@ export function BuildScreen({ buildId }: { buildId: number }) {
   }
   const data = build.data;
   const back = () => router.replace(`/bows/${data.bowId}`);
-  const used = data.sessionCount > 0;
+  const used = data.sightInCount > 0;
   return (
     <Screen>
       <ScreenTitle name={data.name} />
@@ -61,7 +61,7 @@ export function BuildScreen({ buildId }: { buildId: number }) {
           !isOwner
             ? `Arrow build of ${bow.data.ownerName || 'the archer'}: only they can change it.`
             : used
-              ? `Used by ${data.sessionCount} ${data.sessionCount === 1 ? 'sight-in' : 'sight-ins'}: a change here may move their marks.`
+              ? `Used by ${data.sightInCount} ${data.sightInCount === 1 ? 'sight-in' : 'sight-ins'}: a change here may move their marks.`
               : 'Arrow build'
         }
         action={<Button label="Back to the bow" variant="quiet" href={`/bows/${data.bowId}`} />}

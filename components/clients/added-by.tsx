@@ -41,9 +41,9 @@ type AttributedMark = { distance: number; unit: string; addedBy?: AddedBy };
  * Who added a sight-in's marks, in one line grouped by person: "Marks added
  * by you: 20, 30, 40 yd · by Desmond Tull: 50 yd". Nothing when the answer
  * carries no attribution.
- * Example: `<MarkAuthors marks={session.marks} meId={me.id} />`
+ * Example: `<MarkAuthors marks={sightIn.marks} meId={me.id} />`
  */
-export function MarkAuthors({ marks, meId, sessionAddedBy }: { marks: AttributedMark[]; meId?: number; sessionAddedBy?: AddedBy }) {
+export function MarkAuthors({ marks, meId, sightInAddedBy }: { marks: AttributedMark[]; meId?: number; sightInAddedBy?: AddedBy }) {
   if (marks.length === 0 || marks.every((mark) => mark.addedBy === undefined)) return null;
   const groups = new Map<string, AttributedMark[]>();
   for (const mark of marks) {
@@ -51,10 +51,10 @@ export function MarkAuthors({ marks, meId, sessionAddedBy }: { marks: Attributed
     groups.set(who, [...(groups.get(who) ?? []), mark]);
   }
   const parts = [...groups].map(([who, group]) => `by ${who}: ${group.map((mark) => `${mark.distance}`).join(', ')} ${group[0].unit}`);
-  const session = sessionAddedBy === undefined ? '' : `Sight-in added by ${addedByWords(sessionAddedBy, meId)}. `;
+  const sightIn = sightInAddedBy === undefined ? '' : `Sight-in added by ${addedByWords(sightInAddedBy, meId)}. `;
   return (
     <Text variant="small" tone="soft" testID="mark-authors">
-      {session}Marks added {parts.join(' · ')}.
+      {sightIn}Marks added {parts.join(' · ')}.
     </Text>
   );
 }

@@ -3,7 +3,7 @@ import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { Line } from 'react-native-svg';
 
 import { buildStyle } from '@/components/compare/build-styles';
-import { VictoryAxis, VictoryChart, VictoryLine } from '@/components/sessions/victory';
+import { VictoryAxis, VictoryChart, VictoryLine } from '@/components/sight-ins/victory';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/theme';
 import type { BuildComparison } from '@/shared/compare';

@@ -39,7 +39,7 @@ const airOptions = [
 
 /** The bow's builds as choices: a build without a sight-in cannot be compared and says so. */
 function pickableBuilds(bow: BowDetail): PickableBuild[] {
-  const sighted = new Set(bow.sessions.map((session) => session.buildId));
+  const sighted = new Set(bow.sightIns.map((sightIn) => sightIn.buildId));
   return bow.builds.map((build) => ({
     id: build.id,
     name: build.name,
@@ -178,7 +178,7 @@ function CompareBody({ bow, initialBuilds }: { bow: BowDetail; initialBuilds: nu
             </Text>
             <Text variant="small" tone="soft">
               {compare.data.sources
-                .map((source) => `${source.name}: sight-in ${formatDay(source.sessionDate)}${source.placeLabel ? `, ${source.placeLabel}` : ''} (${source.markCount} marks)`)
+                .map((source) => `${source.name}: sight-in ${formatDay(source.sightInDate)}${source.placeLabel ? `, ${source.placeLabel}` : ''} (${source.markCount} marks)`)
                 .join(' · ')}
             </Text>
             <Text variant="small" tone="soft">

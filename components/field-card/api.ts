@@ -12,7 +12,7 @@ export interface FieldCardParams {
 }
 
 /**
- * The query string of GET /api/sessions/:id/field-card (and .svg, .pdf).
+ * The query string of GET /api/sight-ins/:id/field-card (and .svg, .pdf).
  * Example: fieldCardQueryString({ angles: [-30, 0, 30], distances: [20, 40], altitudeM: 2700 }) → 'angles=-30%2C0%2C30&distances=20%2C40&altitudeM=2700'
  */
 export function fieldCardQueryString(params: FieldCardParams): string {
@@ -22,21 +22,21 @@ export function fieldCardQueryString(params: FieldCardParams): string {
   return query.toString();
 }
 
-/** Query keys: under 'sessions', so a refit (a saved session) refreshes its card. */
+/** Query keys: under 'sight-ins', so a refit (a saved sight-in) refreshes its card. */
 export const fieldCardKeys = {
-  card: (sessionId: number, query: string) => ['sessions', sessionId, 'field-card', query] as const,
+  card: (sightInId: number, query: string) => ['sightIns', sightInId, 'field-card', query] as const,
 };
 
 /**
- * A session's field card data and words.
+ * A sight-in's field card data and words.
  * Example: `const card = useFieldCard(12, { angles: [-30, 0, 30], distances: [20, 40, 60] }); card.data?.card.rows`
  */
-export function useFieldCard(sessionId: number, params: FieldCardParams) {
+export function useFieldCard(sightInId: number, params: FieldCardParams) {
   const query = fieldCardQueryString(params);
   return useQuery<FieldCardResponse, ApiError>({
-    queryKey: fieldCardKeys.card(sessionId, query),
-    queryFn: () => apiFetch(`/api/sessions/${sessionId}/field-card?${query}`, { schema: fieldCardResponseSchema }),
-    enabled: Number.isInteger(sessionId) && sessionId > 0,
+    queryKey: fieldCardKeys.card(sightInId, query),
+    queryFn: () => apiFetch(`/api/sight-ins/${sightInId}/field-card?${query}`, { schema: fieldCardResponseSchema }),
+    enabled: Number.isInteger(sightInId) && sightInId > 0,
     placeholderData: (previous) => previous,
     retry: false,
   });

@@ -11,7 +11,7 @@ import { useFieldCard, fieldCardQueryString, type FieldCardParams } from '@/comp
 import { CardPrint } from '@/components/field-card/card-print';
 import { SlopeTable } from '@/components/field-card/slope-table';
 import { WindTable } from '@/components/field-card/wind-table';
-import { useSession } from '@/components/sessions/api';
+import { useSightIn } from '@/components/sight-ins/api';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -53,10 +53,10 @@ const distanceOptions = (Object.keys(distanceSets) as (keyof typeof distanceSets
  * rule; the shift of the level marks at the hunt's altitude and temperature;
  * the cautions; and the 100 × 150 mm card itself (outline glyphs) to print or
  * download as SVG or PDF.
- * Example: `<FieldCardScreen sessionId={12} />`
+ * Example: `<FieldCardScreen sightInId={12} />`
  */
-export function FieldCardScreen({ sessionId }: { sessionId: number }) {
-  const session = useSession(sessionId);
+export function FieldCardScreen({ sightInId }: { sightInId: number }) {
+  const sightIn = useSightIn(sightInId);
   const [angles, setAngles] = useState<keyof typeof angleSets>('40');
   const [distances, setDistances] = useState<keyof typeof distanceSets>('20-60');
   const [altitudeText, setAltitudeText] = useState('');
@@ -74,12 +74,12 @@ export function FieldCardScreen({ sessionId }: { sessionId: number }) {
   const params: FieldCardParams = { angles: [...angleSets[angles]], distances: [...distanceSets[distances]] };
   if (altitude !== undefined && !altitudeError) params.altitudeM = altitude;
   if (temperature !== undefined && !temperatureError) params.temperatureC = temperature;
-  const card = useFieldCard(sessionId, params);
+  const card = useFieldCard(sightInId, params);
   const query = fieldCardQueryString(params);
 
-  if (!Number.isInteger(sessionId) || sessionId <= 0) return <NotFoundScreen />;
-  if (session.isError || (card.isError && !card.data)) {
-    const failed = session.isError ? session : card;
+  if (!Number.isInteger(sightInId) || sightInId <= 0) return <NotFoundScreen />;
+  if (sightIn.isError || (card.isError && !card.data)) {
+    const failed = sightIn.isError ? sightIn : card;
     return (
       <>
         <ScreenTitle name="Field card" />
@@ -87,7 +87,7 @@ export function FieldCardScreen({ sessionId }: { sessionId: number }) {
       </>
     );
   }
-  if (session.isPending || !card.data) {
+  if (sightIn.isPending || !card.data) {
     return (
       <>
         <ScreenTitle name="Field card" />
@@ -99,12 +99,12 @@ export function FieldCardScreen({ sessionId }: { sessionId: number }) {
 
   return (
     <Screen testID="field-card-screen">
-      <ScreenTitle name={`Field card ${session.data.date}`} />
+      <ScreenTitle name={`Field card ${sightIn.data.date}`} />
       <SectionHeading
         level={1}
         title="Field card"
         description={`${labels.bow} · ${labels.build} · sight-in ${formatDay(labels.date)}${labels.place ? `, ${labels.place}` : ''}`}
-        action={<Button label="Back to the sight-in" variant="quiet" href={`/sessions/${sessionId}`} />}
+        action={<Button label="Back to the sight-in" variant="quiet" href={`/sight-ins/${sightInId}`} />}
       />
 
       <Card>
@@ -155,8 +155,8 @@ export function FieldCardScreen({ sessionId }: { sessionId: number }) {
         <CardPreview card={data} labels={labels} />
         <View style={styles.actions}>
           <CardPrint svg={fieldCardSvg(data, labels)} testID="field-card-print" />
-          <DownloadLink label="Download PDF" href={`/api/sessions/${sessionId}/field-card.pdf?${query}`} testID="field-card-pdf" />
-          <DownloadLink label="Download SVG" href={`/api/sessions/${sessionId}/field-card.svg?${query}`} testID="field-card-svg" />
+          <DownloadLink label="Download PDF" href={`/api/sight-ins/${sightInId}/field-card.pdf?${query}`} testID="field-card-pdf" />
+          <DownloadLink label="Download SVG" href={`/api/sight-ins/${sightInId}/field-card.svg?${query}`} testID="field-card-svg" />
         </View>
       </Card>
     </Screen>

@@ -3,7 +3,7 @@ import { z } from 'zod';
 
 import { apiFetch, type ApiError } from '@/components/api/client';
 import { bowKeys } from '@/components/bows/api';
-import { sessionKeys } from '@/components/sessions/api';
+import { sightInKeys } from '@/components/sight-ins/api';
 import { importResultSchema, type ImportResult, type MarkImport } from '@/shared/csv';
 import type { SendTape } from '@/shared/export';
 
@@ -17,19 +17,19 @@ export const exportPaths = {
  * Checks a CSV file of marks row by row; nothing is saved.
  * Example: `usePreviewImport(9).mutate({ csv, unit: 'yd' })` → data.rows[0].problems
  */
-export function usePreviewImport(sessionId: number) {
+export function usePreviewImport(sightInId: number) {
   return useMutation<ImportResult, ApiError, MarkImport>({
-    mutationFn: (input) => apiFetch(`/api/sessions/${sessionId}/marks/import?dryRun=1`, { method: 'POST', body: input, schema: importResultSchema }),
+    mutationFn: (input) => apiFetch(`/api/sight-ins/${sightInId}/marks/import?dryRun=1`, { method: 'POST', body: input, schema: importResultSchema }),
   });
 }
 
-/** Adds the file's marks to the session, all or nothing; refreshes the session and its bow. */
-export function useImportMarks(sessionId: number) {
+/** Adds the file's marks to the sight-in, all or nothing; refreshes the sight-in and its bow. */
+export function useImportMarks(sightInId: number) {
   const queryClient = useQueryClient();
   return useMutation<ImportResult, ApiError, MarkImport>({
-    mutationFn: (input) => apiFetch(`/api/sessions/${sessionId}/marks/import`, { method: 'POST', body: input, schema: importResultSchema }),
+    mutationFn: (input) => apiFetch(`/api/sight-ins/${sightInId}/marks/import`, { method: 'POST', body: input, schema: importResultSchema }),
     onSuccess: () => {
-      queryClient.invalidateQueries({ queryKey: sessionKeys.all });
+      queryClient.invalidateQueries({ queryKey: sightInKeys.all });
       queryClient.invalidateQueries({ queryKey: bowKeys.all });
     },
   });
@@ -37,9 +37,9 @@ export function useImportMarks(sessionId: number) {
 
 const messageResponse = z.object({ message: z.string() });
 
-/** E-mails the session's print sheet as a PDF. */
-export function useSendTape(sessionId: number) {
+/** E-mails the sight-in's print sheet as a PDF. */
+export function useSendTape(sightInId: number) {
   return useMutation<string, ApiError, SendTape>({
-    mutationFn: async (input) => (await apiFetch(`/api/sessions/${sessionId}/send-tape`, { method: 'POST', body: input, schema: messageResponse })).message,
+    mutationFn: async (input) => (await apiFetch(`/api/sight-ins/${sightInId}/send-tape`, { method: 'POST', body: input, schema: messageResponse })).message,
   });
 }

@@ -6,7 +6,7 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { space } from '@/components/theme';
 
 /**
- * Downloads of a bow's builds, sessions and marks: one CSV table (one row per
+ * Downloads of a bow's builds, sight-ins and marks: one CSV table (one row per
  * mark) for a spreadsheet, or the whole structure as JSON.
  * Example: `<BowExportLinks bowId={3} />`
  */
@@ -16,7 +16,7 @@ export function BowExportLinks({ bowId }: { bowId: number }) {
       <SectionHeading
         title="Take the records with you"
         level={2}
-        description="Builds, sight-in sessions and marks: a CSV table for a spreadsheet (one row per mark), or everything as JSON."
+        description="Builds, sight-ins and marks: a CSV table for a spreadsheet (one row per mark), or everything as JSON."
       />
       <View style={styles.row}>
         <DownloadLink label="Download CSV" href={exportPaths.csv(bowId)} testID="export-csv" />

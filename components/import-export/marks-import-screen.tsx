@@ -6,7 +6,7 @@ import { useBow } from '@/components/bows/api';
 import { usePreviewImport, useImportMarks } from '@/components/import-export/api';
 import { CsvFilePicker } from '@/components/import-export/csv-file-picker';
 import { ImportRows } from '@/components/import-export/import-rows';
-import { useSession } from '@/components/sessions/api';
+import { useSightIn } from '@/components/sight-ins/api';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -28,22 +28,22 @@ const example = 'distance,reading,arrows,note\n20,12.4,3,\n40 yd,27.9,3,light wi
  * Import marks into a sight-in from a CSV file: choose or paste the file,
  * check it (each row's problem in plain words, nothing saved), then add all
  * its marks at once.
- * Example: `<MarksImportScreen sessionId={9} />`
+ * Example: `<MarksImportScreen sightInId={9} />`
  */
-export function MarksImportScreen({ sessionId }: { sessionId: number }) {
+export function MarksImportScreen({ sightInId }: { sightInId: number }) {
   const me = useMe();
-  const session = useSession(sessionId);
-  const bow = useBow(session.data?.bowId);
-  const preview = usePreviewImport(sessionId);
-  const save = useImportMarks(sessionId);
+  const sightIn = useSightIn(sightInId);
+  const bow = useBow(sightIn.data?.bowId);
+  const preview = usePreviewImport(sightInId);
+  const save = useImportMarks(sightInId);
   const [csv, setCsv] = useState('');
   const [fileName, setFileName] = useState<string | null>(null);
   const [unit, setUnit] = useState<DistanceUnit | null>(null);
   const [checked, setChecked] = useState<ImportResult | null>(null);
 
-  if (!Number.isInteger(sessionId) || sessionId <= 0) return <NotFoundScreen />;
-  if (session.isError) return <ErrorView title="The sight-in could not be loaded" error={session.error} onRetry={() => session.refetch()} />;
-  if (session.isPending || !me.data) return <LoadingView label="Loading the sight-in…" />;
+  if (!Number.isInteger(sightInId) || sightInId <= 0) return <NotFoundScreen />;
+  if (sightIn.isError) return <ErrorView title="The sight-in could not be loaded" error={sightIn.error} onRetry={() => sightIn.refetch()} />;
+  if (sightIn.isPending || !me.data) return <LoadingView label="Loading the sight-in…" />;
 
   const chosenUnit = unit ?? me.data.distanceUnit;
   const change = (text: string, name: string | null) => {
@@ -61,8 +61,8 @@ export function MarksImportScreen({ sessionId }: { sessionId: number }) {
       <SectionHeading
         level={1}
         title="Import marks from a CSV file"
-        description={[bow.data?.nickname, `sight-in of ${session.data.date}`].filter(Boolean).join(' · ')}
-        action={<Button label="Back to the sight-in" variant="quiet" href={`/sessions/${sessionId}`} />}
+        description={[bow.data?.nickname, `sight-in of ${sightIn.data.date}`].filter(Boolean).join(' · ')}
+        action={<Button label="Back to the sight-in" variant="quiet" href={`/sight-ins/${sightInId}`} />}
       />
       <Card tone="flat">
         <Text variant="label">What the file looks like</Text>
@@ -129,7 +129,7 @@ export function MarksImportScreen({ sessionId }: { sessionId: number }) {
         </Banner>
       ) : null}
       {save.isSuccess ? (
-        <Banner tone="info" title="Marks added" testID="import-done" action={<Button label="Open the sight-in" href={`/sessions/${sessionId}`} />}>
+        <Banner tone="info" title="Marks added" testID="import-done" action={<Button label="Open the sight-in" href={`/sight-ins/${sightInId}`} />}>
           {`${save.data.okCount} mark${save.data.okCount === 1 ? ' was' : 's were'} added and the fit was worked out again.`}
         </Banner>
       ) : null}

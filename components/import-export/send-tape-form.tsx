@@ -12,7 +12,7 @@ import { emailSchema } from '@/shared/auth';
 import { emailInputProps } from '@/components/ui/email-input-props';
 
 export interface SendTapeFormProps {
-  sessionId: number;
+  sightInId: number;
   /** The layout as the sheet download's query string (null while the layout cannot be drawn). */
   layoutQuery: string | null;
 }
@@ -20,10 +20,10 @@ export interface SendTapeFormProps {
 /**
  * E-mail the print sheet, exactly as the PDF download would draw it, to an
  * address (your own, to print elsewhere, or a friend's).
- * Example: `<SendTapeForm sessionId={9} layoutQuery="from=20&to=80&paper=a4" />`
+ * Example: `<SendTapeForm sightInId={9} layoutQuery="from=20&to=80&paper=a4" />`
  */
-export function SendTapeForm({ sessionId, layoutQuery }: SendTapeFormProps) {
-  const send = useSendTape(sessionId);
+export function SendTapeForm({ sightInId, layoutQuery }: SendTapeFormProps) {
+  const send = useSendTape(sightInId);
   const [to, setTo] = useState('');
   const [problem, setProblem] = useState<string | undefined>();
   const submit = () => {

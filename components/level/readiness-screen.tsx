@@ -59,8 +59,8 @@ function BuildPart({ part }: { part: TripBuild }) {
             <>
               <Text testID={`readiness-build-${build.id}-tape`}>
                 {tape.label ? `“${tape.label}”, ` : ''}
-                {tape.fromDistance}–{tape.toDistance} {tape.unit}, printed from the sight-in of {tape.sessionName}
-                {tape.fromLatestSession ? ' (this build’s latest).' : '.'}
+                {tape.fromDistance}–{tape.toDistance} {tape.unit}, printed from the sight-in of {tape.sightInName}
+                {tape.fromLatestSightIn ? ' (this build’s latest).' : '.'}
               </Text>
               <Text variant="small" tone="soft">
                 Saved {formatWhen(tape.savedAt)}.

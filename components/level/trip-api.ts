@@ -9,7 +9,7 @@ export const tripKeys = { byBuild: (bowId: number) => ['level', 'trip', bowId] a
 /**
  * Before a trip, build by build (GET /api/bows/:bowId/readiness, parsed with
  * its builds): the level, then each build's latest sight-in, tape and warnings.
- * Example: `useTripByBuild(3).data?.builds[0].tape?.fromLatestSession` → true
+ * Example: `useTripByBuild(3).data?.builds[0].tape?.fromLatestSightIn` → true
  */
 export function useTripByBuild(bowId: number) {
   return useQuery<TripByBuild, ApiError>({

@@ -43,7 +43,7 @@ export function ResetPasswordScreen({ token }: { token: string | undefined }) {
       { token: token ?? '', password },
       {
         onSuccess: () => {
-          // Every session of the account has ended on the server; forget who was signed in here.
+          // Every sign-in session of the account has ended on the server; forget who was signed in here.
           queryClient.clear();
           queryClient.setQueryData(authKeys.me, null);
         },

@@ -84,12 +84,12 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHre
         </Banner>
       ) : null}
 
-      {prediction.marks && result.session && result.model ? (
+      {prediction.marks && result.sightIn && result.model ? (
         <Card>
           <SectionHeading
             title="Predicted marks"
             level={2}
-            description={`On the sight of the sight-in of ${sightInName ?? `${formatDay(result.session.date)} · ${result.session.buildName}`}; mm as your scale reads them.`}
+            description={`On the sight of the sight-in of ${sightInName ?? `${formatDay(result.sightIn.date)} · ${result.sightIn.buildName}`}; mm as your scale reads them.`}
           />
           <View style={styles.table} role="table" aria-label="Predicted marks" testID="predict-marks">
             <View style={[styles.row, styles.head]} role="row">
@@ -100,7 +100,7 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHre
                 Predicted
               </Text>
               <Text variant="label" style={styles.cell} role="columnheader">
-                {result.session.buildName}
+                {result.sightIn.buildName}
               </Text>
               <Text variant="label" style={styles.cell} role="columnheader">
                 Δ mm

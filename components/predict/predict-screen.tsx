@@ -74,7 +74,7 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
   const [general, setGeneral] = useState<string | null>(null);
   const firstBuild = bow.builds.find((build) => build.id === startFromBuildId) ?? bow.builds[0];
   const [startFrom, setStartFrom] = useState<string>(firstBuild ? String(firstBuild.id) : 'blank');
-  const [sessionId, setSessionId] = useState<string>(bow.sessions[0] ? String(bow.sessions[0].id) : '');
+  const [sightInId, setSightInId] = useState<string>(bow.sightIns[0] ? String(bow.sightIns[0].id) : '');
   const [sent, setSent] = useState<BuildInput | null>(null);
   const resolver = useMemo(() => textFormResolver<BuildFormText, BuildInput>(buildFormSchema(unit), { inches: unit === 'in' }), [unit]);
   const { control, handleSubmit, setError, reset } = useForm<BuildFormText, unknown, BuildInput>({
@@ -87,10 +87,10 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
 
   const startOptions = [...bow.builds.map((build) => ({ value: String(build.id), label: build.name })), { value: 'blank', label: 'Blank' }];
   // Each sight-in on a row of its own: the day (and time, for two of one day) as the label, place and build below.
-  const sessionOptions = bow.sessions.slice(0, 6).map((session) => {
-    const name = sightInNameParts(session, { builds: bow.builds, siblings: bow.sessions });
+  const sightInOptions = bow.sightIns.slice(0, 6).map((sightIn) => {
+    const name = sightInNameParts(sightIn, { builds: bow.builds, siblings: bow.sightIns });
     return {
-      value: String(session.id),
+      value: String(sightIn.id),
       label: [name.day, name.ordinal].filter(Boolean).join(' '),
       hint: [name.place, name.build].filter(Boolean).join(' · '),
     };
@@ -117,7 +117,7 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
       const build = { ...input, speedFps: null };
       setSent(build);
       predict.mutate(
-        { bowId: bow.id, request: { build, ...(sessionId ? { sessionId: Number(sessionId) } : {}) } },
+        { bowId: bow.id, request: { build, ...(sightInId ? { sightInId: Number(sightInId) } : {}) } },
         {
           onError: (error) => {
             // "Chronograph at least one more build …" is about the bow, not a field of the form.
@@ -154,13 +154,13 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
         Total: {live.totalGr === null ? '—' : `${formatFixed(live.totalGr, 0)} gr`}
         {live.focPct === null ? '' : ` · FOC ${formatFixed(live.focPct, 1)} %`}
       </Text>
-      {sessionOptions.length > 0 ? (
+      {sightInOptions.length > 0 ? (
         <SegmentedControl
           label="Carried on the sight of"
           hint="The sight-in whose fitted peep height, sight radius and scale set the marks"
-          options={sessionOptions}
-          value={sessionId}
-          onChange={setSessionId}
+          options={sightInOptions}
+          value={sightInId}
+          onChange={setSightInId}
           size="large"
           optionBasis={260}
           testID="predict-sight-in"
@@ -200,15 +200,15 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
       result={predict.data}
       bowName={bow.nickname}
       tapeWidthMm={bow.tapeWidthMm}
-      tapeHref={sent ? (from, to) => predictedTapeHref(bow.id, sent, { sessionId: predict.data!.session?.id, from, to, width: bow.tapeWidthMm }) : null}
+      tapeHref={sent ? (from, to) => predictedTapeHref(bow.id, sent, { sightInId: predict.data!.sightIn?.id, from, to, width: bow.tapeWidthMm }) : null}
       sheetHref={
         sent
-          ? (from, to, format) => predictedTapeHref(bow.id, sent, { sessionId: predict.data!.session?.id, from, to, width: bow.tapeWidthMm }).replace('/predict/tape.svg?', `/predict/sheet.${format}?`)
+          ? (from, to, format) => predictedTapeHref(bow.id, sent, { sightInId: predict.data!.sightIn?.id, from, to, width: bow.tapeWidthMm }).replace('/predict/tape.svg?', `/predict/sheet.${format}?`)
           : null
       }
       sightInName={(() => {
-        const session = predict.data.session ? bow.sessions.find((item) => item.id === predict.data!.session!.id) : undefined;
-        return session ? sightInName(session, { builds: bow.builds, siblings: bow.sessions }) : null;
+        const sightIn = predict.data.sightIn ? bow.sightIns.find((item) => item.id === predict.data!.sightIn!.id) : undefined;
+        return sightIn ? sightInName(sightIn, { builds: bow.builds, siblings: bow.sightIns }) : null;
       })()}
     />
   ) : null;

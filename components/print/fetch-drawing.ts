@@ -1,10 +1,10 @@
 import { ApiError, csrfHeader } from '@/components/api/client';
 
 /**
- * Fetches a drawn file (SVG text) from the API: GET for a session's sheet, POST
+ * Fetches a drawn file (SVG text) from the API: GET for a sight-in's sheet, POST
  * with a JSON body for the try-it routes. A failure throws ApiError with the
  * server's own message, as apiFetch does for JSON.
- * Example: `await fetchDrawing('/api/sessions/4/sheet.svg?paper=a4')` → '<svg …'
+ * Example: `await fetchDrawing('/api/sight-ins/4/sheet.svg?paper=a4')` → '<svg …'
  */
 export async function fetchDrawing(path: string, body?: unknown): Promise<string> {
   let res: Response;

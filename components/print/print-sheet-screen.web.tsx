@@ -37,25 +37,25 @@ function printCss(paper: PaperName): string {
 }
 
 /**
- * The print page (web): fetches the sheet SVG for a session (GET
- * /api/sessions/:id/sheet.svg) or for the try-it page (POST /api/try/sheet.svg
- * with the request it left in session storage), shows it at 100 % on its paper,
+ * The print page (web): fetches the sheet SVG for a sight-in (GET
+ * /api/sight-ins/:id/sheet.svg) or for the try-it page (POST /api/try/sheet.svg
+ * with the request it left in sight-in storage), shows it at 100 % on its paper,
  * and opens the print dialog once it has loaded. Outside the app shell.
- * Example: route /print/sheet?session=4&from=20&to=80&paper=a4
+ * Example: route /print/sheet?sight-in=4&from=20&to=80&paper=a4
  */
-export function PrintSheetScreen({ sessionId, query, source }: PrintSheetScreenProps) {
+export function PrintSheetScreen({ sightInId, query, source }: PrintSheetScreenProps) {
   const paper = paperOf(query);
   const size = PAPER_SIZES_MM[paper];
   const sheet = useQuery<string, Error>({
-    queryKey: ['print-sheet', source ?? 'session', sessionId ?? 0, query],
+    queryKey: ['print-sheet', source ?? 'sightIn', sightInId ?? 0, query],
     queryFn: () => {
       if (source === 'try') {
         const stored = typeof sessionStorage === 'undefined' ? null : sessionStorage.getItem(TRY_SHEET_STORAGE_KEY);
         if (!stored) throw new Error('Nothing to print: make the tape on the try-it page first.');
         return fetchDrawing('/api/try/sheet.svg', JSON.parse(stored));
       }
-      if (!sessionId) throw new Error('Nothing to print: open the tape of a sight-in first.');
-      return fetchDrawing(`/api/sessions/${sessionId}/sheet.svg?${query}`);
+      if (!sightInId) throw new Error('Nothing to print: open the tape of a sight-in first.');
+      return fetchDrawing(`/api/sight-ins/${sightInId}/sheet.svg?${query}`);
     },
     retry: false,
     staleTime: Infinity,
@@ -74,7 +74,7 @@ export function PrintSheetScreen({ sessionId, query, source }: PrintSheetScreenP
       setTimeout(() => window.print(), 150);
     }
   };
-  const back = source === 'try' ? '/try' : sessionId ? `/sessions/${sessionId}/tape` : '/';
+  const back = source === 'try' ? '/try' : sightInId ? `/sight-ins/${sightInId}/tape` : '/';
 
   return (
     <div className="pw-print-area" style={styles.page}>

@@ -50,7 +50,7 @@ function InviteForm({ bowId }: { bowId: number }) {
       <SectionHeading
         title="Invite a technician"
         level={2}
-        description={`They get an e-mail with a link that works once, for ${inviteValidDays} days. They will see this bow’s records and can add sessions, marks, level checks and notes, but never delete yours.`}
+        description={`They get an e-mail with a link that works once, for ${inviteValidDays} days. They will see this bow’s records and can add sight-ins, marks, level checks and notes, but never delete yours.`}
       />
       {sentTo ? (
         <Banner tone="info" title="Invitation sent" testID="invite-sent">
@@ -161,7 +161,7 @@ export function BowSharingScreen({ bowId }: { bowId: number }) {
         <ScreenTitle name={`Sharing · ${nickname}`} />
         <SectionHeading level={1} title="Sharing" description={nickname} action={back} />
         <Banner tone="info" title="Shared with you">
-          Only the bow’s archer invites technicians and reads its log. You can add sessions, marks, level checks and notes.
+          Only the bow’s archer invites technicians and reads its log. You can add sight-ins, marks, level checks and notes.
         </Banner>
         <BowExportLinks bowId={bowId} />
       </Screen>

@@ -7,19 +7,19 @@ import { tapeSchema, type Tape, type TapeLayout } from '@/shared/tape';
 
 const tapeResponse = z.object({ tape: tapeSchema });
 
-/** A new layout for a session (sessionId) or an edit of a saved one (id). */
-export type SaveTapeVariables = { id?: number; sessionId?: number; input: TapeLayout };
+/** A new layout for a sight-in (sightInId) or an edit of a saved one (id). */
+export type SaveTapeVariables = { id?: number; sightInId?: number; input: TapeLayout };
 
 /**
- * Saves a tape layout (POST /api/sessions/:sessionId/tapes or PATCH /api/tapes/:id);
+ * Saves a tape layout (POST /api/sight-ins/:sightInId/tapes or PATCH /api/tapes/:id);
  * the bow's tape list and readiness refresh.
- * Example: `useSaveTape().mutate({ sessionId: 12, input: layout })`
+ * Example: `useSaveTape().mutate({ sightInId: 12, input: layout })`
  */
 export function useSaveTape() {
   const queryClient = useQueryClient();
   return useMutation<Tape, ApiError, SaveTapeVariables>({
-    mutationFn: async ({ id, sessionId, input }) => {
-      const path = id ? `/api/tapes/${id}` : `/api/sessions/${sessionId}/tapes`;
+    mutationFn: async ({ id, sightInId, input }) => {
+      const path = id ? `/api/tapes/${id}` : `/api/sight-ins/${sightInId}/tapes`;
       const { tape } = await apiFetch(path, { method: id ? 'PATCH' : 'POST', body: input, schema: tapeResponse });
       return tape;
     },

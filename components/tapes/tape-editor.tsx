@@ -33,12 +33,12 @@ import type { SightModel } from '@/math/flight/sight-model';
 import { tapeLayout, type TapeLayout as MathTapeLayout } from '@/math/tape/tape-layout';
 import type { DistanceUnit, LengthUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
-import type { Session } from '@/shared/session';
+import type { SightIn } from '@/shared/sight-in';
 import type { Tape, TapeLayout } from '@/shared/tape';
 
 export interface TapeEditorProps {
   bow: BowDetail;
-  session: Session;
+  sightIn: SightIn;
   /** A saved layout to start from (and to update on save). */
   tape?: Tape;
   lengthUnit: LengthUnit;
@@ -86,18 +86,18 @@ function previewOf(text: TapeFormText, lengthUnit: LengthUnit, model: SightModel
 }
 
 /**
- * A session's tape: the options, a preview drawn from the math core's tape
+ * A sight-in's tape: the options, a preview drawn from the math core's tape
  * geometry, and the ways out: save the layout, print the sheet at true size,
  * download the SVG or the PDF. Sights with fixed pins also get the pin gaps.
- * Example: `<TapeEditor bow={bow} session={session} lengthUnit="mm" distanceUnit="yd" />`
+ * Example: `<TapeEditor bow={bow} sight-in={sight-in} lengthUnit="mm" distanceUnit="yd" />`
  */
-export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit, addOnly = false }: TapeEditorProps) {
+export function TapeEditor({ bow, sightIn, tape, lengthUnit, distanceUnit, addOnly = false }: TapeEditorProps) {
   const wide = useWide();
   const save = useSaveTape();
   const [general, setGeneral] = useState<string | null>(null);
   // The saved layout this editor updates: the one it opened with, or the one it created.
   const [savedId, setSavedId] = useState<number | undefined>(tape?.id);
-  const fit = session.fit;
+  const fit = sightIn.fit;
   const model = fit.model as unknown as SightModel;
   const sign: 1 | -1 = fit.scaleDirection === 'up' ? -1 : 1;
   const resolver = useMemo(
@@ -118,7 +118,7 @@ export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit, addOn
     (input) => {
       setGeneral(null);
       save.mutate(
-        { id: addOnly ? undefined : savedId, sessionId: session.id, input },
+        { id: addOnly ? undefined : savedId, sightInId: sightIn.id, input },
         {
           onSuccess: (saved) => {
             setSavedId(saved.id);
@@ -179,16 +179,16 @@ export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit, addOn
         label="Print"
         variant="secondary"
         disabled={!query}
-        href={query ? `/print/sheet?session=${session.id}&${query}` : undefined}
+        href={query ? `/print/sheet?sight-in=${sightIn.id}&${query}` : undefined}
         testID="tape-print"
       />
       {query ? (
         <>
-          <DownloadLink label="Download SVG" href={`/api/sessions/${session.id}/tape.svg?${query}`} testID="download-svg" />
-          <DownloadLink label="Download PDF" href={`/api/sessions/${session.id}/sheet.pdf?${query}`} testID="download-pdf" />
+          <DownloadLink label="Download SVG" href={`/api/sight-ins/${sightIn.id}/tape.svg?${query}`} testID="download-svg" />
+          <DownloadLink label="Download PDF" href={`/api/sight-ins/${sightIn.id}/sheet.pdf?${query}`} testID="download-pdf" />
         </>
       ) : null}
-      <SendTapeForm sessionId={session.id} layoutQuery={query} />
+      <SendTapeForm sightInId={sightIn.id} layoutQuery={query} />
     </View>
   );
 
@@ -241,7 +241,7 @@ export function TapeEditor({ bow, session, tape, lengthUnit, distanceUnit, addOn
  * matters most, and the distance to shoot next (from the stored fit).
  * Example: oneMarkWords(fit) → 'Only 20 yd is sighted; every other tick comes from the chronographed speed and is uncertain by up to ±2.5 mm (100 yd). Shoot 90 yd next, save the sight-in and print again.'
  */
-export function oneMarkWords(fit: Session['fit']): string {
+export function oneMarkWords(fit: SightIn['fit']): string {
   const unit = fit.distanceUnit;
   const sighted = fit.residuals[0]?.distance;
   const widest = fit.marks.reduce<(typeof fit.marks)[number] | null>((a, b) => (b.sigmaMm !== null && (!a || (a.sigmaMm ?? 0) < b.sigmaMm) ? b : a), null);

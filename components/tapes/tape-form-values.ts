@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { lengthTextToMm, mmToLengthText, numberToText, textToNumber } from '@/components/bows/form-numbers';
 import { metresToDistance, distanceToMetres, type LengthUnit } from '@/math/units/convert';
 import type { TapeOptionsInput } from '@/shared/fit';
-import type { StoredFit } from '@/shared/session';
+import type { StoredFit } from '@/shared/sight-in';
 import { tapeLayoutSchema, type Paper, type Tape, type TapeLayout, type TapeOrientation } from '@/shared/tape';
 import type { DistanceUnit } from '@/shared/auth';
 
@@ -81,7 +81,7 @@ export function tapeOptionsOf(layout: TapeLayout): TapeOptionsInput {
 }
 
 /**
- * The download query for a layout: /api/sessions/:id/tape.svg?<this>.
+ * The download query for a layout: /api/sight-ins/:id/tape.svg?<this>.
  * Example: layoutQuery(layout) → 'from=20&to=80&step=1&unit=yd&orientation=down&width=8&mirror=0&paper=letter'
  */
 export function layoutQuery(layout: TapeLayout): string {

@@ -1,4 +1,4 @@
-import { SessionLoader } from '@/components/sessions/session-loader';
+import { SightInLoader } from '@/components/sight-ins/sight-in-loader';
 import { TapeEditor } from '@/components/tapes/tape-editor';
 import { ConfirmAtRangeBanner } from '@/components/tuning/confirm-banner';
 import { Button } from '@/components/ui/button';
@@ -8,25 +8,25 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { sightInName } from '@/shared/sight-in-name';
 
 /** The tape of a sight-in: options, preview, print and downloads (a saved layout when `tapeId` is given). */
-export function TapeScreen({ sessionId, tapeId }: { sessionId: number; tapeId?: number }) {
+export function TapeScreen({ sightInId, tapeId }: { sightInId: number; tapeId?: number }) {
   return (
-    <SessionLoader sessionId={sessionId} title="Tape" failedTitle="The tape could not be loaded" loadingLabel="Loading the fit…">
-      {({ me, session, bow, role }) => {
-        const tape = tapeId ? bow.tapes.find((item) => item.id === tapeId && item.sessionId === sessionId) : undefined;
+    <SightInLoader sightInId={sightInId} title="Tape" failedTitle="The tape could not be loaded" loadingLabel="Loading the fit…">
+      {({ me, sightIn, bow, role }) => {
+        const tape = tapeId ? bow.tapes.find((item) => item.id === tapeId && item.sightInId === sightInId) : undefined;
         return (
           <Screen>
             <ScreenTitle name="Tape" />
             <SectionHeading
               level={1}
               title={tape?.label ? `Tape: ${tape.label}` : 'Sight tape'}
-              description={`${bow.nickname} · sight-in of ${sightInName(session, { builds: bow.builds, siblings: bow.sessions })}`}
-              action={<Button label="Back to the sight-in" variant="quiet" href={`/sessions/${sessionId}`} />}
+              description={`${bow.nickname} · sight-in of ${sightInName(sightIn, { builds: bow.builds, siblings: bow.sightIns })}`}
+              action={<Button label="Back to the sight-in" variant="quiet" href={`/sight-ins/${sightInId}`} />}
             />
-            <ConfirmAtRangeBanner sessionId={session.id} subject="tape" />
+            <ConfirmAtRangeBanner sightInId={sightIn.id} subject="tape" />
             <TapeEditor
               key={tape?.id ?? 'new'}
               bow={bow}
-              session={session}
+              sightIn={sightIn}
               tape={tape}
               lengthUnit={me.lengthUnit}
               distanceUnit={me.distanceUnit}
@@ -35,6 +35,6 @@ export function TapeScreen({ sessionId, tapeId }: { sessionId: number; tapeId?: 
           </Screen>
         );
       }}
-    </SessionLoader>
+    </SightInLoader>
   );
 }

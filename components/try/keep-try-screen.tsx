@@ -22,7 +22,7 @@ import { Text } from '@/components/ui/text';
 import { space } from '@/components/theme';
 import { bowInputSchema } from '@/shared/bow';
 import { buildInputSchema } from '@/shared/build';
-import { sessionInputSchema } from '@/shared/session';
+import { sightInInputSchema } from '@/shared/sight-in';
 
 /** What the new account still has to tell: the bow's and the arrow's essentials the try page did not ask for. */
 type KeepText = {
@@ -52,7 +52,7 @@ const today = () => new Date().toISOString().slice(0, 10);
 /** Field of the form a schema path belongs to, for each of the three records. */
 const bowField: Record<string, keyof KeepText> = { nickname: 'nickname', hand: 'hand', drawWeightLb: 'drawWeightLb', drawLengthMm: 'drawLength', sightRadiusMm: 'sightRadius', peepHeightMm: 'peepHeight' };
 const buildField: Record<string, keyof KeepText> = { name: 'buildName', grainsPerInch: 'grainsPerInch', cutLengthMm: 'cutLength', diameterMm: 'diameter', pointGr: 'pointGr', speedFps: 'speedFps' };
-const sessionField: Record<string, keyof KeepText> = { date: 'date', placeLabel: 'placeLabel' };
+const sightInField: Record<string, keyof KeepText> = { date: 'date', placeLabel: 'placeLabel' };
 
 /**
  * After signing up from the try page: the bow and the two marks typed there
@@ -133,12 +133,12 @@ function KeepTryForm({ carried }: { carried: TryFormText }) {
       pointGr: textToNumber(text.pointGr),
       speedFps: textToNumber(text.speedFps) ?? null,
     });
-    const session = sessionInputSchema.safeParse({ buildId: 1, date: text.date, placeLabel: text.placeLabel, notes: 'Carried over from the try page.', marks });
+    const sightIn = sightInInputSchema.safeParse({ buildId: 1, date: text.date, placeLabel: text.placeLabel, notes: 'Carried over from the try page.', marks });
     let bad = false;
     for (const [result, fields] of [
       [bow, bowField],
       [build, buildField],
-      [session, sessionField],
+      [sightIn, sightInField],
     ] as const) {
       if (result.success) continue;
       for (const issue of result.error.issues) {
@@ -148,7 +148,7 @@ function KeepTryForm({ carried }: { carried: TryFormText }) {
         bad = true;
       }
     }
-    if (bad || !bow.success || !build.success || !session.success) {
+    if (bad || !bow.success || !build.success || !sightIn.success) {
       setProblem((current) => current ?? 'Some fields need another look; nothing was saved.');
       return;
     }
@@ -160,10 +160,10 @@ function KeepTryForm({ carried }: { carried: TryFormText }) {
       setStep('Saving the arrow build… (2 of 3)');
       const buildId = (await apiFetch<{ build: { id: number } }>(`/api/bows/${bowId}/builds`, { method: 'POST', body: build.data })).build.id;
       setStep('Fitting and saving the sight-in… (3 of 3)');
-      const saved = await apiFetch<{ session: { id: number } }>(`/api/bows/${bowId}/sessions`, { method: 'POST', body: { ...session.data, buildId } });
+      const saved = await apiFetch<{ sightIn: { id: number } }>(`/api/bows/${bowId}/sight-ins`, { method: 'POST', body: { ...sightIn.data, buildId } });
       clearTryCarry();
       await queryClient.invalidateQueries();
-      router.replace(`/sessions/${saved.session.id}`);
+      router.replace(`/sight-ins/${saved.sightIn.id}`);
     } catch (error) {
       // Nothing half-saved: a bow whose build or sight-in was refused goes again.
       if (bowId !== null) await apiFetch(`/api/bows/${bowId}`, { method: 'DELETE' }).catch(() => undefined);

@@ -6,7 +6,7 @@ import { bowKeys } from '@/components/bows/api';
 import { levelKeys } from '@/components/level/api';
 import { setupEntrySchema, setupListSchema, type SetupEntryInput, type SetupList } from '@/shared/setup-measures';
 import { paperTuneRunSchema, type PaperTuneEnd, type PaperTuneRun, type PaperTuneShotInput, type PaperTuneStart } from '@/shared/paper-tune';
-import { sessionStalenessSchema, type SessionStaleness } from '@/shared/staleness-api';
+import { sightInStalenessSchema, type SightInStaleness } from '@/shared/staleness-api';
 
 /** Query keys of the tuning feature; every key starts with 'tuning'. */
 export const tuningKeys = {
@@ -14,7 +14,7 @@ export const tuningKeys = {
   setup: (bowId: number) => ['tuning', 'setup', bowId] as const,
   runs: (bowId: number) => ['tuning', 'runs', bowId] as const,
   run: (id: number) => ['tuning', 'run', id] as const,
-  staleness: (sessionId: number) => ['tuning', 'staleness', sessionId] as const,
+  staleness: (sightInId: number) => ['tuning', 'staleness', sightInId] as const,
 };
 
 const validId = (id: number | undefined): id is number => typeof id === 'number' && Number.isInteger(id) && id > 0;
@@ -109,23 +109,23 @@ export function useEndRun(runId: number) {
  * level screen, a technician's phone) makes it stale, and a cached "current"
  * must never hide that (the cached answer shows until the new one arrives).
  */
-export function useSessionStaleness(sessionId: number | undefined) {
-  return useQuery<SessionStaleness, ApiError>({
-    queryKey: tuningKeys.staleness(sessionId ?? 0),
-    queryFn: () => apiFetch(`/api/sessions/${sessionId}/staleness`, { schema: sessionStalenessSchema }),
-    enabled: validId(sessionId),
+export function useSightInStaleness(sightInId: number | undefined) {
+  return useQuery<SightInStaleness, ApiError>({
+    queryKey: tuningKeys.staleness(sightInId ?? 0),
+    queryFn: () => apiFetch(`/api/sight-ins/${sightInId}/staleness`, { schema: sightInStalenessSchema }),
+    enabled: validId(sightInId),
     staleTime: 0,
     refetchOnMount: 'always',
   });
 }
 
 /** Records "marks confirmed at the range" on a sight-in. */
-export function useConfirmAtRange(sessionId: number) {
+export function useConfirmAtRange(sightInId: number) {
   const queryClient = useQueryClient();
-  return useMutation<SessionStaleness, ApiError, { note: string }>({
-    mutationFn: (input) => apiFetch(`/api/sessions/${sessionId}/confirm-range`, { method: 'POST', body: input, schema: sessionStalenessSchema }),
+  return useMutation<SightInStaleness, ApiError, { note: string }>({
+    mutationFn: (input) => apiFetch(`/api/sight-ins/${sightInId}/confirm-range`, { method: 'POST', body: input, schema: sightInStalenessSchema }),
     onSuccess: (result) => {
-      queryClient.setQueryData(tuningKeys.staleness(sessionId), result);
+      queryClient.setQueryData(tuningKeys.staleness(sightInId), result);
       return refresh(queryClient);
     },
   });

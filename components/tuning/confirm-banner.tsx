@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { formatDay } from '@/components/bows/readiness-words';
-import { useConfirmAtRange, useSessionStaleness } from '@/components/tuning/api';
+import { useConfirmAtRange, useSightInStaleness } from '@/components/tuning/api';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
@@ -12,11 +12,11 @@ import { space } from '@/components/theme';
  * change that moves the point of impact came after it (shared/staleness.ts),
  * with the reason and date, and the action that records the marks as
  * confirmed. Nothing when current (a line naming the last confirmation, if any).
- * Example: `<ConfirmAtRangeBanner sessionId={8} subject="tape" />`
+ * Example: `<ConfirmAtRangeBanner sightInId={8} subject="tape" />`
  */
-export function ConfirmAtRangeBanner({ sessionId, subject }: { sessionId: number; subject: 'sight-in' | 'tape' }) {
-  const staleness = useSessionStaleness(sessionId);
-  const confirm = useConfirmAtRange(sessionId);
+export function ConfirmAtRangeBanner({ sightInId, subject }: { sightInId: number; subject: 'sight-in' | 'tape' }) {
+  const staleness = useSightInStaleness(sightInId);
+  const confirm = useConfirmAtRange(sightInId);
   if (!staleness.data) return null;
   const last = staleness.data.confirmations[staleness.data.confirmations.length - 1];
   if (staleness.data.state === 'current') {

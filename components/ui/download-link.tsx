@@ -18,7 +18,7 @@ export interface DownloadLinkProps {
 // build uses download-link.web.tsx, a real <a download> so the browser saves the file.
 /**
  * A secondary-looking button that downloads a file.
- * Example: `<DownloadLink label="Download SVG" href="/api/sessions/4/tape.svg" />`
+ * Example: `<DownloadLink label="Download SVG" href="/api/sight-ins/4/tape.svg" />`
  */
 export function DownloadLink({ label, href, testID }: DownloadLinkProps) {
   const online = useOnline();

@@ -8,7 +8,7 @@ import { borders, colors, fonts, layout, radii, space } from '@/components/theme
 // would navigate away from the app (the API sends the file as an attachment).
 /**
  * A secondary-looking link that downloads a file (same props as download-link.tsx).
- * Example: `<DownloadLink label="Download SVG" href="/api/sessions/4/tape.svg" fileName="tape.svg" />`
+ * Example: `<DownloadLink label="Download SVG" href="/api/sight-ins/4/tape.svg" fileName="tape.svg" />`
  */
 export function DownloadLink({ label, href, fileName, testID }: DownloadLinkProps) {
   const online = useOnline();

@@ -36,7 +36,7 @@ export const FIELD_CARD_CAUTIONS = [
  *
  * Air: `air.altitudeM` (m) and `air.temperatureC` (°C; absent: the standard
  * atmosphere's at that altitude, ISO 2533). `sightIn` names the air the
- * session recorded (null parts: the fit assumed sea level / standard), for
+ * sight-in recorded (null parts: the fit assumed sea level / standard), for
  * the card's words only; the fitted model carries the density itself.
  *
  * Units: distances in model.distanceUnit, angles degrees, marks mm as the

@@ -28,10 +28,10 @@ export function startFakeSmtp({ port, dir, host = '127.0.0.1' }: { port: number;
     disabledCommands: ['STARTTLS'],
     size: maxMessageBytes,
     logger: false,
-    onAuth(_auth, _session, callback) {
+    onAuth(_auth, _sight_in, callback) {
       callback(null, { user: 'development' });
     },
-    onData(stream, session, callback) {
+    onData(stream, sightIn, callback) {
       const chunks: Buffer[] = [];
       stream.on('data', (chunk: Buffer) => chunks.push(chunk));
       stream.on('end', () => {
@@ -41,8 +41,8 @@ export function startFakeSmtp({ port, dir, host = '127.0.0.1' }: { port: number;
         }
         try {
           const raw = Buffer.concat(chunks);
-          const from = session.envelope.mailFrom ? session.envelope.mailFrom.address : '';
-          const to = session.envelope.rcptTo.map((r) => r.address);
+          const from = sightIn.envelope.mailFrom ? sightIn.envelope.mailFrom.address : '';
+          const to = sightIn.envelope.rcptTo.map((r) => r.address);
           saveMail(dir, { from, to }, parseMessage(raw));
           callback();
         } catch (err) {

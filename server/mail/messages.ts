@@ -38,7 +38,7 @@ export function inviteMessage({ archerName, bowNickname, link, expiresAt }: { ar
   const text = [
     `Hello,`,
     ``,
-    `${archerName} uses Pinwright to keep the records of their bow "${bowNickname}" and would like you to see them: the set-up, arrow builds, sight-in sessions and level checks. You will be able to add sessions, marks, level checks and notes; you will not be able to delete anything.`,
+    `${archerName} uses Pinwright to keep the records of their bow "${bowNickname}" and would like you to see them: the set-up, arrow builds, sight-ins and level checks. You will be able to add sight-ins, marks, level checks and notes; you will not be able to delete anything.`,
     ``,
     `To accept, open this link and sign in with your technician account, or create one:`,
     link,
@@ -50,8 +50,8 @@ export function inviteMessage({ archerName, bowNickname, link, expiresAt }: { ar
   const html = page(
     'A bow was shared with you',
     [
-      `${escapeHtml(archerName)} uses Pinwright to keep the records of their bow <strong>${escapeHtml(bowNickname)}</strong> and would like you to see them: the set-up, arrow builds, sight-in sessions and level checks.`,
-      `You will be able to add sessions, marks, level checks and notes; you will not be able to delete anything.`,
+      `${escapeHtml(archerName)} uses Pinwright to keep the records of their bow <strong>${escapeHtml(bowNickname)}</strong> and would like you to see them: the set-up, arrow builds, sight-ins and level checks.`,
+      `You will be able to add sight-ins, marks, level checks and notes; you will not be able to delete anything.`,
       `To accept, open the link and sign in with your technician account, or create one.`,
     ],
     { label: 'See the invitation', href: link },
@@ -87,13 +87,13 @@ export function resetMessage({ name, link }: { name: string; link: string }): Ma
 }
 
 /** A sight tape's print sheet sent as a PDF attachment. */
-export function tapeMessage({ senderName, bowNickname, sessionDate, filename }: { senderName: string; bowNickname: string; sessionDate: string; filename: string }): MailBody {
-  const subject = `Sight tape for ${bowNickname} (${sessionDate})`;
+export function tapeMessage({ senderName, bowNickname, sightInDate, filename }: { senderName: string; bowNickname: string; sightInDate: string; filename: string }): MailBody {
+  const subject = `Sight tape for ${bowNickname} (${sightInDate})`;
   const caution = 'A printed tape is an estimate until every distance you will shoot has been confirmed at the range.';
   const text = [
     `Hello,`,
     ``,
-    `${senderName} sent you the print sheet of a sight tape for the bow "${bowNickname}", from the sight-in session of ${sessionDate}. It is attached as ${filename}.`,
+    `${senderName} sent you the print sheet of a sight tape for the bow "${bowNickname}", from the sight-in of ${sightInDate}. It is attached as ${filename}.`,
     ``,
     `Print it at 100 % (actual size, no "fit to page") and measure the 50 mm bar on the sheet with a ruler before you cut the tape.`,
     caution,
@@ -103,7 +103,7 @@ export function tapeMessage({ senderName, bowNickname, sessionDate, filename }: 
   const html = page(
     'A sight tape for you',
     [
-      `${escapeHtml(senderName)} sent you the print sheet of a sight tape for the bow <strong>${escapeHtml(bowNickname)}</strong>, from the sight-in session of ${escapeHtml(sessionDate)}. It is attached as ${escapeHtml(filename)}.`,
+      `${escapeHtml(senderName)} sent you the print sheet of a sight tape for the bow <strong>${escapeHtml(bowNickname)}</strong>, from the sight-in of ${escapeHtml(sightInDate)}. It is attached as ${escapeHtml(filename)}.`,
       `Print it at 100 % (actual size, no “fit to page”) and measure the 50 mm bar on the sheet with a ruler before you cut the tape.`,
       `<strong>Caution:</strong> ${escapeHtml(caution)}`,
     ],

@@ -33,6 +33,7 @@ import * as m0055 from './0055-arrows';
 import * as m0056 from './0056-arrow-fliers';
 import * as m0057 from './0057-range-confirmations';
 import * as m0075 from './0075-sight-sessions-warning-count';
+import { sightInRenames } from './0080-sight-in-names';
 
 type Step = { up: (p: { context: QueryInterface }) => Promise<void>; down: (p: { context: QueryInterface }) => Promise<void> };
 
@@ -65,6 +66,7 @@ export const migrations: Array<[string, Step]> = [
   ['0056-arrow-fliers', m0056],
   ['0057-range-confirmations', m0057],
   ['0075-sight-sessions-warning-count', m0075],
+  ...sightInRenames,
 ];
 
 export function migrator(sequelize: Sequelize) {

@@ -1,9 +1,9 @@
 /**
- * Who added an arrow build, a sight-in session or a mark (`addedById`, migrations
+ * Who added an arrow build, a sight-in or a mark (`addedById`, migrations
  * 0060–0062). Hooks fill it on create when the caller did not: the signed-in
  * user of the API request (server/services/audit-context.ts), or, outside a
  * request (seed, command line), the bow's owner. A caller that rewrites rows
- * (the sessions service replaces a session's marks) passes the stored value on.
+ * (the sight-ins service replaces a sight-in's marks) passes the stored value on.
  *
  * Example: installAddedByHooks(ArrowBuild, async (build) => (await Bow.findByPk(build.bowId))?.userId ?? null)
  */

@@ -6,7 +6,7 @@ import type { User } from './user';
 export class ArrowFlier extends Model<InferAttributes<ArrowFlier>, InferCreationAttributes<ArrowFlier>> {
   declare id: CreationOptional<number>;
   declare arrowId: number;
-  declare sessionId: number;
+  declare sightInId: number;
   declare userId: number | null;
   declare note: CreationOptional<string>;
   declare createdAt: CreationOptional<Date>;
@@ -19,7 +19,7 @@ ArrowFlier.init(
   {
     id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
     arrowId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-    sessionId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+    sightInId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
     userId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
     note: { type: DataTypes.STRING(200), allowNull: false, defaultValue: '' },
     createdAt: DataTypes.DATE(3),

@@ -6,8 +6,8 @@ import { User } from './user';
 import { WebSession } from './web-session';
 import { Bow } from './bow';
 import { ArrowBuild } from './arrow-build';
-import { SightSession } from './sight-session';
-import { SessionMark } from './session-mark';
+import { SightIn } from './sight-in';
+import { SightInMark } from './sight-in-mark';
 import { Tape } from './tape';
 import { Photo } from './photo';
 import { LevelCheck } from './level-check';
@@ -34,14 +34,14 @@ User.hasMany(Bow, { foreignKey: 'userId', as: 'bows' });
 Bow.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Bow.hasMany(ArrowBuild, { foreignKey: 'bowId', as: 'builds' });
 ArrowBuild.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
-Bow.hasMany(SightSession, { foreignKey: 'bowId', as: 'sessions' });
-SightSession.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
-ArrowBuild.hasMany(SightSession, { foreignKey: 'buildId', as: 'sessions' });
-SightSession.belongsTo(ArrowBuild, { foreignKey: 'buildId', as: 'build' });
-SightSession.hasMany(SessionMark, { foreignKey: 'sessionId', as: 'marks' });
-SessionMark.belongsTo(SightSession, { foreignKey: 'sessionId', as: 'session' });
-SightSession.hasMany(Tape, { foreignKey: 'sessionId', as: 'tapes' });
-Tape.belongsTo(SightSession, { foreignKey: 'sessionId', as: 'session' });
+Bow.hasMany(SightIn, { foreignKey: 'bowId', as: 'sightIns' });
+SightIn.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
+ArrowBuild.hasMany(SightIn, { foreignKey: 'buildId', as: 'sightIns' });
+SightIn.belongsTo(ArrowBuild, { foreignKey: 'buildId', as: 'build' });
+SightIn.hasMany(SightInMark, { foreignKey: 'sightInId', as: 'marks' });
+SightInMark.belongsTo(SightIn, { foreignKey: 'sightInId', as: 'sightIn' });
+SightIn.hasMany(Tape, { foreignKey: 'sightInId', as: 'tapes' });
+Tape.belongsTo(SightIn, { foreignKey: 'sightInId', as: 'sightIn' });
 
 // Level checks, their steps and photos, and the change log (migrations 0020–0023).
 Bow.hasMany(LevelCheck, { foreignKey: 'bowId', as: 'levelChecks' });
@@ -67,16 +67,16 @@ Token.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 AuditEntry.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
 AuditEntry.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
 
-// Who added a build, a session or a mark (migrations 0060–0062; hooks in added-by.ts).
+// Who added a build, a sight-in or a mark (migrations 0060–0062; hooks in added-by.ts).
 ArrowBuild.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
-SightSession.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
-SessionMark.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
+SightIn.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
+SightInMark.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
 installAddedByHooks(ArrowBuild, async (build, transaction) => (await Bow.findByPk(build.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null);
-installAddedByHooks(SightSession, async (session, transaction) => (await Bow.findByPk(session.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null);
-installAddedByHooks(SessionMark, async (mark, transaction) => {
-  const session = await SightSession.findByPk(mark.sessionId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
-  if (!session) return null;
-  return (await Bow.findByPk(session.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null;
+installAddedByHooks(SightIn, async (sightIn, transaction) => (await Bow.findByPk(sightIn.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null);
+installAddedByHooks(SightInMark, async (mark, transaction) => {
+  const sightIn = await SightIn.findByPk(mark.sightInId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
+  if (!sightIn) return null;
+  return (await Bow.findByPk(sightIn.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null;
 });
 
 // Tuning: set-up entries, paper-tune runs and shots, arrow sets, arrows and fliers,
@@ -98,9 +98,9 @@ Arrow.belongsTo(ArrowSet, { foreignKey: 'setId', as: 'set' });
 Arrow.hasMany(ArrowFlier, { foreignKey: 'arrowId', as: 'fliers' });
 ArrowFlier.belongsTo(Arrow, { foreignKey: 'arrowId', as: 'arrow' });
 ArrowFlier.belongsTo(User, { foreignKey: 'userId', as: 'addedBy' });
-SightSession.hasMany(RangeConfirmation, { foreignKey: 'sessionId', as: 'rangeConfirmations' });
-RangeConfirmation.belongsTo(SightSession, { foreignKey: 'sessionId', as: 'session' });
+SightIn.hasMany(RangeConfirmation, { foreignKey: 'sightInId', as: 'rangeConfirmations' });
+RangeConfirmation.belongsTo(SightIn, { foreignKey: 'sightInId', as: 'sightIn' });
 RangeConfirmation.belongsTo(User, { foreignKey: 'userId', as: 'confirmedBy' });
 
-export { User, WebSession, Bow, ArrowBuild, SightSession, SessionMark, Tape, Photo, LevelCheck, LevelStep, BowChange, Share, Token, AuditEntry, IdempotencyKey };
+export { User, WebSession, Bow, ArrowBuild, SightIn, SightInMark, Tape, Photo, LevelCheck, LevelStep, BowChange, Share, Token, AuditEntry, IdempotencyKey };
 export { SetupEntry, PaperTuneRun, PaperTuneShot, ArrowSet, Arrow, ArrowFlier, RangeConfirmation };

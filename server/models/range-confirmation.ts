@@ -5,7 +5,7 @@ import type { User } from './user';
 /** "Marks confirmed at the range" on a sight-in (migration 0057; shared/staleness.ts). */
 export class RangeConfirmation extends Model<InferAttributes<RangeConfirmation>, InferCreationAttributes<RangeConfirmation>> {
   declare id: CreationOptional<number>;
-  declare sessionId: number;
+  declare sightInId: number;
   declare userId: number | null;
   declare confirmedAt: Date;
   declare note: CreationOptional<string>;
@@ -18,7 +18,7 @@ export class RangeConfirmation extends Model<InferAttributes<RangeConfirmation>,
 RangeConfirmation.init(
   {
     id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-    sessionId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+    sightInId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
     userId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
     confirmedAt: { type: DataTypes.DATE(3), allowNull: false },
     note: { type: DataTypes.STRING(300), allowNull: false, defaultValue: '' },

@@ -9,10 +9,10 @@ import {
 import { sequelize } from '@/server/db';
 import type { Paper, TapeOrientation } from '@/shared/tape';
 
-/** A saved tape layout for one session's fit (range, step, unit, orientation, width, mirror, paper, label). */
+/** A saved tape layout for one sight-in's fit (range, step, unit, orientation, width, mirror, paper, label). */
 export class Tape extends Model<InferAttributes<Tape>, InferCreationAttributes<Tape>> {
   declare id: CreationOptional<number>;
-  declare sessionId: ForeignKey<number>;
+  declare sightInId: ForeignKey<number>;
   declare fromDistance: number;
   declare toDistance: number;
   declare step: number;

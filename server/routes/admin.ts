@@ -16,7 +16,7 @@ export function adminRoutes() {
     const { id } = req.params as unknown as { id: number };
     res.json({ account: await accounts.updateAccount(currentUser(req), id, req.body) });
   });
-  // ?page=&bowId=&accountId=&kind= (kind: a record kind, e.g. "share", "account", "session-mark").
+  // ?page=&bowId=&accountId=&kind= (kind: a record kind, e.g. "share", "account", "sight-in-mark").
   router.get('/audit', validate({ query: adminAuditQuerySchema }), async (req, res) => {
     res.json(await audit.listAllAudit(req.query as unknown as AdminAuditQuery));
   });

@@ -5,7 +5,7 @@ import { validate } from '@/server/middleware/validate';
 import { currentUser, requireUser } from '@/server/middleware/auth';
 import * as builds from '@/server/services/build-service';
 
-/** Arrow builds: /api/bows/:bowId/builds and /api/builds/:id. A build with sessions is not deleted (409). */
+/** Arrow builds: /api/bows/:bowId/builds and /api/builds/:id. A build with sight-ins is not deleted (409). */
 export function buildRoutes() {
   const router = Router();
   router.get('/bows/:bowId/builds', requireUser, validate({ params: bowIdParamSchema }), async (req, res) => {

@@ -27,11 +27,11 @@ const csvBody: RequestHandler[] = [
 
 /**
  * Records in and out.
- *   GET  /api/bows/:id/export.csv              builds, sessions and marks, one row per mark
+ *   GET  /api/bows/:id/export.csv              builds, sight-ins and marks, one row per mark
  *   GET  /api/bows/:id/export.json             the same as a JSON document
- *   POST /api/sessions/:id/marks/import?dryRun=1   {csv, unit} (or a text/csv body): per-row preview
- *   POST /api/sessions/:id/marks/import        add the file's marks, all or nothing
- *   POST /api/sessions/:id/send-tape           {to, paper, tape?}: the print sheet as a PDF attachment
+ *   POST /api/sight-ins/:id/marks/import?dryRun=1   {csv, unit} (or a text/csv body): per-row preview
+ *   POST /api/sight-ins/:id/marks/import        add the file's marks, all or nothing
+ *   POST /api/sight-ins/:id/send-tape           {to, paper, tape?}: the print sheet as a PDF attachment
  */
 export function exportRoutes() {
   const router = Router();
@@ -51,7 +51,7 @@ export function exportRoutes() {
     send(res, await exporter.exportBowJson(currentUser(req), idOf(req)));
   });
   router.post(
-    '/sessions/:id/marks/import',
+    '/sight-ins/:id/marks/import',
     requireUser,
     ...csvBody,
     validate({ params: idParamSchema, query: markImportQuerySchema, body: markImportSchema }),
@@ -61,7 +61,7 @@ export function exportRoutes() {
       res.status(dryRun ? 200 : 201).json(result);
     },
   );
-  router.post('/sessions/:id/send-tape', requireUser, sendLimit, validate({ params: idParamSchema, body: sendTapeSchema }), async (req, res) => {
+  router.post('/sight-ins/:id/send-tape', requireUser, sendLimit, validate({ params: idParamSchema, body: sendTapeSchema }), async (req, res) => {
     const { fileName } = await exporter.sendTape(currentUser(req), idOf(req), req.body);
     res.json({ message: `The print sheet (${fileName}) was sent to ${req.body.to}.` });
   });

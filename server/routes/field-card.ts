@@ -7,19 +7,19 @@ import * as cards from '@/server/services/field-card-service';
 import { send } from './tapes';
 
 /**
- * A session's field card: GET /api/sessions/:id/field-card (JSON), field-card.svg
+ * A sight-in's field card: GET /api/sight-ins/:id/field-card (JSON), field-card.svg
  * and field-card.pdf (100 × 150 mm). Query: angles, distances, altitudeM, temperatureC.
  */
 export function fieldCardRoutes() {
   const router = Router();
   const guard = [requireUser, validate({ params: idParamSchema, query: fieldCardQuerySchema })];
-  router.get('/sessions/:id/field-card', ...guard, async (req, res) => {
+  router.get('/sight-ins/:id/field-card', ...guard, async (req, res) => {
     res.json(await cards.fieldCard(currentUser(req), idOf(req), queryOf(req)));
   });
-  router.get('/sessions/:id/field-card.svg', ...guard, async (req, res) => {
+  router.get('/sight-ins/:id/field-card.svg', ...guard, async (req, res) => {
     send(res, await cards.fieldCardDownload(currentUser(req), idOf(req), queryOf(req), 'svg'));
   });
-  router.get('/sessions/:id/field-card.pdf', ...guard, async (req, res) => {
+  router.get('/sight-ins/:id/field-card.pdf', ...guard, async (req, res) => {
     send(res, await cards.fieldCardDownload(currentUser(req), idOf(req), queryOf(req), 'pdf'));
   });
   return router;

@@ -10,7 +10,7 @@ import { healthRoutes } from './health';
 import { adminRoutes } from './admin';
 import { bowRoutes } from './bows';
 import { buildRoutes } from './builds';
-import { sessionRoutes } from './sessions';
+import { sightInRoutes } from './sight-ins';
 import { tapeRoutes } from './tapes';
 import { tryRoutes } from './try';
 import { passwordRoutes } from './password';
@@ -40,20 +40,20 @@ export function apiRoutes(sequelize: Sequelize) {
   api.use('/admin', adminRoutes());
   api.use(bowRoutes()); // /bows, /bows/:id
   api.use(buildRoutes()); // /bows/:bowId/builds, /builds/:id
-  api.use(sessionRoutes()); // /bows/:bowId/sessions, /sessions/:id
-  api.use(tapeRoutes()); // /sessions/:sessionId/tapes, /tapes/:id, /sessions/:id/{tape.svg,sheet.svg,sheet.pdf}
+  api.use(sightInRoutes()); // /bows/:bowId/sight-ins, /sight-ins/:id
+  api.use(tapeRoutes()); // /sight-ins/:sightInId/tapes, /tapes/:id, /sight-ins/:id/{tape.svg,sheet.svg,sheet.pdf}
   api.use(tryRoutes()); // public, rate-limited: /try/fit, /try/tape.svg, /try/sheet.svg, /try/sheet.pdf
   api.use('/password', passwordRoutes());
   if (config.devMail) api.use('/dev/mail', devMailRoutes()); // development only: what the fake SMTP service received
   api.use('/clients', clientRoutes());
   api.use(shareRoutes()); // /bows/:bowId/shares, /shares, /shares/:id/revoke, /invites/:token, /invites/accept(-new)
   api.use(auditRoutes()); // /bows/:id/audit
-  api.use(exportRoutes()); // /bows/:id/export.{csv,json}, /sessions/:id/marks/import, /sessions/:id/send-tape
+  api.use(exportRoutes()); // /bows/:id/export.{csv,json}, /sight-ins/:id/marks/import, /sight-ins/:id/send-tape
   api.use(levelRoutes()); // /bows/:bowId/{level,readiness,checks,changes}, /checks/:id, /changes/:id
   api.use(photoRoutes()); // /checks/:id/steps/:step/photo, /photos/:id
   api.use(compareRoutes()); // /bows/:bowId/compare
-  api.use(fieldCardRoutes()); // /sessions/:id/field-card, field-card.svg, field-card.pdf
+  api.use(fieldCardRoutes()); // /sight-ins/:id/field-card, field-card.svg, field-card.pdf
   api.use(predictRoutes()); // /bows/:bowId/predict, /bows/:bowId/predict/tape.svg
-  api.use(tuningRoutes()); // /bows/:bowId/{setup,paper-tunes,tuning.csv}, /paper-tunes/:id, /builds/:id/arrow-sets, /arrows/:id, /sessions/:id/{staleness,confirm-range}
+  api.use(tuningRoutes()); // /bows/:bowId/{setup,paper-tunes,tuning.csv}, /paper-tunes/:id, /builds/:id/arrow-sets, /arrows/:id, /sight-ins/:id/{staleness,confirm-range}
   return api;
 }

@@ -14,7 +14,7 @@ type PredictSheetQuery = PredictTapeQuery & { paper?: 'a4' | 'letter' };
 
 /**
  * A build not shot yet: POST /api/bows/:bowId/predict ({buildId} or {build},
- * optional sessionId), GET /api/bows/:bowId/predict/tape.svg and its print
+ * optional sightInId), GET /api/bows/:bowId/predict/tape.svg and its print
  * sheet GET /api/bows/:bowId/predict/sheet.svg|pdf (see shared/predict.ts).
  */
 export function predictRoutes() {

@@ -1,22 +1,22 @@
 import { Router, type Response } from 'express';
-import { idParamSchema, sessionIdParamSchema } from '@/shared/common';
+import { idParamSchema, sightInIdParamSchema } from '@/shared/common';
 import { tapeLayoutSchema, tapeQuerySchema, tapeUpdateSchema, type TapeQuery } from '@/shared/tape';
 import { validate } from '@/server/middleware/validate';
 import { currentUser, requireUser } from '@/server/middleware/auth';
 import * as tapes from '@/server/services/tape-service';
 
 /**
- * Saved tapes (/api/sessions/:sessionId/tapes, /api/tapes/:id) and the
- * downloads drawn from a session's fit: tape.svg, sheet.svg, sheet.pdf
+ * Saved tapes (/api/sight-ins/:sightInId/tapes, /api/tapes/:id) and the
+ * downloads drawn from a sight-in's fit: tape.svg, sheet.svg, sheet.pdf
  * (query: a saved `tape` id, or layout options; see shared/tape.ts).
  */
 export function tapeRoutes() {
   const router = Router();
-  router.get('/sessions/:sessionId/tapes', requireUser, validate({ params: sessionIdParamSchema }), async (req, res) => {
-    res.json({ tapes: await tapes.listTapes(currentUser(req), sessionIdOf(req)) });
+  router.get('/sight-ins/:sightInId/tapes', requireUser, validate({ params: sightInIdParamSchema }), async (req, res) => {
+    res.json({ tapes: await tapes.listTapes(currentUser(req), sightInIdOf(req)) });
   });
-  router.post('/sessions/:sessionId/tapes', requireUser, validate({ params: sessionIdParamSchema, body: tapeLayoutSchema }), async (req, res) => {
-    res.status(201).json({ tape: await tapes.createTape(currentUser(req), sessionIdOf(req), req.body) });
+  router.post('/sight-ins/:sightInId/tapes', requireUser, validate({ params: sightInIdParamSchema, body: tapeLayoutSchema }), async (req, res) => {
+    res.status(201).json({ tape: await tapes.createTape(currentUser(req), sightInIdOf(req), req.body) });
   });
   router.get('/tapes/:id', requireUser, validate({ params: idParamSchema }), async (req, res) => {
     res.json({ tape: await tapes.getTape(currentUser(req), idOf(req)) });
@@ -30,13 +30,13 @@ export function tapeRoutes() {
   });
 
   const downloads = [requireUser, validate({ params: idParamSchema, query: tapeQuerySchema })];
-  router.get('/sessions/:id/tape.svg', ...downloads, async (req, res) => {
+  router.get('/sight-ins/:id/tape.svg', ...downloads, async (req, res) => {
     send(res, await tapes.tapeDownload(currentUser(req), idOf(req), queryOf(req)));
   });
-  router.get('/sessions/:id/sheet.svg', ...downloads, async (req, res) => {
+  router.get('/sight-ins/:id/sheet.svg', ...downloads, async (req, res) => {
     send(res, await tapes.sheetDownload(currentUser(req), idOf(req), queryOf(req), 'svg'));
   });
-  router.get('/sessions/:id/sheet.pdf', ...downloads, async (req, res) => {
+  router.get('/sight-ins/:id/sheet.pdf', ...downloads, async (req, res) => {
     send(res, await tapes.sheetDownload(currentUser(req), idOf(req), queryOf(req), 'pdf'));
   });
   return router;
@@ -51,5 +51,5 @@ export function send(res: Response, download: tapes.Download) {
 }
 
 const idOf = (req: { params: unknown }) => (req.params as { id: number }).id;
-const sessionIdOf = (req: { params: unknown }) => (req.params as { sessionId: number }).sessionId;
+const sightInIdOf = (req: { params: unknown }) => (req.params as { sightInId: number }).sightInId;
 const queryOf = (req: { query: unknown }) => req.query as TapeQuery;

@@ -8,7 +8,7 @@ import { validate } from '@/server/middleware/validate';
 import { currentUser, requireUser } from '@/server/middleware/auth';
 import * as tuning from '@/server/services/tuning-service';
 import * as arrowSets from '@/server/services/arrow-set-service';
-import { sessionStaleness } from '@/server/services/staleness-service';
+import { sightInStaleness } from '@/server/services/staleness-service';
 import { exportTuningCsv } from '@/server/services/export-service';
 
 const bowIdOf = (req: { params: unknown }) => (req.params as { bowId: number }).bowId;
@@ -16,7 +16,7 @@ const idOf = (req: { params: unknown }) => (req.params as { id: number }).id;
 
 /**
  * Tuning: /bows/:bowId/setup, /bows/:bowId/paper-tunes, /paper-tunes/:id(/shots,/end),
- * /builds/:id/arrow-sets, /arrows/:id(/fliers), /sessions/:id/{staleness,confirm-range},
+ * /builds/:id/arrow-sets, /arrows/:id(/fliers), /sight-ins/:id/{staleness,confirm-range},
  * /bows/:bowId/tuning.csv.
  */
 export function tuningRoutes() {
@@ -60,13 +60,13 @@ export function tuningRoutes() {
     res.status(201).json({ set: await arrowSets.addFlier(currentUser(req), idOf(req), req.body) });
   });
 
-  router.get('/sessions/:id/staleness', requireUser, byId, async (req, res) => {
-    res.json(await sessionStaleness(currentUser(req), idOf(req)));
+  router.get('/sight-ins/:id/staleness', requireUser, byId, async (req, res) => {
+    res.json(await sightInStaleness(currentUser(req), idOf(req)));
   });
-  router.post('/sessions/:id/confirm-range', requireUser, validate({ params: idParamSchema, body: confirmRangeInputSchema }), async (req, res) => {
+  router.post('/sight-ins/:id/confirm-range', requireUser, validate({ params: idParamSchema, body: confirmRangeInputSchema }), async (req, res) => {
     const user = currentUser(req);
     await tuning.confirmAtRange(user, idOf(req), req.body.note);
-    res.status(201).json(await sessionStaleness(user, idOf(req)));
+    res.status(201).json(await sightInStaleness(user, idOf(req)));
   });
 
   router.get('/bows/:bowId/tuning.csv', requireUser, bow, async (req, res) => {

@@ -2,25 +2,25 @@
  * Demo scenario, bows part (invented people, places and bows; no real brands):
  * Marit Oakhollow is getting ready for a late-season mountain elk hunt. She
  * has a single-pin slider bow she hunts with and a fixed five-pin bow she
- * keeps as a back-up, three arrow builds, sight-in sessions with 2, 3 and 5
+ * keeps as a back-up, three arrow builds, sight-ins with 2, 3 and 5
  * marks and the tapes she printed from them.
  *
  * The marks are consistent: each is the reading the math core's flight model
  * gives for a plausible arrow (its own speed and drag), plus a small fixed
  * scatter (a tenth or two of a millimetre, as groups wander), rounded to
  * 0.1 mm as an archer reads a scale. Idempotent: each record is looked up by
- * its natural key (bow nickname, build name, session date and place, tape
+ * its natural key (bow nickname, build name, sight-in date and place, tape
  * label) and made only if missing; it goes through the same services as the
  * API, so derived quantities and fits are computed the same way.
  */
-import { ArrowBuild, Bow, SightSession, Tape, type User } from '@/server/models';
+import { ArrowBuild, Bow, SightIn, Tape, type User } from '@/server/models';
 import type { BowInput } from '@/shared/bow';
 import type { BuildInput } from '@/shared/build';
-import type { SessionInput } from '@/shared/session';
+import type { SightInInput } from '@/shared/sight-in';
 import type { TapeLayout } from '@/shared/tape';
 import { createBow } from '@/server/services/bow-service';
 import { createBuild } from '@/server/services/build-service';
-import { createSession } from '@/server/services/session-service';
+import { createSightIn } from '@/server/services/sight-in-service';
 import { createTape } from '@/server/services/tape-service';
 import { simulatedReadings } from '@/server/services/fit-service';
 import type { SeedStep } from './demo';
@@ -30,8 +30,8 @@ const INCH_MM = 25.4; // exact (international yard and pound, 1959)
 type BuildSeed = BuildInput & {
   /** The arrow as it really flies from this bow, which the marks are drawn from. */
   truth: { speedFps: number; dragCoefficient: number };
-  sessions: Array<
-    Omit<SessionInput, 'buildId' | 'marks'> & {
+  sightIns: Array<
+    Omit<SightInInput, 'buildId' | 'marks'> & {
       distances: number[];
       /** Scatter added to each exact reading, mm (fixed, so the scenario is the same on every machine). */
       scatterMm: number[];
@@ -90,7 +90,7 @@ export const demoBows: BowSeed[] = [
         speedFps: 276,
         dragCoefficient: null,
         truth: { speedFps: 275.2, dragCoefficient: 2.1 },
-        sessions: [
+        sightIns: [
           {
             date: '2026-11-14',
             placeLabel: 'Greywether Basin camp meadow',
@@ -133,7 +133,7 @@ export const demoBows: BowSeed[] = [
         speedFps: 306,
         dragCoefficient: null,
         truth: { speedFps: 305.4, dragCoefficient: 1.95 },
-        sessions: [
+        sightIns: [
           {
             date: '2026-09-12',
             placeLabel: 'Larch Hollow range',
@@ -184,7 +184,7 @@ export const demoBows: BowSeed[] = [
         speedFps: null,
         dragCoefficient: 2.2,
         truth: { speedFps: 284.5, dragCoefficient: 2.2 },
-        sessions: [
+        sightIns: [
           {
             date: '2026-10-24',
             placeLabel: 'Quarry Bend practice butts',
@@ -202,7 +202,7 @@ export const demoBows: BowSeed[] = [
   },
 ];
 
-/** Seeds Marit's bows, builds, sessions and tapes; adds only what is missing. */
+/** Seeds Marit's bows, builds, sight-ins and tapes; adds only what is missing. */
 export async function seedBows(archer: User): Promise<void> {
   for (const { builds, ...bowInput } of demoBows) {
     let bow = await Bow.findOne({ where: { userId: archer.id, nickname: bowInput.nickname } });
@@ -210,15 +210,15 @@ export async function seedBows(archer: User): Promise<void> {
       const made = await createBow(archer, bowInput);
       bow = (await Bow.findByPk(made.id))!;
     }
-    for (const { truth, sessions, ...buildInput } of builds) {
+    for (const { truth, sightIns, ...buildInput } of builds) {
       let build = await ArrowBuild.findOne({ where: { bowId: bow.id, name: buildInput.name } });
       if (!build) {
         const made = await createBuild(archer, bow.id, buildInput);
         build = (await ArrowBuild.findByPk(made.id))!;
       }
-      for (const { distances, scatterMm, scaleZeroMm, tapes, ...sessionInput } of sessions) {
-        let session = await SightSession.findOne({ where: { bowId: bow.id, date: sessionInput.date, placeLabel: sessionInput.placeLabel } });
-        if (!session) {
+      for (const { distances, scatterMm, scaleZeroMm, tapes, ...sightInInput } of sightIns) {
+        let sightIn = await SightIn.findOne({ where: { bowId: bow.id, date: sightInInput.date, placeLabel: sightInInput.placeLabel } });
+        if (!sightIn) {
           const readings = simulatedReadings(
             {
               distanceUnit: 'yd',
@@ -229,8 +229,8 @@ export async function seedBows(archer: User): Promise<void> {
               peepHeightMm: bow.peepHeightMm,
               sightRadiusMm: bow.sightRadiusMm,
               scaleZeroMm,
-              altitudeM: sessionInput.altitudeM ?? undefined,
-              temperatureC: sessionInput.temperatureC ?? undefined,
+              altitudeM: sightInInput.altitudeM ?? undefined,
+              temperatureC: sightInInput.temperatureC ?? undefined,
             },
             distances,
           );
@@ -242,12 +242,12 @@ export async function seedBows(archer: User): Promise<void> {
             arrowsShot: 3,
             note: '',
           }));
-          const made = await createSession(archer, bow.id, { ...sessionInput, buildId: build.id, marks });
-          session = (await SightSession.findByPk(made.id))!;
+          const made = await createSightIn(archer, bow.id, { ...sightInInput, buildId: build.id, marks });
+          sightIn = (await SightIn.findByPk(made.id))!;
         }
         for (const layout of tapes) {
-          const existing = await Tape.findOne({ where: { sessionId: session.id, label: layout.label } });
-          if (!existing) await createTape(archer, session.id, layout);
+          const existing = await Tape.findOne({ where: { sightInId: sightIn.id, label: layout.label } });
+          if (!existing) await createTape(archer, sightIn.id, layout);
         }
       }
     }

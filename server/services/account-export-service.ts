@@ -1,7 +1,7 @@
 /**
  * Everything of an account in one JSON document (GET /api/me/export.json):
  * the account and its unit choices, then every bow it owns as that bow's own
- * export (export-service's exportBowJson: bow, builds, sessions with marks and
+ * export (export-service's exportBowJson: bow, builds, sight-ins with marks and
  * whatever else a bow's export carries), plus each bow's tape layouts, level
  * checks with their steps, logged changes and the list of its photos (the
  * photos themselves are downloaded one by one).
@@ -34,9 +34,9 @@ export async function exportAccountJson(user: User, now = new Date()): Promise<E
   const bows = [];
   for (const { id } of owned) {
     const { format: _format, version: _version, exportedAt: _at, note: _note, ...records } = JSON.parse(String((await exportBowJson(user, id, now)).body));
-    const sessionIds = (records.sessions as Array<{ id: number }>).map((session) => session.id);
+    const sightInIds = (records.sightIns as Array<{ id: number }>).map((sightIn) => sightIn.id);
     const [tapes, checks, changes, photos] = await Promise.all([
-      sessionIds.length ? Tape.findAll({ where: { sessionId: { [Op.in]: sessionIds } }, order: [['id', 'ASC']] }) : Promise.resolve([]),
+      sightInIds.length ? Tape.findAll({ where: { sightInId: { [Op.in]: sightInIds } }, order: [['id', 'ASC']] }) : Promise.resolve([]),
       LevelCheck.findAll({ where: { bowId: id }, include: [{ model: LevelStep, as: 'steps' }], order: [['id', 'ASC']] }),
       BowChange.findAll({ where: { bowId: id }, order: [['id', 'ASC']] }),
       Photo.findAll({ where: { bowId: id }, order: [['id', 'ASC']] }),

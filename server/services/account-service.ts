@@ -74,7 +74,7 @@ export async function changePassword(user: User, keepSid: string, input: Passwor
 
 /**
  * POST /api/me/delete: the account and everything of it, after its password
- * is typed again. Its bows go with every record on them (builds, sessions,
+ * is typed again. Its bows go with every record on them (builds, sight-ins,
  * marks, tapes, level checks, photos: the foreign-key cascades) and their
  * photo files; its shares end (both sides: cascade); its sign-ins, links and
  * keys go (cascade). What it added to others' bows stays, its author now null

@@ -1,5 +1,5 @@
 /**
- * Who added a build, session or mark, as the API sends it: `{ id, name }`, or
+ * Who added a build, sight-in or mark, as the API sends it: `{ id, name }`, or
  * null once that account has been deleted (the screens say "a former account").
  * One query for the names of a list of rows.
  *

@@ -11,7 +11,7 @@
 import { UniqueConstraintError } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError, found } from '@/server/errors';
-import { Arrow, ArrowBuild, ArrowFlier, ArrowSet, SightSession, User } from '@/server/models';
+import { Arrow, ArrowBuild, ArrowFlier, ArrowSet, SightIn, User } from '@/server/models';
 import { bowFor } from '@/server/services/bow-access';
 import { personJson } from '@/server/services/tuning-service';
 import { arrowInputSchema, type ArrowSet as ArrowSetJson, type ArrowSetInput, type ArrowUpdate } from '@/shared/arrow-set';
@@ -42,7 +42,7 @@ function setJson(set: ArrowSet, build: ArrowBuild, ownerId: number): ArrowSetJso
         runout: arrow.runout,
         note: arrow.note,
         status: arrow.status,
-        fliers: (arrow.fliers ?? []).map((f) => ({ id: f.id, sessionId: f.sessionId, note: f.note, addedBy: personJson(f.addedBy) })),
+        fliers: (arrow.fliers ?? []).map((f) => ({ id: f.id, sightInId: f.sightInId, note: f.note, addedBy: personJson(f.addedBy) })),
       })),
   };
 }
@@ -106,15 +106,15 @@ export async function updateArrow(user: User, arrowId: number, update: ArrowUpda
 }
 
 /** POST /api/arrows/:id/fliers: the arrow flew out of the group at that sight-in (of the same bow). */
-export async function addFlier(user: User, arrowId: number, input: { sessionId: number; note: string }): Promise<ArrowSetJson> {
+export async function addFlier(user: User, arrowId: number, input: { sightInId: number; note: string }): Promise<ArrowSetJson> {
   const arrow = await Arrow.findByPk(arrowId);
   const set = arrow ? await ArrowSet.findByPk(arrow.setId) : null;
   if (!arrow || !set) throw ApiError.notFound('That arrow');
   const { build, bow } = await buildFor(user, set.buildId, 'write');
-  const session = await SightSession.findByPk(input.sessionId, { attributes: ['id', 'bowId'] });
-  if (!session || session.bowId !== bow.id) throw ApiError.badRequest('That sight-in is not one of this bow’s.', { sessionId: 'Choose one of this bow’s sight-ins' });
+  const sightIn = await SightIn.findByPk(input.sightInId, { attributes: ['id', 'bowId'] });
+  if (!sightIn || sightIn.bowId !== bow.id) throw ApiError.badRequest('That sight-in is not one of this bow’s.', { sightInId: 'Choose one of this bow’s sight-ins' });
   try {
-    await ArrowFlier.create({ arrowId, sessionId: input.sessionId, userId: user.id, note: input.note });
+    await ArrowFlier.create({ arrowId, sightInId: input.sightInId, userId: user.id, note: input.note });
   } catch (err) {
     if (err instanceof UniqueConstraintError) throw ApiError.conflict(`Arrow ${arrow.number} is already marked as flying out at that sight-in.`);
     throw err;

@@ -3,7 +3,7 @@
  *  - `recordAudit` — explicit entries (share invited/accepted/revoked, admin
  *    role changes and disables);
  *  - the audit trail — Sequelize hooks on every record that hangs off a bow
- *    (bow, build, session, mark, tape, level check, step, photo, change):
+ *    (bow, build, sight-in, mark, tape, level check, step, photo, change):
  *    whenever someone who is not the bow's owner (a technician working on a
  *    shared bow) creates, changes or deletes one during an API request, an
  *    entry is written (when the write's transaction commits). Services need
@@ -14,7 +14,7 @@
  */
 import { Op, type Model, type ModelStatic, type Sequelize, type Transaction, type WhereOptions } from 'sequelize';
 import { ApiError } from '@/server/errors';
-import { ArrowBuild, ArrowSet, AuditEntry, Bow, LevelCheck, PaperTuneRun, SightSession, User } from '@/server/models';
+import { ArrowBuild, ArrowSet, AuditEntry, Bow, LevelCheck, PaperTuneRun, SightIn, User } from '@/server/models';
 import { bowFor } from '@/server/services/bow-access';
 import type { AdminAuditQuery, AuditEntry as AuditEntryJson, AuditList } from '@/shared/audit';
 import { auditContext, currentActor } from './audit-context';
@@ -125,10 +125,12 @@ export async function listAllAudit({ page: pageNumber, bowId, accountId, kind }:
 type Values = Record<string, unknown>;
 
 type Audited = {
-  /** Record type as stored, e.g. "session-mark". */
+  /** Record type as stored, e.g. "sight-in-mark". */
   type: string;
-  /** Words for the record, e.g. "a session mark". */
+  /** Words for the record, e.g. "a sight-in mark". */
   noun: string;
+  /** Words for several, when not the type's words plus "s", e.g. "sight-in marks". */
+  plural?: string;
   /** A few words about this record for the summary. */
   describe: (values: Values) => string;
   /** The bow the record belongs to. */
@@ -151,10 +153,10 @@ const fieldWords: Record<string, string> = {
 const fieldWord = (field: string) => fieldWords[field] ?? field.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
 
 const direct = async (values: Values) => (typeof values.bowId === 'number' ? values.bowId : null);
-const viaSession = async (values: Values, transaction?: Transaction | null) => {
-  if (typeof values.sessionId !== 'number') return null;
-  const session = await SightSession.findByPk(values.sessionId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
-  return session?.bowId ?? null;
+const viaSightIn = async (values: Values, transaction?: Transaction | null) => {
+  if (typeof values.sightInId !== 'number') return null;
+  const sightIn = await SightIn.findByPk(values.sightInId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
+  return sightIn?.bowId ?? null;
 };
 const viaCheck = async (values: Values, transaction?: Transaction | null) => {
   if (typeof values.checkId !== 'number') return null;
@@ -184,19 +186,21 @@ const number = (value: unknown) => (typeof value === 'number' ? String(Math.roun
 const audited: Record<string, Audited> = {
   Bow: { type: 'bow', noun: 'the bow', describe: (v) => text(v.nickname), bowOf: async (v) => (typeof v.id === 'number' ? v.id : null) },
   ArrowBuild: { type: 'arrow-build', noun: 'an arrow build', describe: (v) => text(v.name), bowOf: direct },
-  SightSession: {
-    type: 'sight-session',
-    noun: 'a sight-in session',
+  SightIn: {
+    type: 'sight-in',
+    noun: 'a sight-in',
+    plural: 'sight-ins',
     describe: (v) => [text(v.date), text(v.placeLabel)].filter(Boolean).join(', '),
     bowOf: direct,
   },
-  SessionMark: {
-    type: 'session-mark',
+  SightInMark: {
+    type: 'sight-in-mark',
     noun: 'a mark',
+    plural: 'sight-in marks',
     describe: (v) => (v.distance !== undefined ? `${number(v.distance)} ${text(v.unit)} at ${number(v.scaleMm)} mm` : ''),
-    bowOf: viaSession,
+    bowOf: viaSightIn,
   },
-  Tape: { type: 'tape', noun: 'a tape layout', describe: () => '', bowOf: viaSession },
+  Tape: { type: 'tape', noun: 'a tape layout', describe: () => '', bowOf: viaSightIn },
   LevelCheck: {
     type: 'level-check',
     noun: 'a level check',
@@ -233,8 +237,8 @@ const audited: Record<string, Audited> = {
   },
   ArrowSet: { type: 'arrow-set', noun: 'an arrow set', describe: (v) => text(v.name), bowOf: viaBuild },
   Arrow: { type: 'arrow', noun: 'an arrow', describe: (v) => (v.number !== undefined ? `arrow ${text(v.number)}` : ''), bowOf: viaSet },
-  ArrowFlier: { type: 'arrow-flier', noun: 'an arrow that flew out at a sight-in', describe: () => '', bowOf: viaSession },
-  RangeConfirmation: { type: 'range-confirmation', noun: 'marks confirmed at the range', describe: () => '', bowOf: viaSession },
+  ArrowFlier: { type: 'arrow-flier', noun: 'an arrow that flew out at a sight-in', describe: () => '', bowOf: viaSightIn },
+  RangeConfirmation: { type: 'range-confirmation', noun: 'marks confirmed at the range', describe: () => '', bowOf: viaSightIn },
 };
 
 const verbs = { created: 'Added', updated: 'Changed', deleted: 'Deleted' } as const;
@@ -259,7 +263,7 @@ const sameContent = (a: Values, b: Values) =>
     .every((key) => JSON.stringify(a[key]) === JSON.stringify(b[key]));
 
 /**
- * A replaced set (the sessions service deletes a session's marks and writes
+ * A replaced set (the sight-ins service deletes a sight-in's marks and writes
  * them again) should read as what really changed: a deleted row and a
  * created row of the same kind, on the same bow, with the same content cancel out.
  */
@@ -282,7 +286,7 @@ async function writeEvents(events: TrailEvent[]): Promise<void> {
     const spec = audited[event.modelName];
     const { rows, action } = event;
     const first = rows[0];
-    const what = rows.length === 1 ? spec.noun : `${rows.length} ${spec.type.replace(/-/g, ' ')}s`;
+    const what = rows.length === 1 ? spec.noun : `${rows.length} ${spec.plural ?? `${spec.type.replace(/-/g, ' ')}s`}`;
     const detail = rows.length === 1 ? spec.describe(first) : '';
     const named = event.fields.filter((field) => !derivedFields.has(field));
     const ownVerb = action === 'updated' ? (spec.updateVerb?.(first, event.fields) ?? null) : null;

@@ -3,7 +3,7 @@
  * uses. Three capabilities:
  *   read   — see the bow and everything on it: its owner, or a technician
  *            with an active share of it;
- *   write  — add records to it (sessions, marks, level checks, changes,
+ *   write  — add records to it (sight-ins, marks, level checks, changes,
  *            notes): the same people as read;
  *   add-build — add an arrow build (a new, attributed entry: the archer's
  *            builds are never changed): the same people as read;

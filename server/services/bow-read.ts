@@ -55,7 +55,7 @@ export type BuildFact = {
   updatedAt: Date;
 };
 
-export type SessionFact = {
+export type SightInFact = {
   id: number;
   bowId: number;
   buildId: number;
@@ -78,7 +78,7 @@ export type SessionFact = {
 
 export type TapeFact = {
   id: number;
-  sessionId: number;
+  sightInId: number;
   fromDistance: number;
   toDistance: number;
   step: number;
@@ -140,7 +140,7 @@ export type BowFacts = {
   owner: boolean;
   builds: BuildFact[];
   /** Newest first (date, then id), as the lists show them. */
-  sessions: SessionFact[];
+  sightIns: SightInFact[];
   /** Oldest first (id). */
   tapes: TapeFact[];
   /** Oldest first (changedAt, then id). */
@@ -151,7 +151,7 @@ export type BowFacts = {
   steps: Array<{ id: number; checkId: number; step: string; result: string }>;
   /** Who did each check. */
   performers: Array<{ id: number; name: string }>;
-  confirmations: Array<{ sessionId: number; confirmedAt: Date }>;
+  confirmations: Array<{ sightInId: number; confirmedAt: Date }>;
 };
 
 /** A row as the connector returns it (typed by Sequelize's parsers: DATETIME → Date, DATE → text). */
@@ -193,23 +193,23 @@ FROM bows b JOIN users owner ON owner.id = b.user_id WHERE ${scope}`,
 FROM bows b JOIN arrow_builds ab ON ab.bow_id = b.id LEFT JOIN users adder ON adder.id = ab.added_by_id WHERE ${scope}`,
     },
     {
-      key: 'sessions',
+      key: 'sightIns',
       sql: `SELECT s.id, s.bow_id AS bowId, s.build_id AS buildId, s.date, s.place_label AS placeLabel, s.altitude_m AS altitudeM,
   s.temperature_c AS temperatureC, s.notes, s.fit_speed_fps AS fitSpeedFps, s.fit_rms_mm AS fitRmsMm,
   s.fit_warning_count AS warningCount,
   s.added_by_id AS addedById, adder.name AS addedByName, s.created_at AS createdAt, s.updated_at AS updatedAt
-FROM bows b JOIN sight_sessions s ON s.bow_id = b.id LEFT JOIN users adder ON adder.id = s.added_by_id WHERE ${scope}`,
+FROM bows b JOIN sight_ins s ON s.bow_id = b.id LEFT JOIN users adder ON adder.id = s.added_by_id WHERE ${scope}`,
     },
     {
       key: 'marks',
-      sql: `SELECT m.session_id AS sessionId, m.position, m.distance, m.unit
-FROM bows b JOIN sight_sessions s ON s.bow_id = b.id JOIN session_marks m ON m.session_id = s.id WHERE ${scope}`,
+      sql: `SELECT m.sight_in_id AS sightInId, m.position, m.distance, m.unit
+FROM bows b JOIN sight_ins s ON s.bow_id = b.id JOIN sight_in_marks m ON m.sight_in_id = s.id WHERE ${scope}`,
     },
     {
       key: 'tapes',
-      sql: `SELECT t.id, t.session_id AS sessionId, t.from_distance AS fromDistance, t.to_distance AS toDistance, t.step, t.unit,
+      sql: `SELECT t.id, t.sight_in_id AS sightInId, t.from_distance AS fromDistance, t.to_distance AS toDistance, t.step, t.unit,
   t.orientation, t.width_mm AS widthMm, t.mirror, t.paper, t.label, t.created_at AS createdAt, t.updated_at AS updatedAt
-FROM bows b JOIN sight_sessions s ON s.bow_id = b.id JOIN tapes t ON t.session_id = s.id WHERE ${scope}`,
+FROM bows b JOIN sight_ins s ON s.bow_id = b.id JOIN tapes t ON t.sight_in_id = s.id WHERE ${scope}`,
     },
     {
       key: 'changes',
@@ -230,8 +230,8 @@ WHERE ${scope}`,
     },
     {
       key: 'confirmations',
-      sql: `SELECT rc.session_id AS sessionId, rc.confirmed_at AS confirmedAt
-FROM bows b JOIN sight_sessions s ON s.bow_id = b.id JOIN range_confirmations rc ON rc.session_id = s.id WHERE ${scope}`,
+      sql: `SELECT rc.sight_in_id AS sightInId, rc.confirmed_at AS confirmedAt
+FROM bows b JOIN sight_ins s ON s.bow_id = b.id JOIN range_confirmations rc ON rc.sight_in_id = s.id WHERE ${scope}`,
     },
   ];
 }
@@ -241,7 +241,7 @@ const reads = { bow: statements('b.id = ?'), account: statements('b.user_id = ?'
 type RawRows = {
   bows: Row[];
   builds: Row[];
-  sessions: Row[];
+  sightIns: Row[];
   marks: Row[];
   tapes: Row[];
   changes: Row[];
@@ -290,7 +290,7 @@ const time = (date: Date | null) => (date ? date.getTime() : -Infinity);
 /** The lists in the orders the screens and rules read (sorted here, on a few rows each, rather than by MariaDB). */
 function ordered(facts: BowFacts): BowFacts {
   facts.builds.sort((x, y) => x.id - y.id);
-  facts.sessions.sort((x, y) => (x.date < y.date ? 1 : x.date > y.date ? -1 : y.id - x.id));
+  facts.sightIns.sort((x, y) => (x.date < y.date ? 1 : x.date > y.date ? -1 : y.id - x.id));
   facts.tapes.sort((x, y) => x.id - y.id);
   facts.changes.sort((x, y) => x.changedAt.getTime() - y.changedAt.getTime() || x.id - y.id);
   facts.checks.sort((x, y) => time(y.completedAt) - time(x.completedAt) || time(y.startedAt) - time(x.startedAt) || y.id - x.id);
@@ -300,22 +300,22 @@ function ordered(facts: BowFacts): BowFacts {
 
 /**
  * Each sight-in's mark count and longest mark (by its length in metres; the
- * first of equals in the table's order), as session-service's markStats counts them.
+ * first of equals in the table's order), as sight-in-service's markStats counts them.
  */
 function markStatsOf(marks: Row[]): Map<number, { markCount: number; longestDistance: number | null; longestUnit: 'yd' | 'm' | null }> {
   const stats = new Map<number, { markCount: number; longestDistance: number | null; longestUnit: 'yd' | 'm' | null; longestM: number }>();
-  marks.sort((x, y) => (x.sessionId as number) - (y.sessionId as number) || (x.position as number) - (y.position as number));
+  marks.sort((x, y) => (x.sightInId as number) - (y.sightInId as number) || (x.position as number) - (y.position as number));
   for (const mark of marks) {
     const distance = mark.distance as number;
     const metres = mark.unit === 'yd' ? distance * YARD_M : distance;
-    const entry = stats.get(mark.sessionId as number) ?? { markCount: 0, longestDistance: null, longestUnit: null, longestM: -1 };
+    const entry = stats.get(mark.sightInId as number) ?? { markCount: 0, longestDistance: null, longestUnit: null, longestM: -1 };
     entry.markCount += 1;
     if (metres > entry.longestM) {
       entry.longestM = metres;
       entry.longestDistance = distance;
       entry.longestUnit = mark.unit as 'yd' | 'm';
     }
-    stats.set(mark.sessionId as number, entry);
+    stats.set(mark.sightInId as number, entry);
   }
   return stats;
 }
@@ -370,7 +370,7 @@ function toFacts(row: Row, child: (key: Exclude<keyof RawRows, 'bows'>) => Row[]
       createdAt: sqlDate(b.createdAt as string | Date),
       updatedAt: sqlDate(b.updatedAt as string | Date),
     })),
-    sessions: child('sessions').map((s) => {
+    sightIns: child('sightIns').map((s) => {
       const stats = markStats.get(s.id as number);
       return {
         id: s.id as number,
@@ -419,7 +419,7 @@ function toFacts(row: Row, child: (key: Exclude<keyof RawRows, 'bows'>) => Row[]
     })),
     steps: child('steps').map((step) => ({ id: step.id as number, checkId: step.checkId as number, step: step.step as string, result: step.result as string })),
     performers: [...performers].map(([id, name]) => ({ id, name })),
-    confirmations: child('confirmations').map((c) => ({ sessionId: c.sessionId as number, confirmedAt: sqlDate(c.confirmedAt as string | Date) })),
+    confirmations: child('confirmations').map((c) => ({ sightInId: c.sightInId as number, confirmedAt: sqlDate(c.confirmedAt as string | Date) })),
   };
 }
 
@@ -429,19 +429,19 @@ function toFacts(row: Row, child: (key: Exclude<keyof RawRows, 'bows'>) => Row[]
  */
 export async function readBowFacts(which: { bowId: number } | { userId: number }, askerId: number): Promise<BowFacts[]> {
   const rows = 'bowId' in which ? await readRows('bow', which.bowId, askerId) : await readRows('account', which.userId, askerId);
-  const bowOfSession = new Map(rows.sessions.map((s) => [s.id as number, s.bowId as number]));
+  const bowOfSightIn = new Map(rows.sightIns.map((s) => [s.id as number, s.bowId as number]));
   const bowOfCheck = new Map(rows.checks.map((c) => [c.id as number, c.bowId as number]));
   const ofBow = (row: Row) => row.bowId as number;
-  const ofSession = (row: Row) => bowOfSession.get(row.sessionId as number);
+  const ofSightIn = (row: Row) => bowOfSightIn.get(row.sightInId as number);
   const groups: Record<Exclude<keyof RawRows, 'bows'>, Map<number, Row[]>> = {
     builds: byBow(rows.builds, ofBow),
-    sessions: byBow(rows.sessions, ofBow),
-    marks: byBow(rows.marks, ofSession),
-    tapes: byBow(rows.tapes, ofSession),
+    sightIns: byBow(rows.sightIns, ofBow),
+    marks: byBow(rows.marks, ofSightIn),
+    tapes: byBow(rows.tapes, ofSightIn),
     changes: byBow(rows.changes, ofBow),
     checks: byBow(rows.checks, ofBow),
     steps: byBow(rows.steps, (row) => bowOfCheck.get(row.checkId as number)),
-    confirmations: byBow(rows.confirmations, ofSession),
+    confirmations: byBow(rows.confirmations, ofSightIn),
   };
   return rows.bows
     .sort((x, y) => (x.id as number) - (y.id as number))

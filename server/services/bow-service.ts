@@ -5,7 +5,7 @@
 import type { Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
-import { ArrowBuild, Bow, BowChange, SightSession, Tape, User } from '@/server/models';
+import { ArrowBuild, Bow, BowChange, SightIn, Tape, User } from '@/server/models';
 import {
   bowInputSchema,
   type Bow as BowOut,
@@ -16,7 +16,7 @@ import {
   type BowUpdate,
 } from '@/shared/bow';
 import { buildOut } from './build-service';
-import { sessionListItems } from './session-service';
+import { sightInListItems } from './sight-in-service';
 import { tapeOut } from './tape-service';
 import { levelSummaryForBows, type LevelFacts } from './level-service';
 import { photoKeysOfBow, removeStoredPhotos } from './photo-service';
@@ -75,14 +75,14 @@ async function readinessFrom(all: BowFacts[]): Promise<Map<number, BowReadiness>
   if (all.length === 0) return result;
   const ids = all.map((facts) => facts.bow.id);
   const levelFacts: LevelFacts = { checks: [], steps: [], performers: [], changes: [] };
-  const stale: StalenessFacts = { sessions: [], changes: [], builds: [], confirmations: [], tapes: [] };
+  const stale: StalenessFacts = { sightIns: [], changes: [], builds: [], confirmations: [], tapes: [] };
   const performers = new Map<number, { id: number; name: string }>();
   for (const facts of all) {
     levelFacts.checks.push(...facts.checks);
     levelFacts.steps.push(...facts.steps);
     levelFacts.changes.push(...facts.changes);
     for (const person of facts.performers) performers.set(person.id, person);
-    stale.sessions.push(...facts.sessions);
+    stale.sightIns.push(...facts.sightIns);
     stale.changes.push(...facts.changes);
     stale.builds.push(...facts.builds);
     stale.confirmations.push(...facts.confirmations);
@@ -97,20 +97,20 @@ async function readinessFrom(all: BowFacts[]): Promise<Map<number, BowReadiness>
   const [levels, staleness] = await Promise.all([levelSummaryForBows(ids, new Date(), levelFacts), stalenessForBows(ids, stale)]);
   for (const facts of all) {
     const bowId = facts.bow.id;
-    const session = facts.sessions[0]; // newest first
+    const sightIn = facts.sightIns[0]; // newest first
     result.set(bowId, {
-      latestSession: session
+      latestSightIn: sightIn
         ? {
-            id: session.id,
-            date: session.date,
-            rmsMm: session.fitRmsMm,
-            markCount: session.markCount,
-            longestDistance: session.longestDistance,
-            longestUnit: session.longestUnit,
+            id: sightIn.id,
+            date: sightIn.date,
+            rmsMm: sightIn.fitRmsMm,
+            markCount: sightIn.markCount,
+            longestDistance: sightIn.longestDistance,
+            longestUnit: sightIn.longestUnit,
           }
         : null,
       buildCount: facts.builds.length,
-      sessionCount: facts.sessions.length,
+      sightInCount: facts.sightIns.length,
       hasTape: facts.tapes.length > 0,
       level: levels.get(bowId) ?? null,
       confirm: staleness.get(bowId)?.confirm ?? null,
@@ -127,7 +127,7 @@ export async function listBows(user: User): Promise<BowSummary[]> {
 }
 
 /**
- * GET /api/bows/:id: the bow, its owner's name, its builds, its sessions (newest first, with fit summaries) and its tapes.
+ * GET /api/bows/:id: the bow, its owner's name, its builds, its sight-ins (newest first, with fit summaries) and its tapes.
  * One query (bow-read.ts) that also answers whether `user` may read it: 404 when not, as bow-access.ts decides.
  */
 export async function getBow(user: User, id: number): Promise<BowDetail> {
@@ -135,20 +135,20 @@ export async function getBow(user: User, id: number): Promise<BowDetail> {
   if (!facts || !facts.canRead) throw ApiError.notFound('That bow');
   const readiness = await readinessFrom([facts]);
   const names = new Map<number, string>();
-  for (const row of [...facts.builds, ...facts.sessions]) if (row.addedById !== null && row.addedByName !== null) names.set(row.addedById, row.addedByName);
-  const sessionsPerBuild = new Map<number, number>();
-  for (const session of facts.sessions) sessionsPerBuild.set(session.buildId, (sessionsPerBuild.get(session.buildId) ?? 0) + 1);
+  for (const row of [...facts.builds, ...facts.sightIns]) if (row.addedById !== null && row.addedByName !== null) names.set(row.addedById, row.addedByName);
+  const sightInsPerBuild = new Map<number, number>();
+  for (const sightIn of facts.sightIns) sightInsPerBuild.set(sightIn.buildId, (sightInsPerBuild.get(sightIn.buildId) ?? 0) + 1);
   const known = {
-    stats: new Map(facts.sessions.map((s) => [s.id, { markCount: s.markCount, longestDistance: s.longestDistance, longestUnit: s.longestUnit }])),
+    stats: new Map(facts.sightIns.map((s) => [s.id, { markCount: s.markCount, longestDistance: s.longestDistance, longestUnit: s.longestUnit }])),
     names,
-    warningCounts: new Map(facts.sessions.map((s) => [s.id, s.warningCount])),
+    warningCounts: new Map(facts.sightIns.map((s) => [s.id, s.warningCount])),
   };
   return {
     ...bowOut(facts.bow as Bow),
     ownerName: facts.ownerName,
     readiness: readiness.get(facts.bow.id)!,
-    builds: facts.builds.map((build) => buildOut(build as unknown as ArrowBuild, sessionsPerBuild.get(build.id) ?? 0, names)),
-    sessions: await sessionListItems(facts.sessions as unknown as SightSession[], known),
+    builds: facts.builds.map((build) => buildOut(build as unknown as ArrowBuild, sightInsPerBuild.get(build.id) ?? 0, names)),
+    sightIns: await sightInListItems(facts.sightIns as unknown as SightIn[], known),
     tapes: facts.tapes.map((tape) => tapeOut(tape as unknown as Tape, facts.bow.id)),
   };
 }
@@ -161,7 +161,7 @@ export async function createBow(user: User, input: BowInput): Promise<BowOut> {
 /**
  * PATCH: merge the change into the stored bow and check the whole with
  * bowInputSchema (so cross-field rules hold after a partial update).
- * Saved sessions keep the fit they were saved with; re-save a session to refit
+ * Saved sight-ins keep the fit they were saved with; re-save a sight-in to refit
  * it with a new sight radius or peep height.
  */
 export async function updateBow(user: User, id: number, update: BowUpdate): Promise<BowOut> {
@@ -196,7 +196,7 @@ export function impactEdits(before: Pick<BowInput, 'peepHeightMm' | 'sightRadius
   return edits;
 }
 
-/** Deletes the bow; its builds, sessions, marks and tapes go with it (foreign-key cascade, migrations 0011–0014). */
+/** Deletes the bow; its builds, sight-ins, marks and tapes go with it (foreign-key cascade, migrations 0011–0014). */
 export async function deleteBow(user: User, id: number): Promise<void> {
   const bow = await findOwnBow(user, id);
   const photoKeys = await photoKeysOfBow(bow.id); // the cascade removes photo rows; their files go after

@@ -3,16 +3,16 @@
  * energy, momentum) come from the math core through fit-service and are
  * stored with the build, recomputed on every save.
  *
- * Deleting a build that has sight-in sessions is refused (409) rather than
- * cascading: a session's marks are only meaningful with the arrow they were
+ * Deleting a build that has sight-ins is refused (409) rather than
+ * cascading: a sight-in's marks are only meaningful with the arrow they were
  * shot with, and they cost an afternoon at the range to make, so losing them
- * should take a deliberate step (delete the sessions first). Deleting the
+ * should take a deliberate step (delete the sight-ins first). Deleting the
  * whole bow still takes everything with it.
  */
 import { Op, fn, col, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
-import { ArrowBuild, Bow, SightSession, type User } from '@/server/models';
+import { ArrowBuild, Bow, SightIn, type User } from '@/server/models';
 import { buildInputSchema, type Build, type BuildInput, type BuildUpdate } from '@/shared/build';
 import { findBow } from './bow-service';
 import { bowFor, type BowCapability } from './bow-access';
@@ -33,7 +33,7 @@ export async function findOwnBuild(user: User, id: number, transaction?: Transac
 }
 
 /** The build as the API sends it; with `names` (addedByNames), who added it. */
-export function buildOut(build: ArrowBuild, sessionCount: number, names?: Map<number, string>): Build {
+export function buildOut(build: ArrowBuild, sightInCount: number, names?: Map<number, string>): Build {
   return {
     id: build.id,
     bowId: build.bowId,
@@ -61,18 +61,18 @@ export function buildOut(build: ArrowBuild, sessionCount: number, names?: Map<nu
       momentumSlugFtPerS: build.momentumSlugFtPerS,
       momentumKgMPerS: build.momentumKgMPerS,
     },
-    sessionCount,
+    sightInCount,
     ...(names ? { addedBy: addedByOf(build, names) } : {}),
     createdAt: build.createdAt.toISOString(),
     updatedAt: build.updatedAt.toISOString(),
   };
 }
 
-/** Number of sessions shot with each build. */
-export async function sessionCounts(buildIds: number[], transaction?: Transaction): Promise<Map<number, number>> {
+/** Number of sight-ins shot with each build. */
+export async function sightInCounts(buildIds: number[], transaction?: Transaction): Promise<Map<number, number>> {
   const counts = new Map<number, number>();
   if (buildIds.length === 0) return counts;
-  const rows = (await SightSession.findAll({
+  const rows = (await SightIn.findAll({
     attributes: ['buildId', [fn('COUNT', col('id')), 'count']],
     where: { buildId: { [Op.in]: buildIds } },
     group: ['buildId'],
@@ -92,14 +92,14 @@ function withDerived(input: BuildInput) {
 export async function listBuilds(user: User, bowId: number): Promise<Build[]> {
   const bow = await findBow(user, bowId, 'read');
   const builds = await ArrowBuild.findAll({ where: { bowId: bow.id }, order: [['id', 'ASC']] });
-  const counts = await sessionCounts(builds.map((build) => build.id));
+  const counts = await sightInCounts(builds.map((build) => build.id));
   const names = await addedByNames(builds);
   return builds.map((build) => buildOut(build, counts.get(build.id) ?? 0, names));
 }
 
 export async function getBuild(user: User, id: number): Promise<Build> {
   const build = await findOwnBuild(user, id, undefined, 'read');
-  const counts = await sessionCounts([build.id]);
+  const counts = await sightInCounts([build.id]);
   return buildOut(build, counts.get(build.id) ?? 0, await addedByNames([build]));
 }
 
@@ -117,7 +117,7 @@ export async function createBuild(user: User, bowId: number, input: BuildInput):
 
 /**
  * PATCH: merge, re-check the whole build, recompute the derived quantities.
- * Sessions already saved keep the fit they were saved with.
+ * Sight-ins already saved keep the fit they were saved with.
  */
 export async function updateBuild(user: User, id: number, update: BuildUpdate): Promise<Build> {
   return sequelize.transaction(async (transaction) => {
@@ -127,19 +127,19 @@ export async function updateBuild(user: User, id: number, update: BuildUpdate): 
     if (!merged.success) throw validationError(merged.error);
     build.set(withDerived(merged.data));
     await build.save({ transaction });
-    const counts = await sessionCounts([build.id], transaction);
+    const counts = await sightInCounts([build.id], transaction);
     return buildOut(build, counts.get(build.id) ?? 0, await addedByNames([build], transaction));
   });
 }
 
-/** Refused with 409 while sessions use the build (see the module comment). */
+/** Refused with 409 while sight-ins use the build (see the module comment). */
 export async function deleteBuild(user: User, id: number): Promise<void> {
   await sequelize.transaction(async (transaction) => {
     const build = await findOwnBuild(user, id, transaction);
-    const count = (await sessionCounts([build.id], transaction)).get(build.id) ?? 0;
+    const count = (await sightInCounts([build.id], transaction)).get(build.id) ?? 0;
     if (count > 0) {
-      const sessions = count === 1 ? '1 sight-in session uses' : `${count} sight-in sessions use`;
-      throw ApiError.conflict(`${sessions} this arrow build. Delete ${count === 1 ? 'that session' : 'those sessions'} first, or keep the build.`);
+      const sightIns = count === 1 ? '1 sight-in uses' : `${count} sight-ins use`;
+      throw ApiError.conflict(`${sightIns} this arrow build. Delete ${count === 1 ? 'that sight-in' : 'those sight-ins'} first, or keep the build.`);
     }
     await build.destroy({ transaction });
   });

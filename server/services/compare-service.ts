@@ -5,13 +5,13 @@
  * distance, speed, grains, FOC, energy, momentum, drop, forgiveness). A build
  * with no sight-in is refused in plain words naming it.
  */
-import { ArrowBuild, SightSession, type User } from '@/server/models';
+import { ArrowBuild, SightIn, type User } from '@/server/models';
 import { ApiError } from '@/server/errors';
 import { airDensityKgM3, compareBuilds, isFitInputError, type SightModel } from '@/math';
 import type { CompareQuery, CompareResponse } from '@/shared/compare';
-import type { StoredFit } from '@/shared/session';
+import type { StoredFit } from '@/shared/sight-in';
 import { readableBow } from './bow-access';
-import { markStats } from './session-service';
+import { markStats } from './sight-in-service';
 
 /**
  * Runs a math computation; a FitInputError (an input no sight can have) becomes
@@ -28,22 +28,22 @@ export function refusingMathInput<T>(compute: () => T, field?: string): T {
 }
 
 /** The most recent sight-in (by date, then id) shot with each build, by build id. */
-export async function latestSessionsByBuild(bowId: number, buildIds: number[]): Promise<Map<number, SightSession>> {
-  const sessions = await SightSession.findAll({
+export async function latestSightInsByBuild(bowId: number, buildIds: number[]): Promise<Map<number, SightIn>> {
+  const sightIns = await SightIn.findAll({
     where: { bowId, buildId: buildIds },
     order: [
       ['date', 'DESC'],
       ['id', 'DESC'],
     ],
   });
-  const latest = new Map<number, SightSession>();
-  for (const session of sessions) if (!latest.has(session.buildId)) latest.set(session.buildId, session);
+  const latest = new Map<number, SightIn>();
+  for (const sightIn of sightIns) if (!latest.has(sightIn.buildId)) latest.set(sightIn.buildId, sightIn);
   return latest;
 }
 
-/** The fitted model stored with a session (math's own serialisable SightModel). */
-export function modelOf(session: SightSession): SightModel {
-  return (session.fit as StoredFit).model as unknown as SightModel;
+/** The fitted model stored with a sight-in (math's own serialisable SightModel). */
+export function modelOf(sightIn: SightIn): SightModel {
+  return (sightIn.fit as StoredFit).model as unknown as SightModel;
 }
 
 /**
@@ -61,20 +61,20 @@ export async function compareBowBuilds(user: User, bowId: number, query: Compare
     const message = `Build ${unknown.join(', ')} is not one of this bow’s arrow builds.`;
     throw ApiError.badRequest(message, { builds: message });
   }
-  const latest = await latestSessionsByBuild(bow.id, ids);
+  const latest = await latestSightInsByBuild(bow.id, ids);
   const unsighted = ids.map((id) => byId.get(id)!).filter((build) => !latest.has(build.id));
   if (unsighted.length > 0) {
     const names = unsighted.map((build) => `“${build.name}”`).join(' and ');
     const message = `${names} ${unsighted.length === 1 ? 'has' : 'have'} no fitted sight-in yet: sight ${unsighted.length === 1 ? 'it' : 'them'} in (two marks are enough) before comparing.`;
     throw ApiError.conflict(message, { builds: message });
   }
-  const ordered = ids.map((id) => ({ build: byId.get(id)!, session: latest.get(id)! }));
-  const stats = await markStats(ordered.map(({ session }) => session.id));
+  const ordered = ids.map((id) => ({ build: byId.get(id)!, sightIn: latest.get(id)! }));
+  const stats = await markStats(ordered.map(({ sightIn }) => sightIn.id));
   const common =
     query.altitudeM !== undefined ? airDensityKgM3({ altitudeM: query.altitudeM, temperatureC: query.temperatureC }) : undefined;
   const comparison = refusingMathInput(() =>
     compareBuilds(
-      ordered.map(({ build, session }) => ({ label: build.name, model: modelOf(session), focPct: build.focPct })),
+      ordered.map(({ build, sightIn }) => ({ label: build.name, model: modelOf(sightIn), focPct: build.focPct })),
       {
         at: query.at,
         windowMm: query.windowMm,
@@ -88,15 +88,15 @@ export async function compareBowBuilds(user: User, bowId: number, query: Compare
     bowId: bow.id,
     scaleDirection: bow.scaleDirection,
     comparison,
-    sources: ordered.map(({ build, session }) => ({
+    sources: ordered.map(({ build, sightIn }) => ({
       buildId: build.id,
       name: build.name,
-      sessionId: session.id,
-      sessionDate: session.date,
-      placeLabel: session.placeLabel,
-      altitudeM: session.altitudeM,
-      temperatureC: session.temperatureC,
-      markCount: stats.get(session.id)?.markCount ?? 0,
+      sightInId: sightIn.id,
+      sightInDate: sightIn.date,
+      placeLabel: sightIn.placeLabel,
+      altitudeM: sightIn.altitudeM,
+      temperatureC: sightIn.temperatureC,
+      markCount: stats.get(sightIn.id)?.markCount ?? 0,
       chronographedSpeedFps: build.speedFps,
     })),
   };

@@ -1,5 +1,5 @@
 /**
- * Importing marks into a sight-in session from a CSV file. Columns: distance,
+ * Importing marks into a sight-in from a CSV file. Columns: distance,
  * reading (the scale reading, mm), and optionally arrows, note and unit — by
  * header name (in any order; other columns are ignored, so a bow export can be
  * read back) or, without a header, in that order. Distances are in yards or
@@ -8,7 +8,7 @@
  *
  * The preview (`dryRun`) checks every row and says what is wrong with each in
  * plain words; without it the marks are added all or nothing, through the
- * sessions service (so the session is refitted in the same transaction).
+ * sight-ins service (so the sight-in is refitted in the same transaction).
  *
  * Example: await importMarks(marit, 9, { csv: 'distance,reading\n70,48.2', unit: 'yd' }, true)
  *   → { dryRun: true, saved: false, rows: [{ line: 2, status: 'ok', mark: { distance: 70, … } }], … }
@@ -16,9 +16,9 @@
 import { ApiError } from '@/server/errors';
 import { CsvError, parseCsvRecords, type CsvRecord } from '@/server/csv';
 import type { User } from '@/server/models';
-import { findOwnSession, getSession, updateSession } from '@/server/services/session-service';
+import { findOwnSightIn, getSightIn, updateSightIn } from '@/server/services/sight-in-service';
 import { importMaxBytes, importMaxRows, type ImportResult, type ImportRow, type MarkImport } from '@/shared/csv';
-import { markInputSchema, maxMarks, type MarkInput } from '@/shared/session';
+import { markInputSchema, maxMarks, type MarkInput } from '@/shared/sight-in';
 
 type Unit = 'yd' | 'm';
 type Column = 'distance' | 'reading' | 'arrows' | 'note' | 'unit';
@@ -137,7 +137,7 @@ function readRow(record: CsvRecord, layout: Layout, defaultUnit: Unit): { mark: 
   const note = cell('note');
 
   if (problems.length > 0 || distance === null || scaleMm === null) return { mark: null, problems };
-  // The same rules (and words) as a mark typed into the session form.
+  // The same rules (and words) as a mark typed into the sight-in form.
   const parsed = markInputSchema.safeParse({ distance, unit, scaleMm, arrowsShot, note });
   if (!parsed.success) return { mark: null, problems: parsed.error.issues.map((issue) => issue.message) };
   return { mark: parsed.data, problems: [] };
@@ -148,15 +148,15 @@ function sizeError(bytes: number): ApiError {
 }
 
 /**
- * POST /api/sessions/:id/marks/import. With `dryRun` nothing is written and
+ * POST /api/sight-ins/:id/marks/import. With `dryRun` nothing is written and
  * the answer lists each row; without it, any problem refuses the whole file
  * (400, each row's problems under `fields["rows.<line>"]`) and nothing is written.
  */
-export async function importMarks(user: User, sessionId: number, input: MarkImport, dryRun: boolean): Promise<ImportResult> {
+export async function importMarks(user: User, sightInId: number, input: MarkImport, dryRun: boolean): Promise<ImportResult> {
   const bytes = Buffer.byteLength(input.csv, 'utf8');
   if (bytes > importMaxBytes) throw sizeError(bytes);
-  await findOwnSession(user, sessionId, undefined, 'write');
-  const existing = (await getSession(user, sessionId)).marks;
+  await findOwnSightIn(user, sightInId, undefined, 'write');
+  const existing = (await getSightIn(user, sightInId)).marks;
 
   const result = (rows: ImportRow[], fileProblem: string | null): ImportResult => ({
     dryRun,
@@ -200,8 +200,8 @@ export async function importMarks(user: User, sessionId: number, input: MarkImpo
     return dryRun ? outcome : refuse(outcome);
   }
 
-  // Each distance once per session: against the stored marks and the rows above.
-  const taken = existing.map((mark) => ({ metres: toMetres(mark.distance, mark.unit), where: 'already in this session' }));
+  // Each distance once per sight-in: against the stored marks and the rows above.
+  const taken = existing.map((mark) => ({ metres: toMetres(mark.distance, mark.unit), where: 'already in this sight-in' }));
   const rows: ImportRow[] = dataRows.map((record) => {
     const { mark, problems } = readRow(record, layout, input.unit);
     if (mark) {
@@ -217,7 +217,7 @@ export async function importMarks(user: User, sessionId: number, input: MarkImpo
   const total = existing.length + dataRows.length;
   const fileProblem =
     total > maxMarks
-      ? `The session has ${existing.length} marks and the file adds ${dataRows.length}; a session holds at most ${maxMarks}.`
+      ? `The sight-in has ${existing.length} marks and the file adds ${dataRows.length}; a sight-in holds at most ${maxMarks}.`
       : null;
   const outcome = result(rows, fileProblem);
   if (dryRun) return outcome;
@@ -227,6 +227,6 @@ export async function importMarks(user: User, sessionId: number, input: MarkImpo
     ...existing.map(({ distance, unit, scaleMm, arrowsShot, note }) => ({ distance, unit, scaleMm, arrowsShot, note })),
     ...rows.map((row) => row.mark!),
   ];
-  await updateSession(user, sessionId, { marks });
+  await updateSightIn(user, sightInId, { marks });
   return { ...outcome, saved: true };
 }

@@ -1,8 +1,8 @@
 /**
- * Taking a bow's records out of Pinwright: the builds, sessions and marks as
+ * Taking a bow's records out of Pinwright: the builds, sight-ins and marks as
  * JSON (the whole structure, as the API returns it) or as one CSV table (one
- * row per mark, with its session and build beside it; a build without
- * sessions or a session without marks gets a row with the mark cells empty),
+ * row per mark, with its sight-in and build beside it; a build without
+ * sight-ins or a sight-in without marks gets a row with the mark cells empty),
  * and a tape's print sheet sent by e-mail as a PDF. The JSON carries the
  * tuning records too (set-up entries, paper-tune runs, arrow sets, range
  * confirmations); GET /api/bows/:id/tuning.csv gives them as their own table.
@@ -14,15 +14,15 @@ import { Op } from 'sequelize';
 import { toCsv, type CsvCell } from '@/server/csv';
 import { ApiError, validationError } from '@/server/errors';
 import { tapeMessage } from '@/server/mail/messages';
-import { ArrowBuild, SessionMark, SightSession, type User } from '@/server/models';
+import { ArrowBuild, SightInMark, SightIn, type User } from '@/server/models';
 import { recordAudit } from '@/server/services/audit-service';
 import { bowFor } from '@/server/services/bow-access';
 import { bowOut } from '@/server/services/bow-service';
-import { buildOut, sessionCounts } from '@/server/services/build-service';
+import { buildOut, sightInCounts } from '@/server/services/build-service';
 import { sendMail } from '@/server/services/mail-service';
 import { listArrowSets } from '@/server/services/arrow-set-service';
 import { confirmationsOf, listRuns, listSetup, personJson } from '@/server/services/tuning-service';
-import { findOwnSession, sessionOut } from '@/server/services/session-service';
+import { findOwnSightIn, sightInOut } from '@/server/services/sight-in-service';
 import { sheetDownload } from '@/server/services/tape-service';
 import type { SendTape } from '@/shared/export';
 import { tapeQuerySchema, type TapeQuery } from '@/shared/tape';
@@ -43,20 +43,20 @@ function slug(text: string): string {
 
 async function recordsOf(user: User, bowId: number) {
   const { bow } = await bowFor(user, bowId, 'read');
-  const [builds, sessions] = await Promise.all([
+  const [builds, sightIns] = await Promise.all([
     ArrowBuild.findAll({ where: { bowId }, order: [['id', 'ASC']] }),
-    SightSession.findAll({ where: { bowId }, order: [['date', 'ASC'], ['id', 'ASC']] }),
+    SightIn.findAll({ where: { bowId }, order: [['date', 'ASC'], ['id', 'ASC']] }),
   ]);
-  const marks = sessions.length
-    ? await SessionMark.findAll({ where: { sessionId: { [Op.in]: sessions.map((s) => s.id) } }, order: [['sessionId', 'ASC'], ['position', 'ASC']] })
+  const marks = sightIns.length
+    ? await SightInMark.findAll({ where: { sightInId: { [Op.in]: sightIns.map((s) => s.id) } }, order: [['sightInId', 'ASC'], ['position', 'ASC']] })
     : [];
-  const counts = await sessionCounts(builds.map((b) => b.id));
-  return { bow, builds, sessions, marks, counts };
+  const counts = await sightInCounts(builds.map((b) => b.id));
+  return { bow, builds, sightIns, marks, counts };
 }
 
 /** GET /api/bows/:id/export.json */
 export async function exportBowJson(user: User, bowId: number, now = new Date()): Promise<ExportFile> {
-  const { bow, builds, sessions, marks, counts } = await recordsOf(user, bowId);
+  const { bow, builds, sightIns, marks, counts } = await recordsOf(user, bowId);
   const document = {
     format: 'pinwright-bow-export',
     version: 1,
@@ -64,7 +64,7 @@ export async function exportBowJson(user: User, bowId: number, now = new Date())
     note: 'Lengths in millimetres, masses in grains, speeds in feet per second; distances in the unit given with each mark.',
     bow: bowOut(bow),
     builds: builds.map((build) => buildOut(build, counts.get(build.id) ?? 0)),
-    sessions: sessions.map((session) => sessionOut(session, marks.filter((mark) => mark.sessionId === session.id))),
+    sightIns: sightIns.map((sightIn) => sightInOut(sightIn, marks.filter((mark) => mark.sightInId === sightIn.id))),
     ...(await tuningRecords(user, bowId, builds)),
   };
   return { body: `${JSON.stringify(document, null, 2)}\n`, contentType: 'application/json; charset=utf-8', fileName: `${slug(bow.nickname)}-export.json` };
@@ -76,13 +76,13 @@ async function tuningRecords(user: User, bowId: number, builds: ArrowBuild[]) {
     listSetup(user, bowId),
     listRuns(user, bowId),
     Promise.all(builds.map((build) => listArrowSets(user, build.id))),
-    SightSession.findAll({ where: { bowId }, attributes: ['id'] }).then((rows) => confirmationsOf(rows.map((row) => row.id))),
+    SightIn.findAll({ where: { bowId }, attributes: ['id'] }).then((rows) => confirmationsOf(rows.map((row) => row.id))),
   ]);
   return {
     setupEntries: setup.entries,
     paperTuneRuns: paperTunes,
     arrowSets: arrowSetsByBuild.flat(),
-    rangeConfirmations: confirmations.map((c) => ({ sessionId: c.sessionId, confirmedAt: c.confirmedAt.toISOString(), note: c.note, confirmedBy: personJson(c.confirmedBy) })),
+    rangeConfirmations: confirmations.map((c) => ({ sightInId: c.sightInId, confirmedAt: c.confirmedAt.toISOString(), note: c.note, confirmedBy: personJson(c.confirmedBy) })),
   };
 }
 
@@ -115,34 +115,34 @@ export async function exportTuningCsv(user: User, bowId: number): Promise<Export
     }
   }
   for (const c of records.rangeConfirmations) {
-    rows.push([bow.nickname, 'range-confirmation', c.sessionId, c.confirmedAt.slice(0, 10), 'marks confirmed at the range', null, null, null, c.note, c.confirmedBy.name]);
+    rows.push([bow.nickname, 'range-confirmation', c.sightInId, c.confirmedAt.slice(0, 10), 'marks confirmed at the range', null, null, null, c.note, c.confirmedBy.name]);
   }
   return { body: toCsv(rows), contentType: 'text/csv; charset=utf-8', fileName: `${slug(bow.nickname)}-tuning.csv` };
 }
 
 const csvHeader = [
   'bow', 'build_id', 'build', 'shaft', 'spine', 'grains_per_inch', 'cut_length_mm', 'point_gr', 'total_gr', 'foc_pct', 'build_speed_fps',
-  'session_id', 'session_date', 'place', 'altitude_m', 'temperature_c', 'session_notes', 'fit_speed_fps', 'fit_rms_mm',
+  'sight_in_id', 'sight_in_date', 'place', 'altitude_m', 'temperature_c', 'sight_in_notes', 'fit_speed_fps', 'fit_rms_mm',
   'mark_position', 'distance', 'unit', 'reading_mm', 'arrows', 'mark_note',
 ];
 
 /** GET /api/bows/:id/export.csv — text cells neutralised against formula injection (server/csv/write.ts). */
 export async function exportBowCsv(user: User, bowId: number): Promise<ExportFile> {
-  const { bow, builds, sessions, marks } = await recordsOf(user, bowId);
+  const { bow, builds, sightIns, marks } = await recordsOf(user, bowId);
   const rows: CsvCell[][] = [csvHeader];
   const buildCells = (build: ArrowBuild | undefined): CsvCell[] =>
     build
       ? [build.id, build.name, build.shaftLabel, build.spine, build.grainsPerInch, build.cutLengthMm, build.pointGr, build.totalGr, build.focPct, build.speedFps]
       : Array(10).fill(null);
   for (const build of builds) {
-    const ofBuild = sessions.filter((session) => session.buildId === build.id);
+    const ofBuild = sightIns.filter((sightIn) => sightIn.buildId === build.id);
     if (ofBuild.length === 0) rows.push([bow.nickname, ...buildCells(build), ...Array(14).fill(null)]);
-    for (const session of ofBuild) {
-      const sessionCells: CsvCell[] = [session.id, session.date, session.placeLabel, session.altitudeM, session.temperatureC, session.notes, session.fitSpeedFps, session.fitRmsMm];
-      const ofSession = marks.filter((mark) => mark.sessionId === session.id);
-      if (ofSession.length === 0) rows.push([bow.nickname, ...buildCells(build), ...sessionCells, ...Array(6).fill(null)]);
-      for (const mark of ofSession) {
-        rows.push([bow.nickname, ...buildCells(build), ...sessionCells, mark.position + 1, mark.distance, mark.unit, mark.scaleMm, mark.arrowsShot, mark.note]);
+    for (const sightIn of ofBuild) {
+      const sightInCells: CsvCell[] = [sightIn.id, sightIn.date, sightIn.placeLabel, sightIn.altitudeM, sightIn.temperatureC, sightIn.notes, sightIn.fitSpeedFps, sightIn.fitRmsMm];
+      const ofSightIn = marks.filter((mark) => mark.sightInId === sightIn.id);
+      if (ofSightIn.length === 0) rows.push([bow.nickname, ...buildCells(build), ...sightInCells, ...Array(6).fill(null)]);
+      for (const mark of ofSightIn) {
+        rows.push([bow.nickname, ...buildCells(build), ...sightInCells, mark.position + 1, mark.distance, mark.unit, mark.scaleMm, mark.arrowsShot, mark.note]);
       }
     }
   }
@@ -150,11 +150,11 @@ export async function exportBowCsv(user: User, bowId: number): Promise<ExportFil
 }
 
 /**
- * POST /api/sessions/:id/send-tape: the session's print sheet (the same PDF
- * as GET /api/sessions/:id/sheet.pdf) e-mailed as an attachment.
+ * POST /api/sight-ins/:id/send-tape: the sight-in's print sheet (the same PDF
+ * as GET /api/sight-ins/:id/sheet.pdf) e-mailed as an attachment.
  */
-export async function sendTape(user: User, sessionId: number, { to, paper, tape, layout }: SendTape): Promise<{ fileName: string }> {
-  const session = await findOwnSession(user, sessionId, undefined, 'read');
+export async function sendTape(user: User, sightInId: number, { to, paper, tape, layout }: SendTape): Promise<{ fileName: string }> {
+  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
   let query: TapeQuery = { tape } as TapeQuery;
   if (layout !== undefined) {
     const parsed = tapeQuerySchema.safeParse(Object.fromEntries(new URLSearchParams(layout)));
@@ -162,11 +162,11 @@ export async function sendTape(user: User, sessionId: number, { to, paper, tape,
     query = parsed.data;
   }
   if (paper) query = { ...query, paper };
-  const pdf = await sheetDownload(user, sessionId, query, 'pdf');
+  const pdf = await sheetDownload(user, sightInId, query, 'pdf');
   try {
     await sendMail({
       to,
-      ...tapeMessage({ senderName: user.name, bowNickname: session.bow.nickname, sessionDate: session.date, filename: pdf.fileName }),
+      ...tapeMessage({ senderName: user.name, bowNickname: sightIn.bow.nickname, sightInDate: sightIn.date, filename: pdf.fileName }),
       attachments: [{ filename: pdf.fileName, content: pdf.body as Buffer, contentType: 'application/pdf' }],
     });
   } catch (err) {
@@ -176,10 +176,10 @@ export async function sendTape(user: User, sessionId: number, { to, paper, tape,
   await recordAudit({
     actorId: user.id,
     action: 'sent',
-    bowId: session.bowId,
+    bowId: sightIn.bowId,
     recordType: 'tape-sheet',
-    recordId: session.id,
-    summary: `Sent the print sheet of the ${session.date} session to ${to}`,
+    recordId: sightIn.id,
+    summary: `Sent the print sheet of the ${sightIn.date} sight-in to ${to}`,
   });
   return { fileName: pdf.fileName };
 }

@@ -1,6 +1,6 @@
 /**
- * A session's field card (GET /api/sessions/:id/field-card, .svg, .pdf): the
- * slope table and the altitude/temperature shift from the session's fitted
+ * A sight-in's field card (GET /api/sight-ins/:id/field-card, .svg, .pdf): the
+ * slope table and the altitude/temperature shift from the sight-in's fitted
  * model (math/card), as JSON, as a 100 × 150 mm SVG of outline glyphs, and as
  * a one-page PDF of exactly that size. Estimates: confirm on real terrain.
  */
@@ -10,34 +10,34 @@ import { ArrowBuild, type User } from '@/server/models';
 import { FIELD_CARD_SIZE_MM, fieldCardData, fieldCardSvg } from '@/math';
 import { POINTS_PER_MM } from '@/server/print/sheet-pdf';
 import type { FieldCardQuery, FieldCardResponse } from '@/shared/field-card';
-import { findOwnSession } from './session-service';
+import { findOwnSightIn } from './sight-in-service';
 import { modelOf, refusingMathInput } from './compare-service';
 import type { Download } from './tape-service';
 
 /**
- * The card's data and words for a session the user may read (another
+ * The card's data and words for a sight-in the user may read (another
  * account's: 404). Without altitude or temperature the card is for the
  * sight-in's own air.
  * Example: await fieldCard(marit, 31, { angles: [-30, 0, 30], altitudeM: 2700 }) → { card: { rows: [ … ] }, labels: { bow: 'Timberline slider', … } }
  */
-export async function fieldCard(user: User, sessionId: number, query: FieldCardQuery): Promise<FieldCardResponse> {
-  const session = await findOwnSession(user, sessionId, undefined, 'read');
-  const build = await ArrowBuild.findByPk(session.buildId, { attributes: ['name'] });
+export async function fieldCard(user: User, sightInId: number, query: FieldCardQuery): Promise<FieldCardResponse> {
+  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
+  const build = await ArrowBuild.findByPk(sightIn.buildId, { attributes: ['name'] });
   const asked = query.altitudeM !== undefined || query.temperatureC !== undefined;
   const card = refusingMathInput(() =>
-    fieldCardData(modelOf(session), {
+    fieldCardData(modelOf(sightIn), {
       anglesDeg: query.angles,
       distances: query.distances,
       air: asked ? { altitudeM: query.altitudeM, temperatureC: query.temperatureC } : undefined,
-      sightIn: { altitudeM: session.altitudeM, temperatureC: session.temperatureC },
-      scaleSign: session.bow.scaleDirection === 'up' ? -1 : 1,
+      sightIn: { altitudeM: sightIn.altitudeM, temperatureC: sightIn.temperatureC },
+      scaleSign: sightIn.bow.scaleDirection === 'up' ? -1 : 1,
     }),
   );
   return {
-    sessionId: session.id,
-    bowId: session.bowId,
+    sightInId: sightIn.id,
+    bowId: sightIn.bowId,
     card,
-    labels: { bow: session.bow.nickname, build: build?.name ?? '', date: session.date, place: session.placeLabel },
+    labels: { bow: sightIn.bow.nickname, build: build?.name ?? '', date: sightIn.date, place: sightIn.placeLabel },
   };
 }
 
@@ -54,8 +54,8 @@ function fileStem(response: FieldCardResponse): string {
 }
 
 /** The card as SVG or PDF, for download or print. */
-export async function fieldCardDownload(user: User, sessionId: number, query: FieldCardQuery, format: 'svg' | 'pdf'): Promise<Download> {
-  const response = await fieldCard(user, sessionId, query);
+export async function fieldCardDownload(user: User, sightInId: number, query: FieldCardQuery, format: 'svg' | 'pdf'): Promise<Download> {
+  const response = await fieldCard(user, sightInId, query);
   const svg = fieldCardSvg(response.card, response.labels);
   if (format === 'svg') return { body: svg, contentType: 'image/svg+xml; charset=utf-8', fileName: `${fileStem(response)}.svg` };
   return { body: await cardPdf(svg), contentType: 'application/pdf', fileName: `${fileStem(response)}.pdf` };

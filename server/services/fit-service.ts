@@ -30,7 +30,7 @@ import { ApiError } from '@/server/errors';
 import type { ArrowBuild, Bow } from '@/server/models';
 import type { FitInput, SheetInput, SheetLabels, TapeInput, TapeOptionsInput } from '@/shared/fit';
 import type { BuildDerived, BuildInput } from '@/shared/build';
-import { ONE_MARK_SESSION_MESSAGE, type MarkInput, type StoredFit } from '@/shared/session';
+import { ONE_MARK_SIGHT_IN_MESSAGE, type MarkInput, type StoredFit } from '@/shared/sight-in';
 import type { TapeLayout } from '@/shared/tape';
 
 /** Yards → metres, exact (international yard and pound, 1959). */
@@ -80,9 +80,9 @@ export function predictDistances(longest: number, pins: number[] = []): number[]
 export type FitBow = Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirection'> & Partial<Pick<Bow, 'pinDistances' | 'pinDistanceUnit'>>;
 
 /**
- * The math core's fit input for a session: sight radius and peep height from
+ * The math core's fit input for a sight-in: sight radius and peep height from
  * the bow; mass, diameter, drag coefficient and chronographed speed from the
- * build; air from the session; marks in the first mark's unit (others
+ * build; air from the sight-in; marks in the first mark's unit (others
  * converted exactly), readings signed for math's downward-growing convention;
  * predictions on a grid of 5s and at the bow's fixed pins.
  * Example: fitInputFor(bow, build, { altitudeM: 1450, temperatureC: 4, marks }).sight → { radiusMm: 838, peepHeightMm: 112 }
@@ -90,14 +90,14 @@ export type FitBow = Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirectio
 export function fitInputFor(
   bow: FitBow,
   build: Pick<ArrowBuild, 'totalGr' | 'diameterMm' | 'dragCoefficient' | 'speedFps'>,
-  session: { altitudeM: number | null; temperatureC: number | null; marks: MarkInput[] },
+  sightIn: { altitudeM: number | null; temperatureC: number | null; marks: MarkInput[] },
 ): FitInput {
-  const unit: Unit = session.marks[0]?.unit ?? 'yd';
+  const unit: Unit = sightIn.marks[0]?.unit ?? 'yd';
   const sign = bow.scaleDirection === 'up' ? -1 : 1;
-  const marks = session.marks.map((mark) => ({ distance: convertDistance(mark.distance, mark.unit, unit), markMm: sign * mark.scaleMm }));
+  const marks = sightIn.marks.map((mark) => ({ distance: convertDistance(mark.distance, mark.unit, unit), markMm: sign * mark.scaleMm }));
   const air: NonNullable<FitInput['air']> = {};
-  if (session.altitudeM !== null) air.altitudeM = session.altitudeM;
-  if (session.temperatureC !== null) air.temperatureC = session.temperatureC;
+  if (sightIn.altitudeM !== null) air.altitudeM = sightIn.altitudeM;
+  if (sightIn.temperatureC !== null) air.temperatureC = sightIn.temperatureC;
   const arrow: FitInput['arrow'] = { massGr: build.totalGr, diameterMm: build.diameterMm };
   if (build.dragCoefficient !== null) arrow.dragCoefficient = build.dragCoefficient;
   if (build.speedFps !== null) arrow.speedFps = build.speedFps;
@@ -114,7 +114,7 @@ export function fitInputFor(
   };
 }
 
-/** The fit as stored with a session: readings as the archer reads the scale. */
+/** The fit as stored with a sight-in: readings as the archer reads the scale. */
 export function storedFitOf(fit: FitResult, scaleDirection: 'down' | 'up'): StoredFit {
   const sign = scaleDirection === 'up' ? -1 : 1;
   // JSON has no NaN: an unreachable predicted mark is stored as null.
@@ -140,8 +140,8 @@ export function storedFitOf(fit: FitResult, scaleDirection: 'down' | 'up'): Stor
   return stored;
 }
 
-/** Our session fields for math's fit-input fields, for error messages. */
-const SESSION_FIELDS: Record<string, string> = {
+/** Our sight-in fields for math's fit-input fields, for error messages. */
+const SIGHT_IN_FIELDS: Record<string, string> = {
   markMm: 'scaleMm',
   'sight.radiusMm': 'sightRadiusMm',
   'sight.peepHeightMm': 'peepHeightMm',
@@ -154,20 +154,20 @@ const SESSION_FIELDS: Record<string, string> = {
 };
 
 /**
- * Fits a session's marks with its bow and build; a fit the marks cannot give
+ * Fits a sight-in's marks with its bow and build; a fit the marks cannot give
  * (e.g. an impossible gap) is a 400 with the fit's own field message. One mark
  * fits only when the build has a chronographed speed (method 'one-mark': every
  * other distance an estimate); without one it is a 400 on `marks`.
- * Example: fitSession(bow, build, { altitudeM: null, temperatureC: null, marks }).speedFps → ≈ 283
+ * Example: fitSightIn(bow, build, { altitudeM: null, temperatureC: null, marks }).speedFps → ≈ 283
  */
-export function fitSession(
+export function fitSightIn(
   bow: FitBow,
   build: Pick<ArrowBuild, 'totalGr' | 'diameterMm' | 'dragCoefficient' | 'speedFps'>,
-  session: { altitudeM: number | null; temperatureC: number | null; marks: MarkInput[] },
+  sightIn: { altitudeM: number | null; temperatureC: number | null; marks: MarkInput[] },
 ): StoredFit {
-  if (session.marks.length === 1 && build.speedFps === null) throw ApiError.badRequest(ONE_MARK_SESSION_MESSAGE, { marks: ONE_MARK_SESSION_MESSAGE });
-  const input = fitInputFor(bow, build, session);
-  const fit = refusingInputErrors(() => fitSight(input), SESSION_FIELDS);
+  if (sightIn.marks.length === 1 && build.speedFps === null) throw ApiError.badRequest(ONE_MARK_SIGHT_IN_MESSAGE, { marks: ONE_MARK_SIGHT_IN_MESSAGE });
+  const input = fitInputFor(bow, build, sightIn);
+  const fit = refusingInputErrors(() => fitSight(input), SIGHT_IN_FIELDS);
   return storedFitOf(fit, bow.scaleDirection);
 }
 
@@ -335,7 +335,7 @@ export function simulatedReadings(sight: KnownSight, distances: number[]): numbe
  * The marks (mm) a stored fit predicts at each distance (in the fit's unit),
  * in math's downward-growing convention, from its model: what a tape's ticks
  * are spaced by. NaN where out of reach.
- * Example: fittedReadings(session.fit, [20, 30]) → [≈ 18.46, ≈ 22.03]
+ * Example: fittedReadings(sightIn.fit, [20, 30]) → [≈ 18.46, ≈ 22.03]
  */
 export function fittedReadings(fit: Pick<StoredFit, 'model'>, distances: number[]): number[] {
   return predictMarksMm(fit.model as unknown as SightModel, distances);

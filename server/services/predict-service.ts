@@ -6,7 +6,7 @@
  * by math's predictBuild. A prediction that lacks what it needs is refused
  * with what is missing. Everything it draws says PREDICTED — not sighted.
  */
-import { ArrowBuild, SightSession, type Bow, type User } from '@/server/models';
+import { ArrowBuild, SightIn, type Bow, type User } from '@/server/models';
 import { ApiError, validationError } from '@/server/errors';
 import { ENERGY_CAUTION, predictBuild, predictedSheetSvg, predictedTapeSvg, type SightModel } from '@/math';
 import { sheetPdf } from '@/server/print/sheet-pdf';
@@ -51,14 +51,14 @@ async function targetOf(bow: Bow, request: { buildId?: number; build?: BuildInpu
   };
 }
 
-/** The sight-in that carries the new arrow: `sessionId` (on this bow), else the bow's most recent; null if it has none. */
-async function sightSessionOf(bow: Bow, sessionId?: number): Promise<SightSession | null> {
-  if (sessionId !== undefined) {
-    const session = await SightSession.findOne({ where: { id: sessionId, bowId: bow.id } });
-    if (!session) throw ApiError.badRequest('Choose one of this bow’s sight-in sessions', { sessionId: 'Choose one of this bow’s sight-in sessions' });
-    return session;
+/** The sight-in that carries the new arrow: `sightInId` (on this bow), else the bow's most recent; null if it has none. */
+async function sightInOf(bow: Bow, sightInId?: number): Promise<SightIn | null> {
+  if (sightInId !== undefined) {
+    const sightIn = await SightIn.findOne({ where: { id: sightInId, bowId: bow.id } });
+    if (!sightIn) throw ApiError.badRequest('Choose one of this bow’s sight-ins', { sightInId: 'Choose one of this bow’s sight-ins' });
+    return sightIn;
   }
-  return SightSession.findOne({
+  return SightIn.findOne({
     where: { bowId: bow.id },
     order: [
       ['date', 'DESC'],
@@ -83,8 +83,8 @@ async function runPrediction(user: User, bowId: number, request: PredictRequest)
   const chronographed = others
     .filter((build) => build.speedFps !== null && build.id !== target.buildId)
     .map((build) => ({ buildId: build.id, name: build.name, massGr: build.totalGr, speedFps: build.speedFps as number }));
-  const session = await sightSessionOf(bow, request.sessionId);
-  const sight = session ? modelOf(session) : null;
+  const sightIn = await sightInOf(bow, request.sightInId);
+  const sight = sightIn ? modelOf(sightIn) : null;
 
   const prediction = refusingMathInput(() =>
     predictBuild({
@@ -94,7 +94,7 @@ async function runPrediction(user: User, bowId: number, request: PredictRequest)
       scaleSign: bow.scaleDirection === 'up' ? -1 : 1,
     }),
   );
-  const sessionBuild = session ? others.find((build) => build.id === session.buildId) : undefined;
+  const sightInBuild = sightIn ? others.find((build) => build.id === sightIn.buildId) : undefined;
   const { model, ...rest } = prediction;
   const { dragCoefficient: _drag, ...build } = target;
   const response: PredictResponse = {
@@ -102,17 +102,17 @@ async function runPrediction(user: User, bowId: number, request: PredictRequest)
     scaleDirection: bow.scaleDirection,
     build,
     chronographed,
-    session: session
+    sightIn: sightIn
       ? {
-          id: session.id,
-          date: session.date,
-          placeLabel: session.placeLabel,
-          buildName: sessionBuild?.name ?? '',
-          altitudeM: session.altitudeM,
-          temperatureC: session.temperatureC,
+          id: sightIn.id,
+          date: sightIn.date,
+          placeLabel: sightIn.placeLabel,
+          buildName: sightInBuild?.name ?? '',
+          altitudeM: sightIn.altitudeM,
+          temperatureC: sightIn.temperatureC,
         }
       : null,
-    marksMissing: session ? null : NO_SIGHT_IN_MESSAGE,
+    marksMissing: sightIn ? null : NO_SIGHT_IN_MESSAGE,
     prediction: rest,
     model: model as unknown as Record<string, unknown> | null,
     energyCaution: ENERGY_CAUTION,
@@ -122,11 +122,11 @@ async function runPrediction(user: User, bowId: number, request: PredictRequest)
 
 /** The query's build: a saved build's id, or its components checked as a new build would be. */
 function requestOfQuery(query: PredictTapeQuery): PredictRequest {
-  if (query.buildId !== undefined) return { buildId: query.buildId, sessionId: query.sessionId };
-  const { buildId: _id, sessionId, from: _from, to: _to, step: _step, width: _width, orientation: _orientation, mirror: _mirror, ...components } = query;
+  if (query.buildId !== undefined) return { buildId: query.buildId, sightInId: query.sightInId };
+  const { buildId: _id, sightInId, from: _from, to: _to, step: _step, width: _width, orientation: _orientation, mirror: _mirror, ...components } = query;
   const parsed = buildInputSchema.safeParse({ name: 'New build', ...components });
   if (!parsed.success) throw validationError(parsed.error, 'query');
-  return { build: parsed.data, sessionId };
+  return { build: parsed.data, sightInId };
 }
 
 /**
@@ -180,11 +180,11 @@ async function predictedDrawing(user: User, bowId: number, query: PredictTapeQue
     mirror: query.mirror ?? false,
   };
   let sightIn: string | undefined;
-  if (result.session) {
-    const siblings = await SightSession.findAll({ where: { bowId: bow.id }, attributes: ['id', 'date', 'placeLabel', 'buildId', 'createdAt'] });
+  if (result.sightIn) {
+    const siblings = await SightIn.findAll({ where: { bowId: bow.id }, attributes: ['id', 'date', 'placeLabel', 'buildId', 'createdAt'] });
     const nameable = siblings.map((s) => ({ id: s.id, date: s.date, placeLabel: s.placeLabel, buildId: s.buildId, createdAt: s.createdAt.toISOString() }));
-    const own = nameable.find((s) => s.id === result.session!.id);
-    if (own) sightIn = sightInName(own, { buildName: result.session.buildName, siblings: nameable, timeZone: 'UTC' });
+    const own = nameable.find((s) => s.id === result.sightIn!.id);
+    if (own) sightIn = sightInName(own, { buildName: result.sightIn.buildName, siblings: nameable, timeZone: 'UTC' });
   }
   const labels = { bow: bow.nickname, build: `${result.build.name}, ${result.build.totalGr.toFixed(0)} gr`, speed, sightIn };
   const slug =

@@ -7,7 +7,7 @@
  * before leaving. Sight-ins are named by shared/sight-in-name.ts.
  */
 import { Op } from 'sequelize';
-import { ArrowBuild, SessionMark, SightSession, Tape, type User } from '@/server/models';
+import { ArrowBuild, SightInMark, SightIn, Tape, type User } from '@/server/models';
 import { readableBow } from '@/server/services/bow-access';
 import { levelSummaryForBows } from '@/server/services/level-service';
 import { stalenessForBows } from '@/server/services/staleness-service';
@@ -63,29 +63,29 @@ function fitWarnings(fit: unknown, span: { from: number; to: number } | null): s
   return sentences;
 }
 
-type SessionRow = Pick<SightSession, 'id' | 'date' | 'placeLabel' | 'buildId' | 'fit' | 'createdAt'>;
+type SightInRow = Pick<SightIn, 'id' | 'date' | 'placeLabel' | 'buildId' | 'fit' | 'createdAt'>;
 
 /** One build's part: its latest sight-in's marks, its latest tape and its warnings. */
 async function buildPart(
   bowId: number,
   build: { id: number; name: string },
-  sessions: SessionRow[],
-  allSessions: SessionRow[],
+  sightIns: SightInRow[],
+  allSightIns: SightInRow[],
   tapes: Tape[],
 ): Promise<TripBuild> {
   // Model instances keep their values behind getters: copy the fields the name needs.
-  const nameable = (s: SessionRow) => ({ id: s.id, date: s.date, placeLabel: s.placeLabel, buildId: s.buildId, createdAt: s.createdAt.toISOString() });
-  const siblings = allSessions.map(nameable);
-  const nameOf = (session: SessionRow) => sightInName(nameable(session), { buildName: build.name, siblings, timeZone: 'UTC' });
-  const latest = sessions[0] ?? null;
-  const marks = latest ? await SessionMark.findAll({ where: { sessionId: latest.id }, order: [['position', 'ASC']] }) : [];
-  let longest: SessionMark | null = null;
+  const nameable = (s: SightInRow) => ({ id: s.id, date: s.date, placeLabel: s.placeLabel, buildId: s.buildId, createdAt: s.createdAt.toISOString() });
+  const siblings = allSightIns.map(nameable);
+  const nameOf = (sightIn: SightInRow) => sightInName(nameable(sightIn), { buildName: build.name, siblings, timeZone: 'UTC' });
+  const latest = sightIns[0] ?? null;
+  const marks = latest ? await SightInMark.findAll({ where: { sightInId: latest.id }, order: [['position', 'ASC']] }) : [];
+  let longest: SightInMark | null = null;
   for (const mark of marks) {
     if (!longest || inMetres(mark.distance, mark.unit) > inMetres(longest.distance, longest.unit)) longest = mark;
   }
   // The build's tape: from the newest of its sight-ins that has one, the last saved of that sight-in's tapes.
-  const tapeRow = sessions.map((session) => tapes.find((t) => t.sessionId === session.id)).find(Boolean) ?? null;
-  const tapeSession = tapeRow ? sessions.find((s) => s.id === tapeRow.sessionId)! : null;
+  const tapeRow = sightIns.map((sightIn) => tapes.find((t) => t.sightInId === sightIn.id)).find(Boolean) ?? null;
+  const tapeSightIn = tapeRow ? sightIns.find((s) => s.id === tapeRow.sightInId)! : null;
 
   const warnings: string[] = [];
   if (!latest) {
@@ -95,21 +95,21 @@ async function buildPart(
     // The one staleness rule (shared/staleness.ts): a change that moves the point of impact after
     // this build's latest sight-in (or after the sight-in of its tape) means confirming at the range.
     const staleness = (await stalenessForBows([bowId])).get(bowId);
-    const ofLatest = staleness?.bySession.get(latest.id);
+    const ofLatest = staleness?.bySightIn.get(latest.id);
     if (ofLatest?.state === 'confirm') warnings.push(`Latest sight-in (${dayWords(latest.date)}): ${ofLatest.reason}`);
-    if (tapeRow && tapeSession && tapeSession.id !== latest.id) {
-      const ofTape = staleness?.bySession.get(tapeSession.id);
-      if (ofTape?.state === 'confirm') warnings.push(`Saved tape (${dayWords(tapeSession.date)}): ${ofTape.reason}`);
+    if (tapeRow && tapeSightIn && tapeSightIn.id !== latest.id) {
+      const ofTape = staleness?.bySightIn.get(tapeSightIn.id);
+      if (ofTape?.state === 'confirm') warnings.push(`Saved tape (${dayWords(tapeSightIn.date)}): ${ofTape.reason}`);
     }
-    const span = tapeRow && tapeRow.sessionId === latest.id && tapeRow.unit === ((latest.fit as { distanceUnit?: string })?.distanceUnit ?? 'yd')
+    const span = tapeRow && tapeRow.sightInId === latest.id && tapeRow.unit === ((latest.fit as { distanceUnit?: string })?.distanceUnit ?? 'yd')
       ? { from: tapeRow.fromDistance, to: tapeRow.toDistance }
       : null;
     warnings.push(...fitWarnings(latest.fit, span));
     if (!tapeRow) warnings.push('No tape saved for this build yet.');
   }
   if (tapeRow && latest) {
-    if (tapeRow.sessionId !== latest.id) {
-      warnings.push(`The saved tape was printed from an older sight-in (${nameOf(tapeSession!)}); print one from the latest marks (${nameOf(latest)}).`);
+    if (tapeRow.sightInId !== latest.id) {
+      warnings.push(`The saved tape was printed from an older sight-in (${nameOf(tapeSightIn!)}); print one from the latest marks (${nameOf(latest)}).`);
     }
     if (longest && inMetres(tapeRow.toDistance, tapeRow.unit) > inMetres(longest.distance, longest.unit) + 1e-6) {
       warnings.push(
@@ -121,7 +121,7 @@ async function buildPart(
     build,
     marks: latest
       ? {
-          sessionId: latest.id,
+          sightInId: latest.id,
           name: nameOf(latest),
           date: latest.date,
           placeLabel: latest.placeLabel,
@@ -133,15 +133,15 @@ async function buildPart(
     tape: tapeRow
       ? {
           id: tapeRow.id,
-          sessionId: tapeRow.sessionId,
-          sessionName: nameOf(tapeSession!),
-          sessionDate: tapeSession!.date,
+          sightInId: tapeRow.sightInId,
+          sightInName: nameOf(tapeSightIn!),
+          sightInDate: tapeSightIn!.date,
           fromDistance: tapeRow.fromDistance,
           toDistance: tapeRow.toDistance,
           unit: tapeRow.unit,
           label: tapeRow.label,
           savedAt: tapeRow.createdAt.toISOString(),
-          fromLatestSession: latest !== null && tapeRow.sessionId === latest.id,
+          fromLatestSightIn: latest !== null && tapeRow.sightInId === latest.id,
         }
       : null,
     warnings,
@@ -150,41 +150,41 @@ async function buildPart(
 
 /**
  * GET /api/bows/:bowId/readiness
- * Example: (await tripReadiness(marit, 3)).builds[0].tape?.fromLatestSession → true
+ * Example: (await tripReadiness(marit, 3)).builds[0].tape?.fromLatestSightIn → true
  */
 export async function tripReadiness(user: User, bowId: number, now = new Date()): Promise<TripByBuild> {
   const bow = await readableBow(user, bowId);
   const level = (await levelSummaryForBows([bowId], now)).get(bowId)!;
 
-  // Sessions newest first by date, then id (the same order the bench uses).
-  const [sessions, builds] = await Promise.all([
-    SightSession.findAll({
+  // Sight-ins newest first by date, then id (the same order the bench uses).
+  const [sightIns, builds] = await Promise.all([
+    SightIn.findAll({
       where: { bowId },
       attributes: ['id', 'date', 'placeLabel', 'buildId', 'fit', 'createdAt'],
       order: [['date', 'DESC'], ['id', 'DESC']],
     }),
     ArrowBuild.findAll({ where: { bowId }, attributes: ['id', 'name'], order: [['id', 'ASC']] }),
   ]);
-  const tapes = sessions.length
-    ? await Tape.findAll({ where: { sessionId: { [Op.in]: sessions.map((s) => s.id) } }, order: [['createdAt', 'DESC'], ['id', 'DESC']] })
+  const tapes = sightIns.length
+    ? await Tape.findAll({ where: { sightInId: { [Op.in]: sightIns.map((s) => s.id) } }, order: [['createdAt', 'DESC'], ['id', 'DESC']] })
     : [];
   // Builds with sight-ins in the order of their latest sight-in, then the others.
   const order = (build: ArrowBuild) => {
-    const index = sessions.findIndex((session) => session.buildId === build.id);
-    return index < 0 ? sessions.length + build.id : index;
+    const index = sightIns.findIndex((sightIn) => sightIn.buildId === build.id);
+    return index < 0 ? sightIns.length + build.id : index;
   };
   const sorted = [...builds].sort((a, b) => order(a) - order(b));
   const parts = await Promise.all(
-    sorted.map((build) => buildPart(bowId, { id: build.id, name: build.name }, sessions.filter((s) => s.buildId === build.id), sessions, tapes)),
+    sorted.map((build) => buildPart(bowId, { id: build.id, name: build.name }, sightIns.filter((s) => s.buildId === build.id), sightIns, tapes)),
   );
 
   const bowWarnings: string[] = [];
   if (level.state !== 'verified') bowWarnings.push(`Level: ${level.reason}`);
   else if (!level.rangeConfirmed) bowWarnings.push('The level was verified on the bench only; confirm with a long shot and a steep shot at the range.');
-  if (sessions.length === 0) bowWarnings.push('No sight-in session yet: there are no confirmed marks for this bow.');
+  if (sightIns.length === 0) bowWarnings.push('No sight-in yet: there are no confirmed marks for this bow.');
 
   // The older single-build fields: the build of the latest sight-in.
-  const main = sessions.length ? parts[0] : null;
+  const main = sightIns.length ? parts[0] : null;
   const sighted = parts.filter((part) => part.marks !== null);
   const warnings = [
     ...bowWarnings,
@@ -196,7 +196,7 @@ export async function tripReadiness(user: User, bowId: number, now = new Date())
     level,
     marks: main?.marks
       ? {
-          sessionId: main.marks.sessionId,
+          sightInId: main.marks.sightInId,
           date: main.marks.date,
           placeLabel: main.marks.placeLabel,
           buildName: main.build.name,
@@ -208,14 +208,14 @@ export async function tripReadiness(user: User, bowId: number, now = new Date())
     tape: main?.tape
       ? {
       id: main.tape.id,
-      sessionId: main.tape.sessionId,
-      sessionDate: main.tape.sessionDate,
+      sightInId: main.tape.sightInId,
+      sightInDate: main.tape.sightInDate,
       fromDistance: main.tape.fromDistance,
       toDistance: main.tape.toDistance,
       unit: main.tape.unit,
       label: main.tape.label,
       savedAt: main.tape.savedAt,
-      fromLatestSession: main.tape.fromLatestSession,
+      fromLatestSightIn: main.tape.fromLatestSightIn,
         }
       : null,
     warnings,

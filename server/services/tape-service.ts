@@ -1,18 +1,18 @@
 /**
- * Saved tape layouts for a session's fit, and the tape / print-sheet downloads
+ * Saved tape layouts for a sight-in's fit, and the tape / print-sheet downloads
  * (rendered by the math core through fit-service). A layout is checked by
  * drawing it once before it is saved, so a saved tape always prints.
  */
 import type { Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
-import { ArrowBuild, Bow, SightSession, Tape, type User } from '@/server/models';
-import type { StoredFit } from '@/shared/session';
+import { ArrowBuild, Bow, SightIn, Tape, type User } from '@/server/models';
+import type { StoredFit } from '@/shared/sight-in';
 import { tapeLayoutSchema, type Tape as TapeOut, type TapeLayout, type TapeQuery, type TapeUpdate } from '@/shared/tape';
-import { findOwnSession } from './session-service';
+import { findOwnSightIn } from './sight-in-service';
 import { bowFor, type BowCapability } from './bow-access';
 import { sheetPdfFor, sheetSvgFor, tapeSvgFor, type SheetLabelsIn } from './fit-service';
-import { stalenessOfSession } from './staleness-service';
+import { stalenessOfSightIn } from './staleness-service';
 import { sheetNote } from '@/shared/staleness';
 
 /** Distance unit conversion for defaults: yards ↔ metres, exact (international yard and pound, 1959). */
@@ -21,7 +21,7 @@ const YARD_M = 0.9144;
 export function tapeOut(tape: Tape, bowId: number): TapeOut {
   return {
     id: tape.id,
-    sessionId: tape.sessionId,
+    sightInId: tape.sightInId,
     bowId,
     fromDistance: tape.fromDistance,
     toDistance: tape.toDistance,
@@ -37,7 +37,7 @@ export function tapeOut(tape: Tape, bowId: number): TapeOut {
   };
 }
 
-/** The tape with this id (and its session and bow) if `user` may use `capability` on the bow (default: owns it); otherwise 404 (403 for a technician asking to change it). */
+/** The tape with this id (and its sight-in and bow) if `user` may use `capability` on the bow (default: owns it); otherwise 404 (403 for a technician asking to change it). */
 async function findOwnTape(user: User, id: number, transaction?: Transaction, capability: BowCapability = 'delete') {
   const tape = await Tape.findOne({
     where: { id },
@@ -45,16 +45,16 @@ async function findOwnTape(user: User, id: number, transaction?: Transaction, ca
     lock: transaction ? transaction.LOCK.UPDATE : undefined,
     include: [
       {
-        model: SightSession,
-        as: 'session',
+        model: SightIn,
+        as: 'sightIn',
         required: true,
         include: [{ model: Bow, as: 'bow' }],
       },
     ],
   });
   if (!tape) throw ApiError.notFound('That tape');
-  await bowFor(user, (tape as Tape & { session: SightSession }).session.bowId, capability, 'That tape');
-  return tape as Tape & { session: SightSession & { bow: Bow } };
+  await bowFor(user, (tape as Tape & { sightIn: SightIn }).sightIn.bowId, capability, 'That tape');
+  return tape as Tape & { sightIn: SightIn & { bow: Bow } };
 }
 
 function layoutOf(tape: Tape): TapeLayout {
@@ -62,22 +62,22 @@ function layoutOf(tape: Tape): TapeLayout {
   return { fromDistance, toDistance, step, unit, orientation, widthMm, mirror, paper, label };
 }
 
-export async function listTapes(user: User, sessionId: number): Promise<TapeOut[]> {
-  const session = await findOwnSession(user, sessionId, undefined, 'read');
-  const tapes = await Tape.findAll({ where: { sessionId: session.id }, order: [['id', 'ASC']] });
-  return tapes.map((tape) => tapeOut(tape, session.bowId));
+export async function listTapes(user: User, sightInId: number): Promise<TapeOut[]> {
+  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
+  const tapes = await Tape.findAll({ where: { sightInId: sightIn.id }, order: [['id', 'ASC']] });
+  return tapes.map((tape) => tapeOut(tape, sightIn.bowId));
 }
 
 export async function getTape(user: User, id: number): Promise<TapeOut> {
   const tape = await findOwnTape(user, id, undefined, 'read');
-  return tapeOut(tape, tape.session.bowId);
+  return tapeOut(tape, tape.sightIn.bowId);
 }
 
-export async function createTape(user: User, sessionId: number, layout: TapeLayout): Promise<TapeOut> {
-  const session = await findOwnSession(user, sessionId, undefined, 'write');
-  tapeSvgFor(session.fit as StoredFit, layout);
-  const tape = await Tape.create({ ...layout, sessionId: session.id });
-  return tapeOut(tape, session.bowId);
+export async function createTape(user: User, sightInId: number, layout: TapeLayout): Promise<TapeOut> {
+  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'write');
+  tapeSvgFor(sightIn.fit as StoredFit, layout);
+  const tape = await Tape.create({ ...layout, sightInId: sightIn.id });
+  return tapeOut(tape, sightIn.bowId);
 }
 
 export async function updateTape(user: User, id: number, update: TapeUpdate): Promise<TapeOut> {
@@ -85,10 +85,10 @@ export async function updateTape(user: User, id: number, update: TapeUpdate): Pr
     const tape = await findOwnTape(user, id, transaction);
     const merged = tapeLayoutSchema.safeParse({ ...layoutOf(tape), ...update });
     if (!merged.success) throw validationError(merged.error);
-    tapeSvgFor(tape.session.fit as StoredFit, merged.data);
+    tapeSvgFor(tape.sightIn.fit as StoredFit, merged.data);
     tape.set(merged.data);
     await tape.save({ transaction });
-    return tapeOut(tape, tape.session.bowId);
+    return tapeOut(tape, tape.sightIn.bowId);
   });
 }
 
@@ -99,18 +99,18 @@ export async function deleteTape(user: User, id: number): Promise<void> {
 
 /**
  * A layout for a download: a saved tape (`?tape=<id>`, which must belong to
- * this session) or the query's options over defaults from the session: the
+ * this sight-in) or the query's options over defaults from the sight-in: the
  * fit's unit, from the shortest sighted distance (at least 10) rounded down to
  * 10 to the longest predicted distance, 1-unit steps, the bow's tape width.
  */
-async function downloadLayout(session: SightSession & { bow: Bow }, query: TapeQuery): Promise<TapeLayout> {
+async function downloadLayout(sightIn: SightIn & { bow: Bow }, query: TapeQuery): Promise<TapeLayout> {
   if (query.tape !== undefined) {
-    const tape = await Tape.findOne({ where: { id: query.tape, sessionId: session.id } });
+    const tape = await Tape.findOne({ where: { id: query.tape, sightInId: sightIn.id } });
     if (!tape) throw ApiError.notFound('That tape');
     const saved = layoutOf(tape);
     return { ...saved, paper: query.paper ?? saved.paper };
   }
-  const fit = session.fit as StoredFit;
+  const fit = sightIn.fit as StoredFit;
   const unit = query.unit ?? fit.distanceUnit;
   const inUnit = (distance: number) => (unit === fit.distanceUnit ? distance : fit.distanceUnit === 'yd' ? distance * YARD_M : distance / YARD_M);
   const sighted = fit.residuals.map((residual) => inUnit(residual.distance));
@@ -123,7 +123,7 @@ async function downloadLayout(session: SightSession & { bow: Bow }, query: TapeQ
     step: query.step ?? 1,
     unit,
     orientation: query.orientation ?? 'down',
-    widthMm: query.width ?? session.bow.tapeWidthMm,
+    widthMm: query.width ?? sightIn.bow.tapeWidthMm,
     mirror: query.mirror ?? false,
     paper: query.paper ?? 'letter',
     label: query.label ?? '',
@@ -133,7 +133,7 @@ async function downloadLayout(session: SightSession & { bow: Bow }, query: TapeQ
 }
 
 /** File name stem for downloads: "ridge-slider-2026-10-04". */
-function fileStem(bow: Bow, session: SightSession): string {
+function fileStem(bow: Bow, sightIn: SightIn): string {
   const slug = bow.nickname
     .normalize('NFKD')
     .replace(/[^\w\s-]/g, '')
@@ -141,45 +141,45 @@ function fileStem(bow: Bow, session: SightSession): string {
     .toLowerCase()
     .replace(/[\s_-]+/g, '-')
     .slice(0, 40);
-  return `${slug || 'bow'}-${session.date}`;
+  return `${slug || 'bow'}-${sightIn.date}`;
 }
 
 /**
- * The small print on a sheet: bow nickname (with the tape's label), build name, session date; the sheet adds the marks.
+ * The small print on a sheet: bow nickname (with the tape's label), build name, sight-in date; the sheet adds the marks.
  * When a change after the sight-in means the marks must be confirmed at the range (shared/staleness.ts), the header says so.
  */
-async function sheetLabels(session: SightSession & { bow: Bow }, layout: TapeLayout): Promise<SheetLabelsIn> {
+async function sheetLabels(sightIn: SightIn & { bow: Bow }, layout: TapeLayout): Promise<SheetLabelsIn> {
   const [build, staleness] = await Promise.all([
-    ArrowBuild.findByPk(session.buildId, { attributes: ['name'] }),
-    stalenessOfSession(session.bowId, session.id),
+    ArrowBuild.findByPk(sightIn.buildId, { attributes: ['name'] }),
+    stalenessOfSightIn(sightIn.bowId, sightIn.id),
   ]);
   return {
-    bow: layout.label ? `${session.bow.nickname} · ${layout.label}` : session.bow.nickname,
+    bow: layout.label ? `${sightIn.bow.nickname} · ${layout.label}` : sightIn.bow.nickname,
     build: build?.name ?? '',
-    date: session.date,
+    date: sightIn.date,
     note: sheetNote(staleness) ?? undefined,
   };
 }
 
 export type Download = { body: string | Buffer; contentType: string; fileName: string };
 
-export async function tapeDownload(user: User, sessionId: number, query: TapeQuery): Promise<Download> {
-  const session = await findOwnSession(user, sessionId, undefined, 'read');
-  const layout = await downloadLayout(session, query);
+export async function tapeDownload(user: User, sightInId: number, query: TapeQuery): Promise<Download> {
+  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
+  const layout = await downloadLayout(sightIn, query);
   return {
-    body: tapeSvgFor(session.fit as StoredFit, layout),
+    body: tapeSvgFor(sightIn.fit as StoredFit, layout),
     contentType: 'image/svg+xml; charset=utf-8',
-    fileName: `${fileStem(session.bow, session)}-tape.svg`,
+    fileName: `${fileStem(sightIn.bow, sightIn)}-tape.svg`,
   };
 }
 
-export async function sheetDownload(user: User, sessionId: number, query: TapeQuery, format: 'svg' | 'pdf'): Promise<Download> {
-  const session = await findOwnSession(user, sessionId, undefined, 'read');
-  const layout = await downloadLayout(session, query);
-  const labels = await sheetLabels(session, layout);
-  const fit = session.fit as StoredFit;
+export async function sheetDownload(user: User, sightInId: number, query: TapeQuery, format: 'svg' | 'pdf'): Promise<Download> {
+  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
+  const layout = await downloadLayout(sightIn, query);
+  const labels = await sheetLabels(sightIn, layout);
+  const fit = sightIn.fit as StoredFit;
   if (format === 'svg') {
-    return { body: sheetSvgFor(fit, layout, labels), contentType: 'image/svg+xml; charset=utf-8', fileName: `${fileStem(session.bow, session)}-sheet.svg` };
+    return { body: sheetSvgFor(fit, layout, labels), contentType: 'image/svg+xml; charset=utf-8', fileName: `${fileStem(sightIn.bow, sightIn)}-sheet.svg` };
   }
-  return { body: await sheetPdfFor(fit, layout, labels), contentType: 'application/pdf', fileName: `${fileStem(session.bow, session)}-sheet.pdf` };
+  return { body: await sheetPdfFor(fit, layout, labels), contentType: 'application/pdf', fileName: `${fileStem(sightIn.bow, sightIn)}-sheet.pdf` };
 }

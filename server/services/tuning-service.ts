@@ -14,7 +14,7 @@
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, found } from '@/server/errors';
-import { ArrowBuild, BowChange, PaperTuneRun, PaperTuneShot, RangeConfirmation, SetupEntry, SightSession, User } from '@/server/models';
+import { ArrowBuild, BowChange, PaperTuneRun, PaperTuneShot, RangeConfirmation, SetupEntry, SightIn, User } from '@/server/models';
 import { bowFor } from '@/server/services/bow-access';
 import type { BowChangeKind } from '@/shared/level-status';
 import {
@@ -258,20 +258,20 @@ export async function endRun(user: User, runId: number, input: PaperTuneEnd, now
 
 // ---- Confirming a sight-in's marks at the range ----
 
-/** POST /api/sessions/:id/confirm-range: the marks were shot again at the range and held. */
-export async function confirmAtRange(user: User, sessionId: number, note: string, now = new Date()) {
-  const session = await SightSession.findByPk(sessionId, { attributes: ['id', 'bowId'] });
-  if (!session) throw ApiError.notFound('That sight-in');
-  await bowFor(user, session.bowId, 'write', 'That sight-in');
-  const confirmation = await RangeConfirmation.create({ sessionId, userId: user.id, confirmedAt: now, note });
-  return { id: confirmation.id, sessionId, confirmedAt: now.toISOString(), note, confirmedBy: personJson(user) };
+/** POST /api/sight-ins/:id/confirm-range: the marks were shot again at the range and held. */
+export async function confirmAtRange(user: User, sightInId: number, note: string, now = new Date()) {
+  const sightIn = await SightIn.findByPk(sightInId, { attributes: ['id', 'bowId'] });
+  if (!sightIn) throw ApiError.notFound('That sight-in');
+  await bowFor(user, sightIn.bowId, 'write', 'That sight-in');
+  const confirmation = await RangeConfirmation.create({ sightInId, userId: user.id, confirmedAt: now, note });
+  return { id: confirmation.id, sightInId, confirmedAt: now.toISOString(), note, confirmedBy: personJson(user) };
 }
 
 /** The confirmations of some sight-ins, oldest first. */
-export async function confirmationsOf(sessionIds: number[]) {
-  if (sessionIds.length === 0) return [];
+export async function confirmationsOf(sightInIds: number[]) {
+  if (sightInIds.length === 0) return [];
   return RangeConfirmation.findAll({
-    where: { sessionId: { [Op.in]: sessionIds } },
+    where: { sightInId: { [Op.in]: sightInIds } },
     include: [{ model: User, as: 'confirmedBy', attributes: ['id', 'name'] }],
     order: [['confirmedAt', 'ASC'], ['id', 'ASC']],
   });

@@ -22,14 +22,14 @@ describe('the administrator’s audit log', () => {
     const fen = (await bowWithBuild(archer.agent, { nickname: 'Threlkeld fen' })).bow;
     const moor = (await bowWithBuild(archer.agent, { nickname: 'Threlkeld moor' })).bow;
     await recordAudit({ actorId: archer.user.id, action: 'invited', bowId: fen.id, recordType: 'share', recordId: null, summary: 'Invited a technician to Threlkeld fen' });
-    await recordAudit({ actorId: tech.user.id, action: 'created', bowId: fen.id, recordType: 'session-mark', recordId: null, summary: 'Added a mark: 40 yd at 22 mm' });
+    await recordAudit({ actorId: tech.user.id, action: 'created', bowId: fen.id, recordType: 'sight-in-mark', recordId: null, summary: 'Added a mark: 40 yd at 22 mm' });
     await recordAudit({ actorId: tech.user.id, action: 'created', bowId: moor.id, recordType: 'level-check', recordId: null, summary: 'Added a level check' });
     const role = await admin.agent.patch(`/api/admin/accounts/${tech.user.id}`).set(CSRF).send({ role: 'tech' });
     expect(role.status).toBe(200);
 
     const all = await admin.agent.get('/api/admin/audit');
     expect(all.status).toBe(200);
-    expect(all.body.kinds).toEqual(expect.arrayContaining(['account', 'level-check', 'session-mark', 'share']));
+    expect(all.body.kinds).toEqual(expect.arrayContaining(['account', 'level-check', 'sight-in-mark', 'share']));
     const mark = (all.body.entries as Entry[]).find((entry) => entry.summary === 'Added a mark: 40 yd at 22 mm')!;
     expect(mark.bow).toEqual({ id: fen.id, nickname: 'Threlkeld fen', ownerId: archer.user.id, ownerName: 'Wenna Threlkeld' });
     expect(mark.actor).toMatchObject({ id: tech.user.id, name: 'Osric Pell' });
@@ -65,7 +65,7 @@ describe('the administrator’s audit log', () => {
     const badKind = await admin.agent.get('/api/admin/audit?kind=DROP%20TABLE');
     expect(badKind.status).toBe(400);
     // validate() names query fields as query.<name>.
-    expect(badKind.body.error.fields['query.kind']).toBe('The kind is a record kind such as "share" or "session-mark"');
+    expect(badKind.body.error.fields['query.kind']).toBe('The kind is a record kind such as "share" or "sight-in-mark"');
     const badBow = await admin.agent.get('/api/admin/audit?bowId=abc');
     expect(badBow.status).toBe(400);
     expect(badBow.body.error.fields['query.bowId']).toBe('The bow id must be a number');
@@ -74,7 +74,7 @@ describe('the administrator’s audit log', () => {
   it('shows the archer’s own bow log with the bow named too', async () => {
     const archer = await signedInAgent(app, { name: 'Peregrine Aske' });
     const bow = (await bowWithBuild(archer.agent, { nickname: 'Aske hollow' })).bow;
-    await recordAudit({ actorId: null, action: 'created', bowId: bow.id, recordType: 'session-mark', recordId: null, summary: 'Added a mark' });
+    await recordAudit({ actorId: null, action: 'created', bowId: bow.id, recordType: 'sight-in-mark', recordId: null, summary: 'Added a mark' });
     const log = await archer.agent.get(`/api/bows/${bow.id}/audit`);
     expect(log.status).toBe(200);
     expect(log.body.entries[0]).toMatchObject({ actor: null, bow: { nickname: 'Aske hollow', ownerName: 'Peregrine Aske' } });

@@ -14,7 +14,7 @@ import { sequelize } from '@/server/db';
 import { AuditEntry, BowChange, LevelCheck, Photo, Share, User } from '@/server/models';
 import { recordAudit } from '@/server/services/audit-service';
 import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
-import { bowWithSession } from './bow-fixtures';
+import { bowWithSightIn } from './bow-fixtures';
 
 const app = testApp();
 jest.setTimeout(60_000);
@@ -80,13 +80,13 @@ describe('change of password', () => {
 describe('download everything', () => {
   it('is one JSON file with every bow of the account and its records, and nobody else’s', async () => {
     const owner = await signedInAgent(app, { name: 'Rhoswen Alder' });
-    const first = await bowWithSession(owner.agent, [20, 40, 60], {}, { nickname: 'Fen slider' });
-    const second = await bowWithSession(owner.agent, [20, 50], {}, { nickname: 'Moor pins' });
+    const first = await bowWithSightIn(owner.agent, [20, 40, 60], {}, { nickname: 'Fen slider' });
+    const second = await bowWithSightIn(owner.agent, [20, 50], {}, { nickname: 'Moor pins' });
     await checkWithPhoto(owner.agent, first.bow.id);
     const change = await owner.agent.post(`/api/bows/${second.bow.id}/changes`).set(CSRF).send({ kind: 'rest', changedAt: new Date().toISOString(), note: 'new rest' });
     expect(change.status).toBe(201);
     const stranger = await signedInAgent(app);
-    await bowWithSession(stranger.agent, [20, 40], {}, { nickname: 'Not hers' });
+    await bowWithSightIn(stranger.agent, [20, 40], {}, { nickname: 'Not hers' });
 
     const res = await owner.agent.get('/api/me/export.json').buffer(true);
     expect(res.status).toBe(200);
@@ -100,9 +100,9 @@ describe('download everything', () => {
     const own = JSON.parse((await owner.agent.get(`/api/bows/${first.bow.id}/export.json`).buffer(true)).text);
     expect(fen.bow).toEqual(own.bow);
     expect(fen.builds).toEqual(own.builds);
-    expect(fen.sessions).toEqual(own.sessions);
-    expect(fen.sessions[0].marks.map((mark: { distance: number }) => mark.distance)).toEqual([20, 40, 60]);
-    expect(moor.sessions[0].marks).toHaveLength(2);
+    expect(fen.sightIns).toEqual(own.sightIns);
+    expect(fen.sightIns[0].marks.map((mark: { distance: number }) => mark.distance)).toEqual([20, 40, 60]);
+    expect(moor.sightIns[0].marks).toHaveLength(2);
     // And the rest of each bow's records.
     expect(fen.levelChecks).toHaveLength(1);
     expect(fen.levelChecks[0].steps.length).toBeGreaterThan(0);
@@ -124,7 +124,7 @@ describe('download everything', () => {
 describe('deleting the account', () => {
   it('refuses without the right password and deletes nothing', async () => {
     const owner = await signedInAgent(app);
-    const made = await bowWithSession(owner.agent, [20, 40]);
+    const made = await bowWithSightIn(owner.agent, [20, 40]);
     const res = await owner.agent.post('/api/me/delete').set(CSRF).send({ password: 'not it' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.password).toBe('That password is not right');
@@ -137,16 +137,16 @@ describe('deleting the account', () => {
     // Leaving: an archer with a bow, a sight-in, a level check with a photo, who is
     // also a technician on a friend's shared bow and worked on it.
     const leaving = await signedInAgent(app, { name: 'Quillon Varga' });
-    const own = await bowWithSession(leaving.agent, [20, 40, 60], {}, { nickname: 'Varga ridge' });
+    const own = await bowWithSightIn(leaving.agent, [20, 40, 60], {}, { nickname: 'Varga ridge' });
     const { photoId } = await checkWithPhoto(leaving.agent, own.bow.id);
     const storageKey = (await Photo.findByPk(photoId))!.storageKey;
     expect(fs.existsSync(path.join(config.uploadDir, storageKey))).toBe(true);
 
     const friend = await signedInAgent(app, { name: 'Ebba Lindqvist' });
-    const friends = await bowWithSession(friend.agent, [20, 40], {}, { nickname: 'Lindqvist hunter' });
+    const friends = await bowWithSightIn(friend.agent, [20, 40], {}, { nickname: 'Lindqvist hunter' });
     await Share.create({ bowId: friends.bow.id, archerId: friend.user.id, techId: leaving.user.id, invitedEmail: leaving.email, state: 'active', acceptedAt: new Date(), revokedAt: null });
     // An open invite to the leaving address, on another bow of the friend.
-    const spare = await bowWithSession(friend.agent, [20, 40], {}, { nickname: 'Lindqvist spare' });
+    const spare = await bowWithSightIn(friend.agent, [20, 40], {}, { nickname: 'Lindqvist spare' });
     await Share.create({ bowId: spare.bow.id, archerId: friend.user.id, techId: null, invitedEmail: leaving.email, state: 'invited', acceptedAt: null, revokedAt: null });
     const theirCheck = await leaving.agent.post(`/api/bows/${friends.bow.id}/checks`).set(CSRF).send({ place: 'bench' });
     expect(theirCheck.status).toBe(201);

@@ -80,7 +80,7 @@ describe('changing roles and disabling', () => {
     });
   });
 
-  it('disabling ends the account’s sessions and bars sign-in; enabling lets it back', async () => {
+  it('disabling ends the account’s sign-in sessions and bars sign-in; enabling lets it back', async () => {
     const admin = await adminAgent();
     const person = await signedInAgent(app);
     const disabled = await admin.agent.patch(`/api/admin/accounts/${person.user.id}`).set(CSRF).send({ disabled: true });

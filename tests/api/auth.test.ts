@@ -78,7 +78,7 @@ describe('sign-in and sign-out', () => {
     expect(res.body.error).toEqual({ code: 'rate_limited', message: expect.stringMatching(/Too many sign-in attempts/) });
   });
 
-  it('will not let a disabled account sign in, and ends its current session', async () => {
+  it('will not let a disabled account sign in, and ends its current sign-in session', async () => {
     const { agent, email, password } = await signedInAgent(app);
     await User.update({ disabled: true }, { where: { email } });
     expect((await agent.get('/api/me')).status).toBe(401);
@@ -89,7 +89,7 @@ describe('sign-in and sign-out', () => {
 });
 
 describe('guards', () => {
-  it('answers 401 without a session', async () => {
+  it('answers 401 without a sign-in session', async () => {
     const res = await request(app).get('/api/me');
     expect(res.status).toBe(401);
     expect(res.body).toEqual({ error: { code: 'unauthorized', message: 'Sign in to continue.' } });

@@ -1,5 +1,5 @@
 /**
- * Fixtures for the bow, build, session and tape API tests: valid bodies (an
+ * Fixtures for the bow, build, sight-in and tape API tests: valid bodies (an
  * invented bow and arrow) and marks drawn from the math core's own flight model
  * for a sight whose every parameter is known, so a fit of them has a known answer.
  */
@@ -83,15 +83,15 @@ export async function bowWithBuild(agent: Agent, bow: Record<string, unknown> = 
   return { bow: bowRes.body.bow, build: buildRes.body.build };
 }
 
-/** A bow, a build and a session with marks at `distances`, through the API. */
-export async function bowWithSession(agent: Agent, distances = [20, 40, 60], session: Record<string, unknown> = {}, bow: Record<string, unknown> = {}) {
+/** A bow, a build and a sight-in with marks at `distances`, through the API. */
+export async function bowWithSightIn(agent: Agent, distances = [20, 40, 60], sightIn: Record<string, unknown> = {}, bow: Record<string, unknown> = {}) {
   const made = await bowWithBuild(agent, bow);
   const res = await agent
-    .post(`/api/bows/${made.bow.id}/sessions`)
+    .post(`/api/bows/${made.bow.id}/sight-ins`)
     .set(CSRF)
-    .send({ buildId: made.build.id, date: '2026-11-02', placeLabel: 'Test range', marks: knownMarks(distances), ...session });
-  if (res.status !== 201) throw new Error(`session: ${res.status} ${JSON.stringify(res.body)}`);
-  return { ...made, session: res.body.session };
+    .send({ buildId: made.build.id, date: '2026-11-02', placeLabel: 'Test range', marks: knownMarks(distances), ...sightIn });
+  if (res.status !== 201) throw new Error(`sight-in: ${res.status} ${JSON.stringify(res.body)}`);
+  return { ...made, sightIn: res.body.sightIn };
 }
 
 export type { Agent, Express };

@@ -1,10 +1,10 @@
 import request from 'supertest';
 import { Op } from 'sequelize';
 import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
-import { ArrowBuild, Bow, SessionMark, SightSession, Tape, User } from '@/server/models';
+import { ArrowBuild, Bow, SightInMark, SightIn, Tape, User } from '@/server/models';
 import { bowListResponseSchema, bowDetailSchema } from '@/shared/bow';
 import { seedBows, demoBows } from '@/server/seed/bows';
-import { bowBody, bowWithSession } from './bow-fixtures';
+import { bowBody, bowWithSightIn } from './bow-fixtures';
 
 const app = testApp();
 afterAll(closeDb);
@@ -74,14 +74,14 @@ describe('GET /api/bows (the Bench)', () => {
   it('lists only the account’s bows, each with its readiness', async () => {
     const { agent } = await signedInAgent(app);
     const empty = await agent.post('/api/bows').set(CSRF).send(bowBody({ nickname: 'Bare bow' }));
-    const { bow, session } = await bowWithSession(agent, [20, 35, 50]);
-    const tapeRes = await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, label: 'Bench tape' });
+    const { bow, sightIn } = await bowWithSightIn(agent, [20, 35, 50]);
+    const tapeRes = await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, label: 'Bench tape' });
     expect(tapeRes.status).toBe(201);
-    // A newer session with two marks becomes the latest.
+    // A newer sight-in with two marks becomes the latest.
     const newer = await agent
-      .post(`/api/bows/${bow.id}/sessions`)
+      .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
-      .send({ buildId: session.buildId, date: '2026-11-20', marks: session.marks.slice(0, 2).map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })) });
+      .send({ buildId: sightIn.buildId, date: '2026-11-20', marks: sightIn.marks.slice(0, 2).map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })) });
     expect(newer.status).toBe(201);
 
     const other = await signedInAgent(app);
@@ -91,34 +91,34 @@ describe('GET /api/bows (the Bench)', () => {
     expect(res.status).toBe(200);
     const parsed = bowListResponseSchema.parse(res.body);
     expect(parsed.bows.map((b) => b.nickname)).toEqual(['Bare bow', 'Test slider']);
-    expect(parsed.bows[0]).toMatchObject({ id: empty.body.bow.id, readiness: { latestSession: null, buildCount: 0, sessionCount: 0, hasTape: false } });
+    expect(parsed.bows[0]).toMatchObject({ id: empty.body.bow.id, readiness: { latestSightIn: null, buildCount: 0, sightInCount: 0, hasTape: false } });
     // `level` is filled in by the level-check feature; the Bench reads it from here.
     expect(parsed.bows[0].readiness).toHaveProperty('level');
     const readiness = parsed.bows[1].readiness;
-    expect(readiness).toMatchObject({ buildCount: 1, sessionCount: 2, hasTape: true });
-    expect(readiness.latestSession).toMatchObject({ id: newer.body.session.id, date: '2026-11-20', markCount: 2, longestDistance: 35, longestUnit: 'yd' });
-    expect(readiness.latestSession!.rmsMm).toBeCloseTo(newer.body.session.fit.rmsMm, 9);
+    expect(readiness).toMatchObject({ buildCount: 1, sightInCount: 2, hasTape: true });
+    expect(readiness.latestSightIn).toMatchObject({ id: newer.body.sightIn.id, date: '2026-11-20', markCount: 2, longestDistance: 35, longestUnit: 'yd' });
+    expect(readiness.latestSightIn!.rmsMm).toBeCloseTo(newer.body.sightIn.fit.rmsMm, 9);
   });
 });
 
 describe('GET /api/bows/:id', () => {
-  it('returns the bow with its builds, sessions (newest first, with fit summaries) and tapes', async () => {
+  it('returns the bow with its builds, sight-ins (newest first, with fit summaries) and tapes', async () => {
     const { agent } = await signedInAgent(app);
-    const { bow, build, session } = await bowWithSession(agent, [20, 40, 60]);
+    const { bow, build, sightIn } = await bowWithSightIn(agent, [20, 40, 60]);
     const older = await agent
-      .post(`/api/bows/${bow.id}/sessions`)
+      .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
-      .send({ buildId: build.id, date: '2026-08-01', marks: session.marks.map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })) });
-    await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 70, label: 'Detail tape' });
+      .send({ buildId: build.id, date: '2026-08-01', marks: sightIn.marks.map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })) });
+    await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 70, label: 'Detail tape' });
 
     const res = await agent.get(`/api/bows/${bow.id}`);
     expect(res.status).toBe(200);
     const detail = bowDetailSchema.parse(res.body.bow);
-    expect(detail.builds.map((b) => [b.id, b.sessionCount])).toEqual([[build.id, 2]]);
-    expect(detail.sessions.map((s) => s.id)).toEqual([session.id, older.body.session.id]);
-    expect(detail.sessions[0].summary).toMatchObject({ markCount: 3, longestDistance: 60, longestUnit: 'yd' });
-    expect(detail.sessions[0].summary.speedFps).toBeCloseTo(session.fit.speedFps, 9);
-    expect(detail.tapes).toEqual([expect.objectContaining({ sessionId: session.id, bowId: bow.id, label: 'Detail tape', fromDistance: 20, toDistance: 70 })]);
+    expect(detail.builds.map((b) => [b.id, b.sightInCount])).toEqual([[build.id, 2]]);
+    expect(detail.sightIns.map((s) => s.id)).toEqual([sightIn.id, older.body.sightIn.id]);
+    expect(detail.sightIns[0].summary).toMatchObject({ markCount: 3, longestDistance: 60, longestUnit: 'yd' });
+    expect(detail.sightIns[0].summary.speedFps).toBeCloseTo(sightIn.fit.speedFps, 9);
+    expect(detail.tapes).toEqual([expect.objectContaining({ sightInId: sightIn.id, bowId: bow.id, label: 'Detail tape', fromDistance: 20, toDistance: 70 })]);
   });
 });
 
@@ -143,19 +143,19 @@ describe('PATCH /api/bows/:id', () => {
 });
 
 describe('DELETE /api/bows/:id', () => {
-  it('deletes the bow with its builds, sessions, marks and tapes', async () => {
+  it('deletes the bow with its builds, sight-ins, marks and tapes', async () => {
     const { agent } = await signedInAgent(app);
-    const { bow, build, session } = await bowWithSession(agent, [20, 40, 60]);
-    await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 });
-    expect(await SessionMark.count({ where: { sessionId: session.id } })).toBe(3);
+    const { bow, build, sightIn } = await bowWithSightIn(agent, [20, 40, 60]);
+    await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 });
+    expect(await SightInMark.count({ where: { sightInId: sightIn.id } })).toBe(3);
 
     const res = await agent.delete(`/api/bows/${bow.id}`).set(CSRF);
     expect(res.status).toBe(204);
     expect(await Bow.count({ where: { id: bow.id } })).toBe(0);
     expect(await ArrowBuild.count({ where: { id: build.id } })).toBe(0);
-    expect(await SightSession.count({ where: { id: session.id } })).toBe(0);
-    expect(await SessionMark.count({ where: { sessionId: session.id } })).toBe(0);
-    expect(await Tape.count({ where: { sessionId: session.id } })).toBe(0);
+    expect(await SightIn.count({ where: { id: sightIn.id } })).toBe(0);
+    expect(await SightInMark.count({ where: { sightInId: sightIn.id } })).toBe(0);
+    expect(await Tape.count({ where: { sightInId: sightIn.id } })).toBe(0);
     expect((await agent.get(`/api/bows/${bow.id}`)).status).toBe(404);
   });
 });
@@ -194,14 +194,14 @@ describe('demo scenario (server/seed/bows.ts)', () => {
     const counts = async () => {
       const bows = await Bow.findAll({ where: { userId: archer.id } });
       const bowIds = bows.map((bow) => bow.id);
-      const sessions = await SightSession.findAll({ where: { bowId: { [Op.in]: bowIds } } });
-      const sessionIds = sessions.map((session) => session.id);
+      const sightIns = await SightIn.findAll({ where: { bowId: { [Op.in]: bowIds } } });
+      const sightInIds = sightIns.map((sightIn) => sightIn.id);
       return {
         bows: bows.length,
         builds: await ArrowBuild.count({ where: { bowId: { [Op.in]: bowIds } } }),
-        sessions: sessions.length,
-        marks: await SessionMark.count({ where: { sessionId: { [Op.in]: sessionIds } } }),
-        tapes: await Tape.count({ where: { sessionId: { [Op.in]: sessionIds } } }),
+        sightIns: sightIns.length,
+        marks: await SightInMark.count({ where: { sightInId: { [Op.in]: sightInIds } } }),
+        tapes: await Tape.count({ where: { sightInId: { [Op.in]: sightInIds } } }),
       };
     };
     await seedBows(archer);
@@ -209,9 +209,9 @@ describe('demo scenario (server/seed/bows.ts)', () => {
     const expected = {
       bows: demoBows.length,
       builds: demoBows.flatMap((bow) => bow.builds).length,
-      sessions: demoBows.flatMap((bow) => bow.builds.flatMap((build) => build.sessions)).length,
-      marks: demoBows.flatMap((bow) => bow.builds.flatMap((build) => build.sessions.flatMap((session) => session.distances))).length,
-      tapes: demoBows.flatMap((bow) => bow.builds.flatMap((build) => build.sessions.flatMap((session) => session.tapes))).length,
+      sightIns: demoBows.flatMap((bow) => bow.builds.flatMap((build) => build.sightIns)).length,
+      marks: demoBows.flatMap((bow) => bow.builds.flatMap((build) => build.sightIns.flatMap((sightIn) => sightIn.distances))).length,
+      tapes: demoBows.flatMap((bow) => bow.builds.flatMap((build) => build.sightIns.flatMap((sightIn) => sightIn.tapes))).length,
     };
     expect(first).toEqual(expected);
     expect(expected).toMatchObject({ bows: 2, builds: 3 });
@@ -219,15 +219,15 @@ describe('demo scenario (server/seed/bows.ts)', () => {
     expect(await counts()).toEqual(first);
   });
 
-  it('has sessions with 2, 3 and 5 marks whose fits agree with the marks to a few tenths of a mm', async () => {
+  it('has sight-ins with 2, 3 and 5 marks whose fits agree with the marks to a few tenths of a mm', async () => {
     const { user } = await signedInAgent(app, { name: 'Seed Check' });
     const archer = (await User.findByPk(user.id))!;
     await seedBows(archer);
     const bows = await Bow.findAll({ where: { userId: archer.id } });
-    const sessions = await SightSession.findAll({ where: { bowId: { [Op.in]: bows.map((bow) => bow.id) } }, include: [{ model: SessionMark, as: 'marks' }] });
-    expect(new Set(sessions.map((session) => session.marks!.length))).toEqual(new Set([2, 3, 5]));
-    for (const session of sessions) {
-      const fit = session.fit as { rmsMm: number; speedFps: number };
+    const sightIns = await SightIn.findAll({ where: { bowId: { [Op.in]: bows.map((bow) => bow.id) } }, include: [{ model: SightInMark, as: 'marks' }] });
+    expect(new Set(sightIns.map((sightIn) => sightIn.marks!.length))).toEqual(new Set([2, 3, 5]));
+    for (const sightIn of sightIns) {
+      const fit = sightIn.fit as { rmsMm: number; speedFps: number };
       // Scatter is at most 0.1 mm plus 0.05 mm of rounding (the scenario's own construction).
       expect(fit.rmsMm).toBeLessThan(0.2);
       expect(fit.speedFps).toBeGreaterThan(250);

@@ -35,13 +35,13 @@ export function sightFor(build: Made, air: { altitudeM?: number; temperatureC?: 
 }
 
 /** Posts a sight-in of `build` with marks at `distances` drawn from sightFor(build). */
-export async function addSession(agent: Agent, bowId: number, build: Made, options: { distances?: number[]; date?: string; altitudeM?: number; temperatureC?: number } = {}) {
+export async function addSightIn(agent: Agent, bowId: number, build: Made, options: { distances?: number[]; date?: string; altitudeM?: number; temperatureC?: number } = {}) {
   const distances = options.distances ?? [20, 40, 60];
   const air: { altitudeM?: number; temperatureC?: number } = {};
   if (options.altitudeM !== undefined) air.altitudeM = options.altitudeM;
   if (options.temperatureC !== undefined) air.temperatureC = options.temperatureC;
   const res = await agent
-    .post(`/api/bows/${bowId}/sessions`)
+    .post(`/api/bows/${bowId}/sight-ins`)
     .set(CSRF)
     .send({
       buildId: build.id,
@@ -51,18 +51,18 @@ export async function addSession(agent: Agent, bowId: number, build: Made, optio
       temperatureC: options.temperatureC ?? null,
       marks: knownMarks(distances, sightFor(build, air)),
     });
-  if (res.status !== 201) throw new Error(`session: ${res.status} ${JSON.stringify(res.body)}`);
-  return res.body.session;
+  if (res.status !== 201) throw new Error(`sight-in: ${res.status} ${JSON.stringify(res.body)}`);
+  return res.body.sightIn;
 }
 
-/** A bow with a heavy and a light build (both chronographed unless told), each with a sight-in unless `sessions` is false. */
-export async function bowWithTwoBuilds(agent: Agent, { chronographed = true, sessions = true, bow = {} as Record<string, unknown> } = {}) {
+/** A bow with a heavy and a light build (both chronographed unless told), each with a sight-in unless `sight-ins` is false. */
+export async function bowWithTwoBuilds(agent: Agent, { chronographed = true, sightIns = true, bow = {} as Record<string, unknown> } = {}) {
   const bowRes = await agent.post('/api/bows').set(CSRF).send(bowBody(bow));
   if (bowRes.status !== 201) throw new Error(`bow: ${bowRes.status} ${JSON.stringify(bowRes.body)}`);
   const bowId: number = bowRes.body.bow.id;
   const heavy = await addBuild(agent, bowId, {}, chronographed);
   const light = await addBuild(agent, bowId, lightBuildFields, chronographed);
-  const heavySession = sessions ? await addSession(agent, bowId, heavy) : null;
-  const lightSession = sessions ? await addSession(agent, bowId, light) : null;
-  return { bowId, heavy, light, heavySession, lightSession };
+  const heavySightIn = sightIns ? await addSightIn(agent, bowId, heavy) : null;
+  const lightSightIn = sightIns ? await addSightIn(agent, bowId, light) : null;
+  return { bowId, heavy, light, heavySightIn, lightSightIn };
 }

@@ -1,9 +1,9 @@
 import request from 'supertest';
 import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
-import { ArrowBuild, SightSession } from '@/server/models';
+import { ArrowBuild, SightIn } from '@/server/models';
 import { buildSchema } from '@/shared/build';
 import { focPercent, kineticEnergy, momentum, totalArrowGrains, tradeKineticEnergyFtLbf } from '@/math/arrow';
-import { bowBody, buildBody, bowWithSession } from './bow-fixtures';
+import { bowBody, buildBody, bowWithSightIn } from './bow-fixtures';
 
 const app = testApp();
 afterAll(closeDb);
@@ -105,23 +105,23 @@ describe('PATCH /api/builds/:id', () => {
 });
 
 describe('GET /api/bows/:bowId/builds and /api/builds/:id', () => {
-  it('lists the bow’s builds with how many sessions use each', async () => {
+  it('lists the bow’s builds with how many sight-ins use each', async () => {
     const { agent } = await signedInAgent(app);
-    const { bow, build } = await bowWithSession(agent, [20, 60]);
+    const { bow, build } = await bowWithSightIn(agent, [20, 60]);
     await agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Spare' }));
     const list = await agent.get(`/api/bows/${bow.id}/builds`);
     expect(list.status).toBe(200);
-    expect(list.body.builds.map((b: { name: string; sessionCount: number }) => [b.name, b.sessionCount])).toEqual([
+    expect(list.body.builds.map((b: { name: string; sightInCount: number }) => [b.name, b.sightInCount])).toEqual([
       ['Test heavy', 1],
       ['Spare', 0],
     ]);
     const one = await agent.get(`/api/builds/${build.id}`);
-    expect(buildSchema.parse(one.body.build)).toMatchObject({ id: build.id, bowId: bow.id, sessionCount: 1 });
+    expect(buildSchema.parse(one.body.build)).toMatchObject({ id: build.id, bowId: bow.id, sightInCount: 1 });
   });
 });
 
 describe('DELETE /api/builds/:id', () => {
-  it('deletes a build no session uses', async () => {
+  it('deletes a build no sight-in uses', async () => {
     const { agent } = await signedInAgent(app);
     const bow = await newBow(agent);
     const made = await agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody());
@@ -129,19 +129,19 @@ describe('DELETE /api/builds/:id', () => {
     expect(await ArrowBuild.count({ where: { id: made.body.build.id } })).toBe(0);
   });
 
-  it('refuses (409) to delete a build that sessions use, and keeps both', async () => {
+  it('refuses (409) to delete a build that sight-ins use, and keeps both', async () => {
     const { agent } = await signedInAgent(app);
-    const { build, session } = await bowWithSession(agent, [20, 60]);
+    const { build, sightIn } = await bowWithSightIn(agent, [20, 60]);
     const res = await agent.delete(`/api/builds/${build.id}`).set(CSRF);
     expect(res.status).toBe(409);
     expect(res.body.error).toEqual({
       code: 'conflict',
-      message: '1 sight-in session uses this arrow build. Delete that session first, or keep the build.',
+      message: '1 sight-in uses this arrow build. Delete that sight-in first, or keep the build.',
     });
     expect(await ArrowBuild.count({ where: { id: build.id } })).toBe(1);
-    expect(await SightSession.count({ where: { id: session.id } })).toBe(1);
-    // Once the session is gone, the build may go.
-    expect((await agent.delete(`/api/sessions/${session.id}`).set(CSRF)).status).toBe(204);
+    expect(await SightIn.count({ where: { id: sightIn.id } })).toBe(1);
+    // Once the sight-in is gone, the build may go.
+    expect((await agent.delete(`/api/sight-ins/${sightIn.id}`).set(CSRF)).status).toBe(204);
     expect((await agent.delete(`/api/builds/${build.id}`).set(CSRF)).status).toBe(204);
   });
 });

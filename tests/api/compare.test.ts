@@ -11,24 +11,24 @@ jest.setTimeout(30_000);
 describe('GET /api/bows/:bowId/compare', () => {
   it('lays two sighted builds side by side: marks from each stored fit, differences in mm and in distance, figures', async () => {
     const { agent } = await signedInAgent(app);
-    const { bowId, heavy, light, heavySession, lightSession } = await bowWithTwoBuilds(agent);
+    const { bowId, heavy, light, heavySightIn, lightSightIn } = await bowWithTwoBuilds(agent);
     const res = await agent.get(`/api/bows/${bowId}/compare?builds=${light.id},${heavy.id}&at=40`);
     expect(res.status).toBe(200);
     const body = compareResponseSchema.parse(res.body);
     const { comparison, sources } = body;
-    expect(sources.map((source) => [source.buildId, source.sessionId, source.markCount])).toEqual([
-      [light.id, lightSession.id, 3],
-      [heavy.id, heavySession.id, 3],
+    expect(sources.map((source) => [source.buildId, source.sightInId, source.markCount])).toEqual([
+      [light.id, lightSightIn.id, 3],
+      [heavy.id, heavySightIn.id, 3],
     ]);
     expect(comparison.builds.map((build) => build.label)).toEqual(['Test light', 'Test heavy']);
     expect(comparison.unit).toBe('yd');
     expect(comparison.rows.map((row) => row.distance)).toEqual([20, 30, 40, 50, 60, 70, 80]);
 
-    const lightMarks = fittedReadings(lightSession.fit, [20, 40, 60]);
-    const heavyMarks = fittedReadings(heavySession.fit, [20, 40, 60]);
+    const lightMarks = fittedReadings(lightSightIn.fit, [20, 40, 60]);
+    const heavyMarks = fittedReadings(heavySightIn.fit, [20, 40, 60]);
     for (const [k, distance] of [20, 40, 60].entries()) {
       const row = comparison.rows.find((candidate) => candidate.distance === distance)!;
-      // Each build's mark is its own stored fit's mark (both come from the model saved with the session).
+      // Each build's mark is its own stored fit's mark (both come from the model saved with the sight-in).
       expect(row.marks[0].markMm!).toBeCloseTo(lightMarks[k], 9);
       expect(row.marks[1].markMm!).toBeCloseTo(heavyMarks[k], 9);
       expect(row.marks[0].differenceMm!).toBeCloseTo(0, 12);
@@ -80,7 +80,7 @@ describe('GET /api/bows/:bowId/compare', () => {
 
   it('checks the query with field messages', async () => {
     const { agent } = await signedInAgent(app);
-    const { bowId, heavy, light } = await bowWithTwoBuilds(agent, { sessions: false });
+    const { bowId, heavy, light } = await bowWithTwoBuilds(agent, { sightIns: false });
     const cases: [string, Record<string, string>][] = [
       ['', { 'query.builds': 'Choose at least 2 builds to compare' }],
       [`builds=${heavy.id}`, { 'query.builds': 'Choose at least 2 builds to compare' }],

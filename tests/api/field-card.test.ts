@@ -2,7 +2,7 @@ import { DOMParser } from '@xmldom/xmldom';
 import { closeDb, signedInAgent, testApp } from '../helpers/api';
 import { fieldCardResponseSchema } from '@/shared/field-card';
 import { fittedReadings } from '@/server/services/fit-service';
-import { bowWithSession, type Agent } from './bow-fixtures';
+import { bowWithSightIn, type Agent } from './bow-fixtures';
 
 const app = testApp();
 afterAll(closeDb);
@@ -20,11 +20,11 @@ const download = (agent: Agent, url: string) => agent.get(url).buffer(true).pars
 /** 72 PostScript points per inch and 25.4 mm per inch (exact, international yard and pound, 1959). */
 const POINTS_PER_MM = 72 / 25.4;
 
-describe('GET /api/sessions/:id/field-card', () => {
+describe('GET /api/sight-ins/:id/field-card', () => {
   it('tabulates −40°…+40° by 20–60 yd for the sight-in air: level rows are the stored fit’s marks, aim-as-if the distance itself', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent);
-    const res = await agent.get(`/api/sessions/${session.id}/field-card`);
+    const { sightIn } = await bowWithSightIn(agent);
+    const res = await agent.get(`/api/sight-ins/${sightIn.id}/field-card`);
     expect(res.status).toBe(200);
     const { card, labels } = fieldCardResponseSchema.parse(res.body);
     expect(labels).toEqual({ bow: 'Test slider', build: 'Test heavy', date: '2026-11-02', place: 'Test range' });
@@ -32,7 +32,7 @@ describe('GET /api/sessions/:id/field-card', () => {
     expect(card.distances).toEqual([20, 30, 40, 50, 60]);
     expect(card.rows).toHaveLength(45);
     expect(card.sameAirAsSightIn).toBe(true);
-    const fitted = fittedReadings(session.fit, card.distances);
+    const fitted = fittedReadings(sightIn.fit, card.distances);
     for (const row of card.rows.filter((candidate) => candidate.angleDeg === 0)) {
       expect(row.markMm!).toBeCloseTo(fitted[card.distances.indexOf(row.distance)], 9);
       expect(row.aimAsIf!).toBeCloseTo(row.distance, 3);
@@ -50,8 +50,8 @@ describe('GET /api/sessions/:id/field-card', () => {
 
   it('shifts the marks for altitude and temperature: up the scale in thin air, none in the sight-in’s own air', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent, [20, 40, 60], { altitudeM: 600, temperatureC: 12 });
-    const high = fieldCardResponseSchema.parse((await agent.get(`/api/sessions/${session.id}/field-card?altitudeM=2700&temperatureC=5&angles=-30,0&distances=20,40,60`)).body).card;
+    const { sightIn } = await bowWithSightIn(agent, [20, 40, 60], { altitudeM: 600, temperatureC: 12 });
+    const high = fieldCardResponseSchema.parse((await agent.get(`/api/sight-ins/${sightIn.id}/field-card?altitudeM=2700&temperatureC=5&angles=-30,0&distances=20,40,60`)).body).card;
     expect(high.sameAirAsSightIn).toBe(false);
     expect(high.air).toMatchObject({ altitudeM: 2700, temperatureC: 5 });
     expect(high.sightIn).toMatchObject({ altitudeM: 600, temperatureC: 12 });
@@ -63,13 +63,13 @@ describe('GET /api/sessions/:id/field-card', () => {
     expect(level40.aimAsIf!).toBeLessThan(40);
     expect(level40.markMm!).toBeCloseTo(high.shift[1].markMm!, 9);
 
-    const same = fieldCardResponseSchema.parse((await agent.get(`/api/sessions/${session.id}/field-card?altitudeM=600&temperatureC=12`)).body).card;
+    const same = fieldCardResponseSchema.parse((await agent.get(`/api/sight-ins/${sightIn.id}/field-card?altitudeM=600&temperatureC=12`)).body).card;
     same.shift.forEach((row) => expect(Math.abs(row.shiftMm!)).toBeLessThan(1e-9));
   });
 
   it('checks the query with field messages', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent);
+    const { sightIn } = await bowWithSightIn(agent);
     const cases: [string, Record<string, string>][] = [
       ['angles=70', { 'query.angles.0': 'Each angle must be at most 60°' }],
       ['angles=-10,-10', { 'query.angles.1': 'Angle -10 is listed twice' }],
@@ -80,19 +80,19 @@ describe('GET /api/sessions/:id/field-card', () => {
       ['temperatureC=hot', { 'query.temperatureC': 'Temperature must be a number' }],
     ];
     for (const [query, fields] of cases) {
-      const res = await agent.get(`/api/sessions/${session.id}/field-card?${query}`);
+      const res = await agent.get(`/api/sight-ins/${sightIn.id}/field-card?${query}`);
       expect({ query, status: res.status, fields: res.body.error?.fields }).toEqual({ query, status: 400, fields });
     }
-    expect((await agent.get('/api/sessions/abc/field-card')).status).toBe(400);
+    expect((await agent.get('/api/sight-ins/abc/field-card')).status).toBe(400);
   });
 
-  it('hides another account’s session (404) on the JSON, the SVG and the PDF', async () => {
+  it('hides another account’s sight-in (404) on the JSON, the SVG and the PDF', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent);
+    const { sightIn } = await bowWithSightIn(agent);
     const { agent: stranger } = await signedInAgent(app);
     for (const suffix of ['field-card', 'field-card.svg', 'field-card.pdf']) {
-      const res = await stranger.get(`/api/sessions/${session.id}/${suffix}`);
-      expect({ suffix, status: res.status, message: res.body.error?.message }).toEqual({ suffix, status: 404, message: 'That sight-in session was not found.' });
+      const res = await stranger.get(`/api/sight-ins/${sightIn.id}/${suffix}`);
+      expect({ suffix, status: res.status, message: res.body.error?.message }).toEqual({ suffix, status: 404, message: 'That sight-in was not found.' });
     }
   });
 });
@@ -100,9 +100,9 @@ describe('GET /api/sessions/:id/field-card', () => {
 describe('the printed field card', () => {
   it('field-card.svg is 100 × 150 mm of outline glyphs (no <text>), its boxes the JSON’s figures', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent);
+    const { sightIn } = await bowWithSightIn(agent);
     const query = 'angles=-30,0,30&distances=20,40,60&altitudeM=2700';
-    const res = await download(agent, `/api/sessions/${session.id}/field-card.svg?${query}`);
+    const res = await download(agent, `/api/sight-ins/${sightIn.id}/field-card.svg?${query}`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?field-card-test-slider-2026-11-02\.svg"?$/);
@@ -116,7 +116,7 @@ describe('the printed field card', () => {
     expect(svg.getAttribute('viewBox')).toBe('0 0 100 150');
     expect(doc.getElementsByTagName('text').length).toBe(0);
     expect(text).not.toMatch(/<text[\s>]/);
-    const json = fieldCardResponseSchema.parse((await agent.get(`/api/sessions/${session.id}/field-card?${query}`)).body).card;
+    const json = fieldCardResponseSchema.parse((await agent.get(`/api/sight-ins/${sightIn.id}/field-card?${query}`)).body).card;
     const cells = Array.from(doc.getElementsByTagName('g') as unknown as ArrayLike<Element>).filter((g) => g.getAttribute('class') === 'cell');
     expect(cells).toHaveLength(9);
     for (const cell of cells) {
@@ -141,8 +141,8 @@ describe('the printed field card', () => {
 
   it('field-card.pdf is one page of exactly 100 × 150 mm', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent);
-    const res = await download(agent, `/api/sessions/${session.id}/field-card.pdf?altitudeM=2700&temperatureC=5`);
+    const { sightIn } = await bowWithSightIn(agent);
+    const res = await download(agent, `/api/sight-ins/${sightIn.id}/field-card.pdf?altitudeM=2700&temperatureC=5`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     expect(res.headers['content-disposition']).toMatch(/field-card-test-slider-2026-11-02\.pdf/);

@@ -109,7 +109,7 @@ describe('numbers in the address', () => {
 
   it('refuses broken percent-encoding in a path parameter with 400, signed out or in', async () => {
     for (const client of [request(app), agent]) {
-      for (const path of ['/api/bows/%E0%A4%A', '/api/sessions/%ZZ', '/api/dev/mail/%', '/api/invites/%C0%AF%']) {
+      for (const path of ['/api/bows/%E0%A4%A', '/api/sight-ins/%ZZ', '/api/dev/mail/%', '/api/invites/%C0%AF%']) {
         const res = await client.get(path);
         expect([400, 401]).toContain(res.status);
         expect(res.body.error).toEqual({ code: expect.any(String), message: expect.any(String) });

@@ -5,7 +5,7 @@
  * is replayed as a refusal; the key is never shared between requests.
  */
 import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
-import { IdempotencyKey, SightSession } from '@/server/models';
+import { IdempotencyKey, SightIn } from '@/server/models';
 import { bowWithBuild, knownMarks } from './bow-fixtures';
 
 const app = testApp();
@@ -23,28 +23,28 @@ async function settled(userId: number, key: string) {
 }
 
 describe('Idempotency-Key', () => {
-  it('runs a new sight-in once: the replay gets the same answer and no second session', async () => {
+  it('runs a new sight-in once: the replay gets the same answer and no second sight-in', async () => {
     const { agent, user } = await signedInAgent(app);
     const { bow, build } = await bowWithBuild(agent);
     const body = { buildId: build.id, date: '2026-11-30', marks: knownMarks([20, 40, 60]) };
     const key = 'outbox-0001-abcdef';
-    const first = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).set('Idempotency-Key', key).send(body);
+    const first = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', key).send(body);
     expect(first.status).toBe(201);
     await settled(user.id, key);
-    const again = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).set('Idempotency-Key', key).send(body);
+    const again = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', key).send(body);
     expect(again.status).toBe(201);
     expect(again.headers['idempotent-replayed']).toBe('true');
-    expect(again.body.session.id).toBe(first.body.session.id);
-    expect(await SightSession.count({ where: { bowId: bow.id } })).toBe(1);
+    expect(again.body.sightIn.id).toBe(first.body.sightIn.id);
+    expect(await SightIn.count({ where: { bowId: bow.id } })).toBe(1);
 
     // A new key is a new write.
     const other = await agent
-      .post(`/api/bows/${bow.id}/sessions`)
+      .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
       .set('Idempotency-Key', 'outbox-0002-abcdef')
       .send({ ...body, date: '2026-12-01' });
     expect(other.status).toBe(201);
-    expect(await SightSession.count({ where: { bowId: bow.id } })).toBe(2);
+    expect(await SightIn.count({ where: { bowId: bow.id } })).toBe(2);
   });
 
   it('refuses the same key with another body, and a malformed key', async () => {
@@ -52,14 +52,14 @@ describe('Idempotency-Key', () => {
     const { bow, build } = await bowWithBuild(agent);
     const key = 'outbox-mismatch-1';
     const body = { buildId: build.id, date: '2026-11-30', marks: knownMarks([20, 60]) };
-    await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).set('Idempotency-Key', key).send(body);
+    await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', key).send(body);
     await settled(user.id, key);
-    const changed = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).set('Idempotency-Key', key).send({ ...body, date: '2026-11-29' });
+    const changed = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', key).send({ ...body, date: '2026-11-29' });
     expect(changed.status).toBe(422);
     expect(changed.body.error.code).toBe('idempotency_mismatch');
-    const bad = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).set('Idempotency-Key', 'x y').send(body);
+    const bad = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', 'x y').send(body);
     expect(bad.status).toBe(400);
-    expect(await SightSession.count({ where: { bowId: bow.id } })).toBe(1);
+    expect(await SightIn.count({ where: { bowId: bow.id } })).toBe(1);
   });
 
   it('replays a refusal (the bow was deleted) and keeps accounts apart', async () => {
@@ -69,17 +69,17 @@ describe('Idempotency-Key', () => {
     const body = { buildId: build.id, date: '2026-11-30', marks: knownMarks([20, 60]) };
     expect((await first.agent.delete(`/api/bows/${bow.id}`).set(CSRF)).status).toBe(204);
     const key = 'shared-key-123456';
-    const refused = await first.agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).set('Idempotency-Key', key).send(body);
+    const refused = await first.agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', key).send(body);
     expect(refused.status).toBe(404);
     await settled(first.user.id, key);
-    const replayed = await first.agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).set('Idempotency-Key', key).send(body);
+    const replayed = await first.agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', key).send(body);
     expect(replayed.status).toBe(404);
     expect(replayed.body).toEqual(refused.body);
 
     // The same key from another account is that account's own request (here: its own bow).
     const own = await bowWithBuild(second.agent);
     const theirs = await second.agent
-      .post(`/api/bows/${own.bow.id}/sessions`)
+      .post(`/api/bows/${own.bow.id}/sight-ins`)
       .set(CSRF)
       .set('Idempotency-Key', key)
       .send({ ...body, buildId: own.build.id });
@@ -93,11 +93,11 @@ describe('Idempotency-Key', () => {
     const key = 'retry-after-csrf-1';
     const body = { buildId: build.id, date: '2026-11-30', marks: knownMarks([20, 60]) };
     // Without the CSRF header the request is refused before any route: 403, nothing stored.
-    const refused = await agent.post(`/api/bows/${bow.id}/sessions`).set('Idempotency-Key', key).send(body);
+    const refused = await agent.post(`/api/bows/${bow.id}/sight-ins`).set('Idempotency-Key', key).send(body);
     expect(refused.status).toBe(403);
     expect(await IdempotencyKey.count({ where: { userId: user.id, idemKey: key } })).toBe(0);
-    const sent = await agent.post(`/api/bows/${bow.id}/sessions`).set(CSRF).set('Idempotency-Key', key).send(body);
+    const sent = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', key).send(body);
     expect(sent.status).toBe(201);
-    expect(await SightSession.count({ where: { bowId: bow.id } })).toBe(1);
+    expect(await SightIn.count({ where: { bowId: bow.id } })).toBe(1);
   });
 });

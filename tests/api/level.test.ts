@@ -441,12 +441,12 @@ describe('another account sees nothing (404 everywhere)', () => {
 });
 
 describe('readiness', () => {
-  it('summarises a bow without sessions', async () => {
+  it('summarises a bow without sight-ins', async () => {
     const fresh = await makeBow(owner.user.id, 'Readiness bow');
     const res = await owner.agent.get(`/api/bows/${fresh}/readiness`);
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ bow: { id: fresh, nickname: 'Readiness bow' }, level: { state: 'none' }, marks: null, tape: null });
-    expect(res.body.warnings).toEqual(['Level: Never checked.', 'No sight-in session yet: there are no confirmed marks for this bow.']);
+    expect(res.body.warnings).toEqual(['Level: Never checked.', 'No sight-in yet: there are no confirmed marks for this bow.']);
   });
 });
 
@@ -479,7 +479,7 @@ describe('demo seed and the bows list', () => {
     expect(detail.body.bow.readiness.level.state).toBe('due');
   });
 
-  it('builds the trip readiness from the seeded sessions and tapes', async () => {
+  it('builds the trip readiness from the seeded sight-ins and tapes', async () => {
     const seeded = await signedInAgent(app, { name: 'Trip Archer' });
     const archer = (await User.findByPk(seeded.user.id))!;
     await seedBows(archer);
@@ -489,7 +489,7 @@ describe('demo seed and the bows list', () => {
     expect(res.status).toBe(200);
     expect(res.body.level.state).toBe('due');
     expect(res.body.marks.marks.length).toBeGreaterThanOrEqual(2);
-    // The longest confirmed mark is the largest distance of the latest session's marks.
+    // The longest confirmed mark is the largest distance of the latest sight-in's marks.
     const longest = Math.max(...res.body.marks.marks.map((m: { distance: number }) => m.distance));
     expect(res.body.marks.longestDistance).toBe(longest);
     expect(res.body.tape).not.toBeNull();
@@ -498,7 +498,7 @@ describe('demo seed and the bows list', () => {
     // The staleness rule's words (shared/staleness.ts): the change, its date, and what to do.
     expect(res.body.warnings[1]).toMatch(/^Latest sight-in \(24 Oct 2026\): New string on \d{1,2} \w{3} \d{4}, after this sight-in: confirm the marks at the range\.$/);
     // The fit's "confirm at" distances all lie off this tape's span (20–60 yd), so none is listed.
-    expect(res.body.tape).toMatchObject({ fromDistance: 20, toDistance: 60, unit: 'yd', fromLatestSession: true });
+    expect(res.body.tape).toMatchObject({ fromDistance: 20, toDistance: 60, unit: 'yd', fromLatestSightIn: true });
 
     // On the hunting bow, any "confirm at" distances named lie on its tape's span.
     const timberline = (await Bow.findOne({ where: { userId: archer.id, nickname: 'Timberline slider' } }))!;
@@ -513,7 +513,7 @@ describe('demo seed and the bows list', () => {
       }
     }
     // The tape comes from the newest sight-in that has one, and its span past the longest mark is flagged.
-    expect(trip.tape).toMatchObject({ fromLatestSession: true, sessionDate: trip.marks.date });
+    expect(trip.tape).toMatchObject({ fromLatestSightIn: true, sightInDate: trip.marks.date });
     expect(trip.warnings).toContain(
       `The tape runs to ${trip.tape.toDistance} yd, beyond the longest confirmed mark (${trip.marks.longestDistance} yd): the distances beyond it are estimates until shot at the range.`,
     );

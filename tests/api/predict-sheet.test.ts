@@ -18,8 +18,8 @@ const query = 'name=Elk%20brass&grainsPerInch=9.3&cutLengthMm=717.55&diameterMm=
 describe('GET /api/bows/:bowId/predict/sheet.svg|pdf', () => {
   it('prints the predicted tape on a page headed PREDICTED — NOT SIGHTED, naming the sight-in it is carried on', async () => {
     const { agent } = await signedInAgent(app);
-    const { bowId, lightSession } = await bowWithTwoBuilds(agent);
-    const res = await download(agent, `/api/bows/${bowId}/predict/sheet.svg?${query}&sessionId=${lightSession.id}&from=20&to=60&paper=letter`);
+    const { bowId, lightSightIn } = await bowWithTwoBuilds(agent);
+    const res = await download(agent, `/api/bows/${bowId}/predict/sheet.svg?${query}&sightInId=${lightSightIn.id}&from=20&to=60&paper=letter`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(res.headers['content-disposition']).toMatch(/predicted-sheet-elk-brass\.svg/);
@@ -37,8 +37,8 @@ describe('GET /api/bows/:bowId/predict/sheet.svg|pdf', () => {
 
   it('sends the same sheet as a one-page PDF of the paper’s size', async () => {
     const { agent } = await signedInAgent(app);
-    const { bowId, lightSession } = await bowWithTwoBuilds(agent);
-    const res = await download(agent, `/api/bows/${bowId}/predict/sheet.pdf?${query}&sessionId=${lightSession.id}`);
+    const { bowId, lightSightIn } = await bowWithTwoBuilds(agent);
+    const res = await download(agent, `/api/bows/${bowId}/predict/sheet.pdf?${query}&sightInId=${lightSightIn.id}`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('application/pdf');
     const pdf = res.body as Buffer;

@@ -3,7 +3,7 @@ import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
 import { predictResponseSchema } from '@/shared/predict';
 import { simulatedReadings } from '@/server/services/fit-service';
 import { buildBody, type Agent } from './bow-fixtures';
-import { addBuild, addSession, bowWithTwoBuilds, sightFor, trueSpeedFps } from './build-tools-fixtures';
+import { addBuild, addSightIn, bowWithTwoBuilds, sightFor, trueSpeedFps } from './build-tools-fixtures';
 
 const app = testApp();
 afterAll(closeDb);
@@ -23,8 +23,8 @@ const download = (agent: Agent, url: string) => agent.get(url).buffer(true).pars
 describe('POST /api/bows/:bowId/predict', () => {
   it('predicts a new build’s speed within 1 fps from two chronographed builds, and its marks on the bow’s fitted sight', async () => {
     const { agent } = await signedInAgent(app);
-    const { bowId, heavy, light, lightSession } = await bowWithTwoBuilds(agent);
-    const res = await agent.post(`/api/bows/${bowId}/predict`).set(CSRF).send({ build: newBuild, sessionId: lightSession.id });
+    const { bowId, heavy, light, lightSightIn } = await bowWithTwoBuilds(agent);
+    const res = await agent.post(`/api/bows/${bowId}/predict`).set(CSRF).send({ build: newBuild, sightInId: lightSightIn.id });
     expect(res.status).toBe(200);
     const body = predictResponseSchema.parse(res.body);
     expect(body.chronographed.map((build) => build.buildId)).toEqual([heavy.id, light.id]);
@@ -38,7 +38,7 @@ describe('POST /api/bows/:bowId/predict', () => {
     expect(prediction.virtualMass!.virtualMassGr).toBeCloseTo(300, 2);
     expect(prediction.caution).toBe('PREDICTED — not sighted. Confirm at the range before relying on it.');
     expect(prediction.warnings.join(' ')).toMatch(/heavier than every chronographed build/);
-    expect(body.session).toMatchObject({ id: lightSession.id, buildName: 'Test light' });
+    expect(body.sightIn).toMatchObject({ id: lightSightIn.id, buildName: 'Test light' });
     expect(body.marksMissing).toBeNull();
 
     // The marks the new arrow really needs on that sight (the marks' own sight, carrying the new arrow at its true speed).
@@ -77,7 +77,7 @@ describe('POST /api/bows/:bowId/predict', () => {
 
   it('gives the speed alone, saying why there are no marks, on a bow without a sight-in', async () => {
     const { agent } = await signedInAgent(app);
-    const { bowId } = await bowWithTwoBuilds(agent, { sessions: false });
+    const { bowId } = await bowWithTwoBuilds(agent, { sightIns: false });
     const res = await agent.post(`/api/bows/${bowId}/predict`).set(CSRF).send({ build: newBuild });
     expect(res.status).toBe(200);
     expect(res.body.prediction.marks).toBeNull();
@@ -88,14 +88,14 @@ describe('POST /api/bows/:bowId/predict', () => {
 
   it('checks the body with field messages', async () => {
     const { agent } = await signedInAgent(app);
-    const { bowId, heavy } = await bowWithTwoBuilds(agent, { sessions: false });
-    const other = await bowWithTwoBuilds(agent, { sessions: false });
+    const { bowId, heavy } = await bowWithTwoBuilds(agent, { sightIns: false });
+    const other = await bowWithTwoBuilds(agent, { sightIns: false });
     const cases: [unknown, Record<string, string>][] = [
       [{}, { buildId: 'Choose a saved build or enter a new one (one of the two)' }],
       [{ buildId: heavy.id, build: newBuild }, { buildId: 'Choose a saved build or enter a new one (one of the two)' }],
       [{ build: { ...newBuild, grainsPerInch: 1 } }, { 'build.grainsPerInch': 'Grains per inch must be at least 2 gpi' }],
       [{ buildId: 'seven' }, { buildId: 'Choose the arrow build' }],
-      [{ buildId: heavy.id, colour: 'red' }, { _: 'Send a buildId or a build, and optionally a sessionId' }],
+      [{ buildId: heavy.id, colour: 'red' }, { _: 'Send a buildId or a build, and optionally a sightInId' }],
     ];
     for (const [body, fields] of cases) {
       const res = await agent.post(`/api/bows/${bowId}/predict`).set(CSRF).send(body as object);
@@ -103,8 +103,8 @@ describe('POST /api/bows/:bowId/predict', () => {
     }
     const foreign = await agent.post(`/api/bows/${bowId}/predict`).set(CSRF).send({ buildId: other.light.id });
     expect(foreign.body.error.fields).toEqual({ buildId: 'Choose one of this bow’s arrow builds' });
-    const session = await agent.post(`/api/bows/${bowId}/predict`).set(CSRF).send({ buildId: heavy.id, sessionId: 999999999 });
-    expect(session.body.error.fields).toEqual({ sessionId: 'Choose one of this bow’s sight-in sessions' });
+    const sightIn = await agent.post(`/api/bows/${bowId}/predict`).set(CSRF).send({ buildId: heavy.id, sightInId: 999999999 });
+    expect(sightIn.body.error.fields).toEqual({ sightInId: 'Choose one of this bow’s sight-ins' });
     expect((await agent.post(`/api/bows/${bowId}/predict`).send({ buildId: heavy.id })).status).toBe(403); // no CSRF header
   });
 
@@ -122,9 +122,9 @@ describe('POST /api/bows/:bowId/predict', () => {
 describe('GET /api/bows/:bowId/predict/tape.svg', () => {
   it('draws the predicted tape true to the predicted marks, marked PREDICTED — not sighted, outlines only', async () => {
     const { agent } = await signedInAgent(app);
-    const { bowId, lightSession } = await bowWithTwoBuilds(agent);
+    const { bowId, lightSightIn } = await bowWithTwoBuilds(agent);
     const query = 'name=Elk%20brass&grainsPerInch=9.3&cutLengthMm=717.55&diameterMm=6.2&pointGr=150&insertGr=75&nockGr=9&vaneCount=3&vaneWeightGr=7&wrapGr=8';
-    const res = await download(agent, `/api/bows/${bowId}/predict/tape.svg?${query}&sessionId=${lightSession.id}&from=20&to=60`);
+    const res = await download(agent, `/api/bows/${bowId}/predict/tape.svg?${query}&sightInId=${lightSightIn.id}&from=20&to=60`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(res.headers['content-disposition']).toMatch(/predicted-tape-elk-brass\.svg/);
@@ -143,7 +143,7 @@ describe('GET /api/bows/:bowId/predict/tape.svg', () => {
       await agent
         .post(`/api/bows/${bowId}/predict`)
         .set(CSRF)
-        .send({ build: { ...newBuild, insertGr: 75, nockGr: 9, vaneCount: 3, vaneWeightGr: 7, wrapGr: 8 }, sessionId: lightSession.id })
+        .send({ build: { ...newBuild, insertGr: 75, nockGr: 9, vaneCount: 3, vaneWeightGr: 7, wrapGr: 8 }, sightInId: lightSightIn.id })
     ).body;
     const mark = (distance: number) => body.prediction.marks.find((candidate: { distance: number }) => candidate.distance === distance).markMm;
     const ticks = new Map<number, number>();
@@ -165,7 +165,7 @@ describe('GET /api/bows/:bowId/predict/tape.svg', () => {
     const backwards = await agent.get(`/api/bows/${bowId}/predict/tape.svg?buildId=1&from=60&to=20`);
     expect(backwards.body.error.fields).toEqual({ 'query.to': 'To distance must be beyond the from distance' });
     const single = await bowWithTwoBuilds(agent, { chronographed: false });
-    await addSession(agent, single.bowId, await addBuild(agent, single.bowId, { name: 'Third' }, true));
+    await addSightIn(agent, single.bowId, await addBuild(agent, single.bowId, { name: 'Third' }, true));
     const refused = await agent.get(`/api/bows/${single.bowId}/predict/tape.svg?buildId=${single.light.id}`);
     expect(refused.status).toBe(400);
     expect(refused.body.error.message).toMatch(/^Chronograph at least one more build on this bow/);

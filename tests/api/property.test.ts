@@ -32,7 +32,7 @@ import { config } from '@/server/config';
 import { sequelize } from '@/server/db';
 import { levelStepKeys } from '@/shared/level';
 import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
-import { Bow, LevelCheck, Photo, SightSession, Tape, ArrowBuild, BowChange, Share } from '@/server/models';
+import { Bow, LevelCheck, Photo, SightIn, Tape, ArrowBuild, BowChange, Share } from '@/server/models';
 import { bowBody, buildBody, knownMarks } from './bow-fixtures';
 
 // cookie-signature (express-session's own signer) ships no types.
@@ -127,8 +127,8 @@ async function makeRecords(archerCookie: string): Promise<Record<string, number[
   const post = (path: string) => request(`http://127.0.0.1:${port}`).post(path).set(CSRF).set('Cookie', archerCookie);
   const bow = ok(await post('/api/bows').send(bowBody({ nickname: 'Property slider' })), 'bow').bow;
   const build = ok(await post(`/api/bows/${bow.id}/builds`).send(buildBody()), 'build').build;
-  const session = ok(await post(`/api/bows/${bow.id}/sessions`).send({ buildId: build.id, date: '2026-11-02', placeLabel: 'Property range', marks: knownMarks([20, 40, 60]) }), 'session').session;
-  const tape = ok(await post(`/api/sessions/${session.id}/tapes`).send({ fromDistance: 20, toDistance: 60 }), 'tape').tape;
+  const sightIn = ok(await post(`/api/bows/${bow.id}/sight-ins`).send({ buildId: build.id, date: '2026-11-02', placeLabel: 'Property range', marks: knownMarks([20, 40, 60]) }), 'sightIn').sightIn;
+  const tape = ok(await post(`/api/sight-ins/${sightIn.id}/tapes`).send({ fromDistance: 20, toDistance: 60 }), 'tape').tape;
   const check = ok(await post(`/api/bows/${bow.id}/checks`).send({ place: 'bench' }), 'check').check;
   const photo = ok(await post(`/api/checks/${check.id}/steps/setup/photo`).attach('photo', png(), { filename: 'vise.png', contentType: 'image/png' }), 'photo').photo;
   const change = ok(await post(`/api/bows/${bow.id}/changes`).send({ kind: 'string', changedAt: '2026-11-20T10:00:00Z', note: 'New string' }), 'change').change;
@@ -137,7 +137,7 @@ async function makeRecords(archerCookie: string): Promise<Record<string, number[
   return {
     bows: [bow.id],
     builds: [build.id],
-    sessions: [session.id],
+    sightIns: [sightIn.id],
     tapes: [tape.id],
     checks: [check.id],
     changes: [change.id],
@@ -166,7 +166,7 @@ const stringIds = (ids: Record<string, unknown[]>): Ids => Object.fromEntries(Ob
  */
 async function keepFixtures(batch: Case[], answers: Answer[]): Promise<void> {
   for (const who of ['archer', 'tech'] as const) {
-    // A 401, or anything that may have ended the session (sign-out, a password change), gets a new one.
+    // A 401, or anything that may have ended the sign-in session (sign-out, a password change), gets a new one.
     const ended = batch.some((c, i) => c.who === who && (answers[i].status === 401 || (c.method !== 'GET' && answers[i].status < 300 && /^\/api\/(auth|me)\b/.test(c.path))));
     if (ended) fixtures.cookies[who] = await mintCookie(accounts[who].id);
   }
@@ -175,17 +175,17 @@ async function keepFixtures(batch: Case[], answers: Answer[]): Promise<void> {
   if (!recordsTouched || batchesSinceCheck < 8) return; // looked at every eighth batch at most
   batchesSinceCheck = 0;
   recordsTouched = false;
-  const [bow, build, session, tape, check, change, photo, share] = await Promise.all([
+  const [bow, build, sightIn, tape, check, change, photo, share] = await Promise.all([
     Bow.findByPk(Number(fixtures.ids.bows[0])),
     ArrowBuild.findByPk(Number(fixtures.ids.builds[0])),
-    SightSession.findByPk(Number(fixtures.ids.sessions[0])),
+    SightIn.findByPk(Number(fixtures.ids.sightIns[0])),
     Tape.findByPk(Number(fixtures.ids.tapes[0])),
     LevelCheck.findByPk(Number(fixtures.ids.checks[0])),
     BowChange.findByPk(Number(fixtures.ids.changes[0])),
     Photo.findByPk(Number(fixtures.ids.photos[0])),
     Share.findByPk(Number(fixtures.ids.shares[0])),
   ]);
-  if (bow && build && session && tape && check && change && photo && share?.state === 'active') return;
+  if (bow && build && sightIn && tape && check && change && photo && share?.state === 'active') return;
   const t0 = Date.now();
   fixtures.ids = stringIds(await makeRecords(await mintCookie(accounts.archer.id)));
   refreshes.count += 1;
@@ -203,7 +203,7 @@ const junkParam = fc.oneof(
 /** A value for `:name` after the path segment `segment`: a real id of the kind most of the time, or junk. */
 function paramArb(name: string, segment: string): fc.Arbitrary<string> {
   if (name === 'step') return fc.oneof(fc.constantFrom(...levelStepKeys), junkParam);
-  const kind = name === 'bowId' ? 'bows' : name === 'sessionId' ? 'sessions' : name === 'token' ? 'invites' : name === 'index' ? '' : segment;
+  const kind = name === 'bowId' ? 'bows' : name === 'sightInId' ? 'sightIns' : name === 'token' ? 'invites' : name === 'index' ? '' : segment;
   const real = fixtures.ids[kind] ?? [];
   const anyReal = Object.values(fixtures.ids).flat();
   if (name === 'index') return fc.oneof(fc.constantFrom('0', '1', '7'), junkParam);
@@ -225,7 +225,7 @@ const weird = fc.oneof(
 /** Bodies the routes take, to be broken in a field or two (so requests get past the first check). */
 function templates(): Array<Record<string, unknown>> {
   const buildId = Number(fixtures.ids.builds[0] ?? 1);
-  const sessionId = Number(fixtures.ids.sessions[0] ?? 1);
+  const sightInId = Number(fixtures.ids.sightIns[0] ?? 1);
   return [
     bowBody(),
     buildBody(),
@@ -243,8 +243,8 @@ function templates(): Array<Record<string, unknown>> {
     { password: 'wrong password here' },
     { role: 'tech', disabled: false },
     { distanceUnit: 'yd', sight: { radiusMm: 820, peepHeightMm: 110 }, arrow: { massGr: 420, diameterMm: 6.5 }, marks: [{ distance: 20, markMm: 14.9 }, { distance: 60, markMm: 32.6 }] },
-    { buildId, sessionId, speedFps: 280 },
-    { sessionId, note: 'Confirmed' },
+    { buildId, sightInId, speedFps: 280 },
+    { sightInId, note: 'Confirmed' },
     { csv: 'distance,unit,scaleMm\n20,yd,10.5\n' },
     { to: 'gen.erated@example.test', paper: 'a4' },
   ];
@@ -345,7 +345,7 @@ const multipartBody: fc.Arbitrary<Sent> = fc
     return { body, headers: { 'Content-Type': damage === 'no-boundary' ? 'multipart/form-data' : `multipart/form-data; boundary=${boundary}` } };
   });
 
-const queryKeys = ['page', 'q', 'role', 'builds', 'at', 'from', 'to', 'step', 'unit', 'tape', 'angles', 'distances', 'altitudeM', 'temperatureC', 'windowMm', 'dryRun', 'width', 'paper', 'label', 'buildId', 'sessionId', 'mirror', 'orientation', 'speedFps'];
+const queryKeys = ['page', 'q', 'role', 'builds', 'at', 'from', 'to', 'step', 'unit', 'tape', 'angles', 'distances', 'altitudeM', 'temperatureC', 'windowMm', 'dryRun', 'width', 'paper', 'label', 'buildId', 'sightInId', 'mirror', 'orientation', 'speedFps'];
 const queryValue = fc.oneof(
   fc.constantFrom('1', '2', '0', '-1', '4e17', '1e21', '100001', '20,40,60', '-30,0,30', 'yd', 'm', 'true', '1', 'a4', 'tech', '', 'NaN', '%E0%A4%A', '%'),
   fc.integer().map(String),
@@ -483,11 +483,11 @@ it(`answers ${RUNS * BATCH} generated requests over every route with no 5xx and 
   // Nothing half-written by the run's two accounts (and whatever they created).
   const users = fixtures.userIds.join(',');
   const bowsOf = `SELECT id FROM bows WHERE user_id IN (${users})`;
-  const sessionsWithoutMarks = await sequelize.query(
-    `SELECT s.id FROM sight_sessions s WHERE s.bow_id IN (${bowsOf}) AND (NOT EXISTS (SELECT 1 FROM session_marks m WHERE m.session_id = s.id) OR s.fit IS NULL OR JSON_LENGTH(s.fit) = 0)`,
+  const sightInsWithoutMarks = await sequelize.query(
+    `SELECT s.id FROM sight_ins s WHERE s.bow_id IN (${bowsOf}) AND (NOT EXISTS (SELECT 1 FROM sight_in_marks m WHERE m.sight_in_id = s.id) OR s.fit IS NULL OR JSON_LENGTH(s.fit) = 0)`,
     { type: QueryTypes.SELECT },
   );
-  expect(sessionsWithoutMarks).toEqual([]);
+  expect(sightInsWithoutMarks).toEqual([]);
   const checksMissingSteps = await sequelize.query(
     `SELECT c.id, (SELECT COUNT(*) FROM level_steps st WHERE st.check_id = c.id) AS steps FROM level_checks c WHERE c.bow_id IN (${bowsOf}) HAVING steps <> ${levelStepKeys.length}`,
     { type: QueryTypes.SELECT },

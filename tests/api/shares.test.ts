@@ -8,11 +8,11 @@ import crypto from 'node:crypto';
 import request from 'supertest';
 import { config } from '@/server/config';
 import { waitForMail } from '@/server/mail/mail-store';
-import { AuditEntry, Bow, SessionMark, Share, SightSession, Token, User } from '@/server/models';
+import { AuditEntry, Bow, SightInMark, Share, SightIn, Token, User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
 import { seedSharingStep } from '@/server/seed/sharing';
 import { CSRF, closeDb, signedInAgent, testApp, uniqueEmail } from '../helpers/api';
-import { bowWithSession, buildBody, knownMarks, type Agent } from './bow-fixtures';
+import { bowWithSightIn, buildBody, knownMarks, type Agent } from './bow-fixtures';
 
 const app = testApp();
 // Many requests per test on a shared 2-core machine (bcrypt at cost 12, PDF drawing).
@@ -39,10 +39,10 @@ async function invite(archer: Agent, bowId: number, email: string) {
   return { share: res.body.share, mail, token: token! };
 }
 
-/** An archer with a bow, build and session; a technician with an accepted share of that bow. */
+/** An archer with a bow, build and sight-in; a technician with an accepted share of that bow. */
 async function sharedBow(archerName = 'Marit Test', techName = 'Desmond Test') {
   const archer = await signedInAgent(app, { name: archerName });
-  const made = await bowWithSession(archer.agent, [20, 40, 60], {}, { nickname: `Ridge ${archerName}` });
+  const made = await bowWithSightIn(archer.agent, [20, 40, 60], {}, { nickname: `Ridge ${archerName}` });
   const tech = await technician(techName);
   const { share, token } = await invite(archer.agent, made.bow.id, tech.email);
   const accepted = await tech.agent.post('/api/invites/accept').set(CSRF).send({ token });
@@ -53,7 +53,7 @@ async function sharedBow(archerName = 'Marit Test', techName = 'Desmond Test') {
 describe('the invitation', () => {
   it('e-mails a single-use link, stored only as its SHA-256, that a technician accepts', async () => {
     const archer = await signedInAgent(app, { name: 'Ilse Brannock' });
-    const made = await bowWithSession(archer.agent, [20, 40, 60], {}, { nickname: 'Cedar Hollow slider' });
+    const made = await bowWithSightIn(archer.agent, [20, 40, 60], {}, { nickname: 'Cedar Hollow slider' });
     const tech = await technician('Joss Harrow');
 
     const since = Date.now();
@@ -92,11 +92,11 @@ describe('the invitation', () => {
     expect(bowRes.status).toBe(200);
     // The technician is told whose bow it is.
     expect(bowRes.body.bow).toMatchObject({ userId: archer.user.id, ownerName: 'Ilse Brannock' });
-    expect(bowRes.body.bow.sessions).toHaveLength(1);
-    expect((await tech.agent.get(`/api/sessions/${made.session.id}`)).body.session.marks).toHaveLength(3);
+    expect(bowRes.body.bow.sightIns).toHaveLength(1);
+    expect((await tech.agent.get(`/api/sight-ins/${made.sightIn.id}`)).body.sightIn.marks).toHaveLength(3);
     expect((await tech.agent.get(`/api/builds/${made.build.id}`)).status).toBe(200);
     expect((await tech.agent.get(`/api/bows/${made.bow.id}/level`)).status).toBe(200);
-    expect((await tech.agent.get(`/api/sessions/${made.session.id}/sheet.svg`)).status).toBe(200);
+    expect((await tech.agent.get(`/api/sight-ins/${made.sightIn.id}/sheet.svg`)).status).toBe(200);
 
     const shares = await archer.agent.get(`/api/bows/${made.bow.id}/shares`);
     expect(shares.body.shares).toEqual([expect.objectContaining({ id: share.id, state: 'active', tech: { id: tech.user.id, name: 'Joss Harrow', email: tech.email } })]);
@@ -133,7 +133,7 @@ describe('the invitation', () => {
 
   it('lets the invited person create a technician account from the link, with the invited address only', async () => {
     const archer = await signedInAgent(app, { name: 'Wren Calder' });
-    const made = await bowWithSession(archer.agent);
+    const made = await bowWithSightIn(archer.agent);
     const email = uniqueEmail('newtech');
     const { token } = await invite(archer.agent, made.bow.id, email);
 
@@ -158,7 +158,7 @@ describe('the invitation', () => {
 
   it('is accepted only by a technician account with the invited address', async () => {
     const archer = await signedInAgent(app);
-    const made = await bowWithSession(archer.agent);
+    const made = await bowWithSightIn(archer.agent);
     const tech = await technician();
     const { share, token } = await invite(archer.agent, made.bow.id, tech.email);
 
@@ -194,22 +194,22 @@ describe('the invitation', () => {
 });
 
 describe('what a technician may do on a shared bow', () => {
-  it('adds sessions, marks, level checks and changes, each written to the bow’s audit log', async () => {
-    const { archer, tech, bow, build, session } = await sharedBow('Marit Audit', 'Desmond Audit');
+  it('adds sight-ins, marks, level checks and changes, each written to the bow’s audit log', async () => {
+    const { archer, tech, bow, build, sightIn } = await sharedBow('Marit Audit', 'Desmond Audit');
 
-    const newSession = await tech.agent
-      .post(`/api/bows/${bow.id}/sessions`)
+    const newSightIn = await tech.agent
+      .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
       .send({ buildId: build.id, date: '2026-11-20', placeLabel: 'Shop lane', marks: knownMarks([20, 30, 50]) });
-    expect(newSession.status).toBe(201);
+    expect(newSightIn.status).toBe(201);
 
-    const stored = (await tech.agent.get(`/api/sessions/${session.id}`)).body.session.marks.map(
+    const stored = (await tech.agent.get(`/api/sight-ins/${sightIn.id}`)).body.sightIn.marks.map(
       ({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note }),
     );
     const [extra] = knownMarks([50]);
-    const appended = await tech.agent.patch(`/api/sessions/${session.id}`).set(CSRF).send({ marks: [...stored, { ...extra, note: 'shop check' }] });
+    const appended = await tech.agent.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ marks: [...stored, { ...extra, note: 'shop check' }] });
     expect(appended.status).toBe(200);
-    expect(appended.body.session.marks).toHaveLength(4);
+    expect(appended.body.sightIn.marks).toHaveLength(4);
 
     const check = await tech.agent.post(`/api/bows/${bow.id}/checks`).set(CSRF).send({ place: 'bench' });
     expect(check.status).toBe(201);
@@ -225,22 +225,22 @@ describe('what a technician may do on a shared bow', () => {
     const kinds = byTech.map((e: { action: string; recordType: string }) => `${e.action} ${e.recordType}`);
     expect(kinds).toEqual(
       expect.arrayContaining([
-        'created sight-session',
-        'created session-mark',
+        'created sight-in',
+        'created sight-in-mark',
         'created level-check',
         'created level-step',
         'created bow-change',
         'accepted share',
       ]),
     );
-    // Appending a mark rewrites the session's mark set; the log names only the added mark, and no deletion.
+    // Appending a mark rewrites the sight-in's mark set; the log names only the added mark, and no deletion.
     expect(kinds.filter((kind: string) => kind.startsWith('deleted'))).toEqual([]);
-    const markEntries = byTech.filter((e: { recordType: string; summary: string }) => e.recordType === 'session-mark');
+    const markEntries = byTech.filter((e: { recordType: string; summary: string }) => e.recordType === 'sight-in-mark');
     expect(markEntries.map((e: { summary: string }) => e.summary)).toEqual(
-      expect.arrayContaining([`Added a mark: 50 yd at ${extra.scaleMm} mm`, 'Added 3 session marks']),
+      expect.arrayContaining([`Added a mark: 50 yd at ${extra.scaleMm} mm`, 'Added 3 sight-in marks']),
     );
     // A refit alone is not logged as a change of the technician's.
-    expect(byTech.filter((e: { action: string; recordType: string }) => e.action === 'updated' && e.recordType === 'sight-session')).toEqual([]);
+    expect(byTech.filter((e: { action: string; recordType: string }) => e.action === 'updated' && e.recordType === 'sight-in')).toEqual([]);
     const checkEntry = byTech.find((e: { recordType: string }) => e.recordType === 'level-check');
     expect(checkEntry).toMatchObject({ recordId: check.body.check?.id ?? expect.any(Number), bowId: bow.id, actor: { name: 'Desmond Audit', role: 'tech' } });
     const changeEntry = byTech.find((e: { recordType: string }) => e.recordType === 'bow-change');
@@ -255,19 +255,19 @@ describe('what a technician may do on a shared bow', () => {
   });
 
   it('is refused every delete and every change to the archer’s records, and nothing changes', async () => {
-    const { archer, tech, bow, build, session } = await sharedBow();
+    const { archer, tech, bow, build, sightIn } = await sharedBow();
     const change = await archer.agent.post(`/api/bows/${bow.id}/changes`).set(CSRF).send({ kind: 'rest', changedAt: new Date().toISOString(), note: '' });
-    const tape = await archer.agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 });
+    const tape = await archer.agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 });
     expect(tape.status).toBe(201);
-    const marks = (await archer.agent.get(`/api/sessions/${session.id}`)).body.session.marks;
+    const marks = (await archer.agent.get(`/api/sight-ins/${sightIn.id}`)).body.sightIn.marks;
     const auditBefore = await AuditEntry.count({ where: { bowId: bow.id } });
 
     const refused = [
       () => tech.agent.delete(`/api/bows/${bow.id}`).set(CSRF),
       () => tech.agent.patch(`/api/bows/${bow.id}`).set(CSRF).send({ nickname: 'Mine now' }),
-      () => tech.agent.delete(`/api/sessions/${session.id}`).set(CSRF),
-      () => tech.agent.patch(`/api/sessions/${session.id}`).set(CSRF).send({ placeLabel: 'Elsewhere' }),
-      () => tech.agent.patch(`/api/sessions/${session.id}`).set(CSRF).send({ marks: marks.slice(1).map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note })) }),
+      () => tech.agent.delete(`/api/sight-ins/${sightIn.id}`).set(CSRF),
+      () => tech.agent.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ placeLabel: 'Elsewhere' }),
+      () => tech.agent.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ marks: marks.slice(1).map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note })) }),
       () => tech.agent.delete(`/api/builds/${build.id}`).set(CSRF),
       () => tech.agent.patch(`/api/builds/${build.id}`).set(CSRF).send({ name: 'Renamed' }),
       // Adding a build is allowed since issue 15 (tests/api/technician-builds.test.ts); changing one is not.
@@ -285,15 +285,15 @@ describe('what a technician may do on a shared bow', () => {
 
     expect(await Bow.findByPk(bow.id)).not.toBeNull();
     expect((await Bow.findByPk(bow.id))!.nickname).toBe(bow.nickname);
-    expect((await SightSession.findByPk(session.id))!.placeLabel).toBe('Test range');
-    expect(await SessionMark.count({ where: { sessionId: session.id } })).toBe(3);
+    expect((await SightIn.findByPk(sightIn.id))!.placeLabel).toBe('Test range');
+    expect(await SightInMark.count({ where: { sightInId: sightIn.id } })).toBe(3);
     expect(await AuditEntry.count({ where: { bowId: bow.id } })).toBe(auditBefore);
   });
 
   it('sees nothing of the archer’s other bows or of another technician’s clients', async () => {
     const { archer, tech } = await sharedBow();
-    const unshared = await bowWithSession(archer.agent, [20, 40], {}, { nickname: 'Not shared' });
-    for (const path of [`/api/bows/${unshared.bow.id}`, `/api/bows/${unshared.bow.id}/sessions`, `/api/sessions/${unshared.session.id}`, `/api/builds/${unshared.build.id}`, `/api/bows/${unshared.bow.id}/checks`]) {
+    const unshared = await bowWithSightIn(archer.agent, [20, 40], {}, { nickname: 'Not shared' });
+    for (const path of [`/api/bows/${unshared.bow.id}`, `/api/bows/${unshared.bow.id}/sight-ins`, `/api/sight-ins/${unshared.sightIn.id}`, `/api/builds/${unshared.build.id}`, `/api/bows/${unshared.bow.id}/checks`]) {
       expect({ path, status: (await tech.agent.get(path)).status }).toEqual({ path, status: 404 });
     }
     const write = await tech.agent.post(`/api/bows/${unshared.bow.id}/checks`).set(CSRF).send({ place: 'bench' });
@@ -301,7 +301,7 @@ describe('what a technician may do on a shared bow', () => {
 
     const elsewhere = await sharedBow('Other Archer', 'Other Technician');
     expect((await tech.agent.get(`/api/bows/${elsewhere.bow.id}`)).status).toBe(404);
-    expect((await tech.agent.get(`/api/sessions/${elsewhere.session.id}`)).status).toBe(404);
+    expect((await tech.agent.get(`/api/sight-ins/${elsewhere.sightIn.id}`)).status).toBe(404);
     const clients = (await tech.agent.get('/api/clients')).body.clients;
     expect(clients.flatMap((c: { bows: Array<{ id: number }> }) => c.bows.map((b) => b.id))).not.toContain(elsewhere.bow.id);
 

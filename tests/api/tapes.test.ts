@@ -2,9 +2,9 @@ import { DOMParser, type Element as XmlElement } from '@xmldom/xmldom';
 import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
 import { Tape } from '@/server/models';
 import { tapeSchema } from '@/shared/tape';
-import type { StoredFit } from '@/shared/session';
+import type { StoredFit } from '@/shared/sight-in';
 import { fittedReadings } from '@/server/services/fit-service';
-import { bowWithSession, type Agent } from './bow-fixtures';
+import { bowWithSightIn, type Agent } from './bow-fixtures';
 
 const app = testApp();
 afterAll(closeDb);
@@ -55,7 +55,7 @@ function expectTicksMatchFit(ticks: Map<number, number>, fit: StoredFit, { scale
     const drawn = ticks.get(distances[i])! - ticks.get(distances[0])!;
     expect(Math.abs(drawn - sign * scale * (marks[i] - marks[0]))).toBeLessThan(0.01);
   }
-  // The sighted distances against the fitted marks stored with the session itself.
+  // The sighted distances against the fitted marks stored with the sight-in itself.
   const sighted = fit.residuals.filter((residual) => ticks.has(residual.distance));
   expect(sighted.length).toBeGreaterThanOrEqual(2);
   for (const residual of sighted.slice(1)) {
@@ -67,27 +67,27 @@ function expectTicksMatchFit(ticks: Map<number, number>, fit: StoredFit, { scale
 describe('saved tapes', () => {
   it('checks the layout with field messages and saves nothing bad', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent);
-    const res = await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, step: 3, widthMm: 2, paper: 'a3' });
+    const { sightIn } = await bowWithSightIn(agent);
+    const res = await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, step: 3, widthMm: 2, paper: 'a3' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({
       step: 'Tick step must be 0.5, 1, 2.5 or 5',
       widthMm: 'Tape width must be at least 6 mm',
       paper: 'Choose A4 or Letter paper',
     });
-    const backwards = await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 60, toDistance: 20 });
+    const backwards = await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 60, toDistance: 20 });
     expect(backwards.body.error.fields).toEqual({ toDistance: 'To distance must be beyond the from distance' });
-    expect(await Tape.count({ where: { sessionId: session.id } })).toBe(0);
+    expect(await Tape.count({ where: { sightInId: sightIn.id } })).toBe(0);
   });
 
   it('creates, lists, reads, changes and deletes a tape', async () => {
     const { agent } = await signedInAgent(app);
-    const { bow, session } = await bowWithSession(agent);
-    const made = await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 15, toDistance: 80, label: 'Hunt tape' });
+    const { bow, sightIn } = await bowWithSightIn(agent);
+    const made = await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 15, toDistance: 80, label: 'Hunt tape' });
     expect(made.status).toBe(201);
     const tape = tapeSchema.parse(made.body.tape);
-    expect(tape).toMatchObject({ sessionId: session.id, bowId: bow.id, fromDistance: 15, toDistance: 80, step: 1, unit: 'yd', orientation: 'down', widthMm: 12, mirror: false, paper: 'letter', label: 'Hunt tape' });
-    expect((await agent.get(`/api/sessions/${session.id}/tapes`)).body.tapes.map((t: { id: number }) => t.id)).toEqual([tape.id]);
+    expect(tape).toMatchObject({ sightInId: sightIn.id, bowId: bow.id, fromDistance: 15, toDistance: 80, step: 1, unit: 'yd', orientation: 'down', widthMm: 12, mirror: false, paper: 'letter', label: 'Hunt tape' });
+    expect((await agent.get(`/api/sight-ins/${sightIn.id}/tapes`)).body.tapes.map((t: { id: number }) => t.id)).toEqual([tape.id]);
     expect((await agent.get(`/api/tapes/${tape.id}`)).body.tape.label).toBe('Hunt tape');
     const changed = await agent.patch(`/api/tapes/${tape.id}`).set(CSRF).send({ orientation: 'up', mirror: true });
     expect(changed.status).toBe(200);
@@ -99,11 +99,11 @@ describe('saved tapes', () => {
   });
 });
 
-describe('GET /api/sessions/:id/tape.svg', () => {
+describe('GET /api/sight-ins/:id/tape.svg', () => {
   it('draws a true-scale tape whose ticks sit where the stored fit puts the marks (to 0.01 mm)', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent, [20, 40, 60]);
-    const res = await download(agent, `/api/sessions/${session.id}/tape.svg?from=20&to=80&width=14`);
+    const { sightIn } = await bowWithSightIn(agent, [20, 40, 60]);
+    const res = await download(agent, `/api/sight-ins/${sightIn.id}/tape.svg?from=20&to=80&width=14`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?test-slider-2026-11-02-tape\.svg"?$/);
@@ -113,31 +113,31 @@ describe('GET /api/sessions/:id/tape.svg', () => {
     expect(svg.getAttribute('height')).toBe(`${svg.getAttribute('viewBox')!.split(' ')[3]}mm`);
     const ticks = ticksOf(svg);
     expect([...ticks.keys()]).toEqual(Array.from({ length: 61 }, (_, i) => 20 + i));
-    expectTicksMatchFit(ticks, session.fit);
+    expectTicksMatchFit(ticks, sightIn.fit);
   });
 
   it('draws a saved tape’s layout with ?tape=, numbers running up', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent, [20, 40, 60]);
-    const made = await agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, step: 5, orientation: 'up', widthMm: 10 });
-    const res = await download(agent, `/api/sessions/${session.id}/tape.svg?tape=${made.body.tape.id}`);
+    const { sightIn } = await bowWithSightIn(agent, [20, 40, 60]);
+    const made = await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, step: 5, orientation: 'up', widthMm: 10 });
+    const res = await download(agent, `/api/sight-ins/${sightIn.id}/tape.svg?tape=${made.body.tape.id}`);
     expect(res.status).toBe(200);
     const svg = parseSvg(res.body);
     expect(svg.getAttribute('width')).toBe('10mm');
     const ticks = ticksOf(svg);
     expect([...ticks.keys()]).toEqual([20, 25, 30, 35, 40, 45, 50, 55, 60]);
-    expectTicksMatchFit(ticks, session.fit, { orientation: 'up' });
+    expectTicksMatchFit(ticks, sightIn.fit, { orientation: 'up' });
   });
 
-  it('answers bad options with field messages, and another session’s tape with a 404', async () => {
+  it('answers bad options with field messages, and another sight-in’s tape with a 404', async () => {
     const { agent } = await signedInAgent(app);
-    const first = await bowWithSession(agent);
-    const second = await bowWithSession(agent);
-    const bad = await agent.get(`/api/sessions/${first.session.id}/tape.svg?from=abc&step=3`);
+    const first = await bowWithSightIn(agent);
+    const second = await bowWithSightIn(agent);
+    const bad = await agent.get(`/api/sight-ins/${first.sightIn.id}/tape.svg?from=abc&step=3`);
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields).toEqual({ 'query.from': 'From distance must be a number', 'query.step': 'Tick step must be 0.5, 1, 2.5 or 5' });
-    const made = await agent.post(`/api/sessions/${second.session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 });
-    const wrong = await agent.get(`/api/sessions/${first.session.id}/tape.svg?tape=${made.body.tape.id}`);
+    const made = await agent.post(`/api/sight-ins/${second.sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 });
+    const wrong = await agent.get(`/api/sight-ins/${first.sightIn.id}/tape.svg?tape=${made.body.tape.id}`);
     expect(wrong.status).toBe(404);
   });
 });
@@ -145,8 +145,8 @@ describe('GET /api/sessions/:id/tape.svg', () => {
 describe('the print sheet', () => {
   it('sheet.svg holds the 100 % tape and its scale variants, true to the stored fit', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent, [20, 40, 60]);
-    const res = await download(agent, `/api/sessions/${session.id}/sheet.svg?from=20&to=70&paper=a4`);
+    const { sightIn } = await bowWithSightIn(agent, [20, 40, 60]);
+    const res = await download(agent, `/api/sight-ins/${sightIn.id}/sheet.svg?from=20&to=70&paper=a4`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?test-slider-2026-11-02-sheet\.svg"?$/);
@@ -161,15 +161,15 @@ describe('the print sheet', () => {
       if (groups[i].getAttribute('class') === 'tape' && percent !== null) byPercent.set(Number(percent), groups[i]);
     }
     expect([...byPercent.keys()].sort((a, b) => a - b)).toEqual([-2, -1, -0.5, 0, 0.5, 1, 2]);
-    expectTicksMatchFit(ticksOf(byPercent.get(0)!), session.fit);
-    expectTicksMatchFit(ticksOf(byPercent.get(1)!), session.fit, { scale: 1.01 });
-    expectTicksMatchFit(ticksOf(byPercent.get(-2)!), session.fit, { scale: 0.98 });
+    expectTicksMatchFit(ticksOf(byPercent.get(0)!), sightIn.fit);
+    expectTicksMatchFit(ticksOf(byPercent.get(1)!), sightIn.fit, { scale: 1.01 });
+    expectTicksMatchFit(ticksOf(byPercent.get(-2)!), sightIn.fit, { scale: 0.98 });
   });
 
   it('prints the archer’s own words safely: a nickname with markup stays text', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent, [20, 40, 60], {}, { nickname: 'Fox "&" <script>x</script>' });
-    const res = await download(agent, `/api/sessions/${session.id}/sheet.svg?from=20&to=60`);
+    const { sightIn } = await bowWithSightIn(agent, [20, 40, 60], {}, { nickname: 'Fox "&" <script>x</script>' });
+    const res = await download(agent, `/api/sight-ins/${sightIn.id}/sheet.svg?from=20&to=60`);
     expect(res.status).toBe(200);
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?fox-scriptxscript-2026-11-02-sheet\.svg"?$/);
     const svg = parseSvg(res.body);
@@ -179,8 +179,8 @@ describe('the print sheet', () => {
 
   it('sheet.pdf is a PDF of the paper’s size', async () => {
     const { agent } = await signedInAgent(app);
-    const { session } = await bowWithSession(agent, [20, 40, 60]);
-    const letter = await download(agent, `/api/sessions/${session.id}/sheet.pdf?from=20&to=70`);
+    const { sightIn } = await bowWithSightIn(agent, [20, 40, 60]);
+    const letter = await download(agent, `/api/sight-ins/${sightIn.id}/sheet.pdf?from=20&to=70`);
     expect(letter.status).toBe(200);
     expect(letter.headers['content-type']).toBe('application/pdf');
     expect(letter.headers['content-disposition']).toMatch(/^attachment; filename="?test-slider-2026-11-02-sheet\.pdf"?$/);
@@ -188,7 +188,7 @@ describe('the print sheet', () => {
     // US Letter is 8.5 × 11 in = 612 × 792 pt (PDF user space: 1/72 in per unit, ISO 32000-1 §8.3.2.3, section number from memory).
     expect(mediaBox(letter.body)).toEqual([0, 0, 612, 792].map((value) => expect.closeTo(value, 2)));
 
-    const a4 = await download(agent, `/api/sessions/${session.id}/sheet.pdf?from=20&to=70&paper=a4`);
+    const a4 = await download(agent, `/api/sight-ins/${sightIn.id}/sheet.pdf?from=20&to=70&paper=a4`);
     // A4 is 210 × 297 mm (ISO 216) = 595.28 × 841.89 pt.
     expect(mediaBox(a4.body)).toEqual([0, 0, (210 / 25.4) * 72, (297 / 25.4) * 72].map((value) => expect.closeTo(value, 2)));
   });
@@ -204,27 +204,27 @@ function mediaBox(pdf: Buffer): number[] {
 describe('ownership', () => {
   it('gives another account a 404 on every tape route and download, and changes nothing', async () => {
     const owner = await signedInAgent(app);
-    const { session } = await bowWithSession(owner.agent);
-    const made = await owner.agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, label: 'Owner tape' });
+    const { sightIn } = await bowWithSightIn(owner.agent);
+    const made = await owner.agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, label: 'Owner tape' });
     const tapeId = made.body.tape.id;
     const stranger = (await signedInAgent(app)).agent;
     const responses = [
-      [await stranger.get(`/api/sessions/${session.id}/tapes`), 'That sight-in session was not found.'],
-      [await stranger.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 }), 'That sight-in session was not found.'],
+      [await stranger.get(`/api/sight-ins/${sightIn.id}/tapes`), 'That sight-in was not found.'],
+      [await stranger.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 }), 'That sight-in was not found.'],
       [await stranger.get(`/api/tapes/${tapeId}`), 'That tape was not found.'],
       [await stranger.patch(`/api/tapes/${tapeId}`).set(CSRF).send({ label: 'Taken' }), 'That tape was not found.'],
       [await stranger.delete(`/api/tapes/${tapeId}`).set(CSRF), 'That tape was not found.'],
-      [await stranger.get(`/api/sessions/${session.id}/tape.svg`), 'That sight-in session was not found.'],
-      [await stranger.get(`/api/sessions/${session.id}/tape.svg?tape=${tapeId}`), 'That sight-in session was not found.'],
-      [await stranger.get(`/api/sessions/${session.id}/sheet.svg`), 'That sight-in session was not found.'],
-      [await stranger.get(`/api/sessions/${session.id}/sheet.pdf`), 'That sight-in session was not found.'],
+      [await stranger.get(`/api/sight-ins/${sightIn.id}/tape.svg`), 'That sight-in was not found.'],
+      [await stranger.get(`/api/sight-ins/${sightIn.id}/tape.svg?tape=${tapeId}`), 'That sight-in was not found.'],
+      [await stranger.get(`/api/sight-ins/${sightIn.id}/sheet.svg`), 'That sight-in was not found.'],
+      [await stranger.get(`/api/sight-ins/${sightIn.id}/sheet.pdf`), 'That sight-in was not found.'],
     ] as const;
     for (const [res, message] of responses) {
       expect(res.status).toBe(404);
       expect(res.headers['content-type']).toMatch(/^application\/json/);
       expect(res.body.error).toEqual({ code: 'not_found', message });
     }
-    expect(await Tape.count({ where: { sessionId: session.id } })).toBe(1);
+    expect(await Tape.count({ where: { sightInId: sightIn.id } })).toBe(1);
     expect((await Tape.findByPk(tapeId))!.label).toBe('Owner tape');
   });
 });

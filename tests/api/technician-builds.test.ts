@@ -1,17 +1,17 @@
 import { CSRF, closeDb, signedInAgent, testApp } from '@/tests/helpers/api';
-import { bowBody, bowWithSession, buildBody, knownMarks } from '@/tests/api/bow-fixtures';
+import { bowBody, bowWithSightIn, buildBody, knownMarks } from '@/tests/api/bow-fixtures';
 import { AuditEntry, Share, User } from '@/server/models';
 
 const app = testApp();
 
 afterAll(closeDb);
 
-/** An archer with a bow (one build, one session) shared with a technician through an active share. */
+/** An archer with a bow (one build, one sight-in) shared with a technician through an active share. */
 async function sharedBow() {
   const archer = await signedInAgent(app, { name: 'Ilse Brackenridge' });
   const tech = await signedInAgent(app, { name: 'Oren Hallowfield' });
   await User.update({ role: 'tech' }, { where: { id: tech.user.id } });
-  const made = await bowWithSession(archer.agent, [20, 40, 60]);
+  const made = await bowWithSightIn(archer.agent, [20, 40, 60]);
   const share = await Share.create({
     bowId: made.bow.id,
     archerId: archer.user.id,
@@ -83,35 +83,35 @@ describe('a technician adds an arrow build to a shared bow', () => {
 });
 
 describe('who added each mark and sight-in', () => {
-  it('names the technician on the marks they add, and keeps it when the archer saves the session again', async () => {
-    const { archer, tech, session, bow } = await sharedBow();
-    expect(session.addedBy).toEqual({ id: archer.user.id, name: 'Ilse Brackenridge' });
-    expect(session.marks.every((mark: { addedBy: unknown }) => (mark.addedBy as { id: number }).id === archer.user.id)).toBe(true);
+  it('names the technician on the marks they add, and keeps it when the archer saves the sight-in again', async () => {
+    const { archer, tech, sightIn, bow } = await sharedBow();
+    expect(sightIn.addedBy).toEqual({ id: archer.user.id, name: 'Ilse Brackenridge' });
+    expect(sightIn.marks.every((mark: { addedBy: unknown }) => (mark.addedBy as { id: number }).id === archer.user.id)).toBe(true);
 
-    const stored = session.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note }));
+    const stored = sightIn.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note }));
     const extra = knownMarks([50])[0];
-    const appended = await tech.agent.patch(`/api/sessions/${session.id}`).set(CSRF).send({ marks: [...stored, extra] });
+    const appended = await tech.agent.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ marks: [...stored, extra] });
     expect(appended.status).toBe(200);
-    const techMark = appended.body.session.marks.find((mark: { distance: number }) => mark.distance === 50);
+    const techMark = appended.body.sightIn.marks.find((mark: { distance: number }) => mark.distance === 50);
     expect(techMark.addedBy).toEqual({ id: tech.user.id, name: 'Oren Hallowfield' });
 
-    // The archer edits the note of a session and saves all marks back: each keeps who added it.
+    // The archer edits the note of a sight-in and saves all marks back: each keeps who added it.
     const again = await archer.agent
-      .patch(`/api/sessions/${session.id}`)
+      .patch(`/api/sight-ins/${sightIn.id}`)
       .set(CSRF)
-      .send({ notes: 'Windy', marks: appended.body.session.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note })) });
+      .send({ notes: 'Windy', marks: appended.body.sightIn.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note })) });
     expect(again.status).toBe(200);
-    const byDistance = Object.fromEntries(again.body.session.marks.map((mark: { distance: number; addedBy: { name: string } }) => [mark.distance, mark.addedBy.name]));
+    const byDistance = Object.fromEntries(again.body.sightIn.marks.map((mark: { distance: number; addedBy: { name: string } }) => [mark.distance, mark.addedBy.name]));
     expect(byDistance).toEqual({ 20: 'Ilse Brackenridge', 40: 'Ilse Brackenridge', 60: 'Ilse Brackenridge', 50: 'Oren Hallowfield' });
 
     // A sight-in the technician adds is theirs in the bow's list.
-    const techSession = await tech.agent
-      .post(`/api/bows/${bow.id}/sessions`)
+    const techSightIn = await tech.agent
+      .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
-      .send({ buildId: session.buildId, date: '2026-11-30', placeLabel: 'Shop lane', marks: knownMarks([20, 30]) });
-    expect(techSession.status).toBe(201);
-    const list = (await archer.agent.get(`/api/bows/${bow.id}/sessions`)).body.sessions;
-    expect(list.find((s: { id: number }) => s.id === techSession.body.session.id).addedBy.name).toBe('Oren Hallowfield');
+      .send({ buildId: sightIn.buildId, date: '2026-11-30', placeLabel: 'Shop lane', marks: knownMarks([20, 30]) });
+    expect(techSightIn.status).toBe(201);
+    const list = (await archer.agent.get(`/api/bows/${bow.id}/sight-ins`)).body.sightIns;
+    expect(list.find((s: { id: number }) => s.id === techSightIn.body.sightIn.id).addedBy.name).toBe('Oren Hallowfield');
   });
 });
 

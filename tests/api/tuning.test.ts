@@ -1,5 +1,5 @@
 import { CSRF, closeDb, signedInAgent, testApp } from '@/tests/helpers/api';
-import { bowWithBuild, bowWithSession } from './bow-fixtures';
+import { bowWithBuild, bowWithSightIn } from './bow-fixtures';
 import { AuditEntry, Bow, SetupEntry, Share, User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
 import { seedLevel } from '@/server/seed/level';
@@ -99,8 +99,8 @@ describe('set-up entries', () => {
 describe('change → readiness (the staleness rule on the bow and the Bench)', () => {
   test('a rest change after the sight-in with a tape asks to confirm at the range; a new sight-in clears it', async () => {
     const archer = await signedInAgent(app);
-    const { bow, build, session } = await bowWithSession(archer.agent, [20, 40, 60], { date: '2026-11-02' });
-    const tape = await archer.agent.post(`/api/sessions/${session.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, step: 5, unit: 'yd', widthMm: 12 });
+    const { bow, build, sightIn } = await bowWithSightIn(archer.agent, [20, 40, 60], { date: '2026-11-02' });
+    const tape = await archer.agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, step: 5, unit: 'yd', widthMm: 12 });
     expect(tape.status).toBe(201);
     let bench = await archer.agent.get('/api/bows');
     expect(bench.body.bows.find((b: { id: number }) => b.id === bow.id).readiness.confirm).toBeNull();
@@ -109,19 +109,19 @@ describe('change → readiness (the staleness rule on the bow and the Bench)', (
     expect(change.status).toBe(201);
     bench = await archer.agent.get('/api/bows');
     const confirm = bench.body.bows.find((b: { id: number }) => b.id === bow.id).readiness.confirm;
-    expect(confirm).toMatchObject({ sessionId: session.id, tapeId: tape.body.tape.id });
+    expect(confirm).toMatchObject({ sightInId: sightIn.id, tapeId: tape.body.tape.id });
     expect(confirm.reason).toMatch(/^Tape: Rest changed on .*, after this sight-in: confirm the marks at the range\.$/);
     // The level check is due as before.
     expect(change.body.level.state).not.toBe('verified');
     // The sight-in screen's view.
-    const stale = await archer.agent.get(`/api/sessions/${session.id}/staleness`);
+    const stale = await archer.agent.get(`/api/sight-ins/${sightIn.id}/staleness`);
     expect(stale.body).toMatchObject({ state: 'confirm', canConfirm: true });
 
     // A new sight-in of the same build clears it.
     const newer = await archer.agent
-      .post(`/api/bows/${bow.id}/sessions`)
+      .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
-      .send({ buildId: build.id, date: today(), placeLabel: 'Test range', marks: session.marks.map((m: Record<string, unknown>) => ({ distance: m.distance, unit: m.unit, scaleMm: m.scaleMm, arrowsShot: 3, note: '' })) });
+      .send({ buildId: build.id, date: today(), placeLabel: 'Test range', marks: sightIn.marks.map((m: Record<string, unknown>) => ({ distance: m.distance, unit: m.unit, scaleMm: m.scaleMm, arrowsShot: 3, note: '' })) });
     expect(newer.status).toBe(201);
     bench = await archer.agent.get('/api/bows');
     expect(bench.body.bows.find((b: { id: number }) => b.id === bow.id).readiness.confirm).toBeNull();
@@ -129,7 +129,7 @@ describe('change → readiness (the staleness rule on the bow and the Bench)', (
 
   test('editing the peep height in the bow form is a change; confirming at the range clears it', async () => {
     const archer = await signedInAgent(app);
-    const { bow, session } = await bowWithSession(archer.agent, [20, 40, 60], { date: '2026-11-02' });
+    const { bow, sightIn } = await bowWithSightIn(archer.agent, [20, 40, 60], { date: '2026-11-02' });
     const edit = await archer.agent.patch(`/api/bows/${bow.id}`).set(CSRF).send({ peepHeightMm: 115 });
     expect(edit.status).toBe(200);
     const detail = await archer.agent.get(`/api/bows/${bow.id}`);
@@ -141,24 +141,24 @@ describe('change → readiness (the staleness rule on the bow and the Bench)', (
     expect((await archer.agent.get(`/api/bows/${bow.id}/changes`)).body.changes).toHaveLength(1);
 
     // The printed sheet's header says so too.
-    const staleSheet = await archer.agent.get(`/api/sessions/${session.id}/sheet.svg`).buffer(true);
+    const staleSheet = await archer.agent.get(`/api/sight-ins/${sightIn.id}/sheet.svg`).buffer(true);
     expect(staleSheet.status).toBe(200);
     expect(String(staleSheet.body)).toContain('data-caution="header-note"');
-    const confirmed = await archer.agent.post(`/api/sessions/${session.id}/confirm-range`).set(CSRF).send({ note: '20 and 60 held' });
+    const confirmed = await archer.agent.post(`/api/sight-ins/${sightIn.id}/confirm-range`).set(CSRF).send({ note: '20 and 60 held' });
     expect(confirmed.status).toBe(201);
     expect(confirmed.body).toMatchObject({ state: 'current', confirmations: [{ note: '20 and 60 held' }] });
     expect((await archer.agent.get(`/api/bows/${bow.id}`)).body.bow.readiness.confirm).toBeNull();
-    const sheet = await archer.agent.get(`/api/sessions/${session.id}/sheet.svg`).buffer(true);
+    const sheet = await archer.agent.get(`/api/sight-ins/${sightIn.id}/sheet.svg`).buffer(true);
     expect(sheet.status).toBe(200);
     expect(String(sheet.body)).not.toContain('data-caution="header-note"');
   });
 
   test('a technician’s logged string change marks it too', async () => {
     const archer = await signedInAgent(app);
-    const { bow, session } = await bowWithSession(archer.agent, [20, 40, 60], { date: '2026-11-02' });
+    const { bow, sightIn } = await bowWithSightIn(archer.agent, [20, 40, 60], { date: '2026-11-02' });
     const tech = await shareWith(archer, bow.id);
     expect((await tech.agent.post(`/api/bows/${bow.id}/changes`).set(CSRF).send({ kind: 'string', changedAt: new Date().toISOString() })).status).toBe(201);
-    const stale = await archer.agent.get(`/api/sessions/${session.id}/staleness`);
+    const stale = await archer.agent.get(`/api/sight-ins/${sightIn.id}/staleness`);
     expect(stale.body.reason).toMatch(/^New string on /);
   });
 });
@@ -212,7 +212,7 @@ describe('paper tuning', () => {
 describe('arrow sets', () => {
   test('a set of six with one heavy arrow; a flier counted per arrow; validation names the arrow', async () => {
     const archer = await signedInAgent(app);
-    const { bow, build, session } = await bowWithSession(archer.agent, [20, 40, 60]);
+    const { bow, build, sightIn } = await bowWithSightIn(archer.agent, [20, 40, 60]);
     const arrows = [500.2, 499.8, 500.5, 506.0, 499.9, 500.1].map((weightGr, index) => ({ number: index + 1, weightGr, spinKind: 'thou', runout: 2 }));
     const dup = await archer.agent.post(`/api/builds/${build.id}/arrow-sets`).set(CSRF).send({ name: 'Hunting six', arrows: [...arrows, { number: 2, weightGr: 500 }] });
     expect(dup.status).toBe(400);
@@ -225,15 +225,15 @@ describe('arrow sets', () => {
     expect(made.body.set.arrows).toHaveLength(6);
     expect(made.body.set.buildTotalGr).toEqual(expect.any(Number));
     const four = made.body.set.arrows.find((a: { number: number }) => a.number === 4);
-    const flier = await archer.agent.post(`/api/arrows/${four.id}/fliers`).set(CSRF).send({ sessionId: session.id });
+    const flier = await archer.agent.post(`/api/arrows/${four.id}/fliers`).set(CSRF).send({ sightInId: sightIn.id });
     expect(flier.status).toBe(201);
     expect(flier.body.set.arrows.find((a: { number: number }) => a.number === 4).fliers).toHaveLength(1);
-    expect((await archer.agent.post(`/api/arrows/${four.id}/fliers`).set(CSRF).send({ sessionId: session.id })).status).toBe(409);
+    expect((await archer.agent.post(`/api/arrows/${four.id}/fliers`).set(CSRF).send({ sightInId: sightIn.id })).status).toBe(409);
     const retired = await archer.agent.patch(`/api/arrows/${four.id}`).set(CSRF).send({ status: 'retired' });
     expect(retired.body.set.arrows.find((a: { number: number }) => a.number === 4).status).toBe('retired');
     // Another bow's sight-in is refused.
-    const other = await bowWithSession(archer.agent, [20, 40]);
-    expect((await archer.agent.post(`/api/arrows/${four.id}/fliers`).set(CSRF).send({ sessionId: other.session.id })).status).toBe(400);
+    const other = await bowWithSightIn(archer.agent, [20, 40]);
+    expect((await archer.agent.post(`/api/arrows/${four.id}/fliers`).set(CSRF).send({ sightInId: other.sightIn.id })).status).toBe(400);
     const json = await archer.agent.get(`/api/bows/${bow.id}/export.json`);
     expect(json.body.arrowSets[0].arrows).toHaveLength(6);
   });

@@ -98,13 +98,13 @@ export async function measureApiReads({ seconds = Number(process.env.BENCH_API_S
     const base = `http://127.0.0.1:${started.port}`;
     const cookie = await signIn(base);
     const headers = { cookie };
-    const bows = (await (await fetch(`${base}/api/bows`, { headers })).json()) as { bows: Array<{ id: number; readiness: { sessionCount: number } }> };
+    const bows = (await (await fetch(`${base}/api/bows`, { headers })).json()) as { bows: Array<{ id: number; readiness: { sightInCount: number } }> };
     if (!bows.bows?.length) throw new Error('the demo archer has no bows to read');
-    const busiest = [...bows.bows].sort((a, b) => b.readiness.sessionCount - a.readiness.sessionCount)[0];
+    const busiest = [...bows.bows].sort((a, b) => b.readiness.sightInCount - a.readiness.sightInCount)[0];
     const targets = [
       { name: 'GET /api/me', path: '/api/me' },
       { name: `GET /api/bows (${bows.bows.length} bows)`, path: '/api/bows' },
-      { name: `GET /api/bows/:id (${busiest.readiness.sessionCount} sight-ins)`, path: `/api/bows/${busiest.id}` },
+      { name: `GET /api/bows/:id (${busiest.readiness.sightInCount} sight-ins)`, path: `/api/bows/${busiest.id}` },
     ];
     // Rounds interleave the three endpoints, so a neighbour's burst of CPU on a shared
     // machine lands on all three alike; the ratios are taken per round, then the median.

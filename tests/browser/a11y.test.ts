@@ -35,15 +35,15 @@ it('finds no serious or critical axe-core violation on the main screens at 390×
   await seedLevel(user);
   const bows = (await (await context.request.get(`${stack.baseUrl}/api/bows`)).json()).bows as { id: number; nickname: string }[];
   const bowId = bows.find((bow) => bow.nickname === 'Timberline slider')!.id;
-  const detail = (await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow as { sessions: { id: number }[] };
-  const sessionId = detail.sessions[0].id;
+  const detail = (await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow as { sightIns: { id: number }[] };
+  const sightInId = detail.sightIns[0].id;
 
   const screens: Array<[string, string, (page: Page) => Promise<unknown>]> = [
     ['bench', '/', (p) => p.getByTestId(`bow-card-${bowId}`).waitFor()],
     ['bow', `/bows/${bowId}`, (p) => p.getByTestId('open-compare').waitFor()],
-    ['sight-in', `/sessions/${sessionId}`, (p) => p.getByTestId('fit-chart-marks').waitFor()],
-    ['tape', `/sessions/${sessionId}/tape`, (p) => p.getByTestId('tape-preview').waitFor()],
-    ['field-card', `/sessions/${sessionId}/field-card`, (p) => p.getByTestId('field-card-table').waitFor()],
+    ['sight-in', `/sight-ins/${sightInId}`, (p) => p.getByTestId('fit-chart-marks').waitFor()],
+    ['tape', `/sight-ins/${sightInId}/tape`, (p) => p.getByTestId('tape-preview').waitFor()],
+    ['field-card', `/sight-ins/${sightInId}/field-card`, (p) => p.getByTestId('field-card-table').waitFor()],
     ['compare', `/bows/${bowId}/compare`, (p) => p.getByTestId('compare-chart-img').waitFor()],
     ['level', `/bows/${bowId}/level`, (p) => p.getByText(/Last check/).first().waitFor()],
     ['account', '/account', (p) => p.getByText(email).waitFor()],
@@ -58,12 +58,12 @@ it('finds no serious or critical axe-core violation on the main screens at 390×
   }
 
   // The charts state what they show in words, not only as a picture.
-  await page.goto(`/sessions/${sessionId}`);
+  await page.goto(`/sight-ins/${sightInId}`);
   const label = await page.getByTestId('fit-chart-marks').getAttribute('aria-label');
   expect(label).toMatch(/^Chart: Reading against distance\. Your marks: \d+ yd at [\d.]+ mm/);
   expect(label).toMatch(/The fitted curve: /);
   // The field card's table scrolls sideways and is reachable by keyboard, with a name.
-  await page.goto(`/sessions/${sessionId}/field-card`);
+  await page.goto(`/sight-ins/${sightInId}/field-card`);
   const scroller = page.getByLabel('Marks for slopes (scrolls sideways)');
   expect(await scroller.getAttribute('tabindex')).toBe('0');
 

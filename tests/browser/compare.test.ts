@@ -16,14 +16,14 @@ const stack = stackForFile();
 const screenshot = (page: Page, name: string) => fullScreenshot(page, name, { maxHeightPx: 9000, settleMs: 300, restoreMs: 150 });
 
 /** A fresh archer with the demo scenario's bows, builds and sight-ins (invented), signed in in `context`. */
-async function archerWithDemoBows(context: BrowserContext): Promise<{ bowId: number; basinSessionId: number }> {
+async function archerWithDemoBows(context: BrowserContext): Promise<{ bowId: number; basinSightInId: number }> {
   const { email } = await signUpInContext(context, stack.baseUrl, 'Compare Archer');
   const user = await User.findOne({ where: { email } });
   await seedBows(user!);
   const bows = (await (await context.request.get(`${stack.baseUrl}/api/bows`)).json()).bows as { id: number; nickname: string }[];
   const bowId = bows.find((bow) => bow.nickname === 'Timberline slider')!.id;
-  const detail = (await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow as { sessions: { id: number; placeLabel: string }[] };
-  return { bowId, basinSessionId: detail.sessions.find((session) => session.placeLabel.startsWith('Greywether'))!.id };
+  const detail = (await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow as { sightIns: { id: number; placeLabel: string }[] };
+  return { bowId, basinSightInId: detail.sightIns.find((sightIn) => sightIn.placeLabel.startsWith('Greywether'))!.id };
 }
 
 /** The id of the first build button on the compare screen. */
@@ -45,7 +45,7 @@ for (const size of [PHONE, DESKTOP]) {
         (window as unknown as { printCalls: number }).printCalls += 1;
       };
     });
-    const { bowId, basinSessionId } = await archerWithDemoBows(context);
+    const { bowId, basinSightInId } = await archerWithDemoBows(context);
 
     // From the bow screen to the comparison: the two sighted builds are chosen already.
     await page.goto(`/bows/${bowId}`);
@@ -89,7 +89,7 @@ for (const size of [PHONE, DESKTOP]) {
     await screenshot(page, 'predict-build');
 
     // The field card of the basin sight-in, for 2,700 m.
-    await page.goto(`/sessions/${basinSessionId}`);
+    await page.goto(`/sight-ins/${basinSightInId}`);
     await page.getByTestId('open-field-card').click();
     await page.getByTestId('field-card-table').waitFor();
     await page.getByTestId('field-card-altitude').fill('2700');
@@ -109,7 +109,7 @@ for (const size of [PHONE, DESKTOP]) {
     expect(await page.locator('.pw-card-print img').isVisible()).toBe(true);
     await viewportShot(page, 'field-card-print');
     await page.emulateMedia({ media: 'screen' });
-    const pdf = await context.request.get(`${stack.baseUrl}/api/sessions/${basinSessionId}/field-card.pdf?altitudeM=2700`);
+    const pdf = await context.request.get(`${stack.baseUrl}/api/sight-ins/${basinSightInId}/field-card.pdf?altitudeM=2700`);
     expect(pdf.status()).toBe(200);
 
     expect(pageErrors(page)).toEqual([]);

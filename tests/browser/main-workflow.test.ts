@@ -3,7 +3,7 @@
  * sight radius and peep height, add an arrow build (total grains and FOC shown
  * as they type), start a sight-in with marks at 20 and 60 yd, see the
  * predicted marks for 10–100 yd and the chart, save, open the tape, download
- * its SVG (ticks checked against the session's stored marks) and open the
+ * its SVG (ticks checked against the sight-in's stored marks) and open the
  * print sheet. Screenshots of every screen at 390×844 and 1280×800.
  */
 import fs from 'node:fs';
@@ -97,9 +97,9 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByText('Ash heavy 414').first().waitFor();
 
     // Start a sight-in and enter the marks.
-    await page.getByTestId('start-session').click();
+    await page.getByTestId('start-sight-in').click();
     await page.getByTestId('mark-distance-0').waitFor();
-    await page.getByTestId('session-unit').getByRole('radio', { name: 'Yards' }).click();
+    await page.getByTestId('sight-in-unit').getByRole('radio', { name: 'Yards' }).click();
     await page.getByLabel('Place').fill('Kestrel Hollow range');
     await page.getByTestId('mark-distance-0').fill(NEAR.distance);
     await page.getByTestId('mark-reading-0').fill(NEAR.reading);
@@ -108,12 +108,12 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByTestId('predicted-marks').waitFor();
     for (let distance = 10; distance <= 100; distance += 10) await page.getByTestId(`predicted-${distance}`).waitFor();
     await page.getByTestId('fit-chart').locator('svg').first().waitFor();
-    await screenshot(page, 'session-new');
-    await page.getByTestId('session-save').click();
-    await page.waitForURL(/\/sessions\/\d+$/);
-    const sessionId = Number(new URL(page.url()).pathname.split('/').pop());
+    await screenshot(page, 'sight-in-new');
+    await page.getByTestId('sight-in-save').click();
+    await page.waitForURL(/\/sight-ins\/\d+$/);
+    const sightInId = Number(new URL(page.url()).pathname.split('/').pop());
     await page.getByTestId('open-tape').waitFor();
-    await screenshot(page, 'session-saved');
+    await screenshot(page, 'sight-in-saved');
 
     // The bow now lists the sight-in.
     await page.goto(`/bows/${bowId}`);
@@ -121,9 +121,9 @@ for (const size of [PHONE, DESKTOP]) {
     await screenshot(page, 'bow');
 
     // The tape.
-    await page.goto(`/sessions/${sessionId}`);
+    await page.goto(`/sight-ins/${sightInId}`);
     await page.getByTestId('open-tape').click();
-    await page.waitForURL(new RegExp(`/sessions/${sessionId}/tape`));
+    await page.waitForURL(new RegExp(`/sight-ins/${sightInId}/tape`));
     await page.getByTestId('tape-preview').waitFor();
     await page.getByTestId('tape-caution').getByText(/Print at actual size \(100 %, no fit-to-page\)/).waitFor();
     await screenshot(page, 'tape');
@@ -141,10 +141,10 @@ for (const size of [PHONE, DESKTOP]) {
       if (!tick) throw new Error(`no tick at ${distance}`);
       return Number(tick.getAttribute('y1'));
     };
-    // The session as the API stores it: with two marks the fit passes through both, so the
+    // The sight-in as the API stores it: with two marks the fit passes through both, so the
     // 20 → 60 yd tick spacing equals the difference of the stored readings (tape at 100 %).
-    const stored = await context.request.get(`${stack.baseUrl}/api/sessions/${sessionId}`);
-    const marks = (await stored.json()).session.marks as { distance: number; scaleMm: number }[];
+    const stored = await context.request.get(`${stack.baseUrl}/api/sight-ins/${sightInId}`);
+    const marks = (await stored.json()).sightIn.marks as { distance: number; scaleMm: number }[];
     const near = marks.find((mark) => mark.distance === 20)!;
     const far = marks.find((mark) => mark.distance === 60)!;
     expect(Math.abs(offsetOf(60) - offsetOf(20) - (far.scaleMm - near.scaleMm))).toBeLessThan(0.01);
@@ -267,7 +267,7 @@ it('shows a fixed multi-pin sight the gap of each pin beside its tape', async ()
     pinDistanceUnit: 'yd',
   });
   const { build } = await post(`/api/bows/${bow.id}/builds`, { name: 'Birch 414', grainsPerInch: 9.5, cutLengthMm: 723.9, diameterMm: 6.5, pointGr: 100, insertGr: 16, nockGr: 9, vaneWeightGr: 6 });
-  const { session } = await post(`/api/bows/${bow.id}/sessions`, {
+  const { sightIn } = await post(`/api/bows/${bow.id}/sight-ins`, {
     buildId: build.id,
     date: '2026-11-28',
     marks: [
@@ -276,7 +276,7 @@ it('shows a fixed multi-pin sight the gap of each pin beside its tape', async ()
     ],
   });
 
-  await page.goto(`/sessions/${session.id}/tape`);
+  await page.goto(`/sight-ins/${sightIn.id}/tape`);
   const table = page.getByTestId('pin-gaps');
   await table.waitFor();
   // Two marks and no chronograph: the fit passes through both, so the 60 yd pin sits

@@ -30,9 +30,9 @@ for (const size of [PHONE, DESKTOP]) {
     const { context, page } = await newPage(stack, size);
     await signUpInContext(context, stack.baseUrl, 'Odile Fenwick');
     const bowId = await bowWithBuild(context);
-    await page.goto(`/bows/${bowId}/sessions/new`);
+    await page.goto(`/bows/${bowId}/sight-ins/new`);
     await page.getByTestId('mark-distance-0').waitFor({ timeout: 20_000 });
-    await page.getByTestId('session-unit').getByRole('radio', { name: 'Yards' }).click();
+    await page.getByTestId('sight-in-unit').getByRole('radio', { name: 'Yards' }).click();
 
     for (const [index, mark] of fiveMarks.entries()) {
       if ((await page.getByTestId(`mark-distance-${index}`).count()) === 0) await page.getByTestId('mark-add').click();
@@ -90,12 +90,12 @@ for (const size of [PHONE, DESKTOP]) {
     expect(await page.getByTestId('mark-problem-1').count()).toBe(0);
     await page.getByTestId('fit-advice-left-out').getByText(/The fit leaves out mark 3/).waitFor();
     expect(await page.locator('[data-testid^="fit-advice-chronograph"], [data-testid^="fit-advice-drag"], [data-testid^="fit-advice-sight-radius"]').count()).toBe(0);
-    await page.getByTestId('session-save').click();
+    await page.getByTestId('sight-in-save').click();
     await page.getByTestId('falling-confirm').waitFor();
     await shot(page, 'marks-falling');
     // Nothing was saved before the archer confirms.
     const bow = await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json();
-    expect(bow.bow.sessions).toHaveLength(0);
+    expect(bow.bow.sightIns).toHaveLength(0);
     expect(pageErrors(page)).toEqual([]);
     await context.close();
   });

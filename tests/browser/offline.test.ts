@@ -41,23 +41,23 @@ async function api<T = Record<string, unknown>>(context: BrowserContext, method:
 }
 
 /** A bow with a build (and, if asked, a sight-in with marks at 20, 40 and 60 yd), made through the API as the page's account. */
-async function bowWithBuild(context: BrowserContext, nickname: string, withSession: boolean) {
+async function bowWithBuild(context: BrowserContext, nickname: string, withSightIn: boolean) {
   const bow = await api<{ bow: { id: number } }>(context, 'POST', '/api/bows', bowBody({ nickname }));
   if (bow.status !== 201) throw new Error(`bow ${bow.status}`);
   const build = await api<{ build: { id: number } }>(context, 'POST', `/api/bows/${bow.body.bow.id}/builds`, buildBody({ name: `${nickname} arrows` }));
   if (build.status !== 201) throw new Error(`build ${build.status}`);
-  let sessionId = 0;
-  if (withSession) {
-    const session = await api<{ session: { id: number } }>(context, 'POST', `/api/bows/${bow.body.bow.id}/sessions`, {
+  let sightInId = 0;
+  if (withSightIn) {
+    const sightIn = await api<{ sightIn: { id: number } }>(context, 'POST', `/api/bows/${bow.body.bow.id}/sight-ins`, {
       buildId: build.body.build.id,
       date: '2026-11-02',
       placeLabel: 'Sorrel Flats range',
       marks: knownMarks([20, 40, 60]),
     });
-    if (session.status !== 201) throw new Error(`session ${session.status}`);
-    sessionId = session.body.session.id;
+    if (sightIn.status !== 201) throw new Error(`sight-in ${sightIn.status}`);
+    sightInId = sightIn.body.sightIn.id;
   }
-  return { bowId: bow.body.bow.id, buildId: build.body.build.id, sessionId };
+  return { bowId: bow.body.bow.id, buildId: build.body.build.id, sightInId };
 }
 
 /** Waits until the page's service worker has installed its precache and is active (it serves the app offline). */
@@ -116,7 +116,7 @@ it('opens what the phone has seen with no signal, keeps a new sight-in on the ph
   const { context, page } = await newPage(stack, PHONE);
   await signUpInContext(context, stack.baseUrl, 'Wren Aldous');
   const nickname = `Cold Creek slider ${Date.now().toString(36)}`;
-  const { bowId, sessionId } = await bowWithBuild(context, nickname, true);
+  const { bowId, sightInId } = await bowWithBuild(context, nickname, true);
 
   // One online visit: the bench, the bow, the sight-in (its fit) and its tape.
   // Each page.goto loads the app afresh: give each page its moment to save what it fetched.
@@ -125,12 +125,12 @@ it('opens what the phone has seen with no signal, keeps a new sight-in on the ph
   await workerReady(page);
   await letItSave(page);
   await page.goto(`/bows/${bowId}`);
-  await page.getByTestId('start-session').waitFor();
+  await page.getByTestId('start-sight-in').waitFor();
   await letItSave(page);
-  await page.goto(`/sessions/${sessionId}`);
+  await page.goto(`/sight-ins/${sightInId}`);
   await page.getByTestId('predicted-marks').waitFor();
   await letItSave(page);
-  await page.goto(`/sessions/${sessionId}/tape`);
+  await page.goto(`/sight-ins/${sightInId}/tape`);
   await page.getByTestId('tape-preview').waitFor();
   await letItSave(page);
 
@@ -143,24 +143,24 @@ it('opens what the phone has seen with no signal, keeps a new sight-in on the ph
   await bothSizes(page, 'offline-bench', () => page.getByText(nickname).first().waitFor());
 
   // The sight-in with its marks and fit, and its tape preview (drawn by math/ in the browser).
-  await page.goto(`/sessions/${sessionId}`);
+  await page.goto(`/sight-ins/${sightInId}`);
   await page.getByTestId('predicted-marks').waitFor({ timeout: 20_000 });
   expect(await page.getByTestId('mark-distance-2').inputValue()).toBe('60');
   await page.getByTestId('fit-summary').waitFor();
-  await page.goto(`/sessions/${sessionId}/tape`);
+  await page.goto(`/sight-ins/${sightInId}/tape`);
   await page.getByTestId('tape-preview').waitFor({ timeout: 20_000 });
   await shot(page, 'offline-tape');
 
   // A new sight-in with three marks, offline: the live fit, then kept on the phone.
-  await page.goto(`/bows/${bowId}/sessions/new`);
+  await page.goto(`/bows/${bowId}/sight-ins/new`);
   await page.getByTestId('mark-distance-0').waitFor({ timeout: 20_000 });
-  await page.getByTestId('session-unit').getByRole('radio', { name: 'Yards' }).click();
+  await page.getByTestId('sight-in-unit').getByRole('radio', { name: 'Yards' }).click();
   const offlineMarks = knownMarks([20, 30, 50]);
   await typeMarks(page, offlineMarks);
   await page.getByTestId('predicted-marks').waitFor();
   await page.getByTestId('fit-strip-figures').getByText(/\d+ fps · RMS \d+\.\d\d mm/).waitFor();
-  await page.getByTestId('session-save').click();
-  await page.getByTestId('session-kept').getByText('On this phone, not sent yet').waitFor();
+  await page.getByTestId('sight-in-save').click();
+  await page.getByTestId('sight-in-kept').getByText('On this phone, not sent yet').waitFor();
   await page.getByTestId('outbox-item-0').getByText(/^On this phone, not sent yet/).waitFor();
   await page.getByTestId('predicted-marks').waitFor();
   await bothSizes(page, 'offline-waiting', () => page.getByTestId('outbox-item-0').waitFor());
@@ -169,21 +169,21 @@ it('opens what the phone has seen with no signal, keeps a new sight-in on the ph
   await page.reload();
   await page.getByTestId('outbox-item-0').getByText(/^On this phone, not sent yet/).waitFor({ timeout: 20_000 });
   expect(await page.getByTestId('outbox-item-0').getByText(/New sight-in · .* · 3 marks/).count()).toBe(1);
-  const before = await api<{ bow: { sessions: unknown[] } }>(context, 'GET', `/api/bows/${bowId}`);
-  expect(before.body.bow.sessions).toHaveLength(1);
+  const before = await api<{ bow: { sightIns: unknown[] } }>(context, 'GET', `/api/bows/${bowId}`);
+  expect(before.body.bow.sightIns).toHaveLength(1);
 
   // Back online: it is sent (in order, with its idempotency key) and leaves the list.
   await context.setOffline(false);
   await page.getByTestId('outbox-panel').waitFor({ state: 'detached', timeout: 30_000 });
-  const after = await api<{ bow: { sessions: { id: number; date: string }[] } }>(context, 'GET', `/api/bows/${bowId}`);
-  expect(after.body.bow.sessions).toHaveLength(2);
-  const sent = after.body.bow.sessions.find((session) => session.id !== sessionId)!;
-  const stored = await api<{ session: { marks: { distance: number; scaleMm: number }[] } }>(context, 'GET', `/api/sessions/${sent.id}`);
-  expect(stored.body.session.marks.map((mark) => [mark.distance, mark.scaleMm])).toEqual(offlineMarks.map((mark) => [mark.distance, mark.scaleMm]));
+  const after = await api<{ bow: { sightIns: { id: number; date: string }[] } }>(context, 'GET', `/api/bows/${bowId}`);
+  expect(after.body.bow.sightIns).toHaveLength(2);
+  const sent = after.body.bow.sightIns.find((sightIn) => sightIn.id !== sightInId)!;
+  const stored = await api<{ sightIn: { marks: { distance: number; scaleMm: number }[] } }>(context, 'GET', `/api/sight-ins/${sent.id}`);
+  expect(stored.body.sightIn.marks.map((mark) => [mark.distance, mark.scaleMm])).toEqual(offlineMarks.map((mark) => [mark.distance, mark.scaleMm]));
   expect(await page.getByTestId('offline-notice').count()).toBe(0);
   // A few more resend ticks change nothing: still exactly two sight-ins.
   await page.waitForTimeout(1500);
-  expect((await api<{ bow: { sessions: unknown[] } }>(context, 'GET', `/api/bows/${bowId}`)).body.bow.sessions).toHaveLength(2);
+  expect((await api<{ bow: { sightIns: unknown[] } }>(context, 'GET', `/api/bows/${bowId}`)).body.bow.sightIns).toHaveLength(2);
   expect(pageErrors(page)).toEqual([]);
   await context.close();
 });
@@ -193,7 +193,7 @@ it('shows a waiting sight-in the server refuses (its bow deleted meanwhile) with
   await signUpInContext(context, stack.baseUrl, 'Tamsin Orrell');
   const nickname = `Birch Hollow slider ${Date.now().toString(36)}`;
   const { bowId } = await bowWithBuild(context, nickname, false);
-  await page.goto(`/bows/${bowId}/sessions/new`);
+  await page.goto(`/bows/${bowId}/sight-ins/new`);
   await page.getByTestId('mark-distance-0').waitFor({ timeout: 20_000 });
   await workerReady(page);
   await letItSave(page);
@@ -201,9 +201,9 @@ it('shows a waiting sight-in the server refuses (its bow deleted meanwhile) with
   await context.setOffline(true);
   await page.reload();
   await page.getByTestId('mark-distance-0').waitFor({ timeout: 20_000 });
-  await page.getByTestId('session-unit').getByRole('radio', { name: 'Yards' }).click();
+  await page.getByTestId('sight-in-unit').getByRole('radio', { name: 'Yards' }).click();
   await typeMarks(page, knownMarks([20, 60]));
-  await page.getByTestId('session-save').click();
+  await page.getByTestId('sight-in-save').click();
   await page.getByTestId('outbox-item-0').waitFor();
 
   // Meanwhile the bow is deleted (from another device: here, the API).
@@ -236,12 +236,12 @@ for (const where of ['online', 'offline'] as const) {
     const { context, page } = await newPage(stack, PHONE);
     const { email } = await signUpInContext(context, stack.baseUrl, 'Ilse Marrow');
     const nickname = `Juniper Bench slider ${where} ${Date.now().toString(36)}`;
-    const { bowId, sessionId } = await bowWithBuild(context, nickname, true);
+    const { bowId, sightInId } = await bowWithBuild(context, nickname, true);
     await page.goto('/');
     await page.getByText(nickname).first().waitFor({ timeout: 20_000 });
     await workerReady(page);
     await letItSave(page);
-    await page.goto(`/sessions/${sessionId}`);
+    await page.goto(`/sight-ins/${sightInId}`);
     await page.getByTestId('predicted-marks').waitFor();
     await letItSave(page);
     // The device holds the records now (that is what opens offline) …
@@ -250,10 +250,10 @@ for (const where of ['online', 'offline'] as const) {
     if (where === 'offline') {
       // … and a sight-in kept offline, which signing out discards with the rest.
       await context.setOffline(true);
-      await page.goto(`/bows/${bowId}/sessions/new`);
+      await page.goto(`/bows/${bowId}/sight-ins/new`);
       await page.getByTestId('mark-distance-0').waitFor({ timeout: 20_000 });
       await typeMarks(page, knownMarks([25, 55]));
-      await page.getByTestId('session-save').click();
+      await page.getByTestId('sight-in-save').click();
       await page.getByTestId('outbox-item-0').waitFor();
     }
     await page.goto('/account');
@@ -279,7 +279,7 @@ for (const where of ['online', 'offline'] as const) {
       await context.setOffline(false);
       await page.goto('/');
       await page.getByLabel('E-mail').waitFor({ timeout: 20_000 });
-      // The server's session was ended once the signal came back: nobody is signed in.
+      // The server's sign-in session was ended once the signal came back: nobody is signed in.
       expect((await api(context, 'GET', '/api/me')).status).toBe(401);
     }
     await screenshot(page, `offline-signed-out-${where}`);

@@ -25,18 +25,18 @@ async function oneMarkSightIn(context: BrowserContext): Promise<number> {
   };
   const { bow } = await post('/api/bows', bowBody({ nickname: 'Fenwick slider' }));
   const { build } = await post(`/api/bows/${bow.id}/builds`, buildBody({ name: 'Marsh 500', speedFps: knownSight.speedFps }));
-  const { session } = await post(`/api/bows/${bow.id}/sessions`, { buildId: build.id, date: '2026-11-28', placeLabel: 'Reed flats', marks: knownMarks([20]) });
-  return session.id as number;
+  const { sightIn } = await post(`/api/bows/${bow.id}/sight-ins`, { buildId: build.id, date: '2026-11-28', placeLabel: 'Reed flats', marks: knownMarks([20]) });
+  return sightIn.id as number;
 }
 
 for (const size of [PHONE, DESKTOP]) {
   const tag = `${size.width}x${size.height}`;
   it(`shows a one-mark tape as an estimate and the field card's crosswind table (${tag})`, async () => {
     const { context, page } = await newPage(stack, size);
-    const sessionId = await oneMarkSightIn(context);
+    const sightInId = await oneMarkSightIn(context);
 
     // The sight-in: the fit says it is an estimate from one mark, and where to shoot next.
-    await page.goto(`/sessions/${sessionId}`);
+    await page.goto(`/sight-ins/${sightInId}`);
     await page.getByText('Estimate from one mark').first().waitFor();
     const advice = await page.getByTestId('fit-warnings').textContent();
     expect(advice).toMatch(/no other distance has been sighted/);
@@ -44,18 +44,18 @@ for (const size of [PHONE, DESKTOP]) {
     await screenshot(page, 'one-mark-sight-in');
 
     // The tape: flagged as an estimate from one mark, never a sighted tape; the drawn tape says so along its edge.
-    await page.goto(`/sessions/${sessionId}/tape`);
+    await page.goto(`/sight-ins/${sightInId}/tape`);
     const flag = page.getByTestId('tape-one-mark');
     await flag.waitFor();
     expect(await flag.textContent()).toMatch(/Estimate from one mark: not a sighted tape.*Only 20 yd is sighted.*Shoot \d+ yd next/);
     await page.getByTestId('tape-preview').locator('svg').first().waitFor();
     await screenshot(page, 'one-mark-tape');
-    const svg = await context.request.get(`${stack.baseUrl}/api/sessions/${sessionId}/tape.svg?from=20&to=80`);
+    const svg = await context.request.get(`${stack.baseUrl}/api/sight-ins/${sightInId}/tape.svg?from=20&to=80`);
     expect(svg.status()).toBe(200);
     expect(await svg.text()).toContain('aria-label="ESTIMATE FROM ONE MARK');
 
     // The field card: the crosswind table, drift in in and cm and the hold in mm, with its caution.
-    await page.goto(`/sessions/${sessionId}/field-card`);
+    await page.goto(`/sight-ins/${sightInId}/field-card`);
     await page.getByTestId('field-card-wind').waitFor();
     const box = await page.getByTestId('field-card-wind-10-60').textContent();
     expect(box).toMatch(/^[\d.]+ in[\d.]+ cm↔ [\d.]+$/);
@@ -66,7 +66,7 @@ for (const size of [PHONE, DESKTOP]) {
     expect(await page.getByTestId('field-card-wind-caution').textContent()).toMatch(/only practice in wind confirms them/);
     await page.getByTestId('field-card-preview').locator('svg').first().waitFor();
     await screenshot(page, 'field-card-wind');
-    const card = await context.request.get(`${stack.baseUrl}/api/sessions/${sessionId}/field-card.svg`);
+    const card = await context.request.get(`${stack.baseUrl}/api/sight-ins/${sightInId}/field-card.svg`);
     expect(await card.text()).toContain('data-wind="15"');
 
     expect(pageErrors(page)).toEqual([]);

@@ -20,10 +20,10 @@ const stack = stackForFile();
 
 /** A bow with a build and a sight-in, through the API in the archer's browser context. */
 async function makeBow(context: BrowserContext, nickname: string): Promise<number> {
-  return (await makeBowWithSession(context, nickname)).bowId;
+  return (await makeBowWithSightIn(context, nickname)).bowId;
 }
 
-async function makeBowWithSession(context: BrowserContext, nickname: string): Promise<{ bowId: number; sessionId: number }> {
+async function makeBowWithSightIn(context: BrowserContext, nickname: string): Promise<{ bowId: number; sightInId: number }> {
   const post = async (path: string, data: unknown) => {
     const res = await context.request.post(`${stack.baseUrl}${path}`, { headers: CSRF, data });
     if (res.status() !== 201) throw new Error(`${path}: ${res.status()} ${await res.text()}`);
@@ -31,8 +31,8 @@ async function makeBowWithSession(context: BrowserContext, nickname: string): Pr
   };
   const { bow } = await post('/api/bows', bowBody({ nickname }));
   const { build } = await post(`/api/bows/${bow.id}/builds`, buildBody());
-  const { session } = await post(`/api/bows/${bow.id}/sessions`, { buildId: build.id, date: '2026-11-02', placeLabel: 'Alder Flats range', marks: knownMarks([20, 40, 60]) });
-  return { bowId: bow.id, sessionId: session.id };
+  const { sightIn } = await post(`/api/bows/${bow.id}/sight-ins`, { buildId: build.id, date: '2026-11-02', placeLabel: 'Alder Flats range', marks: knownMarks([20, 40, 60]) });
+  return { bowId: bow.id, sightInId: sightIn.id };
 }
 
 const steps = [
@@ -212,8 +212,8 @@ for (const size of [PHONE, DESKTOP]) {
     await archer.page.getByText(/add your first bow/i).first().waitFor();
 
     // Marks from a CSV file: the preview names each row's problem; then all are added.
-    const { sessionId } = await makeBowWithSession(archer.context, `Import slider ${tag}`);
-    await archer.page.goto(`/sessions/${sessionId}`);
+    const { sightInId } = await makeBowWithSightIn(archer.context, `Import slider ${tag}`);
+    await archer.page.goto(`/sight-ins/${sightInId}`);
     await archer.page.getByTestId('import-marks').click();
     await archer.page.getByTestId('marks-import').waitFor();
     const good = knownMarks([30, 50]);

@@ -25,14 +25,14 @@ for (const size of [PHONE, DESKTOP]) {
     const { bow } = await post(context, '/api/bows', bowBody({ nickname: 'Basin slider' }));
     const heavy = (await post(context, `/api/bows/${bow.id}/builds`, buildBody({ name: 'Elk heavy', speedFps: null }))).build;
     const light = (await post(context, `/api/bows/${bow.id}/builds`, buildBody({ name: 'Practice light', pointGr: 85, speedFps: null }))).build;
-    const session = async (buildId: number, date: string, placeLabel: string, distances: number[]) =>
-      (await post(context, `/api/bows/${bow.id}/sessions`, { buildId, date, placeLabel, marks: knownMarks(distances) })).session;
-    const heavyOld = await session(heavy.id, '2026-11-01', 'Larch Hollow range', [20, 40, 60]);
-    await post(context, `/api/sessions/${heavyOld.id}/tapes`, { fromDistance: 20, toDistance: 60 });
-    await session(heavy.id, '2026-11-25', 'Quarry Bend', [20, 40, 60]);
-    await session(light.id, '2026-11-28', 'Larch Hollow range', [20, 30, 40]);
-    const lightLate = await session(light.id, '2026-11-28', 'Larch Hollow range', [20, 30, 40, 50]);
-    await post(context, `/api/sessions/${lightLate.id}/tapes`, { fromDistance: 20, toDistance: 50 });
+    const sightIn = async (buildId: number, date: string, placeLabel: string, distances: number[]) =>
+      (await post(context, `/api/bows/${bow.id}/sight-ins`, { buildId, date, placeLabel, marks: knownMarks(distances) })).sightIn;
+    const heavyOld = await sightIn(heavy.id, '2026-11-01', 'Larch Hollow range', [20, 40, 60]);
+    await post(context, `/api/sight-ins/${heavyOld.id}/tapes`, { fromDistance: 20, toDistance: 60 });
+    await sightIn(heavy.id, '2026-11-25', 'Quarry Bend', [20, 40, 60]);
+    await sightIn(light.id, '2026-11-28', 'Larch Hollow range', [20, 30, 40]);
+    const lightLate = await sightIn(light.id, '2026-11-28', 'Larch Hollow range', [20, 30, 40, 50]);
+    await post(context, `/api/sight-ins/${lightLate.id}/tapes`, { fromDistance: 20, toDistance: 50 });
 
     await page.goto(`/bows/${bow.id}/readiness`);
     const heavyCard = page.getByTestId(`readiness-build-${heavy.id}`);
@@ -50,7 +50,7 @@ for (const size of [PHONE, DESKTOP]) {
 
     // The two sight-ins of 28 Nov differ in the bow's list too.
     await page.goto(`/bows/${bow.id}`);
-    const rows = page.locator('[data-testid^="session-row-"]', { hasText: '28 Nov 2026' });
+    const rows = page.locator('[data-testid^="sight-in-row-"]', { hasText: '28 Nov 2026' });
     await rows.first().waitFor();
     const titles = await rows.allInnerTexts();
     expect(titles).toHaveLength(2);

@@ -80,7 +80,7 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByTestId('keep-point').fill('125');
     await fullShot(page, 'keep-try');
     await page.getByTestId('keep-save').click();
-    await page.waitForURL(/\/sessions\/\d+$/, { timeout: 20_000 });
+    await page.waitForURL(/\/sight-ins\/\d+$/, { timeout: 20_000 });
     await page.getByTestId('mark-authors').waitFor({ timeout: 20_000 });
 
     // The new account's first bow and sight-in carry the typed measurements and both marks.
@@ -89,13 +89,13 @@ for (const size of [PHONE, DESKTOP]) {
     const detail = (await (await context.request.get(`${stack.baseUrl}/api/bows/${list[0].id}`)).json()).bow;
     expect(detail.sightRadiusMm).toBeCloseTo(820, 6);
     expect(detail.peepHeightMm).toBeCloseTo(110, 6);
-    expect(detail.sessions).toHaveLength(1);
-    const session = (await (await context.request.get(`${stack.baseUrl}/api/sessions/${detail.sessions[0].id}`)).json()).session;
-    expect(session.marks.map((mark: { distance: number; scaleMm: number }) => [mark.distance, mark.scaleMm])).toEqual([
+    expect(detail.sightIns).toHaveLength(1);
+    const sightIn = (await (await context.request.get(`${stack.baseUrl}/api/sight-ins/${detail.sightIns[0].id}`)).json()).sightIn;
+    expect(sightIn.marks.map((mark: { distance: number; scaleMm: number }) => [mark.distance, mark.scaleMm])).toEqual([
       [20, 14.9],
       [60, 32.6],
     ]);
-    await fullShot(page, 'keep-try-session');
+    await fullShot(page, 'keep-try-sight-in');
 
     // Carried once: the bench no longer offers it.
     await page.goto('/');

@@ -44,9 +44,9 @@ async function bowWithTape(context: BrowserContext) {
     sightDescription: 'Single-pin slider',
   });
   const { build } = await post(context, `/api/bows/${bow.id}/builds`, buildBody({ name: 'Elk 500' }));
-  const { session } = await post(context, `/api/bows/${bow.id}/sessions`, { buildId: build.id, date: '2026-11-02', placeLabel: 'Gravel pit range', marks: knownMarks([20, 40, 60]) });
-  const { tape } = await post(context, `/api/sessions/${session.id}/tapes`, { fromDistance: 20, toDistance: 60, step: 5, unit: 'yd', widthMm: 12 });
-  return { bowId: bow.id as number, buildId: build.id as number, sessionId: session.id as number, tapeId: tape.id as number };
+  const { sightIn } = await post(context, `/api/bows/${bow.id}/sight-ins`, { buildId: build.id, date: '2026-11-02', placeLabel: 'Gravel pit range', marks: knownMarks([20, 40, 60]) });
+  const { tape } = await post(context, `/api/sight-ins/${sightIn.id}/tapes`, { fromDistance: 20, toDistance: 60, step: 5, unit: 'yd', widthMm: 12 });
+  return { bowId: bow.id as number, buildId: build.id as number, sightInId: sightIn.id as number, tapeId: tape.id as number };
 }
 
 async function recordMeasure(page: Page, measure: string, value: string) {
@@ -87,7 +87,7 @@ async function freshBench(context: BrowserContext, bowId: number) {
 it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and keeps the tape honest after changes', async () => {
   const { context, page } = await newPage(stack, PHONE);
   await signUpInContext(context, stack.baseUrl, 'Ilsa Brackwater');
-  const { bowId, buildId, sessionId } = await bowWithTape(context);
+  const { bowId, buildId, sightInId } = await bowWithTape(context);
 
   await recording(page, 'tuning-setup', async () => {
     // The Bench before any change: the tape is current.
@@ -192,7 +192,7 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
 
   await recording(page, 'peep-stale', async () => {
     // Confirm the marks at the range from the tape screen: the banner goes.
-    await page.goto(`/sessions/${sessionId}/tape`);
+    await page.goto(`/sight-ins/${sightInId}/tape`);
     await page.getByTestId('confirm-at-range').waitFor();
     await page.getByTestId('confirm-range').click();
     await page.getByTestId('range-confirmed').waitFor();
@@ -203,7 +203,7 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     await page.getByTestId('change-note').fill('Peep moved up 3 mm');
     await page.getByTestId('change-submit').click();
     await page.getByTestId('change-form').waitFor({ state: 'detached' });
-    await page.goto(`/sessions/${sessionId}/tape`);
+    await page.goto(`/sight-ins/${sightInId}/tape`);
     const banner = page.getByTestId('confirm-at-range');
     await banner.waitFor();
     await banner.getByText(/^Peep moved on .*, after this sight-in: confirm the marks at the range\./).waitFor();
@@ -213,12 +213,12 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     await stale.context.close();
 
     // A new sight-in with the same build clears it.
-    await post(context, `/api/bows/${bowId}/sessions`, { buildId, date: new Date().toISOString().slice(0, 10), placeLabel: 'Gravel pit range', marks: knownMarks([20, 40, 60]) });
+    await post(context, `/api/bows/${bowId}/sight-ins`, { buildId, date: new Date().toISOString().slice(0, 10), placeLabel: 'Gravel pit range', marks: knownMarks([20, 40, 60]) });
     const cleared = await freshBench(context, bowId);
     await cleared.page.waitForTimeout(300);
     expect(await cleared.page.getByTestId(`bow-card-${bowId}-confirm`).count()).toBe(0);
     await cleared.context.close();
-    await page.goto(`/sessions/${sessionId}/tape`);
+    await page.goto(`/sight-ins/${sightInId}/tape`);
     await page.getByRole('heading', { name: 'Sight tape' }).waitFor();
     // The screen asks the server again on every visit; the banner goes once the answer is in.
     await page.getByTestId('confirm-at-range').waitFor({ state: 'detached' });

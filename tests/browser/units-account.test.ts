@@ -101,41 +101,41 @@ it('takes inches, feet and °F from a yards archer and stores mm, m and °C (390
   near(build.diameterMm, 6.2484); // 0.246 × 25.4
   near(build.pointGr, 125);
   near(build.speedFps, 282);
-  await page.getByTestId('start-session').waitFor();
+  await page.getByTestId('start-sight-in').waitFor();
 
   // The sight-in: the date picked on the browser's calendar, then typed month-first; altitude in feet, temperature in °F.
-  await page.getByTestId('start-session').click();
+  await page.getByTestId('start-sight-in').click();
   await page.getByTestId('mark-distance-0').waitFor();
-  await page.getByTestId('session-date-picker').fill('2026-11-28');
-  expect(await page.getByTestId('session-date').inputValue()).toBe('2026-11-28');
-  await page.getByTestId('session-date').fill('12/02/2026');
+  await page.getByTestId('sight-in-date-picker').fill('2026-11-28');
+  expect(await page.getByTestId('sight-in-date').inputValue()).toBe('2026-11-28');
+  await page.getByTestId('sight-in-date').fill('12/02/2026');
   await page.getByText('Read as 2 December 2026 (month first); if you meant 12 February 2026, enter it as YYYY-MM-DD').waitFor();
-  expect(await page.getByTestId('session-date-picker').inputValue()).toBe('2026-12-02');
+  expect(await page.getByTestId('sight-in-date-picker').inputValue()).toBe('2026-12-02');
   await page.getByLabel('Place').fill('Skarvheim range');
-  await page.getByTestId('session-altitude').fill('20000');
-  await page.getByTestId('session-temperature').fill('41');
-  await page.getByTestId('session-unit').getByRole('radio', { name: 'Yards' }).click();
+  await page.getByTestId('sight-in-altitude').fill('20000');
+  await page.getByTestId('sight-in-temperature').fill('41');
+  await page.getByTestId('sight-in-unit').getByRole('radio', { name: 'Yards' }).click();
   await page.getByTestId('mark-distance-0').fill('20');
   await page.getByTestId('mark-reading-0').fill('14.9');
   await page.getByTestId('mark-distance-1').fill('60');
   await page.getByTestId('mark-reading-1').fill('32.6');
-  await page.getByTestId('session-save').click();
+  await page.getByTestId('sight-in-save').click();
   // 5000 m = 16404.2 ft, stated rounded down.
   await page.getByText('Altitude must be at most 16404 ft').waitFor();
   // The live fit's own limit (5500 m) is stated in feet too.
   await page.getByText('Enter the altitude between -1640 and 18044 ft').first().waitFor();
-  await shot(page, 'units-session-error');
-  await page.getByTestId('session-altitude').fill('9200');
-  await page.getByTestId('session-save').click();
-  await page.waitForURL(/\/sessions\/\d+$/);
-  const sessionId = Number(new URL(page.url()).pathname.split('/').pop());
-  const { session } = await api(context, `/api/sessions/${sessionId}`);
-  expect(session.date).toBe('2026-12-02');
-  near(session.altitudeM, 2804.16); // 9200 × 0.3048
-  near(session.temperatureC, 5); // (41 − 32) × 5/9
+  await shot(page, 'units-sight-in-error');
+  await page.getByTestId('sight-in-altitude').fill('9200');
+  await page.getByTestId('sight-in-save').click();
+  await page.waitForURL(/\/sight-ins\/\d+$/);
+  const sightInId = Number(new URL(page.url()).pathname.split('/').pop());
+  const { sightIn } = await api(context, `/api/sight-ins/${sightInId}`);
+  expect(sightIn.date).toBe('2026-12-02');
+  near(sightIn.altitudeM, 2804.16); // 9200 × 0.3048
+  near(sightIn.temperatureC, 5); // (41 − 32) × 5/9
 
   // The field card: the hunt's altitude and temperature in feet and °F, asked of the server in m and °C.
-  await page.goto(`/sessions/${sessionId}/field-card`);
+  await page.goto(`/sight-ins/${sightInId}/field-card`);
   await page.getByTestId('field-card-altitude').waitFor();
   await page.getByText('Sight-in air: 9200 ft, 41 °F. Leave the altitude empty for that air.').waitFor();
   const asked = page.waitForRequest((request) => /\/field-card\?/.test(request.url()) && /altitudeM=3048(&|$)/.test(request.url()) && /temperatureC=-10(&|$)/.test(request.url()));
@@ -157,11 +157,11 @@ it('takes inches, feet and °F from a yards archer and stores mm, m and °C (390
   await page.getByTestId('bow-save').click();
   await page.getByText('Enter the sight radius').waitFor();
   await shot(page, 'units-bow-form');
-  await page.goto(`/sessions/${sessionId}`);
-  await page.getByTestId('session-altitude').waitFor();
-  expect(await page.getByTestId('session-altitude').inputValue()).toBe('9200');
-  expect(await page.getByTestId('session-temperature').inputValue()).toBe('41');
-  await shot(page, 'units-session');
+  await page.goto(`/sight-ins/${sightInId}`);
+  await page.getByTestId('sight-in-altitude').waitFor();
+  expect(await page.getByTestId('sight-in-altitude').inputValue()).toBe('9200');
+  expect(await page.getByTestId('sight-in-temperature').inputValue()).toBe('41');
+  await shot(page, 'units-sight-in');
   await page.goto('/account');
   await page.getByTestId('unit-altitudeUnit').waitFor();
   await shot(page, 'units-account');

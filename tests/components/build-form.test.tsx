@@ -71,7 +71,7 @@ describe('BuildForm', () => {
     const saved = {
       id: 7, bowId: 3, name: 'Cedar light', shaftLabel: '', spine: null, grainsPerInch: 9.5, cutLengthMm: 723.9, diameterMm: 6.35,
       pointGr: 100, insertGr: 0, collarGr: 0, nockGr: 0, vaneCount: 3, vaneWeightGr: 0, wrapGr: 0, balancePointMm: null,
-      speedFps: null, dragCoefficient: null, sessionCount: 0, createdAt: '2026-12-01T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
+      speedFps: null, dragCoefficient: null, sightInCount: 0, createdAt: '2026-12-01T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
       derived: { totalGr: 370.75, focPct: null, kineticEnergyFtLb: null, kineticEnergyJ: null, momentumSlugFtPerS: null, momentumKgMPerS: null },
     };
     fetchMock.mockResolvedValue(jsonResponse(201, { build: saved }));

@@ -8,16 +8,16 @@ afterEach(() => act(() => onlineManager.setOnline(true)));
 describe('DownloadLink (files come from the server)', () => {
   it('online: a real download link to the file', () => {
     act(() => onlineManager.setOnline(true));
-    render(<DownloadLink label="Download PDF" href="/api/sessions/4/sheet.pdf?to=60" testID="download-pdf" />);
+    render(<DownloadLink label="Download PDF" href="/api/sight-ins/4/sheet.pdf?to=60" testID="download-pdf" />);
     const link = screen.getByRole('link', { name: 'Download PDF' });
-    expect(link.getAttribute('href')).toBe('/api/sessions/4/sheet.pdf?to=60');
+    expect(link.getAttribute('href')).toBe('/api/sight-ins/4/sheet.pdf?to=60');
     expect(link.hasAttribute('download')).toBe(true);
     expect(screen.queryByText('Needs a connection')).toBeNull();
   });
 
   it('offline: a disabled button with "Needs a connection" beside it, no link; back online it is a link again', () => {
     act(() => onlineManager.setOnline(false));
-    render(<DownloadLink label="Download PDF" href="/api/sessions/4/sheet.pdf" testID="download-pdf" />);
+    render(<DownloadLink label="Download PDF" href="/api/sight-ins/4/sheet.pdf" testID="download-pdf" />);
     expect(screen.queryByRole('link')).toBeNull();
     const button = screen.getByRole('button', { name: 'Download PDF' });
     expect((button as HTMLButtonElement).disabled).toBe(true);

@@ -7,7 +7,7 @@ const stamp = '2026-11-20T09:00:00.000Z';
  * An invented arrow build on bow 3: 9.5 gpi shaft cut to 723.9 mm, 6.5 mm
  * diameter, 100 gr point, 16 gr insert, 9 gr nock, three 6 gr vanes: 413.75 gr
  * in all (9.5 × 28.5 in + 100 + 16 + 9 + 18, arithmetic). Fields may be overridden.
- * Example: inventedBuild({ sessionCount: 1 }).derived.totalGr → 413.75
+ * Example: inventedBuild({ sightInCount: 1 }).derived.totalGr → 413.75
  */
 export function inventedBuild(overrides: Partial<Build> = {}): Build {
   return {
@@ -29,7 +29,7 @@ export function inventedBuild(overrides: Partial<Build> = {}): Build {
     balancePointMm: null,
     speedFps: null,
     dragCoefficient: null,
-    sessionCount: 0,
+    sightInCount: 0,
     derived: { totalGr: 413.75, focPct: null, kineticEnergyFtLb: null, kineticEnergyJ: null, momentumSlugFtPerS: null, momentumKgMPerS: null },
     createdAt: stamp,
     updatedAt: stamp,
@@ -65,9 +65,9 @@ export function inventedBow(overrides: Partial<BowDetail> = {}): BowDetail {
     notes: '',
     createdAt: stamp,
     updatedAt: stamp,
-    readiness: { latestSession: null, buildCount: 1, sessionCount: 0, hasTape: false, level: null },
+    readiness: { latestSightIn: null, buildCount: 1, sightInCount: 0, hasTape: false, level: null },
     builds: [inventedBuild()],
-    sessions: [],
+    sightIns: [],
     tapes: [],
     ...overrides,
   };

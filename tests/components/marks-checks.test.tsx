@@ -6,7 +6,7 @@
  */
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 
-import { SessionEditor } from '@/components/sessions/session-editor';
+import { SightInEditor } from '@/components/sight-ins/sight-in-editor';
 
 import { inventedBow, inventedBuild } from './fixtures';
 import { jsonResponse, mockFetch, renderWithClient } from './helpers';
@@ -31,7 +31,7 @@ describe('marks checked as they are typed', () => {
   it('names the falling 40 yd reading on its row, leaves it out of the fit, and asks before saving it', async () => {
     const fetchMock = mockFetch();
     fetchMock.mockResolvedValue(jsonResponse(500, { error: { code: 'server_error', message: 'stop here' } }));
-    renderWithClient(<SessionEditor bow={inventedBow()} distanceUnit="yd" />);
+    renderWithClient(<SightInEditor bow={inventedBow()} distanceUnit="yd" />);
     // The typo: 20/30/40 yd at 15.0/19.0/17.0 mm.
     typeRows([
       ['20', '15.0'],
@@ -49,7 +49,7 @@ describe('marks checked as they are typed', () => {
     expect(screen.queryByTestId(/^fit-advice-(chronograph|drag|sight-radius|peep-height)/)).toBeNull();
 
     // Save asks first; nothing is sent until the archer confirms.
-    fireEvent.click(screen.getByTestId('session-save'));
+    fireEvent.click(screen.getByTestId('sight-in-save'));
     const confirm = await screen.findByTestId('falling-confirm');
     expect(within(confirm).getByText(/Mark 3 \(40 yd\)/)).toBeTruthy();
     expect(fetchMock).not.toHaveBeenCalled();
@@ -62,7 +62,7 @@ describe('marks checked as they are typed', () => {
   });
 
   it('names a letter in a reading, an empty distance and a negative one live, each on its own row', async () => {
-    renderWithClient(<SessionEditor bow={inventedBow()} distanceUnit="yd" />);
+    renderWithClient(<SightInEditor bow={inventedBow()} distanceUnit="yd" />);
     typeRows([
       ['20', '1g.0'],
       ['', '20'],
@@ -80,7 +80,7 @@ describe('marks checked as they are typed', () => {
   it('holds back the chronograph warning while a row has a problem, and shows it once the row is fixed', async () => {
     // A build chronographed at 340 fps, marks that fit about 285 fps: the fit doubts the chronograph.
     const bow = inventedBow({ builds: [inventedBuild({ speedFps: 340 })] });
-    renderWithClient(<SessionEditor bow={bow} distanceUnit="yd" />);
+    renderWithClient(<SightInEditor bow={bow} distanceUnit="yd" />);
     typeRows([
       ['20', '14.9'],
       ['40', '23.1'],

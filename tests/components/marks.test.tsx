@@ -1,6 +1,6 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 
-import { SessionEditor } from '@/components/sessions/session-editor';
+import { SightInEditor } from '@/components/sight-ins/sight-in-editor';
 
 import { inventedBow } from './fixtures';
 import { jsonResponse, mockFetch, renderWithClient } from './helpers';
@@ -17,7 +17,7 @@ const type = (testID: string, value: string) => fireEvent.change(screen.getByTes
 
 describe('the marks table and its live fit', () => {
   it('refits as marks are typed: predicted marks for 10–100 yd, each mark on the fit', async () => {
-    renderWithClient(<SessionEditor bow={bow} distanceUnit="yd" />);
+    renderWithClient(<SightInEditor bow={bow} distanceUnit="yd" />);
     expect(screen.getByText('Enter two marks (a short and a long distance) to see the fit.')).toBeTruthy();
     type('mark-distance-0', '20');
     type('mark-reading-0', '14.9');
@@ -45,7 +45,7 @@ describe('the marks table and its live fit', () => {
   });
 
   it('names an impossible gap in plain words', async () => {
-    renderWithClient(<SessionEditor bow={bow} distanceUnit="yd" />);
+    renderWithClient(<SightInEditor bow={bow} distanceUnit="yd" />);
     type('mark-distance-0', '20');
     type('mark-reading-0', '14.9');
     type('mark-distance-1', '60');
@@ -69,16 +69,16 @@ describe('the marks table and its live fit', () => {
     fetchMock.mockResolvedValue(
       jsonResponse(400, { error: { code: 'validation_failed', message: 'Scale reading must be at most 200 mm', fields: { 'marks.1.scaleMm': 'Scale reading must be at most 200 mm' } } }),
     );
-    renderWithClient(<SessionEditor bow={bow} distanceUnit="yd" />);
+    renderWithClient(<SightInEditor bow={bow} distanceUnit="yd" />);
     type('mark-distance-0', '20');
     type('mark-reading-0', '14.9');
     fireEvent.click(screen.getByTestId('mark-add'));
     type('mark-distance-2', '60');
     type('mark-reading-2', '32.6');
-    fireEvent.click(screen.getByTestId('session-save'));
+    fireEvent.click(screen.getByTestId('sight-in-save'));
     await waitFor(() => expect(fetchMock).toHaveBeenCalledTimes(1));
     const [path, init] = fetchMock.mock.calls[0];
-    expect(path).toBe('/api/bows/3/sessions');
+    expect(path).toBe('/api/bows/3/sight-ins');
     const body = JSON.parse(init.body);
     expect(body.buildId).toBe(4);
     expect(body.marks).toEqual([
@@ -92,13 +92,13 @@ describe('the marks table and its live fit', () => {
 
   it('refuses a distance entered twice before sending anything', async () => {
     const fetchMock = mockFetch();
-    renderWithClient(<SessionEditor bow={bow} distanceUnit="yd" />);
+    renderWithClient(<SightInEditor bow={bow} distanceUnit="yd" />);
     type('mark-distance-0', '20');
     type('mark-reading-0', '14.9');
     type('mark-distance-1', '20');
     type('mark-reading-1', '15.0');
-    fireEvent.click(screen.getByTestId('session-save'));
-    expect(await within(screen.getByTestId('mark-row-1')).findByText('20 yd is entered twice; each distance once per session')).toBeTruthy();
+    fireEvent.click(screen.getByTestId('sight-in-save'));
+    expect(await within(screen.getByTestId('mark-row-1')).findByText('20 yd is entered twice; each distance once per sight-in')).toBeTruthy();
     expect(fetchMock).not.toHaveBeenCalled();
   });
 });

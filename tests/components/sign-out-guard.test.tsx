@@ -54,7 +54,7 @@ describe('SignOutButton (sign-out guard)', () => {
     fetchMock.mockResolvedValue(jsonResponse(204));
     const { queryClient } = renderSignedIn();
     await act(async () => {
-      await keepInOutbox({ userId: user.id, kind: 'marks', title: 'New marks on Ridge 60', method: 'POST', path: '/api/sessions/3/marks', body: { yards: 20 }, bowId: 3, recordId: 3 });
+      await keepInOutbox({ userId: user.id, kind: 'marks', title: 'New marks on Ridge 60', method: 'POST', path: '/api/sight-ins/3/marks', body: { yards: 20 }, bowId: 3, recordId: 3 });
     });
     expect(mockStored.size).toBe(1);
 

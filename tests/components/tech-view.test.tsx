@@ -9,12 +9,12 @@ import { fireEvent, screen, waitFor, within } from '@testing-library/react';
 import { BowScreen } from '@/components/bows/bow-screen';
 import { EditBowScreen } from '@/components/bows/edit-bow-screen';
 import { BuildScreen } from '@/components/builds/build-screen';
-import { SessionScreen } from '@/components/sessions/session-screen';
+import { SightInScreen } from '@/components/sight-ins/sight-in-screen';
 import { TapeScreen } from '@/components/tapes/tape-screen';
 import { fitSight } from '@/math/fit/fit-sight';
 import type { User } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
-import { storedFitSchema, type Session } from '@/shared/session';
+import { storedFitSchema, type SightIn } from '@/shared/sight-in';
 
 import { inventedBow, inventedBuild } from './fixtures';
 import { jsonResponse, mockFetch, renderWithClient } from './helpers';
@@ -32,7 +32,7 @@ const stamp = '2026-11-20T09:00:00.000Z';
 const archer: User = { id: 1, name: 'Ilse Marrow', email: 'ilse@example.test', role: 'archer', distanceUnit: 'yd', lengthUnit: 'mm' };
 const tech: User = { id: 2, name: 'Bram Oakes', email: 'bram@example.test', role: 'tech', distanceUnit: 'yd', lengthUnit: 'mm' };
 
-const build = inventedBuild({ sessionCount: 1 });
+const build = inventedBuild({ sightInCount: 1 });
 
 /** Two saved marks, as the archer entered them (a reading the table shows rounded to 0.01 mm). */
 const savedMarks = [
@@ -55,7 +55,7 @@ const storedFit = storedFitSchema.parse({
   model: fit.model as unknown as Record<string, unknown>,
 });
 
-const session: Session = {
+const sightIn: SightIn = {
   id: 12,
   bowId: 3,
   buildId: 4,
@@ -72,7 +72,7 @@ const session: Session = {
 
 const tape = {
   id: 7,
-  sessionId: 12,
+  sightInId: 12,
   bowId: 3,
   fromDistance: 20,
   toDistance: 60,
@@ -91,9 +91,9 @@ const tape = {
 const bow: BowDetail = inventedBow({
   userId: archer.id,
   ownerName: archer.name,
-  readiness: { latestSession: null, buildCount: 1, sessionCount: 1, hasTape: true, level: null },
+  readiness: { latestSightIn: null, buildCount: 1, sightInCount: 1, hasTape: true, level: null },
   builds: [build],
-  sessions: [
+  sightIns: [
     {
       id: 12,
       bowId: 3,
@@ -119,13 +119,13 @@ function serveAs(user: User) {
     if (path === '/api/me') return jsonResponse(200, { user });
     if (method === 'GET' && path === '/api/bows/3') return jsonResponse(200, { bow });
     if (method === 'GET' && path === '/api/builds/4') return jsonResponse(200, { build });
-    if (method === 'GET' && path === '/api/sessions/12') return jsonResponse(200, { session });
-    if (method === 'PATCH' && path === '/api/sessions/12') {
+    if (method === 'GET' && path === '/api/sight-ins/12') return jsonResponse(200, { sightIn });
+    if (method === 'PATCH' && path === '/api/sight-ins/12') {
       const body = JSON.parse(init?.body ?? '{}');
       const marks = body.marks.map((mark: object, position: number) => ({ id: 40 + position, position, ...mark }));
-      return jsonResponse(200, { session: { ...session, marks } });
+      return jsonResponse(200, { sightIn: { ...sightIn, marks } });
     }
-    if (method === 'POST' && path === '/api/sessions/12/tapes') {
+    if (method === 'POST' && path === '/api/sight-ins/12/tapes') {
       return jsonResponse(201, { tape: { ...tape, ...JSON.parse(init?.body ?? '{}'), id: 8 } });
     }
     return jsonResponse(404, { error: { code: 'not_found', message: `No answer for ${method} ${path} in this test` } });
@@ -158,7 +158,7 @@ describe('a technician on a shared bow', () => {
     // Adding a build is a technician's right since issue 15 (a new, attributed entry).
     expect(screen.getByTestId('add-build')).toBeTruthy();
     expect(screen.queryByTestId('open-sharing')).toBeNull();
-    expect(screen.getByTestId('start-session')).toBeTruthy();
+    expect(screen.getByTestId('start-sight-in')).toBeTruthy();
     expect(screen.getByTestId('open-level')).toBeTruthy();
   });
 
@@ -183,31 +183,31 @@ describe('a technician on a shared bow', () => {
 
   it('adds a mark to the archer’s sight-in without touching what is saved, and cannot delete it', async () => {
     const fetchMock = serveAs(tech);
-    renderWithClient(<SessionScreen sessionId={12} />);
+    renderWithClient(<SightInScreen sightInId={12} />);
     await screen.findByTestId('marks-add-only');
-    expect(screen.queryByTestId('session-delete')).toBeNull();
+    expect(screen.queryByTestId('sight-in-delete')).toBeNull();
     expect(screen.queryByText('Delete this sight-in')).toBeNull();
-    // The saved rows and the session's details are shown but cannot change.
+    // The saved rows and the sight-in's details are shown but cannot change.
     for (const index of [0, 1]) {
       expect(disabled(`mark-distance-${index}`)).toBe(true);
       expect(disabled(`mark-reading-${index}`)).toBe(true);
       expect(screen.queryByTestId(`mark-remove-${index}`)).toBeNull();
     }
-    expect(disabled('session-date')).toBe(true);
-    expect((screen.getByLabelText('Session notes') as HTMLInputElement).readOnly).toBe(true);
+    expect(disabled('sight-in-date')).toBe(true);
+    expect((screen.getByLabelText('Sight-in notes') as HTMLInputElement).readOnly).toBe(true);
 
     fireEvent.click(screen.getByTestId('mark-add'));
     expect(disabled('mark-distance-2')).toBe(false);
     expect(screen.getByTestId('mark-remove-2')).toBeTruthy();
     fireEvent.change(screen.getByTestId('mark-distance-2'), { target: { value: '40' } });
     fireEvent.change(screen.getByTestId('mark-reading-2'), { target: { value: '23.1' } });
-    fireEvent.click(screen.getByTestId('session-save'));
+    fireEvent.click(screen.getByTestId('sight-in-save'));
 
     await waitFor(() => expect(writes(fetchMock)).toHaveLength(1));
     // Only the marks: the saved ones exactly as stored (not as the table rounds them), then the new one.
     expect(writes(fetchMock)[0]).toEqual([
       'PATCH',
-      '/api/sessions/12',
+      '/api/sight-ins/12',
       {
         marks: [
           { distance: 20, unit: 'yd', scaleMm: 14.904, arrowsShot: 3, note: 'calm' },
@@ -222,7 +222,7 @@ describe('a technician on a shared bow', () => {
 
   it('saves a layout of the archer’s tape as a new one, never over theirs', async () => {
     const fetchMock = serveAs(tech);
-    renderWithClient(<TapeScreen sessionId={12} tapeId={7} />);
+    renderWithClient(<TapeScreen sightInId={12} tapeId={7} />);
     await screen.findByTestId('tape-drawn');
     fireEvent.change(screen.getByTestId('tape-to'), { target: { value: '50' } });
     await waitFor(() => expect(screen.getByTestId('tape-save').getAttribute('aria-disabled')).not.toBe('true'));
@@ -230,7 +230,7 @@ describe('a technician on a shared bow', () => {
     fireEvent.click(screen.getByTestId('tape-save'));
     await waitFor(() => expect(writes(fetchMock)).toHaveLength(1));
     const [method, path, body] = writes(fetchMock)[0];
-    expect([method, path]).toEqual(['POST', '/api/sessions/12/tapes']);
+    expect([method, path]).toEqual(['POST', '/api/sight-ins/12/tapes']);
     expect(body.toDistance).toBe(50);
   });
 });
@@ -248,8 +248,8 @@ describe('the archer on their own bow', () => {
 
   it('can change the saved marks and delete the sight-in', async () => {
     serveAs(archer);
-    renderWithClient(<SessionScreen sessionId={12} />);
-    await screen.findByTestId('session-delete');
+    renderWithClient(<SightInScreen sightInId={12} />);
+    await screen.findByTestId('sight-in-delete');
     expect(screen.queryByTestId('marks-add-only')).toBeNull();
     expect(disabled('mark-reading-0')).toBe(false);
     expect(screen.getByTestId('mark-remove-0')).toBeTruthy();

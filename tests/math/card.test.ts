@@ -21,7 +21,7 @@ import { elements, numberAttribute, onCurveExtent, parseSvg } from './svg-helper
 const fit = fitSight(inputWith(marksOf(TRUE_MODEL, [20, 40, 60])));
 const labels = { bow: 'Ridgeback test bow', build: 'Test heavy', date: '2026-11-14', place: 'Invented meadow' };
 
-/** A sight-in at 2280 m and −2 °C (the fit's air is the session's). */
+/** A sight-in at 2280 m and −2 °C (the fit's air is the sight-in's). */
 const mountainSightIn = fitSight(inputWith(marksOf({ ...TRUE_MODEL, airDensityKgM3: airDensityKgM3({ altitudeM: 2280, temperatureC: -2 }) }, [20, 40, 60]), { air: { altitudeM: 2280, temperatureC: -2 } }));
 
 describe('field card data', () => {

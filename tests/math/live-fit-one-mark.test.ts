@@ -1,4 +1,4 @@
-import { liveFit, type LiveFitText } from '@/components/sessions/live-fit';
+import { liveFit, type LiveFitText } from '@/components/sight-ins/live-fit';
 import type { Build } from '@/shared/build';
 import { TRUE_MODEL, marksOf } from './helpers';
 

@@ -26,7 +26,7 @@ describe('sightInName', () => {
   it('numbers two of the same day, place, build and minute', () => {
     const twin = { ...morning, id: 12, createdAt: '2026-12-02T09:15:30.000Z' };
     const siblings = [morning, twin];
-    const names = siblings.map((session) => sightInName(session, { builds, siblings, timeZone: 'UTC' }));
+    const names = siblings.map((sightIn) => sightInName(sightIn, { builds, siblings, timeZone: 'UTC' }));
     expect(names[0]).toMatch(/\(1 of 2\)$/);
     expect(names[1]).toMatch(/\(2 of 2\)$/);
   });

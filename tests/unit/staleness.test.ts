@@ -62,14 +62,14 @@ describe('the staleness rule (shared/staleness.ts)', () => {
 
   test('confirming at the range clears the changes up to that moment, not later ones', () => {
     const peep = change(9, 'peep', '2026-12-01T10:00:00Z');
-    const confirmed = [{ sessionId: 1, at: new Date('2026-12-01T15:00:00Z') }];
+    const confirmed = [{ sightInId: 1, at: new Date('2026-12-01T15:00:00Z') }];
     expect(fitStaleness({ fit: first, fits: [first], changes: [peep], confirmations: confirmed }).state).toBe('current');
     const later = change(10, 'rest', '2026-12-02T10:00:00Z');
     const result = fitStaleness({ fit: first, fits: [first], changes: [peep, later], confirmations: confirmed });
     expect(result.state).toBe('confirm');
     expect(result.changeIds).toEqual([10]);
     // Another sight-in's confirmation does not count for this one.
-    expect(fitStaleness({ fit: first, fits: [first], changes: [peep], confirmations: [{ sessionId: 2, at: new Date('2026-12-01T15:00:00Z') }] }).state).toBe('confirm');
+    expect(fitStaleness({ fit: first, fits: [first], changes: [peep], confirmations: [{ sightInId: 2, at: new Date('2026-12-01T15:00:00Z') }] }).state).toBe('confirm');
   });
 
   test('an arrow build edit counts for that build only', () => {

@@ -135,7 +135,7 @@ describe('limits stated in the shown unit', () => {
     // 500 mm = 19.685 in: "at least 19.69 in" → 500.126 mm, inside the limit.
     const stated = Number(/([\d.]+) in/.exec(messageInUnits('Draw length must be at least 500 mm', imperial))![1]);
     expect(toStored(stated, 'length', imperial)).toBeGreaterThanOrEqual(500);
-    // The sight-in form's altitude field (shared/session.ts): measureSchema('Altitude', 'm', -500, 5000).
+    // The sight-in form's altitude field (shared/sightIn.ts): measureSchema('Altitude', 'm', -500, 5000).
     const issue = (value: number) => measureSchema('Altitude', 'm', -500, 5000).safeParse(value);
     const message = issue(9000).error!.issues[0].message;
     expect(message).toBe('Altitude must be at most 5000 m');

@@ -1,5 +1,5 @@
 import { BowLoader } from '@/components/bows/bow-loader';
-import { SessionEditor } from '@/components/sessions/session-editor';
+import { SightInEditor } from '@/components/sight-ins/sight-in-editor';
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Screen } from '@/components/ui/screen';
@@ -7,7 +7,7 @@ import { ScreenTitle } from '@/components/ui/screen-title';
 import { SectionHeading } from '@/components/ui/section-heading';
 
 /** Start a sight-in on a bow: enter marks, watch the fit, save. */
-export function NewSessionScreen({ bowId, buildId }: { bowId: number; buildId?: number }) {
+export function NewSightInScreen({ bowId, buildId }: { bowId: number; buildId?: number }) {
   return (
     <BowLoader bowId={bowId} title="Sight-in">
       {({ me, bow: data, role: { isOwner } }) => (
@@ -25,7 +25,7 @@ export function NewSessionScreen({ bowId, buildId }: { bowId: number; buildId?: 
               action={isOwner ? <Button label="Add a build" href={`/bows/${data.id}/builds/new`} /> : undefined}
             />
           ) : (
-            <SessionEditor bow={data} initialBuildId={buildId} distanceUnit={me.distanceUnit} addOnly={!isOwner} />
+            <SightInEditor bow={data} initialBuildId={buildId} distanceUnit={me.distanceUnit} addOnly={!isOwner} />
           )}
         </Screen>
       )}

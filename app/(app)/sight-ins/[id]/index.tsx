@@ -2,9 +2,9 @@ import { useLocalSearchParams } from 'expo-router';
 
 import { lazyScreen } from '@/components/shell/lazy-screen';
 
-const SessionScreen = lazyScreen('SessionScreen');
+const SightInScreen = lazyScreen('SightInScreen');
 
-export default function Session() {
+export default function SightIn() {
   const { id } = useLocalSearchParams<{ id: string }>();
-  return <SessionScreen sessionId={Number(id)} />;
+  return <SightInScreen sightInId={Number(id)} />;
 }

@@ -1,6 +1,6 @@
 import type { FieldValues } from 'react-hook-form';
 
-import { TypedDateField, type TypedDateFieldProps } from '@/components/sessions/typed-date-field';
+import { TypedDateField, type TypedDateFieldProps } from '@/components/sight-ins/typed-date-field';
 import { borders, colors, layout, radii, space } from '@/components/theme';
 
 // On the web, the browser's own date picker (<input type="date">, its value

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
-import type { LiveFit } from '@/components/sessions/live-fit';
+import type { LiveFit } from '@/components/sight-ins/live-fit';
 import { Banner } from '@/components/ui/banner';
 import { Text } from '@/components/ui/text';
 import { borders, colors, space } from '@/components/theme';

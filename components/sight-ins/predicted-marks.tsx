@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
-import type { UsableMark } from '@/components/sessions/live-fit';
+import type { UsableMark } from '@/components/sight-ins/live-fit';
 import { Text } from '@/components/ui/text';
 import { borders, colors, radii, space } from '@/components/theme';
 import type { FitResult } from '@/math/fit/fit-sight';

@@ -6,5 +6,5 @@ const TapeScreen = lazyScreen('TapeScreen');
 
 export default function Tape() {
   const { id, tape } = useLocalSearchParams<{ id: string; tape?: string }>();
-  return <TapeScreen sessionId={Number(id)} tapeId={tape ? Number(tape) : undefined} />;
+  return <TapeScreen sightInId={Number(id)} tapeId={tape ? Number(tape) : undefined} />;
 }

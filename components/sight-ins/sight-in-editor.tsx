@@ -7,25 +7,25 @@ import { useUnits } from '@/components/account/use-units';
 import { FieldGrid } from '@/components/bows/field-grid';
 import { applyFieldErrors } from '@/components/bows/server-field-errors';
 import { buildLine } from '@/components/builds/build-words';
-import { FitChart } from '@/components/sessions/fit-chart';
-import { FitStrip, FitWarnings } from '@/components/sessions/fit-warnings';
-import { liveFit, type LiveFit, type LiveFitText } from '@/components/sessions/live-fit';
-import { MarkTable, type RowFit } from '@/components/sessions/mark-table';
-import { PredictedMarks } from '@/components/sessions/predicted-marks';
-import { useDeleteSession, useSaveSession } from '@/components/sessions/api';
+import { FitChart } from '@/components/sight-ins/fit-chart';
+import { FitStrip, FitWarnings } from '@/components/sight-ins/fit-warnings';
+import { liveFit, type LiveFit, type LiveFitText } from '@/components/sight-ins/live-fit';
+import { MarkTable, type RowFit } from '@/components/sight-ins/mark-table';
+import { PredictedMarks } from '@/components/sight-ins/predicted-marks';
+import { useDeleteSightIn, useSaveSightIn } from '@/components/sight-ins/api';
 import { useOutbox, useOutboxSent } from '@/components/offline/use-outbox';
 import type { OutboxSent } from '@/components/offline/outbox';
-import { DateField } from '@/components/sessions/date-field';
+import { DateField } from '@/components/sight-ins/date-field';
 import {
   airInStoredUnits,
   appendOnlyUpdate,
   liveFitInUnits,
   keptRows,
-  sessionFormDefaults,
-  sessionFormResolverFor,
+  sightInFormDefaults,
+  sightInFormResolverFor,
   tablePath,
-  type SessionFormText,
-} from '@/components/sessions/session-form-values';
+  type SightInFormText,
+} from '@/components/sight-ins/sight-in-form-values';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -38,19 +38,19 @@ import { space } from '@/components/theme';
 import type { DistanceUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import { checkMarks, type MarkCheckResult, type MarkProblem } from '@/shared/mark-checks';
-import type { Session, SessionInput } from '@/shared/session';
+import type { SightIn, SightInInput } from '@/shared/sight-in';
 import { shownUnit, storedToText } from '@/shared/units';
 
-export interface SessionEditorProps {
+export interface SightInEditorProps {
   bow: BowDetail;
-  /** The saved session; absent for a new sight-in. */
-  session?: Session;
-  /** A new session's build (e.g. from ?build=); else the bow's first build. */
+  /** The saved sight-in; absent for a new sight-in. */
+  sightIn?: SightIn;
+  /** A new sight-in's build (e.g. from ?build=); else the bow's first build. */
   initialBuildId?: number;
   distanceUnit: DistanceUnit;
   /**
    * The viewer may add but not change or delete (a technician on a shared bow,
-   * see useBowRole): a saved session's details and marks are shown read-only,
+   * see useBowRole): a saved sight-in's details and marks are shown read-only,
    * new marks can be added below them, and there is no Delete. Default false.
    */
   addOnly?: boolean;
@@ -112,31 +112,31 @@ function FitSummary({ live }: { live: Extract<LiveFit, { state: 'fit' }> }) {
 }
 
 /**
- * A sight-in: the session header, the marks table and, as the archer types,
+ * A sight-in: the sight-in header, the marks table and, as the archer types,
  * the refit from the math core: predicted marks for the whole range with their
- * bands, warnings in plain words and charts. Saving sends the whole session in
+ * bands, warnings in plain words and charts. Saving sends the whole sight-in in
  * one request; the server refits and stores the fit. Messages from the server
  * go to the table row they concern.
- * Example: `<SessionEditor bow={bow} distanceUnit="yd" />`
+ * Example: `<SightInEditor bow={bow} distanceUnit="yd" />`
  */
-export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addOnly = false }: SessionEditorProps) {
+export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addOnly = false }: SightInEditorProps) {
   const router = useRouter();
-  const save = useSaveSession();
-  const remove = useDeleteSession();
+  const save = useSaveSightIn();
+  const remove = useDeleteSightIn();
   const { width } = useWindowDimensions();
   const split = width >= splitFrom;
   const [general, setGeneral] = useState<string | null>(null);
   const [asking, setAsking] = useState(false);
-  // A technician keeps the archer's saved session as it is and only adds marks to it.
-  const keepSaved = addOnly && session !== undefined;
-  const lockedRows = keepSaved ? session.marks.length : 0;
+  // A technician keeps the archer's saved sight-in as it is and only adds marks to it.
+  const keepSaved = addOnly && sightIn !== undefined;
+  const lockedRows = keepSaved ? sightIn.marks.length : 0;
   const firstBuild = initialBuildId && bow.builds.some((build) => build.id === initialBuildId) ? initialBuildId : bow.builds[0]?.id;
   // Altitude and temperature are typed in the account's units (shared/units.ts) and stored in m and °C.
   const units = useUnits();
-  const resolver = useMemo(() => sessionFormResolverFor(units), [units]);
-  const { control, handleSubmit, setError, formState, reset } = useForm<SessionFormText, unknown, SessionInput>({
+  const resolver = useMemo(() => sightInFormResolverFor(units), [units]);
+  const { control, handleSubmit, setError, formState, reset } = useForm<SightInFormText, unknown, SightInInput>({
     resolver,
-    defaultValues: sessionFormDefaults(session, firstBuild, distanceUnit, units),
+    defaultValues: sightInFormDefaults(sightIn, firstBuild, distanceUnit, units),
   });
 
   const [buildId, altitudeM, temperatureC, unit, marks] = useWatch({
@@ -163,11 +163,11 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
     (sent: OutboxSent) => {
       if (sent.id !== keptId) return;
       setKeptId(null);
-      const saved = (sent.response as { session?: Session } | null)?.session;
-      if (!session && saved) router.replace(`/sessions/${saved.id}`);
+      const saved = (sent.response as { sightIn?: SightIn } | null)?.sightIn;
+      if (!sightIn && saved) router.replace(`/sight-ins/${saved.id}`);
       else reset(undefined, { keepValues: true });
     },
-    [keptId, session, router, reset],
+    [keptId, sightIn, router, reset],
   );
   useOutboxSent(onSent);
   const rowFits = useMemo(() => rowFitsOf(live), [live]);
@@ -188,10 +188,10 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
       const kept = keptRows(marks ?? []);
       save.mutate(
         {
-          id: session?.id,
+          id: sightIn?.id,
           bowId: bow.id,
-          input: keepSaved ? appendOnlyUpdate(session, input) : input,
-          title: session ? `New marks for the ${session.date} sight-in · ${bow.nickname}` : `New sight-in · ${bow.nickname} · ${input.marks.length} marks`,
+          input: keepSaved ? appendOnlyUpdate(sightIn, input) : input,
+          title: sightIn ? `New marks for the ${sightIn.date} sight-in · ${bow.nickname}` : `New sight-in · ${bow.nickname} · ${input.marks.length} marks`,
           outboxId: keptItem?.state === 'waiting' ? keptItem.id : undefined,
         },
         {
@@ -201,9 +201,9 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
               return;
             }
             setKeptId(null);
-            const saved = result.session;
-            if (session) reset(sessionFormDefaults(saved, undefined, distanceUnit, units));
-            else router.replace(`/sessions/${saved.id}`);
+            const saved = result.sightIn;
+            if (sightIn) reset(sightInFormDefaults(saved, undefined, distanceUnit, units));
+            else router.replace(`/sight-ins/${saved.id}`);
           },
           onError: (error) =>
             setGeneral(
@@ -225,9 +225,9 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
 
   const header = (
     <Card style={styles.section}>
-      <SectionHeading title="The session" />
+      <SectionHeading title="The sight-in" />
       {buildOptions.length > 0 ? (
-        <FormChoice control={control} name="buildId" label="Arrow build" options={buildOptions} disabled={keepSaved} testID="session-build" />
+        <FormChoice control={control} name="buildId" label="Arrow build" options={buildOptions} disabled={keepSaved} testID="sight-in-build" />
       ) : null}
       {chosen ? (
         <Text variant="small" tone="soft">
@@ -235,14 +235,14 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
         </Text>
       ) : null}
       <FieldGrid minWidth={170}>
-        <DateField control={control} name="date" label="Date" disabled={keepSaved} testID="session-date" />
+        <DateField control={control} name="date" label="Date" disabled={keepSaved} testID="sight-in-date" />
         <FormField control={control} name="placeLabel" label="Place" hint="Optional, e.g. “home range”" disabled={keepSaved} />
       </FieldGrid>
       <FieldGrid minWidth={140}>
-        <FormField control={control} name="altitudeM" label="Altitude" hint="Optional" unit={shownUnit('altitude', units)} numeric disabled={keepSaved} testID="session-altitude" />
-        <FormField control={control} name="temperatureC" label="Temperature" hint="Optional" unit={shownUnit('temperature', units)} numeric disabled={keepSaved} testID="session-temperature" />
+        <FormField control={control} name="altitudeM" label="Altitude" hint="Optional" unit={shownUnit('altitude', units)} numeric disabled={keepSaved} testID="sight-in-altitude" />
+        <FormField control={control} name="temperatureC" label="Temperature" hint="Optional" unit={shownUnit('temperature', units)} numeric disabled={keepSaved} testID="sight-in-temperature" />
       </FieldGrid>
-      <FormChoice control={control} name="unit" label="Distances in" options={unitOptions} disabled={keepSaved} testID="session-unit" />
+      <FormChoice control={control} name="unit" label="Distances in" options={unitOptions} disabled={keepSaved} testID="sight-in-unit" />
     </Card>
   );
 
@@ -251,14 +251,14 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
       <SectionHeading title="Marks" description="The scale reading where your group landed centred, for each distance." />
       {keepSaved ? (
         <Text variant="small" tone="soft" testID="marks-add-only">
-          {`The saved marks and the session’s details are ${bow.ownerName || 'the archer'}’s: you can add marks below them.`}
+          {`The saved marks and the sight-in’s details are ${bow.ownerName || 'the archer'}’s: you can add marks below them.`}
         </Text>
       ) : null}
       <MarkTable control={control} unit={unit} rowFits={rowFits} refusedRow={refusedRowOf(live)} lockedRows={lockedRows} problems={problemsByRow} />
       <FormField
         control={control}
         name="notes"
-        label="Session notes"
+        label="Sight-in notes"
         hint="Optional: wind, light, anything odd."
         multiline
         numberOfLines={3}
@@ -306,17 +306,17 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
       ) : null}
       <View style={styles.actions}>
         <Button
-          label={session ? 'Save the marks' : 'Save the sight-in'}
+          label={sightIn ? 'Save the marks' : 'Save the sight-in'}
           pendingLabel="Saving…"
           pending={save.isPending}
           onPress={submit}
-          testID="session-save"
+          testID="sight-in-save"
         />
-        {session ? (
+        {sightIn ? (
           <Button
             label="Tape"
             variant="secondary"
-            href={`/sessions/${session.id}/tape`}
+            href={`/sight-ins/${sightIn.id}/tape`}
             disabled={formState.isDirty}
             testID="open-tape"
           />
@@ -329,7 +329,7 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
   return (
     <View style={styles.editor}>
       {general ? (
-        <Banner tone="error" title="Could not save the sight-in" testID="session-error">
+        <Banner tone="error" title="Could not save the sight-in" testID="sight-in-error">
           {general}
         </Banner>
       ) : null}
@@ -337,28 +337,28 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
         <Banner
           tone={keptItem.state === 'refused' ? 'error' : 'warn'}
           title={keptItem.state === 'refused' ? 'The server refused this sight-in' : 'On this phone, not sent yet'}
-          testID="session-kept"
+          testID="sight-in-kept"
         >
           {keptItem.state === 'refused'
             ? `${keptItem.refusal?.message ?? 'It was refused.'} It stays on this phone (see the list at the top) until you copy or discard it.`
             : 'Saved on this phone. It is sent to Pinwright when the signal is back, even if you close the app; the live fit below works meanwhile.'}
         </Banner>
       ) : null}
-      {save.isSuccess && !save.data.kept && session && !formState.isDirty ? (
+      {save.isSuccess && !save.data.kept && sightIn && !formState.isDirty ? (
         <Banner tone="info" title="Saved">
           The server refitted the marks and stored the fit. Open the tape to print it.
         </Banner>
       ) : null}
-      {session && !formState.isDirty ? (
+      {sightIn && !formState.isDirty ? (
         <View style={styles.topActions}>
-          <Button label="Open the tape" href={`/sessions/${session.id}/tape`} testID="open-tape-top" />
-          <Button label="Field card: slopes, altitude" variant="secondary" href={`/sessions/${session.id}/field-card`} testID="open-field-card" />
+          <Button label="Open the tape" href={`/sight-ins/${sightIn.id}/tape`} testID="open-tape-top" />
+          <Button label="Field card: slopes, altitude" variant="secondary" href={`/sight-ins/${sightIn.id}/field-card`} testID="open-field-card" />
           <Text variant="small" tone="soft" style={styles.topHint}>
             Drawn from the fit saved with these marks.
           </Text>
         </View>
       ) : null}
-      {session && formState.isDirty ? (
+      {sightIn && formState.isDirty ? (
         <Text variant="small" tone="soft">
           Unsaved changes: save before opening the tape, which is drawn from the saved fit.
         </Text>
@@ -381,20 +381,20 @@ export function SessionEditor({ bow, session, initialBuildId, distanceUnit, addO
           {actions}
         </>
       )}
-      {session && !addOnly ? (
+      {sightIn && !addOnly ? (
         asking ? (
           <ConfirmBar
             title="Delete this sight-in?"
-            message="This deletes the session with its marks, its fit and its saved tapes. It cannot be undone."
+            message="This deletes the sight-in with its marks, its fit and its saved tapes. It cannot be undone."
             confirmLabel="Delete for good"
             pendingLabel="Deleting…"
             pending={remove.isPending}
             error={remove.isError ? remove.error.message : null}
-            onConfirm={() => remove.mutate(session, { onSuccess: () => router.replace(`/bows/${bow.id}`) })}
+            onConfirm={() => remove.mutate(sightIn, { onSuccess: () => router.replace(`/bows/${bow.id}`) })}
             onCancel={() => setAsking(false)}
           />
         ) : (
-          <Button label="Delete this sight-in" variant="quiet" onPress={() => setAsking(true)} testID="session-delete" />
+          <Button label="Delete this sight-in" variant="quiet" onPress={() => setAsking(true)} testID="sight-in-delete" />
         )
       ) : null}
     </View>

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 
-import { fittedCurve, type UsableMark } from '@/components/sessions/live-fit';
-import { VictoryArea, VictoryAxis, VictoryChart, VictoryLine, VictoryScatter } from '@/components/sessions/victory';
+import { fittedCurve, type UsableMark } from '@/components/sight-ins/live-fit';
+import { VictoryArea, VictoryAxis, VictoryChart, VictoryLine, VictoryScatter } from '@/components/sight-ins/victory';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/theme';
 import type { FitResult } from '@/math/fit/fit-sight';

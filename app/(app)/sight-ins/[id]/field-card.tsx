@@ -2,9 +2,9 @@ import { useLocalSearchParams } from 'expo-router';
 
 import { lazyScreen } from '@/components/shell/lazy-screen';
 
-const MarksImportScreen = lazyScreen('MarksImportScreen');
+const FieldCardScreen = lazyScreen('FieldCardScreen');
 
-export default function ImportMarks() {
+export default function FieldCard() {
   const { id } = useLocalSearchParams<{ id: string }>();
-  return <MarksImportScreen sessionId={Number(id)} />;
+  return <FieldCardScreen sightInId={Number(id)} />;
 }

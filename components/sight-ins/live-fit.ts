@@ -1,5 +1,5 @@
 import { optionalTextToNumber, textToNumber } from '@/components/bows/form-numbers';
-import type { MarkRowText } from '@/components/sessions/session-form-values';
+import type { MarkRowText } from '@/components/sight-ins/sight-in-form-values';
 import { trySightFit, type FitResult } from '@/math/fit/fit-sight';
 import { predictMarksMm } from '@/math/flight/predict-mark';
 import type { DistanceUnit } from '@/shared/auth';
@@ -7,7 +7,7 @@ import type { Bow } from '@/shared/bow';
 import type { Build } from '@/shared/build';
 import type { FitInput } from '@/shared/fit';
 
-/** What the live fit reads from the form (a subset of SessionFormText). */
+/** What the live fit reads from the form (a subset of SightInFormText). */
 export interface LiveFitText {
   buildId: string;
   altitudeM: string;

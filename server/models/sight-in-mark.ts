@@ -8,11 +8,11 @@ import {
 } from 'sequelize';
 import { sequelize } from '@/server/db';
 
-/** One sighted mark of a session: distance (yd or m), scale reading (mm), arrows shot, note. */
-export class SessionMark extends Model<InferAttributes<SessionMark>, InferCreationAttributes<SessionMark>> {
+/** One sighted mark of a sight-in: distance (yd or m), scale reading (mm), arrows shot, note. */
+export class SightInMark extends Model<InferAttributes<SightInMark>, InferCreationAttributes<SightInMark>> {
   declare id: CreationOptional<number>;
-  declare sessionId: ForeignKey<number>;
-  /** Entry order within the session, from 0. */
+  declare sightInId: ForeignKey<number>;
+  /** Entry order within the sight-in, from 0. */
   declare position: number;
   declare distance: number;
   declare unit: 'yd' | 'm';
@@ -25,7 +25,7 @@ export class SessionMark extends Model<InferAttributes<SessionMark>, InferCreati
   declare addedById: CreationOptional<number | null>;
 }
 
-SessionMark.init(
+SightInMark.init(
   {
     id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
     position: { type: DataTypes.SMALLINT.UNSIGNED, allowNull: false },
@@ -38,5 +38,5 @@ SessionMark.init(
     updatedAt: DataTypes.DATE(3),
     addedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
   },
-  { sequelize, tableName: 'session_marks' },
+  { sequelize, tableName: 'sight_in_marks' },
 );

@@ -2,14 +2,14 @@ import { useState } from 'react';
 import { Controller, useFieldArray, useFormState, type Control, type FieldPath } from 'react-hook-form';
 import { Pressable, StyleSheet, TextInput, useWindowDimensions, View } from 'react-native';
 
-import { emptyMarkRow, type SessionFormText } from '@/components/sessions/session-form-values';
+import { emptyMarkRow, type SightInFormText } from '@/components/sight-ins/sight-in-form-values';
 import { Button } from '@/components/ui/button';
 import { FormField } from '@/components/ui/form-field';
 import { PlusIcon } from '@/components/ui/icons';
 import { Text } from '@/components/ui/text';
 import { borders, colors, layout, radii, space, type } from '@/components/theme';
 import type { MarkProblem } from '@/shared/mark-checks';
-import { maxMarks, type SessionInput } from '@/shared/session';
+import { maxMarks, type SightInInput } from '@/shared/sight-in';
 
 /** How a table row sits against the live fit (readings as the archer reads them). */
 export interface RowFit {
@@ -19,8 +19,8 @@ export interface RowFit {
 }
 
 export interface MarkTableProps {
-  control: Control<SessionFormText, unknown, SessionInput>;
-  unit: SessionFormText['unit'];
+  control: Control<SightInFormText, unknown, SightInInput>;
+  unit: SightInFormText['unit'];
   /** The live fit per table row (absent for rows the fit does not use). */
   rowFits: Record<number, RowFit>;
   /** A table row the fit refused (e.g. a distance entered twice). */
@@ -57,7 +57,7 @@ function CompactNumber({
   testID,
 }: {
   control: Control_;
-  name: FieldPath<SessionFormText>;
+  name: FieldPath<SightInFormText>;
   label: string;
   unit?: string;
   whole?: boolean;

@@ -2,9 +2,9 @@ import { useLocalSearchParams } from 'expo-router';
 
 import { lazyScreen } from '@/components/shell/lazy-screen';
 
-const NewSessionScreen = lazyScreen('NewSessionScreen');
+const NewSightInScreen = lazyScreen('NewSightInScreen');
 
-export default function NewSession() {
+export default function NewSightIn() {
   const { id, build } = useLocalSearchParams<{ id: string; build?: string }>();
-  return <NewSessionScreen bowId={Number(id)} buildId={build ? Number(build) : undefined} />;
+  return <NewSightInScreen bowId={Number(id)} buildId={build ? Number(build) : undefined} />;
 }

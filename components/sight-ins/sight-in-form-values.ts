@@ -3,7 +3,7 @@ import { set, type FieldErrors, type Resolver } from 'react-hook-form';
 import { numberToText, optionalQuantityTextToStored, optionalTextToNumber, storedToInputText, textToNumber } from '@/components/bows/form-numbers';
 import { distanceToMetres, metresToDistance } from '@/math/units/convert';
 import type { DistanceUnit } from '@/shared/auth';
-import { sessionInputSchema, type Session, type SessionInput, type SessionUpdate } from '@/shared/session';
+import { sightInInputSchema, type SightIn, type SightInInput, type SightInUpdate } from '@/shared/sight-in';
 import { localeDateOrder, messageInUnits, parseDateText, type DateOrder, type UnitsLike } from '@/shared/units';
 
 /** One row of the marks table, as typed. */
@@ -21,7 +21,7 @@ export interface MarkRowText {
  * "C" names, kept so schema errors land on the right field), one distance unit
  * for the whole table, and the rows of the marks table.
  */
-export interface SessionFormText {
+export interface SightInFormText {
   buildId: string;
   date: string;
   placeLabel: string;
@@ -81,13 +81,13 @@ export function liveFitInUnits<T extends { state: string }>(live: T, units: Unit
 }
 
 /**
- * The form's text → the API's session input (the blank rows left out):
+ * The form's text → the API's sight-in input (the blank rows left out):
  * altitude and temperature from the archer's units to m and °C, the date from
  * ISO or the locale's numeric form to YYYY-MM-DD (left as typed when it cannot
  * be read, for the schema to refuse).
- * Example: sessionTextToInput({ …, unit: 'yd', marks: [{ distance: '20', scaleMm: '12.4', … }] }).marks[0] → { distance: 20, unit: 'yd', scaleMm: 12.4, arrowsShot: null, note: '' }
+ * Example: sightInTextToInput({ …, unit: 'yd', marks: [{ distance: '20', scaleMm: '12.4', … }] }).marks[0] → { distance: 20, unit: 'yd', scaleMm: 12.4, arrowsShot: null, note: '' }
  */
-export function sessionTextToInput(text: SessionFormText, units?: UnitsLike, order: DateOrder | null = localeDateOrder()) {
+export function sightInTextToInput(text: SightInFormText, units?: UnitsLike, order: DateOrder | null = localeDateOrder()) {
   const rows = text.marks ?? [];
   const date = parseDateText(text.date, order);
   return {
@@ -127,18 +127,18 @@ export function tablePath(path: readonly (string | number)[], kept: readonly num
 
 /**
  * The sight-in form's resolver for the archer's units: blank rows are left
- * out, the rest is checked with the shared sessionInputSchema (the server's
+ * out, the rest is checked with the shared sightInInputSchema (the server's
  * own), each message goes back to the table row it belongs to, altitude and
  * temperature limits are stated in the archer's units, and a date that cannot
  * be read says why (e.g. both readings of 12/02/2026 when the order is unknown).
- * Example: `useForm<SessionFormText, unknown, SessionInput>({ resolver: sessionFormResolverFor(me) })`
+ * Example: `useForm<SightInFormText, unknown, SightInInput>({ resolver: sightInFormResolverFor(me) })`
  */
-export function sessionFormResolverFor(units?: UnitsLike, order: DateOrder | null = localeDateOrder()): Resolver<SessionFormText, unknown, SessionInput> {
+export function sightInFormResolverFor(units?: UnitsLike, order: DateOrder | null = localeDateOrder()): Resolver<SightInFormText, unknown, SightInInput> {
   return async (values) => {
     const kept = keptRows(values.marks ?? []);
-    const result = sessionInputSchema.safeParse(sessionTextToInput(values, units, order));
+    const result = sightInInputSchema.safeParse(sightInTextToInput(values, units, order));
     if (result.success) return { values: result.data, errors: {} };
-    const errors: FieldErrors<SessionFormText> = {};
+    const errors: FieldErrors<SightInFormText> = {};
     const seen = new Set<string>();
     const date = parseDateText(values.date, order);
     for (const issue of result.error.issues) {
@@ -158,15 +158,15 @@ export function sessionFormResolverFor(units?: UnitsLike, order: DateOrder | nul
 }
 
 /** The resolver in stored units (m, °C) and the device's date order. */
-export const sessionFormResolver: Resolver<SessionFormText, unknown, SessionInput> = sessionFormResolverFor();
+export const sightInFormResolver: Resolver<SightInFormText, unknown, SightInInput> = sightInFormResolverFor();
 
 /**
- * The form's starting text: a saved session's marks in entry order (in their
- * own unit: the first mark's), or a new session for `buildId` with two empty rows.
- * Example: sessionFormDefaults(undefined, 4, 'yd').marks.length → 2
+ * The form's starting text: a saved sight-in's marks in entry order (in their
+ * own unit: the first mark's), or a new sight-in for `buildId` with two empty rows.
+ * Example: sightInFormDefaults(undefined, 4, 'yd').marks.length → 2
  */
-export function sessionFormDefaults(session: Session | undefined, buildId: number | undefined, unit: DistanceUnit, units?: UnitsLike): SessionFormText {
-  if (!session) {
+export function sightInFormDefaults(sightIn: SightIn | undefined, buildId: number | undefined, unit: DistanceUnit, units?: UnitsLike): SightInFormText {
+  if (!sightIn) {
     return {
       buildId: buildId ? String(buildId) : '',
       date: todayIso(),
@@ -178,17 +178,17 @@ export function sessionFormDefaults(session: Session | undefined, buildId: numbe
       marks: [{ ...emptyMarkRow }, { ...emptyMarkRow }],
     };
   }
-  const marks = [...session.marks].sort((a, b) => a.position - b.position);
+  const marks = [...sightIn.marks].sort((a, b) => a.position - b.position);
   const tableUnit = marks[0]?.unit ?? unit;
   // One unit per table: a mark saved in the other unit is converted exactly (1 yd = 0.9144 m).
   const inTableUnit = (distance: number, from: DistanceUnit) => metresToDistance(distanceToMetres(distance, from), tableUnit);
   return {
-    buildId: String(session.buildId),
-    date: session.date,
-    placeLabel: session.placeLabel,
-    altitudeM: storedToInputText(session.altitudeM, 'altitude', units),
-    temperatureC: storedToInputText(session.temperatureC, 'temperature', units),
-    notes: session.notes,
+    buildId: String(sightIn.buildId),
+    date: sightIn.date,
+    placeLabel: sightIn.placeLabel,
+    altitudeM: storedToInputText(sightIn.altitudeM, 'altitude', units),
+    temperatureC: storedToInputText(sightIn.temperatureC, 'temperature', units),
+    notes: sightIn.notes,
     unit: tableUnit,
     marks: marks.map((mark) => ({
       distance: numberToText(inTableUnit(mark.distance, mark.unit), 2),
@@ -200,14 +200,14 @@ export function sessionFormDefaults(session: Session | undefined, buildId: numbe
 }
 
 /**
- * What a technician saves on a shared bow's session: only the marks, the saved
+ * What a technician saves on a shared bow's sight-in: only the marks, the saved
  * ones exactly as stored (in entry order) and then the table's new rows (the
- * server refuses any other change to the archer's session). `input` is the
+ * server refuses any other change to the archer's sight-in). `input` is the
  * checked form, whose first marks are the saved ones as shown.
- * Example: appendOnlyUpdate(session with 20 and 40 yd, input with 20, 40 and 60 yd).marks → the stored 20 and 40 yd marks, then 60 yd
+ * Example: appendOnlyUpdate(sight-in with 20 and 40 yd, input with 20, 40 and 60 yd).marks → the stored 20 and 40 yd marks, then 60 yd
  */
-export function appendOnlyUpdate(session: Session, input: SessionInput): SessionUpdate {
-  const stored = [...session.marks]
+export function appendOnlyUpdate(sightIn: SightIn, input: SightInInput): SightInUpdate {
+  const stored = [...sightIn.marks]
     .sort((a, b) => a.position - b.position)
     .map(({ distance, unit, scaleMm, arrowsShot, note }) => ({ distance, unit, scaleMm, arrowsShot, note }));
   return { marks: [...stored, ...input.marks.slice(stored.length)] };

@@ -12,23 +12,23 @@ import {
 import { distanceLimits } from './fit';
 
 /**
- * Sight-in session schemas: a session (bow + build, date, place, air) with its
- * marks. Saving a session saves its whole mark set at once and refits it.
+ * Sight-in schemas: a sight-in (bow + build, date, place, air) with its
+ * marks. Saving a sight-in saves its whole mark set at once and refits it.
  *
- * Example: sessionInputSchema.parse({ buildId: 3, date: '2026-10-04', marks: [
+ * Example: sightInInputSchema.parse({ buildId: 3, date: '2026-10-04', marks: [
  *   { distance: 20, unit: 'yd', scaleMm: 12.4 }, { distance: 60, unit: 'yd', scaleMm: 41.9 } ] })
  *   → the same with placeLabel '', altitudeM null, temperatureC null, notes '', each mark arrowsShot null and note ''
  */
 
 /**
- * Fewest marks a session may hold: one, which fits only when the build has a
+ * Fewest marks a sight-in may hold: one, which fits only when the build has a
  * chronographed speed (an estimate from one mark; the server refuses it
- * otherwise, with ONE_MARK_SESSION_MESSAGE); two or more fit any build.
+ * otherwise, with ONE_MARK_SIGHT_IN_MESSAGE); two or more fit any build.
  */
 export const minMarks = 1;
 /** The server's refusal of one mark when the build has no chronographed speed (field `marks`). */
-export const ONE_MARK_SESSION_MESSAGE = 'Enter at least 2 marks to fit, or one mark with a chronographed speed on the arrow build';
-/** Most marks a session may hold. */
+export const ONE_MARK_SIGHT_IN_MESSAGE = 'Enter at least 2 marks to fit, or one mark with a chronographed speed on the arrow build';
+/** Most marks a sight-in may hold. */
 export const maxMarks = 30;
 
 /** One sighted mark: the scale reading where the arrows grouped at a distance. */
@@ -44,7 +44,7 @@ export const markInputSchema = z.object({
 /** Yards → metres (exact: 1 yd = 0.9144 m, international yard and pound, 1959). */
 const toMetres = (distance: number, unit: 'yd' | 'm') => (unit === 'yd' ? distance * 0.9144 : distance);
 
-const sessionFields = z.object({
+const sightInFields = z.object({
   buildId: refIdSchema('arrow build'),
   date: isoDateSchema,
   placeLabel: textSchema('Place', 80),
@@ -59,10 +59,10 @@ const sessionFields = z.object({
     .max(maxMarks, `Enter at most ${maxMarks} marks`),
 });
 
-type SessionFields = z.infer<typeof sessionFields>;
+type SightInFields = z.infer<typeof sightInFields>;
 
-/** Each distance once per session (compared in metres, so 20 yd and 20 m are different). */
-function checkDistinctDistances(value: Partial<SessionFields>, ctx: z.RefinementCtx) {
+/** Each distance once per sight-in (compared in metres, so 20 yd and 20 m are different). */
+function checkDistinctDistances(value: Partial<SightInFields>, ctx: z.RefinementCtx) {
   if (!value.marks) return;
   const seen: number[] = [];
   value.marks.forEach((mark, index) => {
@@ -72,31 +72,31 @@ function checkDistinctDistances(value: Partial<SessionFields>, ctx: z.Refinement
       ctx.addIssue({
         code: z.ZodIssueCode.custom,
         path: ['marks', index, 'distance'],
-        message: `${mark.distance} ${mark.unit} is entered twice; each distance once per session`,
+        message: `${mark.distance} ${mark.unit} is entered twice; each distance once per sight-in`,
       });
     }
     seen.push(metres);
   });
 }
 
-/** Body of POST /api/bows/:bowId/sessions. */
-export const sessionInputSchema = sessionFields.superRefine(checkDistinctDistances);
+/** Body of POST /api/bows/:bowId/sight-ins. */
+export const sightInInputSchema = sightInFields.superRefine(checkDistinctDistances);
 /**
- * Body of PATCH /api/sessions/:id: any subset. `marks`, when given, replaces the
+ * Body of PATCH /api/sight-ins/:id: any subset. `marks`, when given, replaces the
  * whole mark set. The server refits after every change.
  */
-export const sessionUpdateSchema = sessionFields.partial().superRefine(checkDistinctDistances);
+export const sightInUpdateSchema = sightInFields.partial().superRefine(checkDistinctDistances);
 
 /** A mark as the API returns it. */
 export const markSchema = markInputSchema.extend({ id: z.number().int(), position: z.number().int(), addedBy: addedBySchema.optional() });
 
 /**
- * The fit stored with a session: the math core's fit result (see math/README.md),
+ * The fit stored with a sight-in: the math core's fit result (see math/README.md),
  * with readings expressed as the archer reads the scale (for an upward-growing
  * scale the server maps the math's downward-positive readings back), plus
  * `scaleDirection`. `model` is the math core's own serialisable sight model
  * (downward-positive readings); the server evaluates it for tapes and sheets.
- * Distances are in `distanceUnit` (the unit of the session's first mark);
+ * Distances are in `distanceUnit` (the unit of the sight-in's first mark);
  * a predicted mark the arrow cannot reach has markMm null.
  */
 export const storedFitSchema = z
@@ -141,8 +141,8 @@ export const storedFitSchema = z
   })
   .passthrough();
 
-/** A session as the API returns it, with its marks (in entry order) and its fit. */
-export const sessionSchema = sessionFields
+/** A sight-in as the API returns it, with its marks (in entry order) and its fit. */
+export const sightInSchema = sightInFields
   .omit({ marks: true })
   .extend({
     id: z.number().int(),
@@ -153,8 +153,8 @@ export const sessionSchema = sessionFields
   })
   .merge(timestampsSchema);
 
-/** A session in a list: no mark rows, but a summary of its fit. */
-export const sessionFitSummarySchema = z.object({
+/** A sight-in in a list: no mark rows, but a summary of its fit. */
+export const sightInFitSummarySchema = z.object({
   speedFps: z.number().nullable(),
   rmsMm: z.number().nullable(),
   markCount: z.number().int(),
@@ -163,17 +163,17 @@ export const sessionFitSummarySchema = z.object({
   warningCount: z.number().int(),
 });
 
-export const sessionListItemSchema = sessionFields
+export const sightInListItemSchema = sightInFields
   .omit({ marks: true })
-  .extend({ id: z.number().int(), bowId: z.number().int(), summary: sessionFitSummarySchema, addedBy: addedBySchema.optional() })
+  .extend({ id: z.number().int(), bowId: z.number().int(), summary: sightInFitSummarySchema, addedBy: addedBySchema.optional() })
   .merge(timestampsSchema);
 
 export type MarkInput = z.infer<typeof markInputSchema>;
-export type SessionInput = z.infer<typeof sessionInputSchema>;
-export type SessionFormValues = z.input<typeof sessionInputSchema>;
-export type SessionUpdate = z.infer<typeof sessionUpdateSchema>;
+export type SightInInput = z.infer<typeof sightInInputSchema>;
+export type SightInFormValues = z.input<typeof sightInInputSchema>;
+export type SightInUpdate = z.infer<typeof sightInUpdateSchema>;
 export type Mark = z.infer<typeof markSchema>;
-export type Session = z.infer<typeof sessionSchema>;
+export type SightIn = z.infer<typeof sightInSchema>;
 export type StoredFit = z.infer<typeof storedFitSchema>;
-export type SessionFitSummary = z.infer<typeof sessionFitSummarySchema>;
-export type SessionListItem = z.infer<typeof sessionListItemSchema>;
+export type SightInFitSummary = z.infer<typeof sightInFitSummarySchema>;
+export type SightInListItem = z.infer<typeof sightInListItemSchema>;

@@ -8,14 +8,14 @@ import {
   type NonAttribute,
 } from 'sequelize';
 import { sequelize } from '@/server/db';
-import type { SessionMark } from './session-mark';
+import type { SightInMark } from './sight-in-mark';
 
 /**
- * A sight-in session: bow + build, date, place and air, with the fit the math
+ * A sight-in: bow + build, date, place and air, with the fit the math
  * core computed from its marks when it was saved (`fit`, JSON) and two summary
  * numbers copied from that fit for lists.
  */
-export class SightSession extends Model<InferAttributes<SightSession>, InferCreationAttributes<SightSession>> {
+export class SightIn extends Model<InferAttributes<SightIn>, InferCreationAttributes<SightIn>> {
   declare id: CreationOptional<number>;
   declare bowId: ForeignKey<number>;
   declare buildId: ForeignKey<number>;
@@ -32,10 +32,10 @@ export class SightSession extends Model<InferAttributes<SightSession>, InferCrea
   declare updatedAt: CreationOptional<Date>;
   /** Who added it (set on create: server/models/added-by.ts; null once that account is deleted). */
   declare addedById: CreationOptional<number | null>;
-  declare marks?: NonAttribute<SessionMark[]>;
+  declare marks?: NonAttribute<SightInMark[]>;
 }
 
-SightSession.init(
+SightIn.init(
   {
     id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
     date: { type: DataTypes.DATEONLY, allowNull: false },
@@ -50,5 +50,5 @@ SightSession.init(
     updatedAt: DataTypes.DATE(3),
     addedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
   },
-  { sequelize, tableName: 'sight_sessions' },
+  { sequelize, tableName: 'sight_ins' },
 );

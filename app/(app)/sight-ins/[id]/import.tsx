@@ -2,9 +2,9 @@ import { useLocalSearchParams } from 'expo-router';
 
 import { lazyScreen } from '@/components/shell/lazy-screen';
 
-const FieldCardScreen = lazyScreen('FieldCardScreen');
+const MarksImportScreen = lazyScreen('MarksImportScreen');
 
-export default function FieldCard() {
+export default function ImportMarks() {
   const { id } = useLocalSearchParams<{ id: string }>();
-  return <FieldCardScreen sessionId={Number(id)} />;
+  return <MarksImportScreen sightInId={Number(id)} />;
 }
