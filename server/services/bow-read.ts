@@ -7,7 +7,7 @@
  * Eight plain indexed SELECTs sent at once on one connection in one read-only
  * snapshot, no model instances. (One statement with JSON arrays, the first
  * rewrite, cost MariaDB about 1.7 ms a bow mostly writing doubles and dates
- * into JSON; plain rows cost it a fraction of that: tests/bench/api-read.ts.)
+ * into JSON; plain rows cost it a fraction of that: tests/benchmarks/api-read.ts.)
  * The services then build the same answers as before from these rows.
  *
  * Example: const [facts] = await readBowFacts({ bowId: 12 }, user.id); facts?.canRead → true for its owner

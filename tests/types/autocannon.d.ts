@@ -1,4 +1,4 @@
-// autocannon 8 ships no type declarations; only the part tests/bench/api-read.ts uses is declared.
+// autocannon 8 ships no type declarations; only the part tests/benchmarks/api-read.ts uses is declared.
 declare module 'autocannon' {
   interface Options {
     url: string;

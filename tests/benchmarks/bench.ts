@@ -69,10 +69,10 @@ async function main() {
   const frame = rows[5][1];
   console.log(`goal: full refit + tape for 12 marks under 16 ms — ${frame < 16 ? 'met' : 'NOT met'} (${frame.toFixed(2)} ms)`);
 
-  // The API's bow reads against GET /api/me: its own server and scratch database (tests/bench/api-read.ts; also runs alone).
+  // The API's bow reads against GET /api/me: its own server and scratch database (tests/benchmarks/api-read.ts; also runs alone).
   await apiReadSection();
 
-  // The web app: cold first load on slow 4G, static files, Lighthouse (tests/bench/web.ts; also runs alone).
+  // The web app: cold first load on slow 4G, static files, Lighthouse (tests/benchmarks/web.ts; also runs alone).
   await runWebBench();
 }
 

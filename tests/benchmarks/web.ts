@@ -1,6 +1,6 @@
 /**
  * The web section of `npm run bench` (also runs alone:
- * `flock /tmp/pinwright-heavy.lock npx tsx tests/bench/web.ts`).
+ * `flock /tmp/pinwright-heavy.lock npx tsx tests/benchmarks/web.ts`).
  *
  * Builds the export when stale, serves it with the real app on a scratch
  * database seeded with the invented demo, then:

@@ -12,7 +12,7 @@
  * endpoint gets a 1 s warm-up, then three interleaved rounds of
  * BENCH_API_SECONDS (default 3) each; about a minute in all.
  *
- * Run alone: npx tsx tests/bench/api-read.ts
+ * Run alone: npx tsx tests/benchmarks/api-read.ts
  */
 import path from 'node:path';
 import { spawn, type ChildProcess } from 'node:child_process';
