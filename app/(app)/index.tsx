@@ -1,5 +1,5 @@
-import { BenchScreen } from '@/components/bench/bench-screen';
+import { HomeScreen } from '@/components/home/home-screen';
 
-export default function Bench() {
-  return <BenchScreen />;
+export default function Home() {
+  return <HomeScreen />;
 }

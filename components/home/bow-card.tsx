@@ -12,7 +12,7 @@ import { levelSummarySchema } from '@/shared/level';
 const count = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
 /**
- * One bow on the bench: nickname, level readiness in words, and how far its
+ * One bow on the home screen: nickname, level readiness in words, and how far its
  * records go (builds, sight-ins, a saved tape). Opens the bow.
  * Example: `<BowCard bow={summary} />`
  */

@@ -3,10 +3,10 @@ import Svg, { Circle, Line, Path, Rect } from 'react-native-svg';
 import { colors } from '@/components/theme';
 
 /**
- * The empty bench's picture: a bench top with a vise and an empty bow hanger.
- * Example: `<BenchArt size={120} />`
+ * The empty home screen's picture: a workbench top with a vise and an empty bow hanger.
+ * Example: `<HomeArt size={120} />`
  */
-export function BenchArt({ size = 120 }: { size?: number }) {
+export function HomeArt({ size = 120 }: { size?: number }) {
   return (
     <Svg width={size} height={size * 0.66} viewBox="0 0 120 80" aria-hidden>
       <Rect x={8} y={44} width={104} height={8} rx={2} fill={colors.slate} />

@@ -6,14 +6,14 @@ import { bowListResponseSchema, type BowSummary } from '@/shared/bow';
 /**
  * Query key of the archer's bow list. The same key and schema as the bows
  * feature's list (components/bows/api.ts), so both read one cache entry and
- * invalidating ['bows'] refreshes the bench.
+ * invalidating ['bows'] refreshes the home screen.
  */
-export const benchKeys = {
+export const homeKeys = {
   bows: ['bows', 'list'] as const,
 };
 
 /** Fetches the signed-in archer's bows with their readiness. A 404 (no bows API on this server yet) counts as no bows. */
-export async function fetchBenchBows(): Promise<BowSummary[]> {
+export async function fetchHomeBows(): Promise<BowSummary[]> {
   try {
     const { bows } = await apiFetch('/api/bows', { schema: bowListResponseSchema });
     return bows;
@@ -24,9 +24,9 @@ export async function fetchBenchBows(): Promise<BowSummary[]> {
 }
 
 /**
- * The archer's bows for the bench.
- * Example: `const bows = useBenchBows(); bows.data?.length`
+ * The archer's bows for the home screen (labelled "Bench").
+ * Example: `const bows = useHomeBows(); bows.data?.length`
  */
-export function useBenchBows() {
-  return useQuery<BowSummary[], ApiError>({ queryKey: benchKeys.bows, queryFn: fetchBenchBows });
+export function useHomeBows() {
+  return useQuery<BowSummary[], ApiError>({ queryKey: homeKeys.bows, queryFn: fetchHomeBows });
 }

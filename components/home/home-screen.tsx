@@ -2,9 +2,9 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { useMe } from '@/components/auth/api';
-import { useBenchBows } from '@/components/bench/api';
-import { BenchArt } from '@/components/bench/bench-art';
-import { BowCard } from '@/components/bench/bow-card';
+import { useHomeBows } from '@/components/home/api';
+import { HomeArt } from '@/components/home/home-art';
+import { BowCard } from '@/components/home/bow-card';
 import { ClientList } from '@/components/clients/client-list';
 import { loadTryCarry } from '@/components/try/try-carry';
 import { Banner } from '@/components/ui/banner';
@@ -22,12 +22,14 @@ import { space } from '@/components/theme';
 const title = <ScreenTitle name="Bench" />;
 
 /**
- * The home: the archer's bows with their readiness, or the first step when
+ * The home screen (its visible name is "Bench", the product's word for it; the
+ * code says "home" so it is not confused with the bench level check or the
+ * benchmarks): the archer's bows with their readiness, or the first step when
  * there are none. A technician's home is their clients and the bows shared
  * with them (and their own bows, if they keep any, below).
  */
-export function BenchScreen() {
-  const bows = useBenchBows();
+export function HomeScreen() {
+  const bows = useHomeBows();
   const me = useMe();
   const wide = useWide();
   const [carried] = useState(loadTryCarry);
@@ -102,7 +104,7 @@ export function BenchScreen() {
       {list.length === 0 ? (
         <EmptyState
           testID="bench-empty"
-          art={<BenchArt />}
+          art={<HomeArt />}
           title="No bows on your bench yet"
           message="Add a bow with its draw, sight and peep measurements. Then record an arrow build and sight in a few distances to fit a tape."
           action={<Button label="Add your first bow" icon={PlusIcon} href="/bows/new" />}
