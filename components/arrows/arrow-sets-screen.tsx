@@ -5,7 +5,7 @@ import { useAddArrowSet, useAddFlier, useArrowSets, useUpdateArrow } from '@/com
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { formatDay } from '@/components/bows/readiness-words';
-import { textToNumber } from '@/components/bows/form-numbers';
+import { textToNumber } from '@/components/forms/form-numbers';
 import { useBuild } from '@/components/builds/api';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';

@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { useDeleteBow } from '@/components/bows/api';
 import { bowSetupItems } from '@/components/bows/bow-setup-items';
-import { formatLength } from '@/components/bows/form-numbers';
+import { formatLength } from '@/components/forms/form-numbers';
 import { KeyValueList } from '@/components/bows/key-value-list';
 import { useBowRole } from '@/components/bows/use-bow-role';
 import { TuningSummary } from '@/components/tuning/tuning-summary';

@@ -9,7 +9,7 @@ import {
   storedToInputText,
   textToNumber,
   type FormUnits,
-} from '@/components/bows/form-numbers';
+} from '@/components/forms/form-numbers';
 import type { DistanceUnit } from '@/shared/auth';
 import { bowInputSchema, type Bow, type Hand, type ScaleDirection, type SightKind } from '@/shared/bow';
 

@@ -5,7 +5,7 @@ import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { BowDetailPanel, buildRowDetail, SetupPanel, type BowSelection } from '@/components/bows/bow-detail-panel';
 import { sightKindNames } from '@/components/bows/bow-setup-items';
-import { formatLength } from '@/components/bows/form-numbers';
+import { formatLength } from '@/components/forms/form-numbers';
 import { fitWords, formatDay, levelWords, sightInWords, tapeWords } from '@/components/bows/readiness-words';
 import { RecordRow } from '@/components/bows/record-row';
 import { useBowRole } from '@/components/bows/use-bow-role';

@@ -1,4 +1,4 @@
-import { formatDrawLength, formatLength } from '@/components/bows/form-numbers';
+import { formatDrawLength, formatLength } from '@/components/forms/form-numbers';
 import type { KeyValueItem } from '@/components/bows/key-value-list';
 import type { LengthUnit } from '@/shared/auth';
 import type { Bow, SightKind } from '@/shared/bow';

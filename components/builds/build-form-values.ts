@@ -12,7 +12,7 @@ import {
   textToNumber,
   unitsOf,
   type FormUnits,
-} from '@/components/bows/form-numbers';
+} from '@/components/forms/form-numbers';
 import { mmToInches } from '@/math/units/convert';
 import { buildInputSchema, type Build } from '@/shared/build';
 import { buildNumberFields } from '@/shared/predict';

@@ -3,9 +3,9 @@ import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { useUnits } from '@/components/account/use-units';
-import { FieldGrid } from '@/components/bows/field-grid';
-import { applyFieldErrors, flatFieldPath } from '@/components/bows/server-field-errors';
-import { textFormResolver } from '@/components/bows/text-form-resolver';
+import { FieldGrid } from '@/components/forms/field-grid';
+import { applyFieldErrors, flatFieldPath } from '@/components/forms/server-field-errors';
+import { textFormResolver } from '@/components/forms/text-form-resolver';
 import { useSaveBuild } from '@/components/builds/api';
 import { buildFormDefaults, buildFormFields, buildFormSchema, type BuildFormText } from '@/components/builds/build-form-values';
 import { BuildTotals, BuildTotalsStrip } from '@/components/builds/build-totals';

@@ -7,7 +7,7 @@ import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import { colors, radii, space } from '@/components/theme';
 import { grainsToGrams } from '@/math/units/convert';
-import type { FormUnits } from '@/components/bows/form-numbers';
+import type { FormUnits } from '@/components/forms/form-numbers';
 
 /** The caution shown beside every energy figure. */
 export const ENERGY_CAUTION_TEXT =

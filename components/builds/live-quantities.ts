@@ -1,7 +1,7 @@
 import { buildTextToInput, type BuildFormText } from '@/components/builds/build-form-values';
 import { focPercent, kineticEnergy, momentum, totalArrowGrains } from '@/math/arrow';
 import { mmToInches } from '@/math/units/convert';
-import type { FormUnits } from '@/components/bows/form-numbers';
+import type { FormUnits } from '@/components/forms/form-numbers';
 
 /** What the build form shows as the archer types; null where an input is missing or out of range. */
 export interface LiveQuantities {

@@ -3,7 +3,7 @@ import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { useBow } from '@/components/bows/api';
 import { useUnits } from '@/components/account/use-units';
-import { formatLength, quantityTextToStored } from '@/components/bows/form-numbers';
+import { formatLength, quantityTextToStored } from '@/components/forms/form-numbers';
 import { formatDay } from '@/components/bows/readiness-words';
 import { buildLine } from '@/components/builds/build-words';
 import { useCompare, type CompareParams } from '@/components/compare/api';

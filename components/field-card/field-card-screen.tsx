@@ -3,7 +3,7 @@ import { StyleSheet, View, useWindowDimensions } from 'react-native';
 import { SvgXml } from 'react-native-svg';
 
 import { useUnits } from '@/components/account/use-units';
-import { quantityTextToStored } from '@/components/bows/form-numbers';
+import { quantityTextToStored } from '@/components/forms/form-numbers';
 import { airInUnits, messageInUnits, shownUnit } from '@/shared/units';
 import { formatDay } from '@/components/bows/readiness-words';
 import { formatFixed, formatSigned } from '@/components/compare/format';

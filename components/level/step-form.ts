@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
 import { stepGuides } from '@/components/level/step-guide';
-import { numberToText, optionalTextToNumber } from '@/components/bows/form-numbers';
+import { numberToText, optionalTextToNumber } from '@/components/forms/form-numbers';
 import {
   levelResultSchema,
   levelStepKeySchema,

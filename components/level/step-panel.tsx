@@ -2,7 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { Image, StyleSheet, View } from 'react-native';
 
-import { textFormResolver } from '@/components/bows/text-form-resolver';
+import { textFormResolver } from '@/components/forms/text-form-resolver';
 import { useRemoveStepPhoto, useSaveCheck, useUploadStepPhoto } from '@/components/level/api';
 import { LevelDiagram } from '@/components/level/level-diagram';
 import { resultLabels } from '@/components/level/level-words';

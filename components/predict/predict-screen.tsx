@@ -4,9 +4,9 @@ import { StyleSheet, View } from 'react-native';
 
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
-import { FieldGrid } from '@/components/bows/field-grid';
-import { applyFieldErrors, flatFieldPath } from '@/components/bows/server-field-errors';
-import { textFormResolver } from '@/components/bows/text-form-resolver';
+import { FieldGrid } from '@/components/forms/field-grid';
+import { applyFieldErrors, flatFieldPath } from '@/components/forms/server-field-errors';
+import { textFormResolver } from '@/components/forms/text-form-resolver';
 import { buildFormDefaults, buildFormFields, buildFormSchema, type BuildFormText } from '@/components/builds/build-form-values';
 import { buildLine, buildName } from '@/components/builds/build-words';
 import { liveQuantities } from '@/components/builds/live-quantities';

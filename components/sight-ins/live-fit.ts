@@ -1,4 +1,4 @@
-import { optionalTextToNumber, textToNumber } from '@/components/bows/form-numbers';
+import { optionalTextToNumber, textToNumber } from '@/components/forms/form-numbers';
 import type { MarkRowText } from '@/components/sight-ins/sight-in-form-values';
 import { trySightFit, type FitResult } from '@/math/fit/fit-sight';
 import { predictMarksMm } from '@/math/flight/predict-mark';

@@ -4,8 +4,8 @@ import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { useUnits } from '@/components/account/use-units';
-import { FieldGrid } from '@/components/bows/field-grid';
-import { applyFieldErrors } from '@/components/bows/server-field-errors';
+import { FieldGrid } from '@/components/forms/field-grid';
+import { applyFieldErrors } from '@/components/forms/server-field-errors';
 import { buildLine } from '@/components/builds/build-words';
 import { FitChart } from '@/components/sight-ins/fit-chart';
 import { FitStrip, FitWarnings } from '@/components/sight-ins/fit-warnings';

@@ -1,6 +1,6 @@
 import { set, type FieldErrors, type Resolver } from 'react-hook-form';
 
-import { numberToText, optionalQuantityTextToStored, optionalTextToNumber, storedToInputText, textToNumber } from '@/components/bows/form-numbers';
+import { numberToText, optionalQuantityTextToStored, optionalTextToNumber, storedToInputText, textToNumber } from '@/components/forms/form-numbers';
 import { distanceToMetres, metresToDistance } from '@/math/units/convert';
 import type { DistanceUnit } from '@/shared/auth';
 import { sightInInputSchema, type SightIn, type SightInInput, type SightInUpdate } from '@/shared/sight-in';

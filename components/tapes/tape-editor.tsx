@@ -2,9 +2,9 @@ import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
-import { FieldGrid } from '@/components/bows/field-grid';
-import { applyFieldErrors, flatFieldPath } from '@/components/bows/server-field-errors';
-import { textFormResolver } from '@/components/bows/text-form-resolver';
+import { FieldGrid } from '@/components/forms/field-grid';
+import { applyFieldErrors, flatFieldPath } from '@/components/forms/server-field-errors';
+import { textFormResolver } from '@/components/forms/text-form-resolver';
 import { useSaveTape } from '@/components/tapes/api';
 import { PinGaps } from '@/components/tapes/pin-gaps';
 import {

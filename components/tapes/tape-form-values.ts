@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-import { lengthTextToMm, mmToLengthText, numberToText, textToNumber } from '@/components/bows/form-numbers';
+import { lengthTextToMm, mmToLengthText, numberToText, textToNumber } from '@/components/forms/form-numbers';
 import { metresToDistance, distanceToMetres, type LengthUnit } from '@/math/units/convert';
 import type { TapeOptionsInput } from '@/shared/fit';
 import type { StoredFit } from '@/shared/sight-in';

@@ -5,8 +5,8 @@ import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { apiFetch, isApiError } from '@/components/api/client';
-import { FieldGrid } from '@/components/bows/field-grid';
-import { lengthTextToMm, textToNumber } from '@/components/bows/form-numbers';
+import { FieldGrid } from '@/components/forms/field-grid';
+import { lengthTextToMm, textToNumber } from '@/components/forms/form-numbers';
 import { clearTryCarry, loadTryCarry } from '@/components/try/try-carry';
 import type { TryFormText } from '@/components/try/try-form-values';
 import { Banner } from '@/components/ui/banner';

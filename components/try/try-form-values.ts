@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-import { lengthTextToMm, textToNumber } from '@/components/bows/form-numbers';
+import { lengthTextToMm, textToNumber } from '@/components/forms/form-numbers';
 import type { DistanceUnit, LengthUnit } from '@/shared/auth';
 import { sheetInputSchema, type FitInput, type SheetInput } from '@/shared/fit';
 

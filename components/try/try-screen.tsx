@@ -3,9 +3,9 @@ import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
-import { FieldGrid } from '@/components/bows/field-grid';
-import { textToNumber } from '@/components/bows/form-numbers';
-import { textFormResolver } from '@/components/bows/text-form-resolver';
+import { FieldGrid } from '@/components/forms/field-grid';
+import { textToNumber } from '@/components/forms/form-numbers';
+import { textFormResolver } from '@/components/forms/text-form-resolver';
 import { TRY_SHEET_STORAGE_KEY } from '@/components/print/fetch-drawing';
 import { FitWarnings } from '@/components/sight-ins/fit-warnings';
 import type { LiveFit } from '@/components/sight-ins/live-fit';

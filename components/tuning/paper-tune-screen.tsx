@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { formatDay } from '@/components/bows/readiness-words';
-import { textToNumber } from '@/components/bows/form-numbers';
+import { textToNumber } from '@/components/forms/form-numbers';
 import { useAddShot, useEndRun, useRun, useSetup } from '@/components/tuning/api';
 import { TearDiagram } from '@/components/tuning/tear-diagram';
 import { TearHistory } from '@/components/tuning/tear-history';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { lengthTextToMm, messageForUnits } from '@/components/bows/form-numbers';
+import { lengthTextToMm, messageForUnits } from '@/components/forms/form-numbers';
 import { todayIso } from '@/components/level/level-words';
 import { useAddSetupEntry } from '@/components/tuning/api';
 import { Banner } from '@/components/ui/banner';

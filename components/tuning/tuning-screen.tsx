@@ -5,7 +5,7 @@ import { StyleSheet, View } from 'react-native';
 import { BowLoader } from '@/components/bows/bow-loader';
 import { formatDay } from '@/components/bows/readiness-words';
 import { RecordRow } from '@/components/bows/record-row';
-import { textToNumber } from '@/components/bows/form-numbers';
+import { textToNumber } from '@/components/forms/form-numbers';
 import { todayIso } from '@/components/level/level-words';
 import { useRuns, useSetup, useStartRun } from '@/components/tuning/api';
 import { SetupEntryForm } from '@/components/tuning/setup-entry-form';

@@ -1,4 +1,4 @@
-import { formatDrawLength } from '@/components/bows/form-numbers';
+import { formatDrawLength } from '@/components/forms/form-numbers';
 
 // 1 in = 25.4 mm exactly (international yard and pound, 1959).
 describe('formatDrawLength', () => {

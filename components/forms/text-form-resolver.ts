@@ -1,7 +1,7 @@
 import { set, type FieldErrors, type FieldValues, type Resolver } from 'react-hook-form';
 import type { ZodIssue, ZodType, ZodTypeDef } from 'zod';
 
-import { messageForUnits, type FormUnits } from '@/components/bows/form-numbers';
+import { messageForUnits, type FormUnits } from '@/components/forms/form-numbers';
 
 export interface TextFormResolverOptions {
   /** Messages that name millimetres state inches instead (the archer types inches). */
