@@ -16,6 +16,8 @@ export type ScratchRunOptions = {
   buildWeb?: boolean;
   /** Type-check the whole project first; errors fail the run (Jest still runs). */
   typecheck?: boolean;
+  /** Run `npm run lint` (ESLint with --max-warnings 0, Prettier --check) first; any finding fails the run (Jest still runs). */
+  lint?: boolean;
   quiet?: boolean;
 };
 
@@ -53,6 +55,12 @@ export async function runJestOnScratchDatabase(options: ScratchRunOptions): Prom
       console.log('Type-checking (tsc --noEmit)…');
       typeErrors = await run(process.execPath, [path.join(root, 'node_modules/typescript/bin/tsc'), '--noEmit', '-p', root], process.env);
       if (typeErrors) console.error('Type errors above: the run fails, the tests still run.');
+    }
+    if (options.lint) {
+      console.log('Linting (npm run lint: ESLint, then Prettier --check)…');
+      const lintErrors = await run('npm', ['run', '--silent', 'lint'], process.env);
+      if (lintErrors) console.error('Lint findings above: the run fails, the tests still run. `npm run format` fixes the formatting.');
+      typeErrors ||= lintErrors;
     }
     const resultsFile = path.join(os.tmpdir(), `${dbName}-results.json`);
     const jestCode = await run(
