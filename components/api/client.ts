@@ -6,6 +6,9 @@ export { ApiError, isApiError } from '@/components/api/api-error';
 
 export type ApiMethod = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
+/** How a successful answer is read: JSON (the default), or a drawn file as text (SVG) or as a Blob (PDF, to save). */
+export type ApiResponseType = 'json' | 'text' | 'blob';
+
 export interface ApiFetchOptions<T> {
   method?: ApiMethod;
   /** Sent as JSON. */
@@ -15,7 +18,16 @@ export interface ApiFetchOptions<T> {
   signal?: AbortSignal;
   /** Extra request headers, e.g. `{ 'Idempotency-Key': id }` on a write the outbox may send again. */
   headers?: Record<string, string>;
+  /**
+   * 'text' or 'blob' for a file the API draws (tape or sheet SVG, sheet PDF):
+   * the answer is returned as it came, unchecked; a failure is still an ApiError
+   * from the server's JSON error. Default 'json'.
+   */
+  responseType?: ApiResponseType;
 }
+
+/** Options for a drawn file (no schema: the answer is not JSON). */
+type FileFetchOptions = Omit<ApiFetchOptions<never>, 'schema' | 'responseType'>;
 
 /** Header naming one write, so the server runs it once however often it is sent (server/middleware/idempotency.ts). */
 export const idempotencyHeader = 'Idempotency-Key';
@@ -64,16 +76,22 @@ function errorFrom(status: number, payload: unknown): ApiError {
 }
 
 /**
- * The one way the web client talks to the API: JSON in and out, same-origin
- * cookies, the CSRF header on every non-GET request, and an ApiError on any
- * failure. A 204 resolves to undefined.
+ * The one way the web client talks to the API: JSON in and out (or a drawn
+ * file out, with `responseType`), same-origin cookies, the CSRF header on
+ * every non-GET request, and an ApiError on any failure. A 204 resolves to
+ * undefined.
  *
  * Example: `await apiFetch('/api/auth/sign-in', { method: 'POST', body: { email, password } })`
  *   → `{ user: {...} }`, or throws ApiError(401, 'unauthorized', 'E-mail or password is wrong')
+ * Example: `await apiFetch('/api/sight-ins/4/sheet.svg?paper=a4', { responseType: 'text' })` → '<svg …'
  */
+export function apiFetch(path: string, options: FileFetchOptions & { responseType: 'text' }): Promise<string>;
+export function apiFetch(path: string, options: FileFetchOptions & { responseType: 'blob' }): Promise<Blob>;
+export function apiFetch<T = unknown>(path: string, options?: ApiFetchOptions<T>): Promise<T>;
 export async function apiFetch<T = unknown>(path: string, options: ApiFetchOptions<T> = {}): Promise<T> {
   const method = options.method ?? 'GET';
-  const headers: Record<string, string> = { Accept: 'application/json', ...options.headers };
+  const responseType = options.responseType ?? 'json';
+  const headers: Record<string, string> = { Accept: responseType === 'json' ? 'application/json' : '*/*', ...options.headers };
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
   if (method !== 'GET') headers[csrfHeader] = '1';
 
@@ -92,6 +110,9 @@ export async function apiFetch<T = unknown>(path: string, options: ApiFetchOptio
   }
 
   const isJson = (res.headers.get('content-type') ?? '').includes('json');
+  if (res.ok && responseType === 'text') return (await res.text()) as T;
+  if (res.ok && responseType === 'blob') return (await res.blob()) as T;
+
   let payload: unknown = undefined;
   if (res.status !== 204 && isJson) {
     try {

@@ -1,8 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
 import { useEffect, useMemo, useRef, useState, type CSSProperties } from 'react';
 
-import { fetchDrawing, TRY_SHEET_STORAGE_KEY } from '@/components/print/fetch-drawing';
+import { apiFetch } from '@/components/api/client';
 import type { PrintSheetScreenProps } from '@/components/print/print-sheet-screen';
+import { TRY_SHEET_STORAGE_KEY } from '@/components/print/try-sheet';
 import { TAPE_VIEW_CAUTION } from '@/components/tapes/tape-form-values';
 import { ScreenTitle } from '@/components/ui/screen-title';
 import { colors, fonts } from '@/components/theme';
@@ -52,10 +53,10 @@ export function PrintSheetScreen({ sightInId, query, source }: PrintSheetScreenP
       if (source === 'try') {
         const stored = typeof sessionStorage === 'undefined' ? null : sessionStorage.getItem(TRY_SHEET_STORAGE_KEY);
         if (!stored) throw new Error('Nothing to print: make the tape on the try-it page first.');
-        return fetchDrawing('/api/try/sheet.svg', JSON.parse(stored));
+        return apiFetch('/api/try/sheet.svg', { method: 'POST', body: JSON.parse(stored) as unknown, responseType: 'text' });
       }
       if (!sightInId) throw new Error('Nothing to print: open the tape of a sight-in first.');
-      return fetchDrawing(`/api/sight-ins/${sightInId}/sheet.svg?${query}`);
+      return apiFetch(`/api/sight-ins/${sightInId}/sheet.svg?${query}`, { headers: { Accept: 'image/svg+xml' }, responseType: 'text' });
     },
     retry: false,
     staleTime: Infinity,

@@ -6,7 +6,7 @@ import { StyleSheet, View } from 'react-native';
 import { FieldGrid } from '@/components/forms/field-grid';
 import { textToNumber } from '@/components/forms/form-numbers';
 import { textFormResolver } from '@/components/forms/text-form-resolver';
-import { TRY_SHEET_STORAGE_KEY } from '@/components/print/fetch-drawing';
+import { TRY_SHEET_STORAGE_KEY } from '@/components/print/try-sheet';
 import { FitWarnings } from '@/components/sight-ins/fit-warnings';
 import type { LiveFit } from '@/components/sight-ins/live-fit';
 import { PredictedMarks } from '@/components/sight-ins/predicted-marks';

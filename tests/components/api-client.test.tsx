@@ -81,6 +81,28 @@ describe('apiFetch', () => {
     expect(error.code).toBe('bad_response');
   });
 
+  it("returns a drawn file as text or a Blob, with the CSRF header on a POST, and the server's error as an ApiError", async () => {
+    const fetchMock = mockFetch();
+    const svg = '<svg xmlns="http://www.w3.org/2000/svg"/>';
+    fetchMock.mockResolvedValueOnce({ ok: true, status: 200, headers: { get: () => 'image/svg+xml' }, text: async () => svg });
+    await expect(apiFetch('/api/sight-ins/4/sheet.svg?paper=a4', { responseType: 'text' })).resolves.toBe(svg);
+    expect(fetchMock.mock.calls[0][1].method).toBe('GET');
+    expect(fetchMock.mock.calls[0][1].headers['X-Pinwright-Csrf']).toBeUndefined();
+
+    const pdf = new Blob(['%PDF-1.7'], { type: 'application/pdf' });
+    fetchMock.mockResolvedValueOnce({ ok: true, status: 200, headers: { get: () => 'application/pdf' }, blob: async () => pdf });
+    await expect(apiFetch('/api/try/sheet.pdf', { method: 'POST', body: { paper: 'a4' }, responseType: 'blob' })).resolves.toBe(pdf);
+    const [, init] = fetchMock.mock.calls[1];
+    expect(init.headers['X-Pinwright-Csrf']).toBe('1');
+    expect(init.headers['Content-Type']).toBe('application/json');
+    expect(init.body).toBe(JSON.stringify({ paper: 'a4' }));
+
+    fetchMock.mockResolvedValueOnce(jsonResponse(400, { error: { code: 'validation_failed', message: 'These marks cannot be fitted.' } }));
+    const error = await failure(apiFetch('/api/try/sheet.svg', { method: 'POST', body: {}, responseType: 'text' }));
+    expect(error.status).toBe(400);
+    expect(error.message).toBe('These marks cannot be fitted.');
+  });
+
   it('refuses an HTML page where JSON was expected (a static server answering /api)', async () => {
     const fetchMock = mockFetch();
     fetchMock.mockResolvedValue({ ok: true, status: 200, headers: { get: () => 'text/html' }, json: async () => ({}) });
