@@ -1,6 +1,6 @@
 import { optionalTextToNumber, textToNumber } from '@/components/forms/form-numbers';
 import type { MarkRowText } from '@/components/sight-ins/sight-in-form-values';
-import { trySightFit, type FitResult } from '@/math/fit/fit-sight';
+import { attemptSightFit, type FitResult } from '@/math/fit/fit-sight';
 import { predictMarksMm } from '@/math/flight/predict-mark';
 import type { DistanceUnit } from '@/shared/auth';
 import type { Bow } from '@/shared/bow';
@@ -107,7 +107,7 @@ export function liveFit(text: LiveFitText, bow: Pick<Bow, 'sightRadiusMm' | 'pee
     };
   }
   try {
-    const attempt = trySightFit(liveFitInput(text, bow, build, marks));
+    const attempt = attemptSightFit(liveFitInput(text, bow, build, marks));
     if (!attempt.ok) return { state: 'refused', message: attempt.error.message, field: attempt.error.field, marks };
     return { state: 'fit', fit: attempt.fit, marks, sign: bow.scaleDirection === 'up' ? -1 : 1 };
   } catch (error) {

@@ -35,7 +35,7 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { Text } from '@/components/ui/text';
 import { useWide } from '@/components/ui/use-wide';
 import { colors, space } from '@/components/theme';
-import { trySightFit } from '@/math/fit/fit-sight';
+import { attemptSightFit } from '@/math/fit/fit-sight';
 import { isFitInputError } from '@/math/fit/fit-input-error';
 import { tapeLayout, type TapeLayout } from '@/math/tape/tape-layout';
 import type { SheetInput } from '@/shared/fit';
@@ -71,7 +71,7 @@ function outcomeOf(text: TryFormText): Outcome {
     for (let d = Math.ceil(from / 10) * 10; d <= to; d += 10) tens.push(d);
     input.predict = [...new Set([from, ...tens, to])].sort((a, b) => a - b);
   }
-  const attempt = trySightFit(input);
+  const attempt = attemptSightFit(input);
   if (!attempt.ok) return { live: { state: 'refused', message: attempt.error.message, field: attempt.error.field, marks }, tape: null, tapeProblem: null };
   try {
     const tape = tapeLayout(attempt.fit.model, {

@@ -37,7 +37,7 @@ import { ONE_MARK_CAUTION, SLOPE_CAUTION } from '@/math/cautions';
  *
  * Input: FitInput (shared/fit.ts), parsed here; throws FitInputError naming the
  * field for anything no sight can have. Distances are in input.distanceUnit,
- * readings mm. Use trySightFit for a result instead of an exception.
+ * readings mm. Use attemptSightFit for a result instead of an exception.
  * Example: fitSight({ distanceUnit: 'yd', sight: { radiusMm: 820, peepHeightMm: 110 }, arrow: { massGr: 420, diameterMm: 6.5, dragCoefficient: 2 },
  *   marks: [{ distance: 20, markMm: 14.9 }, { distance: 60, markMm: 32.6 }] }).speedFps → ≈ 285
  */
@@ -323,9 +323,9 @@ export type FitAttempt = { ok: true; fit: FitResult } | { ok: false; error: { fi
 
 /**
  * For a UI refitting on every keystroke: the fit, or the field at fault and a plain message.
- * Example: trySightFit({ ...input, marks: [input.marks[0]] }) → { ok: false, error: { field: 'marks', message: 'Enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)' } } (no speed given)
+ * Example: attemptSightFit({ ...input, marks: [input.marks[0]] }) → { ok: false, error: { field: 'marks', message: 'Enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)' } } (no speed given)
  */
-export function trySightFit(input: FitInput): FitAttempt {
+export function attemptSightFit(input: FitInput): FitAttempt {
   try {
     return { ok: true, fit: fitSight(input) };
   } catch (error) {

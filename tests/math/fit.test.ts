@@ -1,4 +1,4 @@
-import { fitSight, trySightFit, markBand, FIT_PRIORS, MODEL_PARAMETERS, predictMarksMm, type FitResult } from '@/math';
+import { fitSight, attemptSightFit, markBand, FIT_PRIORS, MODEL_PARAMETERS, predictMarksMm, type FitResult } from '@/math';
 import { TRUE_MODEL, inputWith, marksOf, seededRandom } from './helpers';
 
 const everyYard = Array.from({ length: 91 }, (_, i) => 10 + i);
@@ -179,9 +179,9 @@ describe('bands and the next distance', () => {
 
 describe('non-throwing variant', () => {
   it('returns the field and message instead of throwing', () => {
-    const attempt = trySightFit(inputWith([{ distance: 20, markMm: 14.9 }]));
+    const attempt = attemptSightFit(inputWith([{ distance: 20, markMm: 14.9 }]));
     expect(attempt).toEqual({ ok: false, error: { field: 'marks', message: 'Enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)' } });
-    const good = trySightFit(inputWith(marksOf(TRUE_MODEL, [20, 60])));
+    const good = attemptSightFit(inputWith(marksOf(TRUE_MODEL, [20, 60])));
     expect(good.ok && good.fit.speedFps).toBeCloseTo(285, 5);
   });
 });
