@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { maxRecordId, pageSchema } from './common';
+import { pageSchema } from './common';
 import { roleSchema } from './auth';
 
 /** Admin account search: optional text matched against name and e-mail. */
@@ -37,10 +37,6 @@ export const accountUpdateSchema = z
   .refine((value) => value.role !== undefined || value.disabled !== undefined, {
     message: 'Give a new role or a disabled state',
   });
-
-export const idParamSchema = z.object({
-  id: z.coerce.number({ invalid_type_error: 'The id must be a number' }).int().positive('The id must be a positive number').max(maxRecordId, 'There is no account with so large an id'),
-});
 
 export type AccountSearch = z.infer<typeof accountSearchSchema>;
 export type AccountUpdate = z.infer<typeof accountUpdateSchema>;

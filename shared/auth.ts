@@ -1,5 +1,6 @@
 import { z } from 'zod';
 
+import { distanceUnitSchema } from './common';
 import { altitudePrefSchema, massPrefSchema, speedPrefSchema, temperaturePrefSchema } from './units';
 
 /**
@@ -41,7 +42,7 @@ export const signUpSchema = z.object({
     .min(passwordMinLength, `Password must be at least ${passwordMinLength} characters`)
     .max(passwordMaxLength, `Password must be at most ${passwordMaxLength} characters`),
   /** The first unit choice; the others follow from it (shared/units.ts unitDefaultsFor). Absent: yards. */
-  distanceUnit: z.enum(['yd', 'm'], { errorMap: () => ({ message: 'Choose yards or metres' }) }).optional(),
+  distanceUnit: distanceUnitSchema.optional(),
 });
 
 /** Sign-in: e-mail and any non-empty password (length rules apply at sign-up only). */
@@ -55,8 +56,6 @@ export const signInSchema = z.object({
 
 /** Account roles: archer owns bows, tech reads shared bows, admin runs the service. */
 export const roleSchema = z.enum(['archer', 'tech', 'admin']);
-/** Preferred distance unit: yards or metres. */
-export const distanceUnitSchema = z.enum(['yd', 'm']);
 /** Preferred length unit: millimetres or inches. */
 export const lengthUnitSchema = z.enum(['mm', 'in']);
 

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDateSchema, maxRecordId, textSchema } from './common';
+import { distanceUnitSchema, isoDateSchema, maxRecordId, textSchema } from './common';
 import {
   bowChangeKinds,
   levelResults,
@@ -260,9 +260,9 @@ export const tripReadinessSchema = z.object({
       date: z.string(),
       placeLabel: z.string(),
       buildName: z.string().nullable(),
-      marks: z.array(z.object({ distance: z.number(), unit: z.enum(['yd', 'm']), scaleMm: z.number() })),
+      marks: z.array(z.object({ distance: z.number(), unit: distanceUnitSchema, scaleMm: z.number() })),
       longestDistance: z.number().nullable(),
-      longestUnit: z.enum(['yd', 'm']).nullable(),
+      longestUnit: distanceUnitSchema.nullable(),
     })
     .nullable(),
   /** The most recently saved tape and the sight-in it was printed from. */
@@ -273,7 +273,7 @@ export const tripReadinessSchema = z.object({
       sightInDate: z.string(),
       fromDistance: z.number(),
       toDistance: z.number(),
-      unit: z.enum(['yd', 'm']),
+      unit: distanceUnitSchema,
       label: z.string(),
       savedAt: z.string(),
       fromLatestSightIn: z.boolean(),

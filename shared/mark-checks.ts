@@ -23,6 +23,8 @@
  *   { unit: 'yd', scaleDirection: 'down', peepHeightMm: 110 }).problems
  *   → [{ row: 2, mark: 3, kind: 'falling', field: 'scaleMm', message: 'Mark 3 (40 yd): 17 mm is less than the 30 yd mark’s 19 mm; …' }]
  */
+import { STANDARD_GRAVITY_MPS2 } from '@/math/units/constants';
+import { fpsToMps, metresToDistance } from '@/math/units/convert';
 import { distanceLimits } from './fit';
 
 /** A row of the marks table as typed (only what the checks read). */
@@ -82,18 +84,14 @@ export const turningPointSpeedFps = 350;
  */
 export const fallToleranceMm = 0.2;
 
-const G = 9.80665; // standard gravity, m/s² (CGPM 1901)
-const FPS_TO_MPS = 0.3048; // 1 ft = 0.3048 m exactly (international yard and pound, 1959)
-const YD_TO_M = 0.9144; // 1 yd = 0.9144 m exactly (same agreement)
-
 /**
  * The short-range turning point D* = √(2·h·v²/g), in the table's unit.
  * Example: turningPointDistance(110, 350, 'yd') → about 17.6
  */
 export function turningPointDistance(peepHeightMm: number, speedFps: number, unit: 'yd' | 'm'): number {
-  const speed = speedFps * FPS_TO_MPS;
-  const metres = Math.sqrt((2 * (peepHeightMm / 1000) * speed * speed) / G);
-  return unit === 'yd' ? metres / YD_TO_M : metres;
+  const speed = fpsToMps(speedFps);
+  const metres = Math.sqrt((2 * (peepHeightMm / 1000) * speed * speed) / STANDARD_GRAVITY_MPS2);
+  return metresToDistance(metres, unit);
 }
 
 /** Typed text → number: '' → undefined, a decimal comma accepted, anything else → NaN (as the forms parse it). */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { measureSchema, refIdSchema } from './common';
+import { distanceUnitSchema, measureSchema, refIdSchema } from './common';
 import { buildInputSchema } from './build';
 import { distanceLimits } from './fit';
 import { tapeOrientationSchema, tickSteps } from './tape';
@@ -149,7 +149,7 @@ export const buildPredictionSchema = z.object({
   virtualMass: virtualMassSchema.nullable(),
   dragCoefficient: finiteOrNull,
   /** Unit of the marks' distances (the sight-in's), or null without marks. */
-  unit: z.enum(['yd', 'm']).nullable(),
+  unit: distanceUnitSchema.nullable(),
   marks: z.array(predictedMarkSchema).nullable(),
   warnings: z.array(z.string()),
   caution: z.string(),

@@ -9,6 +9,7 @@ import {
   textSchema,
   timestampsSchema,
 } from './common';
+import { distanceToMetres } from '@/math/units/convert';
 import { distanceLimits } from './fit';
 
 /**
@@ -41,9 +42,6 @@ export const markInputSchema = z.object({
   note: textSchema('Mark note', 200),
 });
 
-/** Yards → metres (exact: 1 yd = 0.9144 m, international yard and pound, 1959). */
-const toMetres = (distance: number, unit: 'yd' | 'm') => (unit === 'yd' ? distance * 0.9144 : distance);
-
 const sightInFields = z.object({
   buildId: refIdSchema('arrow build'),
   date: isoDateSchema,
@@ -66,7 +64,7 @@ function checkDistinctDistances(value: Partial<SightInFields>, ctx: z.Refinement
   if (!value.marks) return;
   const seen: number[] = [];
   value.marks.forEach((mark, index) => {
-    const metres = toMetres(mark.distance, mark.unit);
+    const metres = distanceToMetres(mark.distance, mark.unit);
     // Numeric care: the same distance typed twice converts to the same double; 1 mm tolerance absorbs yd/m round trips.
     if (seen.some((other) => Math.abs(other - metres) < 0.001)) {
       ctx.addIssue({

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { distanceUnitSchema } from './common';
 import { tripReadinessSchema } from './level';
 
 /** One arrow build's part of Before a trip: its latest sight-in, its latest tape (from its own sight-ins only) and what to look at. */
@@ -12,9 +13,9 @@ export const tripBuildSchema = z.object({
       name: z.string(),
       date: z.string(),
       placeLabel: z.string(),
-      marks: z.array(z.object({ distance: z.number(), unit: z.enum(['yd', 'm']), scaleMm: z.number() })),
+      marks: z.array(z.object({ distance: z.number(), unit: distanceUnitSchema, scaleMm: z.number() })),
       longestDistance: z.number().nullable(),
-      longestUnit: z.enum(['yd', 'm']).nullable(),
+      longestUnit: distanceUnitSchema.nullable(),
     })
     .nullable(),
   /** The last saved tape of the newest of this build's sight-ins that has one. */
@@ -26,7 +27,7 @@ export const tripBuildSchema = z.object({
       sightInDate: z.string(),
       fromDistance: z.number(),
       toDistance: z.number(),
-      unit: z.enum(['yd', 'm']),
+      unit: distanceUnitSchema,
       label: z.string(),
       savedAt: z.string(),
       fromLatestSightIn: z.boolean(),

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 
 import { CELSIUS_ZERO_K, FOOT_M, GRAIN_KG, INCH_MM } from '@/math/units/constants';
+import { distanceUnitSchema } from './common';
 
 /**
  * The archer's units, and the one place every form and screen converts
@@ -18,8 +19,6 @@ import { CELSIUS_ZERO_K, FOOT_M, GRAIN_KG, INCH_MM } from '@/math/units/constant
  *          messageInUnits('Draw length must be at least 500 mm', inchUnits) → 'Draw length must be at least 19.69 in'
  */
 
-/** Preferred distance unit: yards or metres (same values as shared/auth's). */
-export const distancePrefSchema = z.enum(['yd', 'm'], { errorMap: () => ({ message: 'Distances are in yards (yd) or metres (m)' }) });
 /** Preferred length unit (sight radius, draw length, arrow lengths): inches or millimetres. */
 export const lengthPrefSchema = z.enum(['mm', 'in'], { errorMap: () => ({ message: 'Lengths are in millimetres (mm) or inches (in)' }) });
 /** Preferred altitude unit: feet or metres. */
@@ -33,7 +32,7 @@ export const massPrefSchema = z.enum(['gr', 'g'], { errorMap: () => ({ message: 
 
 /** Every unit choice of an account. */
 export const unitPreferencesSchema = z.object({
-  distanceUnit: distancePrefSchema,
+  distanceUnit: distanceUnitSchema,
   lengthUnit: lengthPrefSchema,
   altitudeUnit: altitudePrefSchema,
   temperatureUnit: temperaturePrefSchema,

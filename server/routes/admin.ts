@@ -1,5 +1,6 @@
 import { Router } from 'express';
-import { accountSearchSchema, accountUpdateSchema, idParamSchema } from '@/shared/admin';
+import { accountSearchSchema, accountUpdateSchema } from '@/shared/admin';
+import { idParamSchema } from '@/shared/common';
 import { validate } from '@/server/middleware/validate';
 import { currentUser, requireRole, requireUser } from '@/server/middleware/auth';
 import * as accounts from '@/server/services/account-service';

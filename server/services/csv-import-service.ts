@@ -16,6 +16,7 @@
 import { ApiError } from '@/server/errors';
 import { CsvError, parseCsvRecords, type CsvRecord } from '@/server/csv';
 import type { User } from '@/server/models';
+import { distanceToMetres } from '@/math/units/convert';
 import { findOwnSightIn, getSightIn, updateSightIn } from '@/server/services/sight-in-service';
 import { importMaxBytes, importMaxRows, type ImportResult, type ImportRow, type MarkImport } from '@/shared/csv';
 import { markInputSchema, maxMarks, type MarkInput } from '@/shared/sight-in';
@@ -24,9 +25,8 @@ type Unit = 'yd' | 'm';
 type Column = 'distance' | 'reading' | 'arrows' | 'note' | 'unit';
 type Layout = { columns: Partial<Record<Column, number>>; headerUnit: Unit | null; hasHeader: boolean };
 
-/** Yards → metres, exact (international yard and pound, 1959): for comparing distances only. */
-const YARD_M = 0.9144;
-const toMetres = (distance: number, unit: Unit) => (unit === 'yd' ? distance * YARD_M : distance);
+/** Distances compared in metres (math/units, exact). */
+const toMetres = distanceToMetres;
 
 const unitWords: Record<string, Unit> = {
   yd: 'yd', yds: 'yd', yard: 'yd', yards: 'yd',

@@ -7,6 +7,7 @@
  * before leaving. Sight-ins are named by shared/sight-in-name.ts.
  */
 import { Op } from 'sequelize';
+import { distanceToMetres } from '@/math/units/convert';
 import { ArrowBuild, SightInMark, SightIn, Tape, type User } from '@/server/models';
 import { readableBow } from '@/server/services/bow-access';
 import { levelSummaryForBows } from '@/server/services/level-service';
@@ -14,9 +15,8 @@ import { stalenessForBows } from '@/server/services/staleness-service';
 import type { TripBuild, TripByBuild } from '@/shared/trip';
 import { sightInName } from '@/shared/sight-in-name';
 
-/** 1 yd = 0.9144 m exactly (international yard and pound agreement, 1959). */
-const metresPerYard = 0.9144;
-const inMetres = (distance: number, unit: 'yd' | 'm') => (unit === 'yd' ? distance * metresPerYard : distance);
+/** Distances compared in metres (math/units, exact). */
+const inMetres = distanceToMetres;
 
 type StoredWarning = { code?: string; distance?: number; message?: string };
 

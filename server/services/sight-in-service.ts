@@ -7,6 +7,7 @@
  */
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
+import { distanceToMetres } from '@/math/units/convert';
 import { ApiError, validationError } from '@/server/errors';
 import { ArrowBuild, Bow, SightInMark, SightIn, type User } from '@/server/models';
 import {
@@ -22,9 +23,6 @@ import { findBow } from './bow-service';
 import { bowFor, type BowCapability } from './bow-access';
 import { fitSightIn } from './fit-service';
 import { addedByNames, addedByOf } from './added-by';
-
-/** Yards → metres, exact (international yard and pound, 1959): for comparing distances only. */
-const YARD_M = 0.9144;
 
 /**
  * The sight-in with this id (and its bow) if `user` may use `capability` on the
@@ -121,7 +119,7 @@ export async function markStats(
     attributes: ['sightInId', 'distance', 'unit'],
   });
   for (const mark of marks) {
-    const metres = mark.unit === 'yd' ? mark.distance * YARD_M : mark.distance;
+    const metres = distanceToMetres(mark.distance, mark.unit);
     const entry = stats.get(mark.sightInId) ?? { markCount: 0, longestDistance: null, longestUnit: null, longestM: -1 };
     entry.markCount += 1;
     if (metres > entry.longestM) {
