@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { SightModel } from '@/math/flight/sight-model';
 import { distanceUnitSchema } from '@/shared/common';
 
 /**
@@ -153,6 +154,33 @@ export const tapeOptionsSchema = z
   .superRefine((tape, context) => {
     if (!(tape.to > tape.from)) context.addIssue({ code: z.ZodIssueCode.custom, path: ['to'], message: 'The last distance must be beyond the first' });
   });
+
+/**
+ * math's SightModel (math/flight/sight-model.ts) as it travels in JSON: a
+ * stored fit's `model`, a prediction's `model`. Fields the model does not know
+ * are dropped on parse (rows stored by older versions carry none today).
+ * Example: sightModelSchema.parse(fitSight(input).model).speedFps → ≈ 285
+ */
+export const sightModelSchema = z.object({
+  distanceUnit: distanceUnitSchema,
+  speedFps: z.number(),
+  dragCoefficient: z.number(),
+  airDensityKgM3: z.number(),
+  arrowMassGr: z.number(),
+  arrowDiameterMm: z.number(),
+  peepHeightMm: z.number(),
+  sightRadiusMm: z.number(),
+  scaleZeroMm: z.number(),
+  gravityMps2: z.number(),
+  covariance: z.array(z.array(z.number())).optional(),
+  oneMark: z.object({ distance: z.number(), nextDistance: z.number().nullable() }).optional(),
+});
+
+// Compile-time guard: the schema and math's SightModel describe the same object, both ways.
+const modelFromMath = (model: SightModel): z.infer<typeof sightModelSchema> => model;
+const modelToMath = (model: z.infer<typeof sightModelSchema>): SightModel => model;
+void modelFromMath;
+void modelToMath;
 
 /** Paper sizes for the print sheet. */
 export const paperSchema = z.enum(['a4', 'letter'], { errorMap: () => ({ message: 'Choose a4 or letter' }) });

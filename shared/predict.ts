@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { distanceUnitSchema, measureSchema, refIdSchema } from './common';
 import { buildInputSchema } from './build';
-import { distanceLimits } from './fit';
+import { distanceLimits, sightModelSchema } from './fit';
 import { tapeOrientationSchema, tickSteps } from './tape';
 import { queryNumber } from './compare';
 
@@ -178,7 +178,7 @@ export const predictResponseSchema = z.object({
   marksMissing: z.string().nullable(),
   prediction: buildPredictionSchema,
   /** The predicted sight model (math's, readings growing downward), for drawing the tape; null without marks. */
-  model: z.record(z.unknown()).nullable(),
+  model: sightModelSchema.nullable(),
   energyCaution: z.string(),
 });
 

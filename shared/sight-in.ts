@@ -10,7 +10,7 @@ import {
   timestampsSchema,
 } from './common';
 import { distanceToMetres } from '@/math/units/convert';
-import { distanceLimits } from './fit';
+import { distanceLimits, sightModelSchema } from './fit';
 
 /**
  * Sight-in schemas: a sight-in (bow + build, date, place, air) with its
@@ -135,7 +135,8 @@ export const storedFitSchema = z
     /** The distance whose next mark would shrink the bands most, or null. */
     nextDistance: z.number().nullable(),
     warnings: z.array(z.object({ code: z.string(), message: z.string(), distance: z.number().optional() })),
-    model: z.record(z.unknown()),
+    /** math's SightModel (shared/fit.ts sightModelSchema), readings growing downward. */
+    model: sightModelSchema,
   })
   .passthrough();
 

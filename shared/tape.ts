@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { distanceUnitSchema, maxRecordId, measureSchema, textSchema, timestampsSchema } from './common';
-import { distanceLimits } from './fit';
+import { distanceLimits, type TapeOptionsInput } from './fit';
 
 /**
  * Tape schemas: a saved print layout for a sight-in's fit, and the query options
@@ -91,6 +91,24 @@ export const tapeQuerySchema = z
       ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['to'], message: 'To distance must be beyond the from distance' });
     }
   });
+
+/**
+ * math's tape options for a saved or asked-for layout: the one mapping the tape
+ * editor's preview and the server's tape and sheet downloads use.
+ * Example: tapeOptionsOf({ fromDistance: 20, toDistance: 80, step: 1, unit: 'yd', orientation: 'down', widthMm: 8, mirror: false })
+ *   → { from: 20, to: 80, step: 1, unit: 'yd', orientation: 'down', widthMm: 8, mirror: false }
+ */
+export function tapeOptionsOf(layout: Pick<TapeLayout, 'fromDistance' | 'toDistance' | 'step' | 'unit' | 'orientation' | 'widthMm' | 'mirror'>): TapeOptionsInput {
+  return {
+    from: layout.fromDistance,
+    to: layout.toDistance,
+    step: layout.step,
+    unit: layout.unit,
+    orientation: layout.orientation,
+    widthMm: layout.widthMm,
+    mirror: layout.mirror,
+  };
+}
 
 export type TapeOrientation = z.infer<typeof tapeOrientationSchema>;
 export type Paper = z.infer<typeof paperSchema>;

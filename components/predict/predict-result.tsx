@@ -9,7 +9,6 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { Text } from '@/components/ui/text';
 import { colors, radii, space } from '@/components/theme';
 import { formatDay } from '@/components/bows/readiness-words';
-import type { SightModel } from '@/math/flight/sight-model';
 import type { PredictResponse } from '@/shared/predict';
 
 export interface PredictResultProps {
@@ -125,7 +124,7 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHre
           </View>
           <SectionHeading title="Predicted tape" level={3} description="PREDICTED runs along its edge, so a cut-out tape still says so. Confirm two distances at the range before you trust the rest." />
           <PredictedTapePreview
-            model={result.model as unknown as SightModel}
+            model={result.model}
             from={20}
             to={tapeTo}
             widthMm={tapeWidthMm}

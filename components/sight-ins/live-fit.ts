@@ -3,9 +3,9 @@ import type { MarkRowText } from '@/components/sight-ins/sight-in-form-values';
 import { attemptSightFit, type FitResult } from '@/math/fit/fit-sight';
 import { predictMarksMm } from '@/math/flight/predict-mark';
 import type { DistanceUnit } from '@/shared/auth';
-import type { Bow } from '@/shared/bow';
 import type { Build } from '@/shared/build';
 import type { FitInput } from '@/shared/fit';
+import { scaleSignOf, sightInFitInput, type FitBow } from '@/shared/sight-in-fit';
 
 /** What the live fit reads from the form (a subset of SightInFormText). */
 export interface LiveFitText {
@@ -29,19 +29,6 @@ export type LiveFit =
   | { state: 'waiting'; message: string; marks: UsableMark[] }
   | { state: 'refused'; message: string; field: string; marks: UsableMark[] };
 
-/**
- * Distances whose marks are predicted: every 5 from 10 to 100 yd (10 to 90 m,
- * the metre equivalent), further when a mark is sighted beyond; at most 150.
- * Example: predictionDistances('yd', 60) → [10, 15, …, 100]
- */
-export function predictionDistances(unit: DistanceUnit, longest: number): number[] {
-  const top = unit === 'yd' ? 100 : 90;
-  const last = Math.min(150, Math.max(top, Math.ceil((longest + 10) / 10) * 10));
-  const distances: number[] = [];
-  for (let distance = 10; distance <= last; distance += 5) distances.push(distance);
-  return distances;
-}
-
 /** Rows with a numeric distance and reading, in table order. */
 export function usableMarks(rows: readonly (MarkRowText | undefined)[]): UsableMark[] {
   return rows.flatMap((row, index) => {
@@ -54,31 +41,23 @@ export function usableMarks(rows: readonly (MarkRowText | undefined)[]): UsableM
 }
 
 /**
- * The math core's fit input for the marks typed so far: sight radius and peep
- * height from the bow, the arrow from the build (total grains, diameter,
- * optional drag coefficient and chronographed speed), the air from the header.
- * Readings are signed for the math's convention (growing as the pin moves
- * down), as the server does when it saves: a scale that grows upward is negated.
+ * The math core's fit input for the marks typed so far: the saved fit's own
+ * mapping (shared/sight-in-fit.ts sightInFitInput), so the live table predicts
+ * the distances and marks the saved fit will (the bow's fixed pins included).
  * Example: liveFitInput(text, bow, build, marks).sight → { radiusMm: 840, peepHeightMm: 112 }
  */
-export function liveFitInput(text: LiveFitText, bow: Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirection'>, build: Build, marks: UsableMark[]): FitInput {
-  const sign = bow.scaleDirection === 'up' ? -1 : 1;
-  const air: NonNullable<FitInput['air']> = {};
+export function liveFitInput(text: LiveFitText, bow: FitBow, build: Build, marks: UsableMark[]): FitInput {
   const altitudeM = optionalTextToNumber(text.altitudeM);
   const temperatureC = optionalTextToNumber(text.temperatureC);
-  if (altitudeM !== null && Number.isFinite(altitudeM)) air.altitudeM = altitudeM;
-  if (temperatureC !== null && Number.isFinite(temperatureC)) air.temperatureC = temperatureC;
-  const arrow: FitInput['arrow'] = { massGr: build.derived.totalGr, diameterMm: build.diameterMm };
-  if (build.dragCoefficient !== null) arrow.dragCoefficient = build.dragCoefficient;
-  if (build.speedFps !== null) arrow.speedFps = build.speedFps;
-  return {
-    distanceUnit: text.unit,
-    sight: { radiusMm: bow.sightRadiusMm, peepHeightMm: bow.peepHeightMm },
-    arrow,
-    air,
-    marks: marks.map((mark) => ({ distance: mark.distance, markMm: sign * mark.scaleMm })),
-    predict: predictionDistances(text.unit, Math.max(...marks.map((mark) => mark.distance))),
-  };
+  return sightInFitInput(
+    bow,
+    { totalGr: build.derived.totalGr, diameterMm: build.diameterMm, dragCoefficient: build.dragCoefficient, speedFps: build.speedFps },
+    {
+      altitudeM: altitudeM !== null && Number.isFinite(altitudeM) ? altitudeM : null,
+      temperatureC: temperatureC !== null && Number.isFinite(temperatureC) ? temperatureC : null,
+      marks: marks.map((mark) => ({ distance: mark.distance, unit: text.unit, scaleMm: mark.scaleMm })),
+    },
+  );
 }
 
 /**
@@ -88,7 +67,7 @@ export function liveFitInput(text: LiveFitText, bow: Pick<Bow, 'sightRadiusMm' |
  * core's plain message (e.g. an impossible gap).
  * Example: liveFit(text, bow, builds).state → 'fit'
  */
-export function liveFit(text: LiveFitText, bow: Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirection'>, builds: readonly Build[]): LiveFit {
+export function liveFit(text: LiveFitText, bow: FitBow, builds: readonly Build[]): LiveFit {
   const marks = usableMarks(text.marks ?? []);
   const build = builds.find((item) => String(item.id) === text.buildId);
   if (!build) return { state: 'waiting', message: 'Choose the arrow build you shot.', marks };
@@ -109,7 +88,7 @@ export function liveFit(text: LiveFitText, bow: Pick<Bow, 'sightRadiusMm' | 'pee
   try {
     const attempt = attemptSightFit(liveFitInput(text, bow, build, marks));
     if (!attempt.ok) return { state: 'refused', message: attempt.error.message, field: attempt.error.field, marks };
-    return { state: 'fit', fit: attempt.fit, marks, sign: bow.scaleDirection === 'up' ? -1 : 1 };
+    return { state: 'fit', fit: attempt.fit, marks, sign: scaleSignOf(bow.scaleDirection) };
   } catch (error) {
     return { state: 'refused', message: error instanceof Error ? error.message : 'The fit failed.', field: 'marks', marks };
   }

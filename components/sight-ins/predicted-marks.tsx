@@ -12,8 +12,10 @@ export interface PredictedMarksProps {
 }
 
 /**
- * The predicted mark for every distance of the range (10–100 yd, or 10–90 m)
- * with its ± band in mm and in distance; a distance sighted today is marked
+ * The predicted mark for every distance of the range (shared/sight-in-fit.ts
+ * predictDistances: every 5 from 10 to 100 in either unit, further past a long
+ * mark, and the bow's fixed pins) with its ± band in mm and in distance, as the
+ * saved fit will have it; a distance sighted today is marked
  * "sighted", one whose band is too wide "confirm".
  * Example: `<PredictedMarks fit={fit} sign={1} marks={marks} />`
  */

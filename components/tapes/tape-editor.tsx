@@ -13,7 +13,6 @@ import {
   tapeFormDefaults,
   tapeFormFields,
   tapeFormSchema,
-  tapeOptionsOf,
   type TapeFormText,
 } from '@/components/tapes/tape-form-values';
 import { TapePreview } from '@/components/tapes/tape-preview';
@@ -34,7 +33,8 @@ import { tapeLayout, type TapeLayout as MathTapeLayout } from '@/math/tape/tape-
 import type { DistanceUnit, LengthUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import type { SightIn } from '@/shared/sight-in';
-import type { Tape, TapeLayout } from '@/shared/tape';
+import { scaleSignOf } from '@/shared/sight-in-fit';
+import { tapeOptionsOf, type Tape, type TapeLayout } from '@/shared/tape';
 
 export interface TapeEditorProps {
   bow: BowDetail;
@@ -98,8 +98,8 @@ export function TapeEditor({ bow, sightIn, tape, lengthUnit, distanceUnit, addOn
   // The saved layout this editor updates: the one it opened with, or the one it created.
   const [savedId, setSavedId] = useState<number | undefined>(tape?.id);
   const fit = sightIn.fit;
-  const model = fit.model as unknown as SightModel;
-  const sign: 1 | -1 = fit.scaleDirection === 'up' ? -1 : 1;
+  const model = fit.model;
+  const sign = scaleSignOf(fit.scaleDirection);
   const resolver = useMemo(
     () => textFormResolver<TapeFormText, TapeLayout>(tapeFormSchema(lengthUnit), { inches: lengthUnit === 'in' }),
     [lengthUnit],

@@ -2,7 +2,6 @@ import { z } from 'zod';
 
 import { lengthTextToMm, mmToLengthText, numberToText, textToNumber } from '@/components/forms/form-numbers';
 import { metresToDistance, distanceToMetres, type LengthUnit } from '@/math/units/convert';
-import type { TapeOptionsInput } from '@/shared/fit';
 import type { StoredFit } from '@/shared/sight-in';
 import { tapeLayoutSchema, type Paper, type Tape, type TapeLayout, type TapeOrientation } from '@/shared/tape';
 import type { DistanceUnit } from '@/shared/auth';
@@ -65,19 +64,6 @@ export function tapeFormSchema(lengthUnit: LengthUnit) {
     .object(Object.fromEntries(tapeFormFields.map((field) => [field, text])) as Record<keyof TapeFormText, z.ZodString>)
     .transform((values) => tapeTextToLayout(values as unknown as TapeFormText, lengthUnit))
     .pipe(tapeLayoutSchema);
-}
-
-/** The math core's tape options for a checked layout (the same mapping the server uses). */
-export function tapeOptionsOf(layout: TapeLayout): TapeOptionsInput {
-  return {
-    from: layout.fromDistance,
-    to: layout.toDistance,
-    step: layout.step,
-    unit: layout.unit,
-    orientation: layout.orientation,
-    widthMm: layout.widthMm,
-    mirror: layout.mirror,
-  };
 }
 
 /**

@@ -43,7 +43,7 @@ export async function latestSightInsByBuild(bowId: number, buildIds: number[]): 
 
 /** The fitted model stored with a sight-in (math's own serialisable SightModel). */
 export function modelOf(sightIn: SightIn): SightModel {
-  return (sightIn.fit as StoredFit).model as unknown as SightModel;
+  return (sightIn.fit as StoredFit).model;
 }
 
 /**

@@ -4,10 +4,10 @@
  * stored records, maps its results to what we store and send, and turns its
  * input errors (FitInputError) into 400s naming our own fields.
  *
- * Readings: math takes scale readings growing as the pin moves down. For a bow
- * whose scale grows upward, readings are negated on the way in and mapped back
- * in the stored fit (marks, residuals, scale zero); the fitted `model` stays in
- * math's convention, which is also the physical one the tape is drawn from.
+ * The sight-in fit's rules (predicted distances, bow + build + marks → math's
+ * input, math's result → the stored fit, readings' sign) live in
+ * shared/sight-in-fit.ts, which the sight-in screen's live table uses too; a
+ * layout's tape options in shared/tape.ts (tapeOptionsOf).
  */
 import {
   STANDARD_GRAVITY_MPS2,
@@ -25,20 +25,15 @@ import {
   type FitResult,
   type SightModel,
 } from '@/math';
+import type { DistanceUnit } from '@/math/units/convert';
 import { sheetPdf } from '@/server/print/sheet-pdf';
 import { ApiError } from '@/server/errors';
-import type { ArrowBuild, Bow } from '@/server/models';
-import type { FitInput, SheetInput, SheetLabels, TapeInput, TapeOptionsInput } from '@/shared/fit';
+import type { ArrowBuild } from '@/server/models';
+import type { FitInput, SheetInput, SheetLabels, TapeInput } from '@/shared/fit';
 import type { BuildDerived, BuildInput } from '@/shared/build';
-import { ONE_MARK_SIGHT_IN_MESSAGE, type MarkInput, type StoredFit } from '@/shared/sight-in';
-import type { TapeLayout } from '@/shared/tape';
-
-/** Yards → metres, exact (international yard and pound, 1959). */
-const YARD_M = 0.9144;
-
-type Unit = 'yd' | 'm';
-const convertDistance = (distance: number, from: Unit, to: Unit) =>
-  from === to ? distance : from === 'yd' ? distance * YARD_M : distance / YARD_M;
+import { ONE_MARK_SIGHT_IN_MESSAGE, type StoredFit } from '@/shared/sight-in';
+import { sightInFitInput, storedFitOf, type FitBow, type FitSightIn } from '@/shared/sight-in-fit';
+import { tapeOptionsOf, type TapeLayout } from '@/shared/tape';
 
 /** A math field path ("marks[1].markMm", "sight.radiusMm") as one of our API's fields. */
 function apiFieldOf(field: string, names: Record<string, string> = {}): string {
@@ -58,86 +53,6 @@ function refusingInputErrors<T>(compute: () => T, names: Record<string, string> 
     }
     throw error;
   }
-}
-
-/**
- * Distances to predict (in the fit's unit): every 5 from 10 to 100, or to 20
- * beyond the longest mark (at most 150), plus any fixed pins' distances.
- * Example: predictDistances(60, [33]) → [10, 15, …, 30, 33, 35, …, 100]
- */
-export function predictDistances(longest: number, pins: number[] = []): number[] {
-  const last = Math.min(150, Math.max(100, Math.ceil((longest + 20) / 10) * 10));
-  const distances: number[] = [];
-  for (let distance = 10; distance <= last; distance += 5) distances.push(distance);
-  for (const pin of pins) {
-    // Numeric care: a pin converted from metres may differ from a grid distance by rounding only.
-    if (pin >= 5 && pin <= 150 && !distances.some((distance) => Math.abs(distance - pin) < 1e-6)) distances.push(pin);
-  }
-  return distances.sort((a, b) => a - b);
-}
-
-/** What a fit needs of a bow; fixed pins' distances are predicted too. */
-export type FitBow = Pick<Bow, 'sightRadiusMm' | 'peepHeightMm' | 'scaleDirection'> & Partial<Pick<Bow, 'pinDistances' | 'pinDistanceUnit'>>;
-
-/**
- * The math core's fit input for a sight-in: sight radius and peep height from
- * the bow; mass, diameter, drag coefficient and chronographed speed from the
- * build; air from the sight-in; marks in the first mark's unit (others
- * converted exactly), readings signed for math's downward-growing convention;
- * predictions on a grid of 5s and at the bow's fixed pins.
- * Example: fitInputFor(bow, build, { altitudeM: 1450, temperatureC: 4, marks }).sight → { radiusMm: 838, peepHeightMm: 112 }
- */
-export function fitInputFor(
-  bow: FitBow,
-  build: Pick<ArrowBuild, 'totalGr' | 'diameterMm' | 'dragCoefficient' | 'speedFps'>,
-  sightIn: { altitudeM: number | null; temperatureC: number | null; marks: MarkInput[] },
-): FitInput {
-  const unit: Unit = sightIn.marks[0]?.unit ?? 'yd';
-  const sign = bow.scaleDirection === 'up' ? -1 : 1;
-  const marks = sightIn.marks.map((mark) => ({ distance: convertDistance(mark.distance, mark.unit, unit), markMm: sign * mark.scaleMm }));
-  const air: NonNullable<FitInput['air']> = {};
-  if (sightIn.altitudeM !== null) air.altitudeM = sightIn.altitudeM;
-  if (sightIn.temperatureC !== null) air.temperatureC = sightIn.temperatureC;
-  const arrow: FitInput['arrow'] = { massGr: build.totalGr, diameterMm: build.diameterMm };
-  if (build.dragCoefficient !== null) arrow.dragCoefficient = build.dragCoefficient;
-  if (build.speedFps !== null) arrow.speedFps = build.speedFps;
-  return {
-    distanceUnit: unit,
-    sight: { radiusMm: bow.sightRadiusMm, peepHeightMm: bow.peepHeightMm },
-    arrow,
-    air,
-    marks,
-    predict: predictDistances(
-      Math.max(...marks.map((mark) => mark.distance)),
-      (bow.pinDistances ?? []).map((pin) => convertDistance(pin, bow.pinDistanceUnit ?? 'yd', unit)),
-    ),
-  };
-}
-
-/** The fit as stored with a sight-in: readings as the archer reads the scale. */
-export function storedFitOf(fit: FitResult, scaleDirection: 'down' | 'up'): StoredFit {
-  const sign = scaleDirection === 'up' ? -1 : 1;
-  // JSON has no NaN: an unreachable predicted mark is stored as null.
-  const finite = (value: number) => (Number.isFinite(value) ? value : null);
-  const stored: StoredFit = {
-    ...fit,
-    scaleDirection,
-    scaleZeroMm: sign * fit.scaleZeroMm,
-    marks: fit.marks.map((mark) => ({
-      ...mark,
-      markMm: Number.isFinite(mark.markMm) ? sign * mark.markMm : null,
-      sigmaMm: finite(mark.sigmaMm),
-    })),
-    residuals: fit.residuals.map((residual) => ({
-      ...residual,
-      markMm: sign * residual.markMm,
-      fittedMm: sign * residual.fittedMm,
-      residualMm: sign * residual.residualMm,
-      standardised: sign * residual.standardised,
-    })),
-    model: fit.model as unknown as Record<string, unknown>,
-  };
-  return stored;
 }
 
 /** Our sight-in fields for math's fit-input fields, for error messages. */
@@ -163,10 +78,10 @@ const SIGHT_IN_FIELDS: Record<string, string> = {
 export function fitSightIn(
   bow: FitBow,
   build: Pick<ArrowBuild, 'totalGr' | 'diameterMm' | 'dragCoefficient' | 'speedFps'>,
-  sightIn: { altitudeM: number | null; temperatureC: number | null; marks: MarkInput[] },
+  sightIn: FitSightIn,
 ): StoredFit {
   if (sightIn.marks.length === 1 && build.speedFps === null) throw ApiError.badRequest(ONE_MARK_SIGHT_IN_MESSAGE, { marks: ONE_MARK_SIGHT_IN_MESSAGE });
-  const input = fitInputFor(bow, build, sightIn);
+  const input = sightInFitInput(bow, build, sightIn);
   const fit = refusingInputErrors(() => fitSight(input), SIGHT_IN_FIELDS);
   return storedFitOf(fit, bow.scaleDirection);
 }
@@ -174,19 +89,6 @@ export function fitSightIn(
 /** The public try-it fit: math's input as sent, math's result as returned (NaN → null by JSON). */
 export function tryFit(input: FitInput): FitResult {
   return refusingInputErrors(() => fitSight(input));
-}
-
-/** Math's tape options for a saved or asked-for layout. */
-export function tapeOptionsOf(layout: Pick<TapeLayout, 'fromDistance' | 'toDistance' | 'step' | 'unit' | 'orientation' | 'widthMm' | 'mirror'>): TapeOptionsInput {
-  return {
-    from: layout.fromDistance,
-    to: layout.toDistance,
-    step: layout.step,
-    unit: layout.unit,
-    orientation: layout.orientation,
-    widthMm: layout.widthMm,
-    mirror: layout.mirror,
-  };
 }
 
 const TAPE_FIELDS: Record<string, string> = {
@@ -201,8 +103,7 @@ const TAPE_FIELDS: Record<string, string> = {
 
 /** The tape SVG for a stored fit (its model) and a layout; a tape the fit cannot give is a 400. */
 export function tapeSvgFor(fit: StoredFit, layout: Parameters<typeof tapeOptionsOf>[0]): string {
-  const model = fit.model as unknown as SightModel;
-  return refusingInputErrors(() => mathTapeSvg({ model }, tapeOptionsOf(layout)), TAPE_FIELDS);
+  return refusingInputErrors(() => mathTapeSvg({ model: fit.model }, tapeOptionsOf(layout)), TAPE_FIELDS);
 }
 
 const SHEET_FIELDS: Record<string, string> = { ...TAPE_FIELDS, tape: 'toDistance', paper: 'paper' };
@@ -223,8 +124,7 @@ function sheetOptionsOf(layout: TapeLayout, labels: SheetLabelsIn) {
 
 /** The print sheet SVG (tape at 100 % and its ±0.5/1/2 % variants, calibration bars, labels, caution). */
 export function sheetSvgFor(fit: StoredFit, layout: TapeLayout, labels: SheetLabelsIn): string {
-  const model = fit.model as unknown as SightModel;
-  return refusingInputErrors(() => printSheetSvg({ model, residuals: fit.residuals, rmsMm: fit.rmsMm }, sheetOptionsOf(layout, labels)), SHEET_FIELDS);
+  return refusingInputErrors(() => printSheetSvg({ model: fit.model, residuals: fit.residuals, rmsMm: fit.rmsMm }, sheetOptionsOf(layout, labels)), SHEET_FIELDS);
 }
 
 /** The print sheet as a PDF of the paper's size. */
@@ -292,7 +192,7 @@ export function arrowQuantities(
 
 /** A sight whose every parameter is known: what simulatedReadings draws marks from. */
 export interface KnownSight {
-  distanceUnit: Unit;
+  distanceUnit: DistanceUnit;
   speedFps: number;
   dragCoefficient: number;
   arrowMassGr: number;
@@ -338,5 +238,5 @@ export function simulatedReadings(sight: KnownSight, distances: number[]): numbe
  * Example: fittedReadings(sightIn.fit, [20, 30]) → [≈ 18.46, ≈ 22.03]
  */
 export function fittedReadings(fit: Pick<StoredFit, 'model'>, distances: number[]): number[] {
-  return predictMarksMm(fit.model as unknown as SightModel, distances);
+  return predictMarksMm(fit.model, distances);
 }

@@ -114,7 +114,7 @@ async function runPrediction(user: User, bowId: number, request: PredictRequest)
       : null,
     marksMissing: sightIn ? null : NO_SIGHT_IN_MESSAGE,
     prediction: rest,
-    model: model as unknown as Record<string, unknown> | null,
+    model,
     energyCaution: ENERGY_CAUTION,
   };
   return { response, sightModel: model };

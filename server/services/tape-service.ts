@@ -8,15 +8,13 @@ import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
 import { ArrowBuild, Bow, SightIn, Tape, type User } from '@/server/models';
 import type { StoredFit } from '@/shared/sight-in';
+import { convertDistance } from '@/shared/sight-in-fit';
 import { tapeLayoutSchema, type Tape as TapeOut, type TapeLayout, type TapeQuery, type TapeUpdate } from '@/shared/tape';
 import { findOwnSightIn } from './sight-in-service';
 import { bowFor, type BowCapability } from './bow-access';
 import { sheetPdfFor, sheetSvgFor, tapeSvgFor, type SheetLabelsIn } from './fit-service';
 import { stalenessOfSightIn } from './staleness-service';
 import { sheetNote } from '@/shared/staleness';
-
-/** Distance unit conversion for defaults: yards ↔ metres, exact (international yard and pound, 1959). */
-const YARD_M = 0.9144;
 
 export function tapeOut(tape: Tape, bowId: number): TapeOut {
   return {
@@ -112,7 +110,7 @@ async function downloadLayout(sightIn: SightIn & { bow: Bow }, query: TapeQuery)
   }
   const fit = sightIn.fit as StoredFit;
   const unit = query.unit ?? fit.distanceUnit;
-  const inUnit = (distance: number) => (unit === fit.distanceUnit ? distance : fit.distanceUnit === 'yd' ? distance * YARD_M : distance / YARD_M);
+  const inUnit = (distance: number) => convertDistance(distance, fit.distanceUnit, unit);
   const sighted = fit.residuals.map((residual) => inUnit(residual.distance));
   const reachable = fit.marks.filter((mark) => mark.markMm !== null).map((mark) => inUnit(mark.distance));
   const from = query.from ?? Math.max(10, Math.floor(Math.min(...sighted) / 10) * 10);
