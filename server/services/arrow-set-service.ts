@@ -12,7 +12,7 @@ import { UniqueConstraintError } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError, found } from '@/server/errors';
 import { Arrow, ArrowBuild, ArrowFlier, ArrowSet, SightIn, User } from '@/server/models';
-import { bowFor } from '@/server/services/bow-access';
+import { arrowFor, buildFor } from '@/server/services/bow-access';
 import { personJson } from '@/server/services/tuning-service';
 import { arrowInputSchema, type ArrowSet as ArrowSetJson, type ArrowSetInput, type ArrowUpdate } from '@/shared/arrow-set';
 
@@ -47,13 +47,6 @@ function setJson(set: ArrowSet, build: ArrowBuild, ownerId: number): ArrowSetJso
   };
 }
 
-async function buildFor(user: User, buildId: number, capability: 'read' | 'write') {
-  const build = await ArrowBuild.findByPk(buildId);
-  if (!build) throw ApiError.notFound('That arrow build');
-  const { bow } = await bowFor(user, build.bowId, capability, 'That arrow build');
-  return { build, bow };
-}
-
 /** GET /api/builds/:id/arrow-sets: oldest first. */
 export async function listArrowSets(user: User, buildId: number): Promise<ArrowSetJson[]> {
   const { build, bow } = await buildFor(user, buildId, 'read');
@@ -63,7 +56,7 @@ export async function listArrowSets(user: User, buildId: number): Promise<ArrowS
 
 /** POST /api/builds/:id/arrow-sets */
 export async function createArrowSet(user: User, buildId: number, input: ArrowSetInput): Promise<ArrowSetJson> {
-  const { build, bow } = await buildFor(user, buildId, 'write');
+  const { build, bow } = await buildFor(user, buildId, 'add');
   const id = await sequelize.transaction(async (transaction) => {
     const set = await ArrowSet.create({ buildId, userId: user.id, name: input.name, toleranceGr: input.toleranceGr }, { transaction });
     await Arrow.bulkCreate(
@@ -77,10 +70,7 @@ export async function createArrowSet(user: User, buildId: number, input: ArrowSe
 
 /** The arrow, its set and build, when the user may change it (the archer, or whoever added the set). */
 async function changeableArrow(user: User, arrowId: number) {
-  const arrow = await Arrow.findByPk(arrowId);
-  const set = arrow ? await ArrowSet.findByPk(arrow.setId) : null;
-  if (!arrow || !set) throw ApiError.notFound('That arrow');
-  const { build, bow } = await buildFor(user, set.buildId, 'write');
+  const { arrow, set, build, bow } = await arrowFor(user, arrowId, 'add');
   if (bow.userId !== user.id && set.userId !== user.id) {
     throw ApiError.forbidden('A technician can add records to a shared bow but cannot delete or change the archer’s records.');
   }
@@ -107,10 +97,7 @@ export async function updateArrow(user: User, arrowId: number, update: ArrowUpda
 
 /** POST /api/arrows/:id/fliers: the arrow flew out of the group at that sight-in (of the same bow). */
 export async function addFlier(user: User, arrowId: number, input: { sightInId: number; note: string }): Promise<ArrowSetJson> {
-  const arrow = await Arrow.findByPk(arrowId);
-  const set = arrow ? await ArrowSet.findByPk(arrow.setId) : null;
-  if (!arrow || !set) throw ApiError.notFound('That arrow');
-  const { build, bow } = await buildFor(user, set.buildId, 'write');
+  const { arrow, set, build, bow } = await arrowFor(user, arrowId, 'add');
   const sightIn = await SightIn.findByPk(input.sightInId, { attributes: ['id', 'bowId'] });
   if (!sightIn || sightIn.bowId !== bow.id) throw ApiError.badRequest('That sight-in is not one of this bow’s.', { sightInId: 'Choose one of this bow’s sight-ins' });
   try {

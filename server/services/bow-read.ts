@@ -3,7 +3,8 @@
  * and detail show and what the readiness, level and staleness rules read
  * (builds, sight-ins with their mark counts and longest mark, tapes, logged
  * changes, level checks and the last complete check's steps, range
- * confirmations, who added what), and whether the asking account may read it.
+ * confirmations, who added what), and whether the asking account may read it
+ * (bow-access.ts's read rule, `readableBowSql`).
  * Eight plain indexed SELECTs sent at once on one connection in one read-only
  * snapshot, no model instances. (One statement with JSON arrays, the first
  * rewrite, cost MariaDB about 1.7 ms a bow mostly writing doubles and dates
@@ -14,6 +15,7 @@
  */
 import { sequelize } from '@/server/db';
 import { YARD_M } from '@/math/units/constants';
+import { readableBowSql } from './bow-access';
 
 /** A DATETIME(3) as text ('2026-12-02 11:48:01.952', UTC) or as a Date already → Date. */
 export function sqlDate(value: string | Date): Date;
@@ -178,7 +180,7 @@ function statements(scope: string): Array<{ key: keyof RawRows; sql: string }> {
   b.sight_radius_mm AS sightRadiusMm, b.peep_height_mm AS peepHeightMm, b.scale_direction AS scaleDirection, b.tape_width_mm AS tapeWidthMm,
   b.pin_distances AS pinDistances, b.pin_distance_unit AS pinDistanceUnit, b.notes, b.created_at AS createdAt, b.updated_at AS updatedAt,
   owner.name AS ownerName, (b.user_id = ?) AS owner,
-  (b.user_id = ? OR EXISTS (SELECT 1 FROM shares sh WHERE sh.bow_id = b.id AND sh.tech_id = ? AND sh.state = 'active')) AS canRead
+  ${readableBowSql} AS canRead
 FROM bows b JOIN users owner ON owner.id = b.user_id WHERE ${scope}`,
     },
     {

@@ -1,8 +1,9 @@
 /**
  * Bows: list with the Bench's readiness, read with everything hanging off it,
- * create, update, delete. Owner-scoped: another account's bow is "not found".
+ * create, update, delete. Owner-scoped: another account's bow is "not found"
+ * (bow-access.ts). The aggregator over the record services (builds,
+ * sight-ins, tapes, level, staleness): none of them imports this module.
  */
-import type { Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
 import { ArrowBuild, Bow, BowChange, SightIn, Tape, User } from '@/server/models';
@@ -20,27 +21,9 @@ import { sightInListItems } from './sight-in-service';
 import { tapeOut } from './tape-service';
 import { levelSummaryForBows, type LevelFacts } from './level-service';
 import { photoKeysOfBow, removeStoredPhotos } from './photo-service';
-import { bowFor, type BowCapability } from './bow-access';
+import { bowFor } from './bow-access';
 import { stalenessForBows, type StalenessFacts } from './staleness-service';
 import { readBowFacts, type BowFacts } from './bow-read';
-
-/**
- * The bow with this id if `user` may use `capability` on it (bow-access.ts:
- * read and write for its owner and a technician it is shared with, delete for
- * its owner only); otherwise 404 when they cannot see it (never 403, so ids do
- * not leak), 403 for a technician asking to change or delete.
- */
-export async function findBow(user: User, id: number, capability: BowCapability, transaction?: Transaction): Promise<Bow> {
-  await bowFor(user, id, capability);
-  const bow = await Bow.findOne({ where: { id }, transaction, lock: transaction ? transaction.LOCK.UPDATE : undefined });
-  if (!bow) throw ApiError.notFound('That bow');
-  return bow;
-}
-
-/** The bow with this id if `user` owns it; otherwise 404 (403 for a technician it is shared with). */
-export async function findOwnBow(user: User, id: number, transaction?: Transaction): Promise<Bow> {
-  return findBow(user, id, 'delete', transaction);
-}
 
 export function bowOut(bow: Bow): BowOut {
   return {
@@ -166,7 +149,7 @@ export async function createBow(user: User, input: BowInput): Promise<BowOut> {
  */
 export async function updateBow(user: User, id: number, update: BowUpdate): Promise<BowOut> {
   return sequelize.transaction(async (transaction) => {
-    const bow = await findOwnBow(user, id, transaction);
+    const { bow } = await bowFor(user, id, 'change', { transaction });
     const merged = bowInputSchema.safeParse({ ...bowOut(bow), ...update });
     if (!merged.success) throw validationError(merged.error);
     const moved = impactEdits(bow, merged.data);
@@ -198,7 +181,7 @@ export function impactEdits(before: Pick<BowInput, 'peepHeightMm' | 'sightRadius
 
 /** Deletes the bow; its builds, sight-ins, marks and tapes go with it (foreign-key cascade, migrations 0011–0014). */
 export async function deleteBow(user: User, id: number): Promise<void> {
-  const bow = await findOwnBow(user, id);
+  const { bow } = await bowFor(user, id, 'change');
   const photoKeys = await photoKeysOfBow(bow.id); // the cascade removes photo rows; their files go after
   await bow.destroy();
   await removeStoredPhotos(photoKeys);

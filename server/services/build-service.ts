@@ -12,25 +12,11 @@
 import { Op, fn, col, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
-import { ArrowBuild, Bow, SightIn, type User } from '@/server/models';
+import { ArrowBuild, SightIn, type User } from '@/server/models';
 import { buildInputSchema, type Build, type BuildInput, type BuildUpdate } from '@/shared/build';
-import { findBow } from './bow-service';
-import { bowFor, type BowCapability } from './bow-access';
+import { bowFor, buildFor } from './bow-access';
 import { arrowQuantities } from './fit-service';
 import { addedByNames, addedByOf } from './added-by';
-
-/** The build with this id if `user` may use `capability` on its bow (default: owns it); otherwise 404 (403 for a technician asking to change it). */
-export async function findOwnBuild(user: User, id: number, transaction?: Transaction, capability: BowCapability = 'delete'): Promise<ArrowBuild> {
-  const build = await ArrowBuild.findOne({
-    where: { id },
-    include: [{ model: Bow, as: 'bow', attributes: ['id'] }],
-    transaction,
-    lock: transaction ? transaction.LOCK.UPDATE : undefined,
-  });
-  if (!build) throw ApiError.notFound('That arrow build');
-  await bowFor(user, build.bowId, capability, 'That arrow build');
-  return build;
-}
 
 /** The build as the API sends it; with `names` (addedByNames), who added it. */
 export function buildOut(build: ArrowBuild, sightInCount: number, names?: Map<number, string>): Build {
@@ -90,7 +76,7 @@ function withDerived(input: BuildInput) {
 }
 
 export async function listBuilds(user: User, bowId: number): Promise<Build[]> {
-  const bow = await findBow(user, bowId, 'read');
+  const { bow } = await bowFor(user, bowId, 'read');
   const builds = await ArrowBuild.findAll({ where: { bowId: bow.id }, order: [['id', 'ASC']] });
   const counts = await sightInCounts(builds.map((build) => build.id));
   const names = await addedByNames(builds);
@@ -98,7 +84,7 @@ export async function listBuilds(user: User, bowId: number): Promise<Build[]> {
 }
 
 export async function getBuild(user: User, id: number): Promise<Build> {
-  const build = await findOwnBuild(user, id, undefined, 'read');
+  const { build } = await buildFor(user, id, 'read');
   const counts = await sightInCounts([build.id]);
   return buildOut(build, counts.get(build.id) ?? 0, await addedByNames([build]));
 }
@@ -107,7 +93,7 @@ export async function getBuild(user: User, id: number): Promise<Build> {
  * A new build on the bow: by its owner, or by a technician with an active
  * share ('add-build' in bow-access.ts), attributed to whoever added it. A
  * technician adds builds but never changes or deletes one (updateBuild and
- * deleteBuild need the owner).
+ * deleteBuild ask for 'change', the owner's).
  */
 export async function createBuild(user: User, bowId: number, input: BuildInput): Promise<Build> {
   const { bow } = await bowFor(user, bowId, 'add-build');
@@ -121,7 +107,7 @@ export async function createBuild(user: User, bowId: number, input: BuildInput):
  */
 export async function updateBuild(user: User, id: number, update: BuildUpdate): Promise<Build> {
   return sequelize.transaction(async (transaction) => {
-    const build = await findOwnBuild(user, id, transaction);
+    const { build } = await buildFor(user, id, 'change', { transaction });
     const current = buildOut(build, 0);
     const merged = buildInputSchema.safeParse({ ...current, ...update });
     if (!merged.success) throw validationError(merged.error);
@@ -135,7 +121,7 @@ export async function updateBuild(user: User, id: number, update: BuildUpdate): 
 /** Refused with 409 while sight-ins use the build (see the module comment). */
 export async function deleteBuild(user: User, id: number): Promise<void> {
   await sequelize.transaction(async (transaction) => {
-    const build = await findOwnBuild(user, id, transaction);
+    const { build } = await buildFor(user, id, 'change', { transaction });
     const count = (await sightInCounts([build.id], transaction)).get(build.id) ?? 0;
     if (count > 0) {
       const sightIns = count === 1 ? '1 sight-in uses' : `${count} sight-ins use`;

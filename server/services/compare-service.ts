@@ -10,7 +10,7 @@ import { ApiError } from '@/server/errors';
 import { airDensityKgM3, compareBuilds, isFitInputError, type SightModel } from '@/math';
 import type { CompareQuery, CompareResponse } from '@/shared/compare';
 import type { StoredFit } from '@/shared/sight-in';
-import { readableBow } from './bow-access';
+import { bowFor } from './bow-access';
 import { markStats } from './sight-in-service';
 
 /**
@@ -52,7 +52,7 @@ export function modelOf(sightIn: SightIn): SightModel {
  * Example: await compareBowBuilds(marit, 12, { builds: [3, 4], at: 40, windowMm: 100 }) → { comparison: { rows: […], builds: […] }, sources: […] }
  */
 export async function compareBowBuilds(user: User, bowId: number, query: CompareQuery): Promise<CompareResponse> {
-  const bow = await readableBow(user, bowId);
+  const { bow } = await bowFor(user, bowId, 'read');
   const ids = query.builds ?? [];
   const builds = await ArrowBuild.findAll({ where: { id: ids, bowId: bow.id } });
   const byId = new Map(builds.map((build) => [build.id, build]));

@@ -17,7 +17,8 @@ import { ApiError } from '@/server/errors';
 import { CsvError, parseCsvRecords, type CsvRecord } from '@/server/csv';
 import type { User } from '@/server/models';
 import { distanceToMetres } from '@/math/units/convert';
-import { findOwnSightIn, getSightIn, updateSightIn } from '@/server/services/sight-in-service';
+import { sightInFor } from '@/server/services/bow-access';
+import { getSightIn, updateSightIn } from '@/server/services/sight-in-service';
 import { importMaxBytes, importMaxRows, type ImportResult, type ImportRow, type MarkImport } from '@/shared/csv';
 import { markInputSchema, maxMarks, type MarkInput } from '@/shared/sight-in';
 
@@ -155,7 +156,7 @@ function sizeError(bytes: number): ApiError {
 export async function importMarks(user: User, sightInId: number, input: MarkImport, dryRun: boolean): Promise<ImportResult> {
   const bytes = Buffer.byteLength(input.csv, 'utf8');
   if (bytes > importMaxBytes) throw sizeError(bytes);
-  await findOwnSightIn(user, sightInId, undefined, 'write');
+  await sightInFor(user, sightInId, 'add');
   const existing = (await getSightIn(user, sightInId)).marks;
 
   const result = (rows: ImportRow[], fileProblem: string | null): ImportResult => ({

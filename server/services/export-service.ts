@@ -16,13 +16,13 @@ import { ApiError, validationError } from '@/server/errors';
 import { tapeMessage } from '@/server/mail/messages';
 import { ArrowBuild, SightInMark, SightIn, type User } from '@/server/models';
 import { recordAudit } from '@/server/services/audit-service';
-import { bowFor } from '@/server/services/bow-access';
+import { bowFor, sightInFor } from '@/server/services/bow-access';
 import { bowOut } from '@/server/services/bow-service';
 import { buildOut, sightInCounts } from '@/server/services/build-service';
 import { sendMail } from '@/server/services/mail-service';
 import { listArrowSets } from '@/server/services/arrow-set-service';
 import { confirmationsOf, listRuns, listSetup, personJson } from '@/server/services/tuning-service';
-import { findOwnSightIn, sightInOut } from '@/server/services/sight-in-service';
+import { sightInOut } from '@/server/services/sight-in-service';
 import { sheetDownload } from '@/server/services/tape-service';
 import type { SendTape } from '@/shared/export';
 import { tapeQuerySchema, type TapeQuery } from '@/shared/tape';
@@ -154,7 +154,7 @@ export async function exportBowCsv(user: User, bowId: number): Promise<ExportFil
  * as GET /api/sight-ins/:id/sheet.pdf) e-mailed as an attachment.
  */
 export async function sendTape(user: User, sightInId: number, { to, paper, tape, layout }: SendTape): Promise<{ fileName: string }> {
-  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
+  const { sightIn } = await sightInFor(user, sightInId, 'read');
   let query: TapeQuery = { tape } as TapeQuery;
   if (layout !== undefined) {
     const parsed = tapeQuerySchema.safeParse(Object.fromEntries(new URLSearchParams(layout)));

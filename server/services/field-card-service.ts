@@ -10,7 +10,7 @@ import { ArrowBuild, type User } from '@/server/models';
 import { FIELD_CARD_SIZE_MM, fieldCardData, fieldCardSvg } from '@/math';
 import { POINTS_PER_MM } from '@/server/print/sheet-pdf';
 import type { FieldCardQuery, FieldCardResponse } from '@/shared/field-card';
-import { findOwnSightIn } from './sight-in-service';
+import { sightInFor } from './bow-access';
 import { modelOf, refusingMathInput } from './compare-service';
 import type { Download } from './tape-service';
 
@@ -21,7 +21,7 @@ import type { Download } from './tape-service';
  * Example: await fieldCard(marit, 31, { angles: [-30, 0, 30], altitudeM: 2700 }) → { card: { rows: [ … ] }, labels: { bow: 'Timberline slider', … } }
  */
 export async function fieldCard(user: User, sightInId: number, query: FieldCardQuery): Promise<FieldCardResponse> {
-  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
+  const { sightIn } = await sightInFor(user, sightInId, 'read');
   const build = await ArrowBuild.findByPk(sightIn.buildId, { attributes: ['name'] });
   const asked = query.altitudeM !== undefined || query.temperatureC !== undefined;
   const card = refusingMathInput(() =>

@@ -12,7 +12,7 @@ import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, found } from '@/server/errors';
 import { BowChange, LevelCheck, LevelStep, Photo, User } from '@/server/models';
-import { canReadBow, canWriteBow, readableBow, writableBow } from '@/server/services/bow-access';
+import { bowChangeFor, bowFor, levelCheckFor } from '@/server/services/bow-access';
 import { photoStorage } from '@/server/storage';
 import {
   defaultLevelMaxAgeDays,
@@ -189,7 +189,7 @@ export async function levelSummaryForBows(bowIds: readonly number[], now = new D
 
 /** GET /api/bows/:bowId/level */
 export async function levelForBow(user: User, bowId: number): Promise<LevelSummary> {
-  await readableBow(user, bowId);
+  await bowFor(user, bowId, 'read');
   return (await levelSummaryForBows([bowId])).get(bowId)!;
 }
 
@@ -199,17 +199,9 @@ async function loadCheck(id: number, transaction?: Transaction): Promise<LevelCh
   return LevelCheck.findByPk(id, { include: checkIncludes, transaction });
 }
 
-/** A check the user may read, else 404. */
-async function readableCheck(user: User, id: number): Promise<LevelCheck> {
-  const check = await loadCheck(id);
-  if (!check || !(await canReadBow(user, check.bowId))) throw ApiError.notFound('That level check');
-  return check;
-}
-
-/** A check the user may work on: readable, theirs, still open. */
+/** A check the user may work on: on a bow they may add to, theirs, still open; else 404, 403 or 409. */
 async function workableCheck(user: User, id: number): Promise<LevelCheck> {
-  const check = await readableCheck(user, id);
-  if (!(await canWriteBow(user, check.bowId))) throw ApiError.notFound('That level check');
+  const { check } = await levelCheckFor(user, id, 'add', { include: checkIncludes });
   if (check.userId !== user.id) throw ApiError.forbidden('Only the person who started this check can work on it.');
   if (check.status !== 'open') throw ApiError.conflict('This check is completed; start a new check to record another.');
   return check;
@@ -217,7 +209,7 @@ async function workableCheck(user: User, id: number): Promise<LevelCheck> {
 
 /** GET /api/bows/:bowId/checks: newest first, open ones included. */
 export async function listChecks(user: User, bowId: number): Promise<LevelCheckJson[]> {
-  await readableBow(user, bowId);
+  await bowFor(user, bowId, 'read');
   const checks = await LevelCheck.findAll({ where: { bowId }, include: checkIncludes, order: [['startedAt', 'DESC'], ['id', 'DESC']] });
   return checks.map(checkJson);
 }
@@ -227,7 +219,7 @@ export async function listChecks(user: User, bowId: number): Promise<LevelCheckJ
  * has at most one open check per person (resume it, or discard it first).
  */
 export async function startCheck(user: User, bowId: number, place: LevelPlace, now = new Date()): Promise<LevelCheckJson> {
-  await writableBow(user, bowId);
+  await bowFor(user, bowId, 'add');
   const id = await sequelize.transaction(async (transaction) => {
     const open = await LevelCheck.findOne({ where: { bowId, userId: user.id, status: 'open' }, transaction, lock: transaction.LOCK.UPDATE });
     if (open) {
@@ -247,7 +239,7 @@ export async function startCheck(user: User, bowId: number, place: LevelPlace, n
 
 /** GET /api/checks/:id */
 export async function getCheck(user: User, id: number): Promise<LevelCheckJson> {
-  return checkJson(await readableCheck(user, id));
+  return checkJson((await levelCheckFor(user, id, 'read', { include: checkIncludes })).check);
 }
 
 /**
@@ -306,14 +298,14 @@ export async function workableStep(user: User, checkId: number, step: string): P
 
 /** GET /api/bows/:bowId/changes: newest first. */
 export async function listChanges(user: User, bowId: number): Promise<BowChangeJson[]> {
-  await readableBow(user, bowId);
+  await bowFor(user, bowId, 'read');
   const changes = await BowChange.findAll({ where: { bowId }, include: changeIncludes, order: [['changedAt', 'DESC'], ['id', 'DESC']] });
   return changes.map(changeJson);
 }
 
 /** POST /api/bows/:bowId/changes: log a change; returns it and the bow's new level state. */
 export async function logChange(user: User, bowId: number, input: BowChangeInput, now = new Date()) {
-  await writableBow(user, bowId);
+  await bowFor(user, bowId, 'add');
   const changedAt = new Date(input.changedAt);
   if (changedAt.getTime() > now.getTime() + clockSkewMs) {
     throw ApiError.badRequest('The change cannot be in the future.', { changedAt: 'The change cannot be in the future' });
@@ -323,10 +315,9 @@ export async function logChange(user: User, bowId: number, input: BowChangeInput
   return { change: changeJson(loaded), level: (await levelSummaryForBows([bowId], now)).get(bowId)! };
 }
 
-/** DELETE /api/changes/:id: only the person who logged it. */
+/** DELETE /api/changes/:id: only the person who logged it (a technician too: 'add' in bow-access.ts). */
 export async function deleteChange(user: User, id: number): Promise<void> {
-  const change = await BowChange.findByPk(id);
-  if (!change || !(await canReadBow(user, change.bowId))) throw ApiError.notFound('That change');
+  const { change } = await bowChangeFor(user, id, 'add');
   if (change.userId !== user.id) throw ApiError.forbidden('Only the person who logged this change can delete it.');
   await change.destroy();
 }

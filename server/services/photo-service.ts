@@ -9,7 +9,7 @@
 import sharp from 'sharp';
 import { ApiError } from '@/server/errors';
 import { Photo, type User } from '@/server/models';
-import { canReadBow } from '@/server/services/bow-access';
+import { photoFor } from '@/server/services/bow-access';
 import { photoJson, workableStep } from '@/server/services/level-service';
 import { photoStorage } from '@/server/storage';
 import type { Photo as PhotoJson } from '@/shared/level';
@@ -98,8 +98,7 @@ async function removePhoto(photo: Photo) {
 
 /** GET /api/photos/:id: the bytes and type, for someone who may read the photo's bow; else 404. */
 export async function readPhoto(user: User, id: number): Promise<{ mimeType: PhotoMimeType; bytes: Buffer }> {
-  const photo = await Photo.findByPk(id);
-  if (!photo || !(await canReadBow(user, photo.bowId))) throw ApiError.notFound('That photo');
+  const { photo } = await photoFor(user, id, 'read');
   const bytes = await photoStorage.get(photo.storageKey);
   if (!bytes) throw ApiError.notFound('That photo');
   return { mimeType: photo.mimeType, bytes };

@@ -13,7 +13,7 @@ import { sheetPdf } from '@/server/print/sheet-pdf';
 import { sightInName } from '@/shared/sight-in-name';
 import { buildInputSchema, type BuildInput } from '@/shared/build';
 import type { PredictRequest, PredictResponse, PredictTapeQuery } from '@/shared/predict';
-import { readableBow } from './bow-access';
+import { bowFor } from './bow-access';
 import { arrowQuantities } from './fit-service';
 import { modelOf, refusingMathInput } from './compare-service';
 import type { Download } from './tape-service';
@@ -77,7 +77,7 @@ export async function predict(user: User, bowId: number, request: PredictRequest
 
 /** The prediction as the API sends it, and the predicted sight model (null without a sight-in) for drawing. */
 async function runPrediction(user: User, bowId: number, request: PredictRequest): Promise<{ response: PredictResponse; sightModel: SightModel | null }> {
-  const bow = await readableBow(user, bowId);
+  const { bow } = await bowFor(user, bowId, 'read');
   const target = await targetOf(bow, request);
   const others = await ArrowBuild.findAll({ where: { bowId: bow.id }, order: [['id', 'ASC']] });
   const chronographed = others
@@ -161,7 +161,7 @@ export async function predictedSheetDownload(
 
 /** What a predicted tape or sheet draws: the predicted model, the tape options, the words and a file-name slug. */
 async function predictedDrawing(user: User, bowId: number, query: PredictTapeQuery) {
-  const bow = await readableBow(user, bowId);
+  const { bow } = await bowFor(user, bowId, 'read');
   const { response: result, sightModel: model } = await runPrediction(user, bowId, requestOfQuery(query));
   if (!model) throw ApiError.conflict(NO_SIGHT_IN_MESSAGE);
   const from = query.from ?? 20;

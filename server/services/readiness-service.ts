@@ -9,7 +9,7 @@
 import { Op } from 'sequelize';
 import { distanceToMetres } from '@/math/units/convert';
 import { ArrowBuild, SightInMark, SightIn, Tape, type User } from '@/server/models';
-import { readableBow } from '@/server/services/bow-access';
+import { bowFor } from '@/server/services/bow-access';
 import { levelSummaryForBows } from '@/server/services/level-service';
 import { stalenessForBows } from '@/server/services/staleness-service';
 import type { TripBuild, TripByBuild } from '@/shared/trip';
@@ -153,7 +153,7 @@ async function buildPart(
  * Example: (await tripReadiness(marit, 3)).builds[0].tape?.fromLatestSightIn → true
  */
 export async function tripReadiness(user: User, bowId: number, now = new Date()): Promise<TripByBuild> {
-  const bow = await readableBow(user, bowId);
+  const { bow } = await bowFor(user, bowId, 'read');
   const level = (await levelSummaryForBows([bowId], now)).get(bowId)!;
 
   // Sight-ins newest first by date, then id (the same order the bench uses).

@@ -18,7 +18,7 @@ import { inviteMessage } from '@/server/mail/messages';
 import { Bow, Share, Token, User } from '@/server/models';
 import { recordAudit } from '@/server/services/audit-service';
 import { signUp } from '@/server/services/auth-service';
-import { ownedBow } from '@/server/services/bow-access';
+import { bowFor } from '@/server/services/bow-access';
 import { sendMail } from '@/server/services/mail-service';
 import { checkToken, consumeToken, issueToken, retireTokens, tokenError, type TokenProblem } from '@/server/services/token-service';
 import { inviteValidDays, type Client, type InvitePreview, type InviteSignUp, type Share as ShareJson } from '@/shared/share';
@@ -72,7 +72,7 @@ async function reload(id: number): Promise<ShareJson> {
  * the technician at `email`. Refused when the bow is already shared with that address.
  */
 export async function inviteTech(archer: User, bowId: number, email: string, now = new Date()): Promise<ShareJson> {
-  const bow = await ownedBow(archer, bowId);
+  const { bow } = await bowFor(archer, bowId, 'change');
   if (email === archer.email) {
     throw ApiError.badRequest('That is your own address. Enter the technician’s e-mail address.', { email: 'Enter the technician’s address, not your own' });
   }
@@ -111,7 +111,7 @@ export async function inviteTech(archer: User, bowId: number, email: string, now
 
 /** GET /api/bows/:bowId/shares: every share of the bow (newest first), for its archer. */
 export async function listBowShares(archer: User, bowId: number): Promise<ShareJson[]> {
-  await ownedBow(archer, bowId);
+  await bowFor(archer, bowId, 'change');
   const shares = await Share.findAll({ where: { bowId }, include: shareIncludes, order: [['id', 'DESC']] });
   return Promise.all(shares.map(shareJson));
 }

@@ -19,32 +19,9 @@ import {
   type SightInUpdate,
   type StoredFit,
 } from '@/shared/sight-in';
-import { findBow } from './bow-service';
-import { bowFor, type BowCapability } from './bow-access';
+import { bowFor, sightInFor } from './bow-access';
 import { fitSightIn } from './fit-service';
 import { addedByNames, addedByOf } from './added-by';
-
-/**
- * The sight-in with this id (and its bow) if `user` may use `capability` on the
- * bow (default: owns it; see bow-access.ts); otherwise 404 (403 for a
- * technician asking to change or delete).
- */
-export async function findOwnSightIn(
-  user: User,
-  id: number,
-  transaction?: Transaction,
-  capability: BowCapability = 'delete',
-): Promise<SightIn & { bow: Bow }> {
-  const sightIn = await SightIn.findOne({
-    where: { id },
-    include: [{ model: Bow, as: 'bow' }],
-    transaction,
-    lock: transaction ? transaction.LOCK.UPDATE : undefined,
-  });
-  if (!sightIn) throw ApiError.notFound('That sight-in');
-  await bowFor(user, sightIn.bowId, capability, 'That sight-in');
-  return sightIn as SightIn & { bow: Bow };
-}
 
 /**
  * A technician on a shared bow may add marks to a sight-in but not change its
@@ -209,19 +186,19 @@ async function replaceMarks(sightInId: number, marks: MarkInput[], transaction: 
 }
 
 export async function listSightIns(user: User, bowId: number): Promise<SightInListItem[]> {
-  const bow = await findBow(user, bowId, 'read');
+  const { bow } = await bowFor(user, bowId, 'read');
   const sightIns = await SightIn.findAll({ where: { bowId: bow.id }, order: [['date', 'DESC'], ['id', 'DESC']] });
   return sightInListItems(sightIns);
 }
 
 export async function getSightIn(user: User, id: number): Promise<SightInView> {
-  const sightIn = await findOwnSightIn(user, id, undefined, 'read');
+  const { sightIn } = await sightInFor(user, id, 'read');
   return sightInWithNames(sightIn, await marksOf(sightIn.id));
 }
 
 export async function createSightIn(user: User, bowId: number, input: SightInInput): Promise<SightInView> {
   return sequelize.transaction(async (transaction) => {
-    const bow = await findBow(user, bowId, 'write', transaction);
+    const { bow } = await bowFor(user, bowId, 'add', { transaction });
     const build = await buildOnBow(bow, input.buildId, transaction);
     const fit = fitSightIn(bow, build, input);
     const { marks, ...fields } = input;
@@ -239,9 +216,9 @@ export async function createSightIn(user: User, bowId: number, input: SightInInp
  */
 export async function updateSightIn(user: User, id: number, update: SightInUpdate): Promise<SightInView> {
   return sequelize.transaction(async (transaction) => {
-    const sightIn = await findOwnSightIn(user, id, transaction, 'write');
+    const { sightIn, owner } = await sightInFor(user, id, 'add', { transaction });
     const storedMarks = await marksOf(sightIn.id, transaction);
-    if (sightIn.bow.userId !== user.id) checkAppendOnly(update, storedMarks);
+    if (!owner) checkAppendOnly(update, storedMarks);
     const current = sightInOut(sightIn, storedMarks);
     const merged = sightInInputSchema.safeParse({
       ...current,
@@ -264,6 +241,6 @@ export async function updateSightIn(user: User, id: number, update: SightInUpdat
 
 /** Deletes the sight-in; its marks and tapes go with it (foreign-key cascade). */
 export async function deleteSightIn(user: User, id: number): Promise<void> {
-  const sightIn = await findOwnSightIn(user, id);
+  const { sightIn } = await sightInFor(user, id, 'change');
   await sightIn.destroy();
 }

@@ -9,9 +9,8 @@
  *   → 'Tape: Peep moved on 2 Dec 2026, after this sight-in: confirm the marks at the range.'
  */
 import { Op } from 'sequelize';
-import { ApiError } from '@/server/errors';
 import { ArrowBuild, BowChange, RangeConfirmation, SightIn, Tape, type User } from '@/server/models';
-import { bowFor } from '@/server/services/bow-access';
+import { sightInFor } from '@/server/services/bow-access';
 import { confirmationsOf, personJson } from '@/server/services/tuning-service';
 import { currentStaleness, fitStaleness, type FitFacts, type ImpactChange, type Staleness } from '@/shared/staleness';
 import type { BowConfirm, SightInStaleness } from '@/shared/staleness-api';
@@ -105,9 +104,7 @@ export async function stalenessOfSightIn(bowId: number, sightInId: number): Prom
 
 /** GET /api/sight-ins/:id/staleness: whether to confirm the marks at the range, why, and the confirmations so far. */
 export async function sightInStaleness(user: User, sightInId: number): Promise<SightInStaleness> {
-  const sightIn = await SightIn.findByPk(sightInId, { attributes: ['id', 'bowId'] });
-  if (!sightIn) throw ApiError.notFound('That sight-in');
-  const access = await bowFor(user, sightIn.bowId, 'read', 'That sight-in');
+  const { sightIn, ...access } = await sightInFor(user, sightInId, 'read');
   const [staleness, confirmations] = await Promise.all([stalenessOfSightIn(sightIn.bowId, sightInId), confirmationsOf([sightInId])]);
   return {
     sightInId,

@@ -3,15 +3,13 @@
  * (rendered by the math core through fit-service). A layout is checked by
  * drawing it once before it is saved, so a saved tape always prints.
  */
-import type { Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
 import { ArrowBuild, Bow, SightIn, Tape, type User } from '@/server/models';
 import type { StoredFit } from '@/shared/sight-in';
 import { convertDistance } from '@/shared/sight-in-fit';
 import { tapeLayoutSchema, type Tape as TapeOut, type TapeLayout, type TapeQuery, type TapeUpdate } from '@/shared/tape';
-import { findOwnSightIn } from './sight-in-service';
-import { bowFor, type BowCapability } from './bow-access';
+import { sightInFor, tapeFor } from './bow-access';
 import { sheetPdfFor, sheetSvgFor, tapeSvgFor, type SheetLabelsIn } from './fit-service';
 import { stalenessOfSightIn } from './staleness-service';
 import { sheetNote } from '@/shared/staleness';
@@ -35,44 +33,24 @@ export function tapeOut(tape: Tape, bowId: number): TapeOut {
   };
 }
 
-/** The tape with this id (and its sight-in and bow) if `user` may use `capability` on the bow (default: owns it); otherwise 404 (403 for a technician asking to change it). */
-async function findOwnTape(user: User, id: number, transaction?: Transaction, capability: BowCapability = 'delete') {
-  const tape = await Tape.findOne({
-    where: { id },
-    transaction,
-    lock: transaction ? transaction.LOCK.UPDATE : undefined,
-    include: [
-      {
-        model: SightIn,
-        as: 'sightIn',
-        required: true,
-        include: [{ model: Bow, as: 'bow' }],
-      },
-    ],
-  });
-  if (!tape) throw ApiError.notFound('That tape');
-  await bowFor(user, (tape as Tape & { sightIn: SightIn }).sightIn.bowId, capability, 'That tape');
-  return tape as Tape & { sightIn: SightIn & { bow: Bow } };
-}
-
 function layoutOf(tape: Tape): TapeLayout {
   const { fromDistance, toDistance, step, unit, orientation, widthMm, mirror, paper, label } = tape;
   return { fromDistance, toDistance, step, unit, orientation, widthMm, mirror, paper, label };
 }
 
 export async function listTapes(user: User, sightInId: number): Promise<TapeOut[]> {
-  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
+  const { sightIn } = await sightInFor(user, sightInId, 'read');
   const tapes = await Tape.findAll({ where: { sightInId: sightIn.id }, order: [['id', 'ASC']] });
   return tapes.map((tape) => tapeOut(tape, sightIn.bowId));
 }
 
 export async function getTape(user: User, id: number): Promise<TapeOut> {
-  const tape = await findOwnTape(user, id, undefined, 'read');
+  const { tape } = await tapeFor(user, id, 'read');
   return tapeOut(tape, tape.sightIn.bowId);
 }
 
 export async function createTape(user: User, sightInId: number, layout: TapeLayout): Promise<TapeOut> {
-  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'write');
+  const { sightIn } = await sightInFor(user, sightInId, 'add');
   tapeSvgFor(sightIn.fit as StoredFit, layout);
   const tape = await Tape.create({ ...layout, sightInId: sightIn.id });
   return tapeOut(tape, sightIn.bowId);
@@ -80,7 +58,7 @@ export async function createTape(user: User, sightInId: number, layout: TapeLayo
 
 export async function updateTape(user: User, id: number, update: TapeUpdate): Promise<TapeOut> {
   return sequelize.transaction(async (transaction) => {
-    const tape = await findOwnTape(user, id, transaction);
+    const { tape } = await tapeFor(user, id, 'change', { transaction });
     const merged = tapeLayoutSchema.safeParse({ ...layoutOf(tape), ...update });
     if (!merged.success) throw validationError(merged.error);
     tapeSvgFor(tape.sightIn.fit as StoredFit, merged.data);
@@ -91,7 +69,7 @@ export async function updateTape(user: User, id: number, update: TapeUpdate): Pr
 }
 
 export async function deleteTape(user: User, id: number): Promise<void> {
-  const tape = await findOwnTape(user, id);
+  const { tape } = await tapeFor(user, id, 'change');
   await tape.destroy();
 }
 
@@ -162,7 +140,7 @@ async function sheetLabels(sightIn: SightIn & { bow: Bow }, layout: TapeLayout):
 export type Download = { body: string | Buffer; contentType: string; fileName: string };
 
 export async function tapeDownload(user: User, sightInId: number, query: TapeQuery): Promise<Download> {
-  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
+  const { sightIn } = await sightInFor(user, sightInId, 'read');
   const layout = await downloadLayout(sightIn, query);
   return {
     body: tapeSvgFor(sightIn.fit as StoredFit, layout),
@@ -172,7 +150,7 @@ export async function tapeDownload(user: User, sightInId: number, query: TapeQue
 }
 
 export async function sheetDownload(user: User, sightInId: number, query: TapeQuery, format: 'svg' | 'pdf'): Promise<Download> {
-  const sightIn = await findOwnSightIn(user, sightInId, undefined, 'read');
+  const { sightIn } = await sightInFor(user, sightInId, 'read');
   const layout = await downloadLayout(sightIn, query);
   const labels = await sheetLabels(sightIn, layout);
   const fit = sightIn.fit as StoredFit;

@@ -14,8 +14,8 @@
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '@/server/db';
 import { ApiError, found } from '@/server/errors';
-import { ArrowBuild, BowChange, PaperTuneRun, PaperTuneShot, RangeConfirmation, SetupEntry, SightIn, User } from '@/server/models';
-import { bowFor } from '@/server/services/bow-access';
+import { ArrowBuild, BowChange, PaperTuneRun, PaperTuneShot, RangeConfirmation, SetupEntry, User } from '@/server/models';
+import { bowFor, paperTuneRunFor, sightInFor } from '@/server/services/bow-access';
 import type { BowChangeKind } from '@/shared/level-status';
 import {
   entryDiffers,
@@ -90,7 +90,7 @@ export async function listSetup(user: User, bowId: number): Promise<SetupList> {
  * logs a change of the kind the measure stands for.
  */
 export async function addSetupEntry(user: User, bowId: number, input: SetupEntryInput, now = new Date()): Promise<{ entry: SetupEntryJson }> {
-  const { bow } = await bowFor(user, bowId, 'write');
+  const { bow } = await bowFor(user, bowId, 'add');
   checkNotFuture(input.measuredOn, now, 'measuredOn');
   const spec = setupMeasures[input.measure];
   const id = await sequelize.transaction(async (transaction) => {
@@ -179,16 +179,9 @@ export async function listRuns(user: User, bowId: number): Promise<PaperTuneRunJ
   return runs.map((run) => runJson(run, bow.userId));
 }
 
-async function loadRun(user: User, id: number, capability: 'read' | 'write') {
-  const run = await PaperTuneRun.findByPk(id, { include: runIncludes() });
-  if (!run) throw ApiError.notFound('That paper-tune run');
-  const { bow } = await bowFor(user, run.bowId, capability, 'That paper-tune run');
-  return { run, bow };
-}
-
 /** A run the user may add to: theirs (who started it works it, as with level checks) and still open. */
 async function workableRun(user: User, id: number) {
-  const loaded = await loadRun(user, id, 'write');
+  const loaded = await paperTuneRunFor(user, id, 'add', { include: runIncludes() });
   if (loaded.run.userId !== user.id) throw ApiError.forbidden('Only the person who started this paper-tune run can add to it; start a run of your own.');
   if (loaded.run.outcome !== 'open') throw ApiError.conflict('This run has ended; start a new run to shoot more paper.');
   return loaded;
@@ -196,13 +189,13 @@ async function workableRun(user: User, id: number) {
 
 /** GET /api/paper-tunes/:id */
 export async function getRun(user: User, id: number): Promise<PaperTuneRunJson> {
-  const { run, bow } = await loadRun(user, id, 'read');
+  const { run, bow } = await paperTuneRunFor(user, id, 'read', { include: runIncludes() });
   return runJson(run, bow.userId);
 }
 
 /** POST /api/bows/:bowId/paper-tunes */
 export async function startRun(user: User, bowId: number, input: PaperTuneStart, now = new Date()): Promise<PaperTuneRunJson> {
-  await bowFor(user, bowId, 'write');
+  await bowFor(user, bowId, 'add');
   checkNotFuture(input.startedOn, now, 'startedOn');
   if (input.buildId !== null) {
     const build = await ArrowBuild.findOne({ where: { id: input.buildId, bowId }, attributes: ['id'] });
@@ -260,9 +253,7 @@ export async function endRun(user: User, runId: number, input: PaperTuneEnd, now
 
 /** POST /api/sight-ins/:id/confirm-range: the marks were shot again at the range and held. */
 export async function confirmAtRange(user: User, sightInId: number, note: string, now = new Date()) {
-  const sightIn = await SightIn.findByPk(sightInId, { attributes: ['id', 'bowId'] });
-  if (!sightIn) throw ApiError.notFound('That sight-in');
-  await bowFor(user, sightIn.bowId, 'write', 'That sight-in');
+  await sightInFor(user, sightInId, 'add');
   const confirmation = await RangeConfirmation.create({ sightInId, userId: user.id, confirmedAt: now, note });
   return { id: confirmation.id, sightInId, confirmedAt: now.toISOString(), note, confirmedBy: personJson(user) };
 }
