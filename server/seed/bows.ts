@@ -23,7 +23,7 @@ import { createBuild } from '@/server/services/build-service';
 import { createSightIn } from '@/server/services/sight-in-service';
 import { createTape } from '@/server/services/tape-service';
 import { simulatedReadings } from '@/server/services/fit-service';
-import type { SeedStep } from './demo';
+import type { SeedStep } from './step';
 
 const INCH_MM = 25.4; // exact (international yard and pound, 1959)
 

@@ -4,19 +4,19 @@
  */
 import { User } from '@/server/models';
 import { hashPassword } from '@/server/services/auth-service';
-import { seedBowsStep } from './bows'; // bows.ts imports only the SeedStep type from here, so no import cycle
-import { seedLevelStep } from './level'; // likewise; runs after the bows it checks
-import { seedSharingStep } from './sharing'; // likewise; shares one of the seeded bows
-import { seedTuningStep } from './tuning'; // likewise; the hunting bow's tuning records
+import type { DemoRole, SeedStep } from './step'; // the steps import their type from step.ts, never this module
+import { seedBowsStep } from './bows';
+import { seedLevelStep } from './level'; // runs after the bows it checks
+import { seedSharingStep } from './sharing'; // shares one of the seeded bows
+import { seedTuningStep } from './tuning'; // the hunting bow's tuning records
 
 export const demoAccounts = [
   { role: 'archer', name: 'Marit Oakhollow', email: 'marit@demo.pinwright.test', password: 'pinwright-archer' },
   { role: 'tech', name: 'Desmond Tull (Kettle Creek bow bench)', email: 'desmond@demo.pinwright.test', password: 'pinwright-tech-01' },
   { role: 'admin', name: 'Pinwright Admin', email: 'admin@demo.pinwright.test', password: 'pinwright-admin-01' },
-] as const;
+] as const satisfies ReadonlyArray<{ role: DemoRole; name: string; email: string; password: string }>;
 
 /** Extra seeding steps registered by features (bows, checks, …); each must be idempotent. */
-export type SeedStep = (accounts: Record<(typeof demoAccounts)[number]['role'], User>) => Promise<void>;
 export const seedSteps: SeedStep[] = [];
 seedSteps.push(seedBowsStep);
 seedSteps.push(seedLevelStep);
@@ -24,7 +24,7 @@ seedSteps.push(seedSharingStep);
 seedSteps.push(seedTuningStep);
 
 export async function seedDemo(): Promise<void> {
-  const accounts = {} as Record<(typeof demoAccounts)[number]['role'], User>;
+  const accounts = {} as Record<DemoRole, User>;
   for (const account of demoAccounts) {
     let user = await User.findOne({ where: { email: account.email } });
     if (!user) {

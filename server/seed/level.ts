@@ -11,7 +11,7 @@
 import { sequelize } from '@/server/db';
 import { Bow, BowChange, LevelCheck, LevelStep, type User } from '@/server/models';
 import type { LevelResult, LevelStepKey, ReadingUnit } from '@/shared/level';
-import type { SeedStep } from './demo';
+import type { SeedStep } from './step';
 
 const dayMs = 24 * 60 * 60 * 1000;
 const minuteMs = 60 * 1000;

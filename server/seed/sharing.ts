@@ -4,7 +4,7 @@
  * and he has accepted. Idempotent: a bow that has any share is left as it is.
  */
 import { AuditEntry, Bow, Share } from '@/server/models';
-import type { SeedStep } from './demo';
+import type { SeedStep } from './step';
 
 export const seedSharingStep: SeedStep = async ({ archer, tech }) => {
   const bow = await Bow.findOne({ where: { userId: archer.id }, order: [['id', 'ASC']] });

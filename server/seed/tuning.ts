@@ -9,7 +9,7 @@
  */
 import { sequelize } from '@/server/db';
 import { Arrow, ArrowBuild, ArrowSet, Bow, BowChange, PaperTuneRun, PaperTuneShot, SetupEntry, type User } from '@/server/models';
-import type { SeedStep } from './demo';
+import type { SeedStep } from './step';
 
 const day = '2026-08-30';
 const at = (time: string) => new Date(`${day}T${time}:00.000Z`);

@@ -11,7 +11,7 @@
 import { AsyncLocalStorage } from 'node:async_hooks';
 import type { Request, RequestHandler } from 'express';
 import type { Sequelize } from 'sequelize';
-import type { User } from '@/server/models';
+import type { User } from '@/server/models/user'; // not '@/server/models', whose hooks import this module
 
 type Scope = { req: Request };
 
