@@ -55,7 +55,7 @@ export const paperTuneShotInputSchema = z
   })
   .superRefine((shot, ctx) => {
     if (shot.tear === 'clean') return;
-    if (shot.lengthMm === null || Number.isNaN(shot.lengthMm)) ctx.addIssue({ code: 'custom', path: ['lengthMm'], message: 'Enter the tear length in mm' });
+    if (shot.lengthMm === null || Number.isNaN(shot.lengthMm)) ctx.addIssue({ code: 'custom', path: ['lengthMm'], message: 'Enter the tear length' });
     else if (shot.lengthMm <= 0 || shot.lengthMm > 150) ctx.addIssue({ code: 'custom', path: ['lengthMm'], message: 'Tear length must be more than 0 and at most 150 mm' });
   })
   .transform((shot) => (shot.tear === 'clean' ? { ...shot, lengthMm: null } : shot));

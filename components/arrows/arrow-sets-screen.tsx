@@ -5,7 +5,8 @@ import { useAddArrowSet, useAddFlier, useArrowSets, useUpdateArrow } from '@/com
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { formatDay } from '@/components/bows/readiness-words';
-import { textToNumber } from '@/components/forms/form-numbers';
+import { messageForUnits, quantityTextToStored, storedToInputText, textToNumber } from '@/components/forms/form-numbers';
+import { useUnits } from '@/components/account/use-units';
 import { useBuild } from '@/components/builds/api';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -23,12 +24,16 @@ import { colors, radii, space } from '@/components/theme';
 import { arrowSetInputSchema, arrowStatusNames, type Arrow, type ArrowSet, type SpinKind } from '@/shared/arrow-set';
 import { arrowSetStats, buildWeightCheck, defaultToleranceGr } from '@/shared/arrow-set-stats';
 import type { BowDetail } from '@/shared/bow';
+import { fromStored, shownUnit, type UnitsLike } from '@/shared/units';
 
-const gr = (value: number) => `${Number(value.toFixed(1))} gr`;
-/** "+0.4 gr", "−0.3 gr", "±0 gr" (rounded to 0.1 gr first, so −0.04 reads ±0). */
-const signedGr = (value: number) => {
-  const rounded = Number(value.toFixed(1));
-  return `${rounded > 0 ? '+' : rounded < 0 ? '−' : '±'}${Math.abs(rounded)} gr`;
+/** Decimals for arrow weights: 0.1 gr, 0.01 g (a grain is about 0.065 g). */
+const massDigits = (units: UnitsLike) => (shownUnit('mass', units) === 'g' ? 2 : 1);
+/** A weight stored in grains, in the archer's mass unit: "500.2 gr" or "32.41 g". */
+const gr = (value: number, units: UnitsLike) => `${Number(fromStored(value, 'mass', units).toFixed(massDigits(units)))} ${shownUnit('mass', units)}`;
+/** "+0.4 gr", "−0.3 gr", "±0 gr" (rounded first, so −0.04 gr reads ±0). */
+const signedGr = (value: number, units: UnitsLike) => {
+  const rounded = Number(fromStored(value, 'mass', units).toFixed(massDigits(units)));
+  return `${rounded > 0 ? '+' : rounded < 0 ? '−' : '±'}${Math.abs(rounded)} ${shownUnit('mass', units)}`;
 };
 
 function spinWords(arrow: Arrow): string {
@@ -42,6 +47,7 @@ function spinWords(arrow: Arrow): string {
 function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetail; canChange: boolean; canAdd: boolean }) {
   const update = useUpdateArrow(set.buildId);
   const flier = useAddFlier(set.buildId);
+  const units = useUnits();
   const stats = arrowSetStats(set.arrows.filter((a) => a.status !== 'retired'), set.toleranceGr);
   const check = buildWeightCheck(stats.medianGr, set.buildTotalGr, set.toleranceGr);
   const flagOf = (arrow: Arrow) => stats.flags.find((flag) => flag.number === arrow.number);
@@ -51,21 +57,21 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
     <View style={styles.card} testID={`arrow-set-${set.id}`}>
       <Text variant="title">{set.name}</Text>
       <Text variant="small" tone="soft">
-        Tolerance ±{set.toleranceGr} gr around the median{set.byTechnician ? ` · added by ${set.addedBy.name}` : ''} · {formatDay(set.createdAt)}
+        Tolerance ±{gr(set.toleranceGr, units)} around the median{set.byTechnician ? ` · added by ${set.addedBy.name}` : ''} · {formatDay(set.createdAt)}
       </Text>
       <View style={styles.figures}>
-        <Figure label="Median" value={stats.medianGr === null ? '—' : gr(stats.medianGr)} testID={`set-${set.id}-median`} />
-        <Figure label="Spread" value={stats.spreadGr === null ? '—' : gr(stats.spreadGr)} testID={`set-${set.id}-spread`} />
+        <Figure label="Median" value={stats.medianGr === null ? '—' : gr(stats.medianGr, units)} testID={`set-${set.id}-median`} />
+        <Figure label="Spread" value={stats.spreadGr === null ? '—' : gr(stats.spreadGr, units)} testID={`set-${set.id}-spread`} />
         <Figure label="Outside ±tolerance" value={String(stats.flags.length)} testID={`set-${set.id}-flag-count`} />
       </View>
       {check ? (
         <Text variant="small" tone={check.outside ? 'due' : 'soft'} testID={`set-${set.id}-build-check`}>
-          The build’s computed total is {gr(set.buildTotalGr!)}; the set’s median is {signedGr(check.differenceGr)} from it
+          The build’s computed total is {gr(set.buildTotalGr!, units)}; the set’s median is {signedGr(check.differenceGr, units)} from it
           {check.outside ? ': re-weigh a component, or correct the build.' : '.'}
         </Text>
       ) : null}
       <Text variant="caption" tone="soft">
-        Retired arrows are left out of the figures. ±{defaultToleranceGr} gr is the usual default (common practice, no published source).
+        Retired arrows are left out of the figures. ±{gr(defaultToleranceGr, units)} is the usual default (common practice, no published source).
       </Text>
       <View accessibilityLabel={`Arrows of ${set.name}`}>
         {set.arrows.map((arrow) => {
@@ -77,9 +83,9 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
                 <Text variant="label" style={styles.number}>
                   #{arrow.number}
                 </Text>
-                <Text style={styles.weight}>{gr(arrow.weightGr)}</Text>
+                <Text style={styles.weight}>{gr(arrow.weightGr, units)}</Text>
                 <Text variant="small" style={styles.off}>
-                  {off === null ? '' : signedGr(off)}
+                  {off === null ? '' : signedGr(off, units)}
                 </Text>
                 <Text variant="label" tone={flag ? 'failed' : 'verified'} style={styles.flag} testID={`arrow-${set.id}-${arrow.number}-flag`}>
                   {flag ? (flag.side === 'heavy' ? 'Heavy' : 'Light') : arrow.status === 'retired' ? '—' : 'In'}
@@ -142,8 +148,11 @@ const emptyRows = (count: number): Row[] => Array.from({ length: count }, () => 
 
 function NewSetForm({ buildId, onDone }: { buildId: number; onDone: () => void }) {
   const add = useAddArrowSet(buildId);
+  // Weights and the tolerance are typed in the archer's mass unit (gr or g; "32.4 g" in a grain field works too), stored in grains.
+  const units = useUnits();
+  const massUnit = shownUnit('mass', units);
   const [name, setName] = useState('Hunting set');
-  const [tolerance, setTolerance] = useState(String(defaultToleranceGr));
+  const [tolerance, setTolerance] = useState(storedToInputText(defaultToleranceGr, 'mass', units));
   const [spinKind, setSpinKind] = useState<SpinKind>('none');
   const [rows, setRows] = useState<Row[]>(emptyRows(6));
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -155,19 +164,20 @@ function NewSetForm({ buildId, onDone }: { buildId: number; onDone: () => void }
       const kind: SpinKind = spinKind === 'pass' ? (spinText === 'fail' || spinText === 'f' ? 'fail' : spinText === '' ? 'none' : 'pass') : spinText === '' ? 'none' : spinKind;
       return {
         number: index + 1,
-        weightGr: textToNumber(row.weight),
+        weightGr: quantityTextToStored(row.weight, 'mass', units),
         spinKind: kind,
         runout: kind === 'thou' || kind === 'mm' ? (textToNumber(row.spin) ?? null) : null,
         note: row.note,
         status: 'quiver' as const,
       };
     });
-    const parsed = arrowSetInputSchema.safeParse({ name, toleranceGr: textToNumber(tolerance), arrows });
+    const parsed = arrowSetInputSchema.safeParse({ name, toleranceGr: quantityTextToStored(tolerance, 'mass', units), arrows });
     if (!parsed.success) {
       const next: Record<string, string> = {};
       for (const issue of parsed.error.issues) {
         const key = issue.path.join('.');
-        if (!next[key]) next[key] = issue.path[0] === 'arrows' && typeof issue.path[1] === 'number' ? `Arrow ${issue.path[1] + 1}: ${issue.message}` : issue.message;
+        const message = messageForUnits(issue.message, units, ['mass']);
+        if (!next[key]) next[key] = issue.path[0] === 'arrows' && typeof issue.path[1] === 'number' ? `Arrow ${issue.path[1] + 1}: ${message}` : message;
       }
       setErrors(next);
       return;
@@ -185,7 +195,7 @@ function NewSetForm({ buildId, onDone }: { buildId: number; onDone: () => void }
           <TextField label="Set name" value={name} onChangeText={setName} error={errors.name} testID="set-name" />
         </View>
         <View style={styles.cell}>
-          <TextField label="Tolerance (gr)" hint="± around the median" numeric unit="gr" value={tolerance} onChangeText={setTolerance} error={errors.toleranceGr} testID="set-tolerance" />
+          <TextField label={`Tolerance (${massUnit})`} hint="± around the median" numeric unit={massUnit} value={tolerance} onChangeText={setTolerance} error={errors.toleranceGr} testID="set-tolerance" />
         </View>
       </View>
       <SegmentedControl label="Spin check given as" options={spinOptions} value={spinKind} onChange={setSpinKind} optionBasis={120} testID="set-spin-kind" />
@@ -195,7 +205,7 @@ function NewSetForm({ buildId, onDone }: { buildId: number; onDone: () => void }
             #{index + 1}
           </Text>
           <View style={styles.cell}>
-            <TextField label={`Arrow ${index + 1} weight (gr)`} numeric unit="gr" value={row.weight} onChangeText={(weight) => setRow(index, { weight })} error={rowError(index, 'weightGr')} testID={`arrow-weight-${index + 1}`} />
+            <TextField label={`Arrow ${index + 1} weight (${massUnit})`} numeric unit={massUnit} value={row.weight} onChangeText={(weight) => setRow(index, { weight })} error={rowError(index, 'weightGr')} testID={`arrow-weight-${index + 1}`} />
           </View>
           {spinKind !== 'none' ? (
             <View style={styles.cell}>

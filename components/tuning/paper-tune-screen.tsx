@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { useUnits } from '@/components/account/use-units';
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { formatDay } from '@/components/bows/readiness-words';
@@ -29,6 +30,7 @@ import {
   type PaperTuneRun,
   type TuneAdjustmentKind,
 } from '@/shared/paper-tune';
+import { formatQuantity, messageInUnits, parseQuantity, shownUnit } from '@/shared/units';
 import { suggestNext, tearNames, type Tear } from '@/shared/paper-tune-rules';
 import type { CamSystem, RestKind } from '@/shared/setup-measures';
 
@@ -36,6 +38,9 @@ type ShotErrors = Partial<Record<'tear' | 'lengthMm' | 'arrows' | 'note' | 'chan
 
 function ShotForm({ run }: { run: PaperTuneRun }) {
   const add = useAddShot(run.id);
+  // The tear length is typed in the archer's length unit (in or mm; "12 mm" in an inch field works too), stored in mm.
+  const units = useUnits();
+  const lengthUnit = shownUnit('length', units);
   const first = run.shots.length === 0;
   const [tear, setTear] = useState<Tear | null>(null);
   const [length, setLength] = useState('');
@@ -46,9 +51,14 @@ function ShotForm({ run }: { run: PaperTuneRun }) {
   const [errors, setErrors] = useState<ShotErrors>({});
 
   const submit = () => {
+    const typedLength = tear === 'clean' ? { value: undefined } : parseQuantity(length, 'length', units);
+    if (typedLength.error !== undefined) {
+      setErrors({ lengthMm: `Tear length ${typedLength.error}` });
+      return;
+    }
     const parsed = paperTuneShotInputSchema.safeParse({
       tear,
-      lengthMm: tear === 'clean' ? null : (textToNumber(length) ?? null),
+      lengthMm: typedLength.value ?? null,
       arrows: textToNumber(arrows) ?? 1,
       note,
       changedBefore: first ? 'none' : changed,
@@ -58,7 +68,7 @@ function ShotForm({ run }: { run: PaperTuneRun }) {
       const next: ShotErrors = {};
       for (const issue of parsed.error.issues) {
         const key = String(issue.path[0] ?? 'form') as keyof ShotErrors;
-        if (!next[key]) next[key] = issue.message;
+        if (!next[key]) next[key] = messageInUnits(issue.message, units, ['length']);
       }
       setErrors(next);
       return;
@@ -97,7 +107,7 @@ function ShotForm({ run }: { run: PaperTuneRun }) {
       ) : null}
       <TearDiagram value={tear} onChange={setTear} error={errors.tear} />
       {tear !== 'clean' ? (
-        <TextField label="Tear length (mm)" hint="Hole to the end of the tail’s tear." numeric unit="mm" value={length} onChangeText={setLength} error={errors.lengthMm} testID="tear-length" />
+        <TextField label={`Tear length (${lengthUnit})`} hint="Hole to the end of the tail’s tear." numeric unit={lengthUnit} value={length} onChangeText={setLength} error={errors.lengthMm} testID="tear-length" />
       ) : null}
       <View style={styles.row}>
         <View style={styles.cell}>
@@ -150,6 +160,8 @@ function EndButtons({ run }: { run: PaperTuneRun }) {
  */
 export function PaperTuneScreen({ runId }: { runId: number }) {
   const me = useMe();
+  const units = useUnits();
+  const lengthUnits = shownUnit('length', units);
   const run = useRun(runId);
   const bow = useBow(run.data?.bowId);
   const setup = useSetup(run.data?.bowId);
@@ -205,7 +217,7 @@ export function PaperTuneScreen({ runId }: { runId: number }) {
         <View style={styles.list}>
           {data.shots.map((shot) => (
             <Text key={shot.id} variant="small" testID={`shot-${shot.position + 1}`}>
-              {`Shot ${shot.position + 1}: ${tearNames[shot.tear]}${shot.lengthMm ? `, ${shot.lengthMm} mm` : ''} · ${shot.arrows} ${shot.arrows === 1 ? 'arrow' : 'arrows'}`}
+              {`Shot ${shot.position + 1}: ${tearNames[shot.tear]}${shot.lengthMm ? `, ${formatQuantity(shot.lengthMm, 'length', units, lengthUnits === 'in' ? 2 : 0)}` : ''} · ${shot.arrows} ${shot.arrows === 1 ? 'arrow' : 'arrows'}`}
               {shot.changedBefore !== 'none' ? ` · changed before: ${tuneAdjustmentNames[shot.changedBefore].toLowerCase()}${shot.changeNote ? ` (${shot.changeNote})` : ''}` : ''}
               {shot.note ? ` · ${shot.note}` : ''}
               {shot.addedBy.id !== data.addedBy.id ? ` · by ${shot.addedBy.name}` : ''}

@@ -174,7 +174,7 @@ describe('paper tuning', () => {
     expect((await shot({ tear: 'up', lengthMm: 25 })).status).toBe(201);
     const missing = await shot({ tear: 'left' });
     expect(missing.status).toBe(400);
-    expect(missing.body.error.fields.lengthMm).toBe('Enter the tear length in mm');
+    expect(missing.body.error.fields.lengthMm).toBe('Enter the tear length');
     expect((await shot({ tear: 'left', lengthMm: 15, changedBefore: 'nock-height', changeNote: 'down 1/16' })).status).toBe(201);
     expect((await archer.agent.post(`/api/paper-tunes/${runId}/end`).set(CSRF).send({ outcome: 'clean' })).status).toBe(400);
     expect((await shot({ tear: 'left', lengthMm: 6, changedBefore: 'rest', changeNote: 'left 1/32' })).status).toBe(201);

@@ -146,18 +146,26 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     // A tear needs its length.
     await page.getByTestId('tear-up').click();
     await page.getByTestId('save-shot').click();
-    await page.getByText('Enter the tear length in mm').waitFor();
+    await page.getByText('Enter the tear length').waitFor();
+    // This archer works in inches: the field says so, and 25 (meant as mm) is refused in inches.
+    await page.getByText('Tear length (in)').waitFor();
     await page.getByTestId('tear-length').fill('25');
     await page.getByTestId('save-shot').click();
+    await page.getByText('Tear length must be more than 0 and at most 5.90 in').waitFor();
+    await page.getByTestId('tear-length').fill('1');
+    await page.getByTestId('save-shot').click();
+    await page.getByTestId('shot-1').getByText(/Tail high, 1\.00 in/).waitFor();
     await page.getByTestId('advice').getByText('After shot 1: Tail high: move the nock point down, or the rest up').waitFor();
     // Worded for hybrid cams and a drop-away rest.
     await page.getByTestId('advice').getByText(/check the cam timing/).waitFor();
     await page.getByTestId('advice').getByText(/drop-away rest/).waitFor();
     await screenshot(page, 'paper-tune-shot-1');
 
-    await shoot(page, { tear: 'left', length: '15', changed: 'nock-height', how: 'down 1/16 in' });
+    // A length typed with its unit is read in that unit.
+    await shoot(page, { tear: 'left', length: '15 mm', changed: 'nock-height', how: 'down 1/16 in' });
+    await page.getByTestId('shot-2').getByText(/0\.59 in/).waitFor();
     await page.getByTestId('advice').getByText('After shot 2: Tail left: move the rest left, away from the riser (more centre shot)').waitFor();
-    await shoot(page, { tear: 'left', length: '6', changed: 'rest', how: 'left 1/32 in' });
+    await shoot(page, { tear: 'left', length: '0.25', changed: 'rest', how: 'left 1/32 in' });
     await shoot(page, { tear: 'clean', changed: 'rest', how: 'left 1/32 in' });
     await page.getByTestId('advice').getByText('After shot 4: Clean hole: the run can end here').waitFor();
     await page.getByTestId('end-clean').click();
@@ -188,6 +196,14 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     await page.getByTestId(`flier-${setId}-4`).click();
     await page.getByTestId(`arrow-${setId}-4`).getByText(/flew out 1×/).waitFor();
     await screenshot(page, 'arrow-set-six');
+    // An archer who weighs in grams sees the same set in grams: 500.15 gr × 0.06479891 g/gr = 32.41 g
+    // (1 gr = 64.79891 mg exactly, international yard and pound agreement, 1959).
+    await post(context, '/api/me', { massUnit: 'g' }, 'patch');
+    await page.reload();
+    await page.getByTestId(`set-${setId}-median`).getByText(/^32\.41 g$/).waitFor();
+    await page.getByTestId('add-arrow-set').click();
+    await page.getByText('Arrow 1 weight (g)').waitFor();
+    await post(context, '/api/me', { massUnit: 'gr' }, 'patch');
   });
 
   await recording(page, 'peep-stale', async () => {
