@@ -35,3 +35,18 @@ export function createSessionMiddleware(sequelize: Sequelize, { expiryTimer = tr
   });
   return { middleware, store };
 }
+
+/**
+ * Signs `userId` in on this request: a fresh session id first (defeats
+ * session fixation), then the session saved before the answer is sent.
+ * Used at sign-up, sign-in and when an invitation creates an account.
+ */
+export function startSession(req: Express.Request, userId: number): Promise<void> {
+  return new Promise<void>((resolve, reject) => {
+    req.session.regenerate((err) => {
+      if (err) return reject(err);
+      req.session.userId = userId;
+      req.session.save((saveErr) => (saveErr ? reject(saveErr) : resolve()));
+    });
+  });
+}

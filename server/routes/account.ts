@@ -1,8 +1,9 @@
-import { Router, type Response } from 'express';
+import { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { ApiError } from '@/server/errors';
 import { currentUser, requireUser } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/middleware/validate';
+import { send } from './send';
 import * as accounts from '@/server/services/account-service';
 import { exportAccountJson } from '@/server/services/account-export-service';
 import { accountDeleteSchema, passwordChangeSchema } from '@/shared/account';
@@ -25,27 +26,36 @@ export function accountRoutes() {
     legacyHeaders: false,
   });
 
-  router.post('/password', requireUser, passwordChecks, validate({ body: passwordChangeSchema }), async (req, res) => {
-    const { endedSessions } = await accounts.changePassword(currentUser(req), req.sessionID, req.body);
-    const others = endedSessions === 1 ? 'Your 1 other sign-in was ended' : `Your ${endedSessions} other sign-ins were ended`;
-    res.json({ message: `Password changed. ${endedSessions ? others : 'You were signed in nowhere else'}; this one stays.`, endedSessions });
+  router.post(
+    '/password',
+    requireUser,
+    passwordChecks,
+    route({ body: passwordChangeSchema }, async (req, res) => {
+      const { endedSessions } = await accounts.changePassword(currentUser(req), req.sessionID, req.body);
+      const others = endedSessions === 1 ? 'Your 1 other sign-in was ended' : `Your ${endedSessions} other sign-ins were ended`;
+      res.json({
+        message: `Password changed. ${endedSessions ? others : 'You were signed in nowhere else'}; this one stays.`,
+        endedSessions,
+      });
+    }),
+  );
+
+  router.get('/export.json', requireUser, async (req, res) => {
+    send(res, await exportAccountJson(currentUser(req)));
   });
 
-  router.get('/export.json', requireUser, async (req, res: Response) => {
-    const file = await exportAccountJson(currentUser(req));
-    res.attachment(file.fileName);
-    res.setHeader('Content-Type', file.contentType);
-    res.setHeader('Cache-Control', 'no-store');
-    res.send(file.body);
-  });
-
-  router.post('/delete', requireUser, passwordChecks, validate({ body: accountDeleteSchema }), async (req, res, next) => {
-    await accounts.deleteOwnAccount(currentUser(req), req.body);
-    req.session.destroy((err) => {
-      if (err) return next(err);
-      res.clearCookie('pinwright.sid');
-      res.json({ message: 'Your account and everything in it were deleted.' });
-    });
-  });
+  router.post(
+    '/delete',
+    requireUser,
+    passwordChecks,
+    route({ body: accountDeleteSchema }, async (req, res, next) => {
+      await accounts.deleteOwnAccount(currentUser(req), req.body);
+      req.session.destroy((err) => {
+        if (err) return next(err);
+        res.clearCookie('pinwright.sid');
+        res.json({ message: 'Your account and everything in it were deleted.' });
+      });
+    }),
+  );
   return router;
 }

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { bowInputSchema, bowUpdateSchema } from '@/shared/bow';
 import { idParamSchema } from '@/shared/common';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/middleware/validate';
 import { currentUser, requireUser } from '@/server/middleware/auth';
 import * as bows from '@/server/services/bow-service';
 
@@ -11,20 +11,34 @@ export function bowRoutes() {
   router.get('/bows', requireUser, async (req, res) => {
     res.json({ bows: await bows.listBows(currentUser(req)) });
   });
-  router.post('/bows', requireUser, validate({ body: bowInputSchema }), async (req, res) => {
-    res.status(201).json({ bow: await bows.createBow(currentUser(req), req.body) });
-  });
-  router.get('/bows/:id', requireUser, validate({ params: idParamSchema }), async (req, res) => {
-    res.json({ bow: await bows.getBow(currentUser(req), idOf(req)) });
-  });
-  router.patch('/bows/:id', requireUser, validate({ params: idParamSchema, body: bowUpdateSchema }), async (req, res) => {
-    res.json({ bow: await bows.updateBow(currentUser(req), idOf(req), req.body) });
-  });
-  router.delete('/bows/:id', requireUser, validate({ params: idParamSchema }), async (req, res) => {
-    await bows.deleteBow(currentUser(req), idOf(req));
-    res.status(204).end();
-  });
+  router.post(
+    '/bows',
+    requireUser,
+    route({ body: bowInputSchema }, async (req, res) => {
+      res.status(201).json({ bow: await bows.createBow(currentUser(req), req.body) });
+    }),
+  );
+  router.get(
+    '/bows/:id',
+    requireUser,
+    route({ params: idParamSchema }, async (req, res) => {
+      res.json({ bow: await bows.getBow(currentUser(req), req.params.id) });
+    }),
+  );
+  router.patch(
+    '/bows/:id',
+    requireUser,
+    route({ params: idParamSchema, body: bowUpdateSchema }, async (req, res) => {
+      res.json({ bow: await bows.updateBow(currentUser(req), req.params.id, req.body) });
+    }),
+  );
+  router.delete(
+    '/bows/:id',
+    requireUser,
+    route({ params: idParamSchema }, async (req, res) => {
+      await bows.deleteBow(currentUser(req), req.params.id);
+      res.status(204).end();
+    }),
+  );
   return router;
 }
-
-const idOf = (req: { params: unknown }) => (req.params as { id: number }).id;

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { config } from '@/server/config';
 import { ApiError } from '@/server/errors';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/middleware/validate';
 import { currentUser, requireRole, requireUser } from '@/server/middleware/auth';
 import { clearMail, listMail, readAttachment, readMail, readStoredMail } from '@/server/mail/mail-store';
 import { mailAttachmentParamsSchema, mailListQuerySchema, mailParamsSchema } from '@/shared/dev-mail';
@@ -25,29 +25,38 @@ function mayRead(user: User, envelopeTo: readonly string[]): boolean {
 export function devMailRoutes() {
   const router = Router();
   router.use(requireUser);
-  router.get('/', validate({ query: mailListQuerySchema }), (req, res) => {
-    const user = currentUser(req);
-    const { to } = req.query as { to?: string };
-    const own = user.email.toLowerCase();
-    if (user.role !== 'admin' && to && to !== own) return res.json({ messages: [] });
-    res.json({ messages: listMail(config.mailDir, { to: user.role === 'admin' ? to : own }) });
-  });
-  router.get('/:id', validate({ params: mailParamsSchema }), (req, res) => {
-    const id = String(req.params.id);
-    const stored = readStoredMail(config.mailDir, id);
-    const message = stored && mayRead(currentUser(req), stored.envelopeTo) ? readMail(config.mailDir, id, config.publicUrl) : null;
-    if (!message) throw ApiError.notFound('That message');
-    res.json({ message });
-  });
-  router.get('/:id/attachments/:index', validate({ params: mailAttachmentParamsSchema }), (req, res) => {
-    const { id, index } = req.params as unknown as { id: string; index: number };
-    const stored = readStoredMail(config.mailDir, id);
-    const attachment = stored && mayRead(currentUser(req), stored.envelopeTo) ? readAttachment(config.mailDir, id, index) : null;
-    if (!attachment) throw ApiError.notFound('That attachment');
-    res.setHeader('Content-Type', attachment.contentType);
-    res.setHeader('Content-Disposition', `attachment; filename="${attachment.filename.replace(/[^\w.\- ]/g, '_')}"`);
-    res.send(attachment.content);
-  });
+  router.get(
+    '/',
+    route({ query: mailListQuerySchema }, (req, res) => {
+      const user = currentUser(req);
+      const { to } = req.query;
+      const own = user.email.toLowerCase();
+      if (user.role !== 'admin' && to && to !== own) return res.json({ messages: [] });
+      res.json({ messages: listMail(config.mailDir, { to: user.role === 'admin' ? to : own }) });
+    }),
+  );
+  router.get(
+    '/:id',
+    route({ params: mailParamsSchema }, (req, res) => {
+      const { id } = req.params;
+      const stored = readStoredMail(config.mailDir, id);
+      const message = stored && mayRead(currentUser(req), stored.envelopeTo) ? readMail(config.mailDir, id, config.publicUrl) : null;
+      if (!message) throw ApiError.notFound('That message');
+      res.json({ message });
+    }),
+  );
+  router.get(
+    '/:id/attachments/:index',
+    route({ params: mailAttachmentParamsSchema }, (req, res) => {
+      const { id, index } = req.params;
+      const stored = readStoredMail(config.mailDir, id);
+      const attachment = stored && mayRead(currentUser(req), stored.envelopeTo) ? readAttachment(config.mailDir, id, index) : null;
+      if (!attachment) throw ApiError.notFound('That attachment');
+      res.setHeader('Content-Type', attachment.contentType);
+      res.setHeader('Content-Disposition', `attachment; filename="${attachment.filename.replace(/[^\w.\- ]/g, '_')}"`);
+      res.send(attachment.content);
+    }),
+  );
   router.delete('/', requireRole('admin'), (_req, res) => {
     res.json({ removed: clearMail(config.mailDir) });
   });

@@ -1,20 +1,14 @@
-import express, { Router, type RequestHandler, type Response } from 'express';
+import express, { Router, type RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { ApiError } from '@/server/errors';
 import { currentUser, requireUser } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/middleware/validate';
 import * as csvImport from '@/server/services/csv-import-service';
 import * as exporter from '@/server/services/export-service';
 import { idParamSchema } from '@/shared/common';
 import { markImportQuerySchema, markImportSchema } from '@/shared/csv';
 import { sendTapeSchema } from '@/shared/export';
-
-function send(res: Response, file: exporter.ExportFile) {
-  res.attachment(file.fileName);
-  res.setHeader('Content-Type', file.contentType);
-  res.setHeader('Cache-Control', 'no-store');
-  res.send(file.body);
-}
+import { send } from './send';
 
 /** A raw `text/csv` body becomes `{ csv, unit }` (unit from ?unit=), so the same schema checks both kinds of request. */
 const csvBody: RequestHandler[] = [
@@ -44,28 +38,38 @@ export function exportRoutes() {
     legacyHeaders: false,
   });
 
-  router.get('/bows/:id/export.csv', requireUser, validate({ params: idParamSchema }), async (req, res) => {
-    send(res, await exporter.exportBowCsv(currentUser(req), idOf(req)));
-  });
-  router.get('/bows/:id/export.json', requireUser, validate({ params: idParamSchema }), async (req, res) => {
-    send(res, await exporter.exportBowJson(currentUser(req), idOf(req)));
-  });
+  router.get(
+    '/bows/:id/export.csv',
+    requireUser,
+    route({ params: idParamSchema }, async (req, res) => {
+      send(res, await exporter.exportBowCsv(currentUser(req), req.params.id));
+    }),
+  );
+  router.get(
+    '/bows/:id/export.json',
+    requireUser,
+    route({ params: idParamSchema }, async (req, res) => {
+      send(res, await exporter.exportBowJson(currentUser(req), req.params.id));
+    }),
+  );
   router.post(
     '/sight-ins/:id/marks/import',
     requireUser,
     ...csvBody,
-    validate({ params: idParamSchema, query: markImportQuerySchema, body: markImportSchema }),
-    async (req, res) => {
-      const { dryRun } = req.query as unknown as { dryRun: boolean };
-      const result = await csvImport.importMarks(currentUser(req), idOf(req), req.body, dryRun);
+    route({ params: idParamSchema, query: markImportQuerySchema, body: markImportSchema }, async (req, res) => {
+      const { dryRun } = req.query;
+      const result = await csvImport.importMarks(currentUser(req), req.params.id, req.body, dryRun);
       res.status(dryRun ? 200 : 201).json(result);
-    },
+    }),
   );
-  router.post('/sight-ins/:id/send-tape', requireUser, sendLimit, validate({ params: idParamSchema, body: sendTapeSchema }), async (req, res) => {
-    const { fileName } = await exporter.sendTape(currentUser(req), idOf(req), req.body);
-    res.json({ message: `The print sheet (${fileName}) was sent to ${req.body.to}.` });
-  });
+  router.post(
+    '/sight-ins/:id/send-tape',
+    requireUser,
+    sendLimit,
+    route({ params: idParamSchema, body: sendTapeSchema }, async (req, res) => {
+      const { fileName } = await exporter.sendTape(currentUser(req), req.params.id, req.body);
+      res.json({ message: `The print sheet (${fileName}) was sent to ${req.body.to}.` });
+    }),
+  );
   return router;
 }
-
-const idOf = (req: { params: unknown }) => (req.params as { id: number }).id;

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { rateLimit, ipKeyGenerator } from 'express-rate-limit';
 import { ApiError } from '@/server/errors';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/middleware/validate';
 import * as passwords from '@/server/services/password-service';
 import { forgotAnswer, passwordForgotSchema, passwordResetSchema } from '@/shared/password';
 
@@ -18,21 +18,30 @@ export function passwordRoutes() {
   const forgotPerEmail = rateLimit({
     windowMs: 60 * 60 * 1000,
     limit: 5,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : ''}`,
+    keyGenerator: (req) =>
+      `${ipKeyGenerator(req.ip ?? '')}|${typeof req.body?.email === 'string' ? req.body.email.trim().toLowerCase() : ''}`,
     ...limited('Too many reset requests for this address. Wait an hour and try again.'),
   });
   // Per address: 30 reset attempts in 15 minutes (tokens cannot be guessed, but there is no reason to allow more).
   const resetPerIp = rateLimit({ windowMs: 15 * 60 * 1000, limit: 30, ...limited('Too many attempts. Wait 15 minutes and try again.') });
 
-  router.post('/forgot', forgotPerEmail, validate({ body: passwordForgotSchema }), (req, res) => {
-    passwords.startReset(req.body.email);
-    res.status(202).json({ message: forgotAnswer });
-  });
+  router.post(
+    '/forgot',
+    forgotPerEmail,
+    route({ body: passwordForgotSchema }, (req, res) => {
+      passwords.startReset(req.body.email);
+      res.status(202).json({ message: forgotAnswer });
+    }),
+  );
 
-  router.post('/reset', resetPerIp, validate({ body: passwordResetSchema }), async (req, res) => {
-    await passwords.resetPassword(req.body);
-    res.json({ message: 'Your password is changed and you are signed out everywhere. Sign in with the new password.' });
-  });
+  router.post(
+    '/reset',
+    resetPerIp,
+    route({ body: passwordResetSchema }, async (req, res) => {
+      await passwords.resetPassword(req.body);
+      res.json({ message: 'Your password is changed and you are signed out everywhere. Sign in with the new password.' });
+    }),
+  );
 
   return router;
 }

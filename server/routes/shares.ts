@@ -1,21 +1,11 @@
 import { Router } from 'express';
 import { limit } from '@/server/middleware/rate-limits';
 import { currentUser, requireUser } from '@/server/middleware/auth';
-import { validate } from '@/server/middleware/validate';
+import { route } from '@/server/middleware/validate';
 import * as shares from '@/server/services/share-service';
+import { startSession } from '@/server/session';
 import { bowIdParamSchema, idParamSchema } from '@/shared/common';
 import { inviteAcceptSchema, inviteSignUpSchema, inviteTokenParamSchema, shareInviteSchema } from '@/shared/share';
-
-/** A fresh session id for the new account (defeats session fixation), as at sign-in. */
-function startSession(req: Express.Request, userId: number) {
-  return new Promise<void>((resolve, reject) => {
-    req.session.regenerate((err) => {
-      if (err) return reject(err);
-      req.session.userId = userId;
-      req.session.save((saveErr) => (saveErr ? reject(saveErr) : resolve()));
-    });
-  });
-}
 
 /**
  * Sharing a bow with a technician.
@@ -30,31 +20,53 @@ function startSession(req: Express.Request, userId: number) {
 export function shareRoutes() {
   const router = Router();
   // Invitations per inviting account; new accounts share the sign-up limit (server/middleware/rate-limits.ts).
-  router.get('/bows/:bowId/shares', requireUser, validate({ params: bowIdParamSchema }), async (req, res) => {
-    res.json({ shares: await shares.listBowShares(currentUser(req), bowIdOf(req)) });
-  });
-  router.post('/bows/:bowId/shares', requireUser, limit('invite'), validate({ params: bowIdParamSchema, body: shareInviteSchema }), async (req, res) => {
-    res.status(201).json({ share: await shares.inviteTech(currentUser(req), bowIdOf(req), req.body.email) });
-  });
+  router.get(
+    '/bows/:bowId/shares',
+    requireUser,
+    route({ params: bowIdParamSchema }, async (req, res) => {
+      res.json({ shares: await shares.listBowShares(currentUser(req), req.params.bowId) });
+    }),
+  );
+  router.post(
+    '/bows/:bowId/shares',
+    requireUser,
+    limit('invite'),
+    route({ params: bowIdParamSchema, body: shareInviteSchema }, async (req, res) => {
+      res.status(201).json({ share: await shares.inviteTech(currentUser(req), req.params.bowId, req.body.email) });
+    }),
+  );
   router.get('/shares', requireUser, async (req, res) => {
     res.json({ shares: await shares.listMyShares(currentUser(req)) });
   });
-  router.post('/shares/:id/revoke', requireUser, validate({ params: idParamSchema }), async (req, res) => {
-    res.json({ share: await shares.revokeShare(currentUser(req), (req.params as unknown as { id: number }).id) });
-  });
-  router.get('/invites/:token', validate({ params: inviteTokenParamSchema }), async (req, res) => {
-    res.setHeader('Cache-Control', 'no-store');
-    res.json({ invite: await shares.previewInvite(String(req.params.token)) });
-  });
-  router.post('/invites/accept', requireUser, validate({ body: inviteAcceptSchema }), async (req, res) => {
-    res.json({ share: await shares.acceptInvite(currentUser(req), req.body.token) });
-  });
-  router.post('/invites/accept-new', limit('signUp'), validate({ body: inviteSignUpSchema }), async (req, res) => {
-    const { user, share } = await shares.acceptWithNewAccount(req.body);
-    await startSession(req, user.id);
-    res.status(201).json({ user: user.toPublic(), share });
-  });
+  router.post(
+    '/shares/:id/revoke',
+    requireUser,
+    route({ params: idParamSchema }, async (req, res) => {
+      res.json({ share: await shares.revokeShare(currentUser(req), req.params.id) });
+    }),
+  );
+  router.get(
+    '/invites/:token',
+    route({ params: inviteTokenParamSchema }, async (req, res) => {
+      res.setHeader('Cache-Control', 'no-store');
+      res.json({ invite: await shares.previewInvite(req.params.token) });
+    }),
+  );
+  router.post(
+    '/invites/accept',
+    requireUser,
+    route({ body: inviteAcceptSchema }, async (req, res) => {
+      res.json({ share: await shares.acceptInvite(currentUser(req), req.body.token) });
+    }),
+  );
+  router.post(
+    '/invites/accept-new',
+    limit('signUp'),
+    route({ body: inviteSignUpSchema }, async (req, res) => {
+      const { user, share } = await shares.acceptWithNewAccount(req.body);
+      await startSession(req, user.id);
+      res.status(201).json({ user: user.toPublic(), share });
+    }),
+  );
   return router;
 }
-
-const bowIdOf = (req: { params: unknown }) => (req.params as { bowId: number }).bowId;
