@@ -1,13 +1,10 @@
 import { sheetOptionsSchema, fitIssueOf, type SheetOptionsInput } from '@/shared/fit';
-import { INCH_MM } from '@/math/units/constants';
 import type { SightModel } from '@/math/flight/sight-model';
 import { FitInputError } from '@/math/fit/fit-input-error';
-import { NUMERAL_FONT, SMALL_PRINT_FONT, type GlyphFont } from '@/math/tape/glyphs';
-import { textElement } from '@/math/tape/text-path';
+import { NUMERAL_FONT, SMALL_PRINT_FONT } from '@/math/tape/glyphs';
 import { tapeLayouts } from '@/math/tape/tape-layout';
 import { tapeGroup } from '@/math/tape/tape-svg';
-import { PAPER_SIZES_MM } from '@/math/sheet/paper';
-import { wrapText } from '@/math/sheet/wrap-text';
+import { SHEET_LINE_MM as LINE_MM, SHEET_MARGIN_MM as MARGIN_MM, SHEET_SMALL_MM as SMALL_MM, fixedMm as fixed, sheetPage } from '@/math/sheet/sheet-page';
 import { ONE_MARK_CAUTION, ONE_MARK_STRIP, PRINT_INSTRUCTION, TAPE_CAUTION } from '@/math/cautions';
 
 /**
@@ -18,7 +15,8 @@ import { ONE_MARK_CAUTION, ONE_MARK_STRIP, PRINT_INSTRUCTION, TAPE_CAUTION } fro
  * size and measure it before cutting, the bow, build, date and marks used in
  * small type, and the caution that a tape is an estimate until confirmed at
  * the range. All text is outline paths; width/height in mm and a viewBox in
- * mm make one user unit one millimetre.
+ * mm make one user unit one millimetre. The page, its text and calibration
+ * bars are math/sheet/sheet-page.ts, shared with the predicted sheet.
  *
  * Example: printSheetSvg(fit, { paper: 'a4', labels: { bow: 'Grey Heron', build: 'Ash 420', date: '2026-12-01' } }) → '<svg … width="210mm" height="297mm" …'
  */
@@ -33,10 +31,7 @@ export interface SheetFit {
   rmsMm: number;
 }
 
-const MARGIN_MM = 12;
-const SMALL_MM = 2.1;
 const TITLE_MM = 4;
-const LINE_MM = 3.6;
 
 export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): string {
   const parsed = sheetOptionsSchema.safeParse(options);
@@ -45,12 +40,9 @@ export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): s
     throw new FitInputError(field, message);
   }
   const sheet = parsed.data;
-  const paper = PAPER_SIZES_MM[sheet.paper];
-  const usableMm = paper.widthMm - 2 * MARGIN_MM;
+  const page = sheetPage(sheet.paper);
+  const { paper, usableMm, text } = page;
   const model = fit.model;
-  const parts: string[] = [];
-  const text = (content: string, font: GlyphFont, x: number, y: number, sizeMm: number, attributes = '') =>
-    parts.push(textElement(content, font, { x, y, sizeMm }, attributes));
 
   // Header: title, labels, marks and fit in small type.
   let y = MARGIN_MM + TITLE_MM;
@@ -63,42 +55,26 @@ export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): s
     `Marks used: ${fit.residuals.map((mark) => `${trim(mark.distance)} ${unit} at ${mark.markMm.toFixed(2)} mm`).join(', ')}`,
     `Fit: ${model.speedFps.toFixed(1)} fps, drag coefficient ${model.dragCoefficient.toFixed(2)}, peep height ${model.peepHeightMm.toFixed(1)} mm, sight radius ${model.sightRadiusMm.toFixed(1)} mm, RMS ${fit.rmsMm.toFixed(2)} mm`,
   ].filter(Boolean);
-  for (const line of detailLines.flatMap((line) => wrapText(line, SMALL_PRINT_FONT, SMALL_MM, usableMm))) {
-    text(line, SMALL_PRINT_FONT, MARGIN_MM, y, SMALL_MM, 'class="small-print"');
-    y += LINE_MM;
-  }
+  for (const line of detailLines) y = page.lines(line, SMALL_PRINT_FONT, SMALL_MM, y, LINE_MM, 'class="small-print"');
   y += 1.5;
   if (labels.note) {
     // A header note the caller wants read first (e.g. "confirm at the range" after a change to the bow), large.
-    for (const line of wrapText(labels.note, NUMERAL_FONT, TITLE_MM * 0.8, usableMm)) {
-      text(line, NUMERAL_FONT, MARGIN_MM, y + 1, TITLE_MM * 0.8, 'class="caution" data-caution="header-note"');
-      y += TITLE_MM * 1.1;
-    }
+    y = page.lines(labels.note, NUMERAL_FONT, TITLE_MM * 0.8, y, TITLE_MM * 1.1, 'class="caution" data-caution="header-note"', 1);
     y += 1;
   }
   if (model.oneMark) {
     // A tape from one mark is an estimate everywhere but that mark: say so first, large, with where to shoot next.
     const next = model.oneMark.nextDistance;
     const words = `${ONE_MARK_STRIP}. ${ONE_MARK_CAUTION} Sighted: ${trim(model.oneMark.distance)} ${unit} only.${next !== null ? ` Shoot ${trim(next)} ${unit} next and fit again before you trust this tape.` : ''}`;
-    for (const line of wrapText(words, NUMERAL_FONT, TITLE_MM * 0.8, usableMm)) {
-      text(line, NUMERAL_FONT, MARGIN_MM, y + 1, TITLE_MM * 0.8, 'class="caution" data-caution="one-mark"');
-      y += TITLE_MM * 1.1;
-    }
+    y = page.lines(words, NUMERAL_FONT, TITLE_MM * 0.8, y, TITLE_MM * 1.1, 'class="caution" data-caution="one-mark"', 1);
     y += 1;
   }
-  for (const line of wrapText(PRINT_INSTRUCTION, SMALL_PRINT_FONT, SMALL_MM * 1.2, usableMm)) {
-    text(line, SMALL_PRINT_FONT, MARGIN_MM, y, SMALL_MM * 1.2, 'class="instruction"');
-    y += LINE_MM * 1.2;
-  }
-  for (const line of wrapText(TAPE_CAUTION, SMALL_PRINT_FONT, SMALL_MM * 1.2, usableMm)) {
-    text(line, SMALL_PRINT_FONT, MARGIN_MM, y, SMALL_MM * 1.2, 'class="caution"');
-    y += LINE_MM * 1.2;
-  }
+  y = page.lines(PRINT_INSTRUCTION, SMALL_PRINT_FONT, SMALL_MM * 1.2, y, LINE_MM * 1.2, 'class="instruction"');
+  y = page.lines(TAPE_CAUTION, SMALL_PRINT_FONT, SMALL_MM * 1.2, y, LINE_MM * 1.2, 'class="caution"');
 
   // Calibration bars: 50 mm and 2 in, each with end and intermediate ticks.
   y += 2;
-  parts.push(calibrationBar(MARGIN_MM, y, 50, 10, '50 mm'));
-  parts.push(calibrationBar(MARGIN_MM + 50 + 22, y, 2 * INCH_MM, INCH_MM / 2, '2 in'));
+  page.calibrationBars(y);
   y += 12;
 
   // Tapes: 100 % first, then the variants, wrapping to more rows if needed.
@@ -119,43 +95,10 @@ export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): s
     const x = MARGIN_MM + column * pitchMm;
     const top = y + row * rowLengthMm;
     text(labelOf(percent), NUMERAL_FONT, x, top + 3, 2.6, `class="variant-label" data-percent="${percent}"`);
-    parts.push(tapeGroup(layout, `data-percent="${percent}" transform="translate(${fixed(x)} ${fixed(top + 5)})"`));
+    page.add(tapeGroup(layout, `data-percent="${percent}" transform="translate(${fixed(x)} ${fixed(top + 5)})"`));
   });
 
-  return [
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${fixed(paper.widthMm)}mm" height="${fixed(paper.heightMm)}mm" viewBox="0 0 ${fixed(paper.widthMm)} ${fixed(paper.heightMm)}" data-paper="${sheet.paper}">`,
-    `<rect x="0" y="0" width="${fixed(paper.widthMm)}" height="${fixed(paper.heightMm)}" fill="#fff"/>`,
-    `<g fill="#000">`,
-    ...parts,
-    '</g>',
-    '</svg>',
-  ].join('\n');
-}
-
-/**
- * A calibration bar `lengthMm` long at (x, y): a 1.2 mm black bar with ticks
- * every `tickMm` below it and its label. The bar is a <rect> carrying
- * data-calibration and data-length-mm so tests and people can check it.
- */
-function calibrationBar(x: number, y: number, lengthMm: number, tickMm: number, label: string): string {
-  const ticks: string[] = [];
-  const count = Math.round(lengthMm / tickMm);
-  for (let i = 0; i <= count; i++) {
-    const tx = x + i * tickMm;
-    const long = i === 0 || i === count;
-    ticks.push(`<line x1="${fixed(tx)}" y1="${fixed(y)}" x2="${fixed(tx)}" y2="${fixed(y + (long ? 3.5 : 2.2))}" stroke="#000" stroke-width="0.15"/>`);
-  }
-  return [
-    `<g class="calibration" data-calibration="${label}">`,
-    `<rect data-calibration="${label}" data-length-mm="${fixed(lengthMm)}" x="${fixed(x)}" y="${fixed(y - 1.2)}" width="${fixed(lengthMm)}" height="1.2" fill="#000"/>`,
-    ...ticks,
-    textElement(label, SMALL_PRINT_FONT, { x: x + lengthMm + 2, y: y + 0.6, sizeMm: 2.4 }),
-    '</g>',
-  ].join('\n');
-}
-
-function fixed(value: number): string {
-  return String(Number(value.toFixed(4)));
+  return page.svg(`data-paper="${sheet.paper}"`);
 }
 
 function trim(distance: number): string {
