@@ -15,6 +15,7 @@ import { fitSight } from '@/math/fit/fit-sight';
 import type { User } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import { storedFitSchema, type SightIn } from '@/shared/sight-in';
+import { storedFitOf } from '@/shared/sight-in-fit';
 
 import { inventedBow, inventedBuild } from './fixtures';
 import { jsonResponse, mockFetch, renderWithClient } from './helpers';
@@ -48,12 +49,7 @@ const fit = fitSight({
   air: {},
   marks: savedMarks.map((mark) => ({ distance: mark.distance, markMm: mark.scaleMm })),
 });
-const storedFit = storedFitSchema.parse({
-  ...fit,
-  scaleDirection: 'down',
-  marks: fit.marks.map((mark) => ({ ...mark, markMm: Number.isFinite(mark.markMm) ? mark.markMm : null, sigmaMm: Number.isFinite(mark.sigmaMm) ? mark.sigmaMm : null })),
-  model: fit.model as unknown as Record<string, unknown>,
-});
+const storedFit = storedFitSchema.parse(JSON.parse(JSON.stringify(storedFitOf(fit, 'down'))));
 
 const sightIn: SightIn = {
   id: 12,
