@@ -3,7 +3,7 @@ import { isoDateSchema, textSchema } from './common';
 
 /**
  * A bow's tuning set-up as a history of dated entries: centre shot, nock
- * height, brace height, axle-to-axle, peep height, D-loop, cam timing, cam
+ * height, brace height, axle-to-axle, peep height, sight radius, D-loop, cam timing, cam
  * lean, and the kind of rest and cam system the paper-tune advice is worded
  * for. The latest entry of each is what the bow shows. Entries are added,
  * never edited: an archer's record is not changed by a technician, and an
@@ -26,6 +26,7 @@ export const setupMeasureKeys = [
   'brace-height',
   'axle-to-axle',
   'peep-height',
+  'sight-radius',
   'd-loop',
   'cam-timing',
   'cam-lean',
@@ -82,7 +83,7 @@ type MeasureSpec =
     };
 
 /** The bow change kinds a set-up entry can stand for (see shared/level-status.ts). */
-export type ImpactChangeKind = 'rest' | 'nock-height' | 'd-loop' | 'peep' | 'cams' | 'string';
+export type ImpactChangeKind = 'rest' | 'nock-height' | 'd-loop' | 'peep' | 'cams' | 'string' | 'sight-radius';
 
 /**
  * Each measure: its name, the range a typo is caught by, a hint, and the
@@ -122,6 +123,14 @@ export const setupMeasures: Record<SetupMeasureKey, MeasureSpec> = {
     maxMm: 200,
     hint: 'Peep centre above the nock. The fit uses the bow’s own peep height until the bow is edited.',
     changeKind: 'peep',
+  },
+  'sight-radius': {
+    form: 'length',
+    name: 'Sight radius',
+    minMm: 400,
+    maxMm: 1200,
+    hint: 'Peep to the sight’s pin or dot. The fit uses the bow’s own sight radius until the bow is edited.',
+    changeKind: 'sight-radius',
   },
   'd-loop': {
     form: 'length',

@@ -41,7 +41,9 @@ function MeasureRow({ bow, measure, unit, entries, open, onOpen, onClose, canAdd
 }) {
   const spec = setupMeasures[measure];
   const [latest, ...older] = entries;
-  const bowPeep = measure === 'peep-height' && latest && Math.abs((latest.valueMm ?? 0) - bow.peepHeightMm) > 0.05;
+  // Peep height and sight radius are also on the bow's own set-up, which the fit uses: say so when they differ.
+  const bowValueMm = measure === 'peep-height' ? bow.peepHeightMm : measure === 'sight-radius' ? bow.sightRadiusMm : null;
+  const bowDiffers = bowValueMm !== null && latest && Math.abs((latest.valueMm ?? 0) - bowValueMm) > 0.05;
   return (
     <View style={styles.measure} testID={`measure-${measure}`}>
       <View style={styles.measureHead}>
@@ -55,9 +57,9 @@ function MeasureRow({ bow, measure, unit, entries, open, onOpen, onClose, canAdd
               {latest.note ? ` · ${latest.note}` : ''}
             </Text>
           ) : null}
-          {bowPeep ? (
-            <Text variant="small" tone="due">
-              The bow’s set-up says {setupValueWords({ measure, valueMm: bow.peepHeightMm, choice: null }, unit)}; the fit uses that until the bow is edited.
+          {bowDiffers ? (
+            <Text variant="small" tone="due" testID={`measure-${measure}-bow-differs`}>
+              The bow’s set-up says {setupValueWords({ measure, valueMm: bowValueMm, choice: null }, unit)}; the fit uses that until the bow is edited.
             </Text>
           ) : null}
         </View>

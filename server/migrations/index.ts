@@ -32,6 +32,7 @@ import * as m0054 from './0054-arrow-sets';
 import * as m0055 from './0055-arrows';
 import * as m0056 from './0056-arrow-fliers';
 import * as m0057 from './0057-range-confirmations';
+import * as m0058 from './0058-setup-sight-radius';
 import * as m0075 from './0075-sight-sessions-warning-count';
 import { sightInRenames } from './0080-sight-in-names';
 
@@ -65,6 +66,7 @@ export const migrations: Array<[string, Step]> = [
   ['0055-arrows', m0055],
   ['0056-arrow-fliers', m0056],
   ['0057-range-confirmations', m0057],
+  ['0058-setup-sight-radius', m0058],
   ['0075-sight-sessions-warning-count', m0075],
   ...sightInRenames,
 ];

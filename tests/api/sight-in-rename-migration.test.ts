@@ -27,7 +27,7 @@ afterAll(async () => {
   await admin?.close();
 });
 
-const rows = <T>(sql: string) => db.query<T>(sql, { type: QueryTypes.SELECT });
+const rows = <T extends object = Record<string, unknown>>(sql: string): Promise<T[]> => db.query<T>(sql, { type: QueryTypes.SELECT });
 
 it('renames the sight-in tables, columns and audit kinds and keeps every row', async () => {
   await migrator(db).up({ to: '0075-sight-sessions-warning-count' });

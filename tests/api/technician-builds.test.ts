@@ -132,4 +132,21 @@ describe('set-up changes a technician records (engineer E’s set-up measures)',
     const refused = await tech.agent.post(`/api/bows/${bow.id}/setup`).set(CSRF).send({ measure: 'peep-height', valueMm: 114, measuredOn: '2026-12-01', note: '' });
     expect(refused.status).toBe(404);
   });
+
+  it('records a new sight radius as the technician’s own entry; the archer’s bow is not edited, and a typo is refused', async () => {
+    const { archer, tech, bow } = await sharedBow();
+    const before = (await archer.agent.get(`/api/bows/${bow.id}`)).body.bow.sightRadiusMm;
+    const typo = await tech.agent.post(`/api/bows/${bow.id}/setup`).set(CSRF).send({ measure: 'sight-radius', valueMm: 8400, measuredOn: '2026-12-01', note: '' });
+    expect(typo.status).toBe(400);
+    expect(typo.body.error.fields.valueMm).toBe('Sight radius must be between 400 and 1200 mm');
+    const added = await tech.agent
+      .post(`/api/bows/${bow.id}/setup`)
+      .set(CSRF)
+      .send({ measure: 'sight-radius', valueMm: 860, measuredOn: '2026-12-01', note: 'Longer sight bar fitted' });
+    expect(added.status).toBe(201);
+    const read = await archer.agent.get(`/api/bows/${bow.id}/setup`);
+    expect(read.body.latest['sight-radius']).toMatchObject({ valueMm: 860, addedBy: { id: tech.user.id, name: 'Oren Hallowfield' }, byTechnician: true });
+    // The archer's own set-up (what the fit uses) is unchanged: the technician adds, never edits.
+    expect((await archer.agent.get(`/api/bows/${bow.id}`)).body.bow.sightRadiusMm).toBe(before);
+  });
 });
