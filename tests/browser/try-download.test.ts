@@ -23,7 +23,12 @@ it('downloads the try page’s SVG tape and PDF sheet', async () => {
   expect(fs.readFileSync((await svg.path())!, 'utf8')).toContain('<svg');
   const [pdf] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Download PDF' }).click()]);
   expect(pdf.suggestedFilename()).toBe('pinwright-sheet.pdf');
-  expect(fs.readFileSync((await pdf.path())!).subarray(0, 5).toString()).toBe('%PDF-');
+  expect(
+    fs
+      .readFileSync((await pdf.path())!)
+      .subarray(0, 5)
+      .toString(),
+  ).toBe('%PDF-');
   expect(pageErrors(page)).toEqual([]);
   await context.close();
 }, 120_000);
