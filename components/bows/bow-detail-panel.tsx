@@ -2,6 +2,7 @@ import { useRouter } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { useUnits } from '@/components/account/use-units';
 import { useDeleteBow } from '@/components/bows/api';
 import { bowSetupItems } from '@/components/bows/bow-setup-items';
 import { formatLength } from '@/components/forms/form-numbers';
@@ -21,6 +22,7 @@ import type { BowDetail } from '@/shared/bow';
 import type { Build } from '@/shared/build';
 import type { SightInListItem } from '@/shared/sight-in';
 import type { Tape } from '@/shared/tape';
+import { formatQuantity, shownUnit, type UnitsLike } from '@/shared/units';
 
 /** What the detail pane shows. */
 export type BowSelection =
@@ -32,6 +34,7 @@ export type BowSelection =
 /** The bow's set-up with, for its owner, Edit and Delete (delete asks first and names what is lost). */
 export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) {
   const router = useRouter();
+  const units = useUnits();
   const remove = useDeleteBow();
   const { isOwner } = useBowRole(bow);
   const [asking, setAsking] = useState(false);
@@ -46,7 +49,7 @@ export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) 
         title="Set-up"
         action={isOwner ? <Button label="Edit" variant="secondary" href={`/bows/${bow.id}/edit`} testID="bow-edit" /> : undefined}
       />
-      <KeyValueList items={bowSetupItems(bow, unit)} />
+      <KeyValueList items={bowSetupItems(bow, unit, units)} />
       <TuningSummary bowId={bow.id} unit={unit} />
       {!isOwner ? null : asking ? (
         <ConfirmBar
@@ -69,13 +72,14 @@ export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) 
 
 /** One build's components and derived numbers. */
 function BuildPanel({ bow, build, unit }: { bow: BowDetail; build: Build; unit: LengthUnit }) {
+  const units = useUnits();
   const items = [
-    { label: 'Total', value: `${build.derived.totalGr.toFixed(1)} gr`, numeric: true },
+    { label: 'Total', value: formatQuantity(build.derived.totalGr, 'mass', units, shownUnit('mass', units) === 'g' ? 2 : 1), numeric: true },
     { label: 'FOC', value: build.derived.focPct === null ? 'Balance point not measured' : `${build.derived.focPct.toFixed(1)} %`, numeric: true },
     { label: 'Shaft', value: [build.shaftLabel, build.spine ? `spine ${build.spine}` : ''].filter(Boolean).join(', ') || '—' },
     { label: 'Cut length', value: formatLength(build.cutLengthMm, unit, 1), numeric: true },
-    { label: 'Point', value: `${build.pointGr} gr`, numeric: true },
-    { label: 'Speed', value: build.speedFps === null ? 'Not chronographed' : `${build.speedFps} fps`, numeric: true },
+    { label: 'Point', value: formatQuantity(build.pointGr, 'mass', units), numeric: true },
+    { label: 'Speed', value: build.speedFps === null ? 'Not chronographed' : formatQuantity(build.speedFps, 'speed', units), numeric: true },
   ];
   if (build.derived.kineticEnergyJ !== null && build.derived.kineticEnergyFtLb !== null) {
     items.push({
@@ -98,6 +102,7 @@ function BuildPanel({ bow, build, unit }: { bow: BowDetail; build: Build; unit: 
 
 /** One sight-in's summary, with links to the sight-in and its tape. */
 function SightInPanel({ bow, sightIn }: { bow: BowDetail; sightIn: SightInListItem }) {
+  const units = useUnits();
   const words = fitWords(sightIn.summary);
   const items = [
     { label: 'Date', value: formatDay(sightIn.date) },
@@ -105,7 +110,7 @@ function SightInPanel({ bow, sightIn }: { bow: BowDetail; sightIn: SightInListIt
     { label: 'Place', value: sightIn.placeLabel || '—' },
     { label: 'Marks', value: words.detail },
   ];
-  if (sightIn.summary.speedFps !== null) items.push({ label: 'Fitted speed', value: `${sightIn.summary.speedFps.toFixed(0)} fps` });
+  if (sightIn.summary.speedFps !== null) items.push({ label: 'Fitted speed', value: formatQuantity(sightIn.summary.speedFps, 'speed', units) });
   return (
     <Card style={styles.panel} testID="sight-in-detail">
       <SectionHeading title={`Sight-in, ${formatDay(sightIn.date)}`} description={sightIn.placeLabel || undefined} />
@@ -157,8 +162,8 @@ export function BowDetailPanel({ bow, unit, selection }: { bow: BowDetail; unit:
 }
 
 /** A build's one-line summary, for lists. */
-export function buildRowDetail(build: Build): string {
-  return buildLine(build.derived, build.speedFps);
+export function buildRowDetail(build: Build, units?: UnitsLike): string {
+  return buildLine(build.derived, build.speedFps, units);
 }
 
 const styles = StyleSheet.create({

@@ -3,6 +3,7 @@ import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
+import { useUnits } from '@/components/account/use-units';
 import { BowDetailPanel, buildRowDetail, SetupPanel, type BowSelection } from '@/components/bows/bow-detail-panel';
 import { sightKindNames } from '@/components/bows/bow-setup-items';
 import { formatLength } from '@/components/forms/form-numbers';
@@ -66,6 +67,7 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
   const isSelected = (kind: BowSelection['kind'], id?: number) =>
     selection?.kind === kind && (kind === 'setup' || (selection as { id?: number }).id === id);
   const { isOwner, canAdd } = useBowRole(bow);
+  const units = useUnits();
   const canSightIn = bow.builds.length > 0;
   return (
     <View style={styles.lists}>
@@ -93,7 +95,7 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
               key={build.id}
               testID={`build-row-${build.id}`}
               title={build.name}
-              detail={`${buildRowDetail(build)}${addedByNote(build.addedBy, bow)}`}
+              detail={`${buildRowDetail(build, units)}${addedByNote(build.addedBy, bow)}`}
               href={split ? undefined : `/builds/${build.id}`}
               selected={isSelected('build', build.id)}
               onSelect={() => onSelect({ kind: 'build', id: build.id })}

@@ -7,7 +7,8 @@ import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import { colors, radii, space } from '@/components/theme';
 import { grainsToGrams } from '@/math/units/convert';
-import type { FormUnits } from '@/components/forms/form-numbers';
+import { unitsOf, type FormUnits } from '@/components/forms/form-numbers';
+import { formatQuantity, shownUnit } from '@/shared/units';
 
 /** The caution shown beside every energy figure. */
 export const ENERGY_CAUTION_TEXT =
@@ -47,7 +48,7 @@ function Figure({ label, value, unit, testID, second }: { label: string; value: 
 export function BuildTotalsStrip({ text, lengthUnit }: { text: BuildFormText; lengthUnit: FormUnits }) {
   const live = liveQuantities(text, lengthUnit);
   const parts = [
-    live.totalGr === null ? '— gr' : `${live.totalGr.toFixed(1)} gr`,
+    live.totalGr === null ? `— ${shownUnit('mass', unitsOf(lengthUnit))}` : formatQuantity(live.totalGr, 'mass', unitsOf(lengthUnit), shownUnit('mass', unitsOf(lengthUnit)) === 'g' ? 2 : 1),
     live.focPct === null ? 'FOC —' : `FOC ${live.focPct.toFixed(1)} %`,
   ];
   return (

@@ -1,13 +1,15 @@
 import type { Build, BuildDerived } from '@/shared/build';
+import { formatQuantity, type UnitsLike } from '@/shared/units';
 
 /**
- * A build's key numbers on one line: total grains, FOC, speed.
+ * A build's key numbers on one line: total mass, FOC, speed, in the archer's units
+ * (stored units, grains and fps, when none are given).
  * Example: buildLine({ totalGr: 452.4, focPct: 11.83, … }, 286) → '452 gr · FOC 11.8 % · 286 fps'
  */
-export function buildLine(derived: Pick<BuildDerived, 'totalGr' | 'focPct'>, speedFps: number | null): string {
-  const parts = [`${Math.round(derived.totalGr)} gr`];
+export function buildLine(derived: Pick<BuildDerived, 'totalGr' | 'focPct'>, speedFps: number | null, units?: UnitsLike): string {
+  const parts = [formatQuantity(derived.totalGr, 'mass', units)];
   if (derived.focPct !== null) parts.push(`FOC ${derived.focPct.toFixed(1)} %`);
-  if (speedFps !== null) parts.push(`${Math.round(speedFps)} fps`);
+  if (speedFps !== null) parts.push(formatQuantity(speedFps, 'speed', units));
   return parts.join(' · ');
 }
 

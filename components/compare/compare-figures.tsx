@@ -1,11 +1,13 @@
 import { useState } from 'react';
 import { ScrollView, StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 
+import { useUnits } from '@/components/account/use-units';
 import { buildStyle } from '@/components/compare/build-styles';
 import { formatFixed } from '@/components/compare/format';
 import { Text } from '@/components/ui/text';
 import { colors, radii, space } from '@/components/theme';
 import type { BuildComparison, ComparedBuild } from '@/shared/compare';
+import { formatQuantity } from '@/shared/units';
 
 const labelColumn = 116;
 const buildColumn = 96;
@@ -17,13 +19,19 @@ const buildColumn = 96;
  */
 export function CompareFigures({ comparison, chronographed }: { comparison: BuildComparison; chronographed: (number | null)[] }) {
   const unit = comparison.unit;
+  // Speed and mass in the archer's units (fps or m/s, gr or g).
+  const units = useUnits();
+  const speed = (fps: number) => formatQuantity(fps, 'speed', units);
   const rows: { label: string; hint?: string; value: (build: ComparedBuild, index: number) => string }[] = [
     {
       label: 'Speed',
       hint: 'fitted (chronograph)',
-      value: (build, index) => `${formatFixed(build.speedFps, 0)} fps${chronographed[index] !== null ? ` (${formatFixed(chronographed[index], 0)})` : ''}`,
+      value: (build, index) => {
+        const measured = chronographed[index];
+        return `${speed(build.speedFps)}${measured !== null ? ` (${speed(measured)})` : ''}`;
+      },
     },
-    { label: 'Total weight', value: (build) => `${formatFixed(build.massGr, 0)} gr` },
+    { label: 'Total weight', value: (build) => formatQuantity(build.massGr, 'mass', units) },
     { label: 'FOC', value: (build) => (build.focPct === null ? 'not measured' : `${formatFixed(build.focPct, 1)} %`) },
     { label: 'Kinetic energy', value: (build) => `${formatFixed(build.kineticEnergyFtLbf, 1)} ft·lbf\n${formatFixed(build.kineticEnergyJ, 1)} J` },
     { label: 'Momentum', value: (build) => `${formatFixed(build.momentumSlugFps, 3)} slug·ft/s\n${formatFixed(build.momentumKgMps, 2)} kg·m/s` },

@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
+import { useUnits } from '@/components/account/use-units';
 import { formatFixed, formatSigned } from '@/components/compare/format';
 import { PredictedTapePreview } from '@/components/predict/predicted-tape-preview';
 import { Banner } from '@/components/ui/banner';
@@ -10,6 +11,7 @@ import { Text } from '@/components/ui/text';
 import { colors, radii, space } from '@/components/theme';
 import { formatDay } from '@/components/bows/readiness-words';
 import type { PredictResponse } from '@/shared/predict';
+import { formatQuantity } from '@/shared/units';
 
 export interface PredictResultProps {
   result: PredictResponse;
@@ -35,14 +37,18 @@ const shown = (distance: number) => distance >= 20 && distance % 10 === 0;
 export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHref = null, sightInName = null }: PredictResultProps) {
   const { prediction } = result;
   const unit = prediction.unit ?? 'yd';
+  // Speeds and masses in the archer's units (fps or m/s, gr or g).
+  const units = useUnits();
+  const speed = (fps: number) => formatQuantity(fps, 'speed', units);
+  const mass = (gr: number) => formatQuantity(gr, 'mass', units);
   const source =
     prediction.speedSource === 'chronograph'
       ? 'Chronographed speed of this build.'
-      : `Predicted from ${result.chronographed.map((build) => `${build.name} (${formatFixed(build.massGr, 0)} gr, ${formatFixed(build.speedFps, 0)} fps)`).join(' and ')}.`;
+      : `Predicted from ${result.chronographed.map((build) => `${build.name} (${mass(build.massGr)}, ${speed(build.speedFps)})`).join(' and ')}.`;
   const reachable = (prediction.marks ?? []).filter((mark) => mark.markMm !== null);
   const lastReachable = reachable.length > 0 ? reachable[reachable.length - 1].distance : 80;
   const tapeTo = Math.max(30, Math.min(80, Math.floor(lastReachable / 10) * 10));
-  const speedWords = `${formatFixed(prediction.speedFps, 0)} fps (${prediction.speedSource === 'chronograph' ? 'chronographed' : 'predicted'})`;
+  const speedWords = `${speed(prediction.speedFps)} (${prediction.speedSource === 'chronograph' ? 'chronographed' : 'predicted'})`;
 
   return (
     <View style={styles.box} testID="predict-result">
@@ -56,9 +62,9 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHre
       ))}
 
       <Card>
-        <SectionHeading title={`${result.build.name}, ${formatFixed(result.build.totalGr, 0)} gr`} level={2} description={source} />
+        <SectionHeading title={`${result.build.name}, ${mass(result.build.totalGr)}`} level={2} description={source} />
         <View style={styles.figures}>
-          <Figure label="Speed" value={`${formatFixed(prediction.speedFps, 0)} fps`} testID="predict-speed" />
+          <Figure label="Speed" value={speed(prediction.speedFps)} testID="predict-speed" />
           <Figure label="Kinetic energy" value={`${formatFixed(prediction.kineticEnergyFtLbf, 1)} ft·lbf`} detail={`${formatFixed(prediction.kineticEnergyJ, 1)} J`} />
           <Figure label="Momentum" value={`${formatFixed(prediction.momentumSlugFps, 3)}`} detail={`slug·ft/s · ${formatFixed(prediction.momentumKgMps, 2)} kg·m/s`} />
           <Figure label="FOC" value={result.build.focPct === null ? '—' : `${formatFixed(result.build.focPct, 1)} %`} detail={result.build.focPct === null ? 'balance point not given' : undefined} />
@@ -128,7 +134,7 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHre
             from={20}
             to={tapeTo}
             widthMm={tapeWidthMm}
-            labels={{ bow: bowName, build: `${result.build.name}, ${formatFixed(result.build.totalGr, 0)} gr`, speed: speedWords }}
+            labels={{ bow: bowName, build: `${result.build.name}, ${mass(result.build.totalGr)}`, speed: speedWords }}
           />
           {tapeHref ? <DownloadLink label="Download the predicted tape (SVG)" href={tapeHref(20, tapeTo)} fileName="predicted-tape.svg" testID="predict-download" /> : null}
           {sheetHref ? (

@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
+import { useUnits } from '@/components/account/use-units';
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { FieldGrid } from '@/components/forms/field-grid';
@@ -28,13 +29,14 @@ import { Text } from '@/components/ui/text';
 import { useWide } from '@/components/ui/use-wide';
 import { space } from '@/components/theme';
 import type { LengthUnit } from '@/shared/auth';
+import { formatQuantity, shownUnit, type UnitsLike } from '@/shared/units';
 import type { BowDetail } from '@/shared/bow';
 import type { BuildInput } from '@/shared/build';
 import { sightInName, sightInNameParts } from '@/shared/sight-in-name';
 
 /** The form's text for a new build started from `build`: its parts, a new name, no speed (that is what we predict). */
-function startingText(build: BowDetail['builds'][number] | undefined, unit: LengthUnit): BuildFormText {
-  const text = buildFormDefaults(build, unit);
+function startingText(build: BowDetail['builds'][number] | undefined, units: UnitsLike): BuildFormText {
+  const text = buildFormDefaults(build, units);
   return { ...text, name: build ? `${build.name}, changed` : 'New build', speedFps: '' };
 }
 
@@ -76,13 +78,18 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
   const [startFrom, setStartFrom] = useState<string>(firstBuild ? String(firstBuild.id) : 'blank');
   const [sightInId, setSightInId] = useState<string>(bow.sightIns[0] ? String(bow.sightIns[0].id) : '');
   const [sent, setSent] = useState<BuildInput | null>(null);
-  const resolver = useMemo(() => textFormResolver<BuildFormText, BuildInput>(buildFormSchema(unit), { inches: unit === 'in' }), [unit]);
+  // Lengths in the screen's unit and masses in the account's (gr or g), as in the build form; stored in mm and grains.
+  const me = useUnits();
+  const massUnit = me?.massUnit;
+  const units = useMemo<UnitsLike>(() => ({ lengthUnit: unit, massUnit }), [unit, massUnit]);
+  const mass = shownUnit('mass', units);
+  const resolver = useMemo(() => textFormResolver<BuildFormText, BuildInput>(buildFormSchema(units), { units }), [units]);
   const { control, handleSubmit, setError, reset } = useForm<BuildFormText, unknown, BuildInput>({
     resolver,
-    defaultValues: startingText(firstBuild, unit),
+    defaultValues: startingText(firstBuild, units),
   });
   const text = useWatch({ control }) as BuildFormText;
-  const live = liveQuantities(text, unit);
+  const live = liveQuantities(text, units);
   const chronographed = bow.builds.filter((build) => build.speedFps !== null);
 
   const startOptions = [...bow.builds.map((build) => ({ value: String(build.id), label: build.name })), { value: 'blank', label: 'Blank' }];
@@ -107,7 +114,7 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
 
   const chooseStart = (value: string) => {
     setStartFrom(value);
-    reset(startingText(bow.builds.find((build) => String(build.id) === value), unit));
+    reset(startingText(bow.builds.find((build) => String(build.id) === value), units));
     predict.reset();
   };
 
@@ -140,18 +147,18 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
         <FormField control={control} name="grainsPerInch" label="Grains per inch" unit="gpi" numeric />
         <FormField control={control} name="cutLengthMm" label="Cut length" unit={unit} numeric />
         <FormField control={control} name="diameterMm" label="Diameter" unit={unit} numeric />
-        <FormField control={control} name="pointGr" label="Point" unit="gr" numeric testID="predict-point" />
-        <FormField control={control} name="insertGr" label="Insert" unit="gr" numeric />
-        <FormField control={control} name="collarGr" label="Collar" unit="gr" numeric />
-        <FormField control={control} name="nockGr" label="Nock" unit="gr" numeric />
+        <FormField control={control} name="pointGr" label="Point" unit={mass} numeric testID="predict-point" />
+        <FormField control={control} name="insertGr" label="Insert" unit={mass} numeric />
+        <FormField control={control} name="collarGr" label="Collar" unit={mass} numeric />
+        <FormField control={control} name="nockGr" label="Nock" unit={mass} numeric />
         <FormField control={control} name="vaneCount" label="Vanes" unit="×" numeric />
-        <FormField control={control} name="vaneWeightGr" label="Each vane" unit="gr" numeric />
-        <FormField control={control} name="wrapGr" label="Wrap" unit="gr" numeric />
+        <FormField control={control} name="vaneWeightGr" label="Each vane" unit={mass} numeric />
+        <FormField control={control} name="wrapGr" label="Wrap" unit={mass} numeric />
         <FormField control={control} name="balancePointMm" label="Balance point" hint="Optional, for FOC" unit={unit} numeric />
         <FormField control={control} name="dragCoefficient" label="Drag coefficient" hint="Optional: else fitted" numeric />
       </FieldGrid>
       <Text variant="label" testID="predict-total">
-        Total: {live.totalGr === null ? '—' : `${formatFixed(live.totalGr, 0)} gr`}
+        Total: {live.totalGr === null ? '—' : formatQuantity(live.totalGr, 'mass', units)}
         {live.focPct === null ? '' : ` · FOC ${formatFixed(live.focPct, 1)} %`}
       </Text>
       {sightInOptions.length > 0 ? (
@@ -188,7 +195,7 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
   const intro = (
     <Text tone="soft">
       {chronographed.length >= 2
-        ? `Speed from ${chronographed.length} chronographed builds: ${chronographed.map((build) => `${build.name} (${buildLine(build.derived, build.speedFps)})`).join('; ')}.`
+        ? `Speed from ${chronographed.length} chronographed builds: ${chronographed.map((build) => `${build.name} (${buildLine(build.derived, build.speedFps, me)})`).join('; ')}.`
         : chronographed.length === 1
           ? `Only ${chronographed[0].name} is chronographed. Chronograph at least one more build on this bow (of another weight) to predict a new one’s speed.`
           : 'No build on this bow is chronographed yet. Chronograph at least two builds of different weights to predict a new one’s speed.'}

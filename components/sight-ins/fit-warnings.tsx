@@ -1,10 +1,12 @@
 import { StyleSheet, View } from 'react-native';
 
+import { useUnits } from '@/components/account/use-units';
 import type { LiveFit } from '@/components/sight-ins/live-fit';
 import { Banner } from '@/components/ui/banner';
 import { Text } from '@/components/ui/text';
 import { borders, colors, space } from '@/components/theme';
 import type { MarkCheckResult, MarkProblemKind } from '@/shared/mark-checks';
+import { formatQuantity } from '@/shared/units';
 
 /** "80 yd", "80 and 90 yd", "70, 80 and 90 yd". */
 export function listDistances(distances: readonly number[], unit: string): string {
@@ -134,12 +136,13 @@ export function FitWarnings({ live, checks }: { live: LiveFit; checks?: MarkChec
  * Example: `<FitStrip live={live} checks={checks} />`
  */
 export function FitStrip({ live, checks }: { live: LiveFit; checks: MarkCheckResult }) {
+  const units = useUnits();
   const problem = checks.problems[0];
   const advice = fitAdvice(live, checks).find((item) => item.tone !== 'info' && item.key !== 'left-out');
   const figures =
     live.state === 'fit'
       ? [
-          `${live.fit.speedFps.toFixed(0)} fps`,
+          formatQuantity(live.fit.speedFps, 'speed', units),
           live.fit.method === 'one-mark' ? 'estimate from 1 mark' : live.fit.method === 'two-mark' ? 'exact (2 marks)' : `RMS ${live.fit.rmsMm.toFixed(2)} mm`,
           live.fit.nextDistance !== null ? `next ${live.fit.nextDistance} ${live.fit.distanceUnit}` : null,
         ].filter(Boolean)

@@ -39,7 +39,7 @@ import type { DistanceUnit } from '@/shared/auth';
 import type { BowDetail } from '@/shared/bow';
 import { checkMarks, type MarkCheckResult, type MarkProblem } from '@/shared/mark-checks';
 import type { SightIn, SightInInput } from '@/shared/sight-in';
-import { shownUnit, storedToText } from '@/shared/units';
+import { formatQuantity, shownUnit, storedToText } from '@/shared/units';
 
 export interface SightInEditorProps {
   bow: BowDetail;
@@ -90,8 +90,9 @@ function withoutProblemRows(text: LiveFitText, checks: MarkCheckResult): LiveFit
 
 function FitSummary({ live }: { live: Extract<LiveFit, { state: 'fit' }> }) {
   const { fit } = live;
+  const units = useUnits();
   const figures = [
-    { label: 'Arrow speed', value: `${fit.speedFps.toFixed(0)} fps` },
+    { label: 'Arrow speed', value: formatQuantity(fit.speedFps, 'speed', units) },
     { label: 'Marks', value: String(fit.residuals.length) },
     { label: 'RMS off the fit', value: fit.method === 'one-mark' ? 'estimate (1 mark)' : fit.method === 'two-mark' ? 'exact (2 marks)' : `${fit.rmsMm.toFixed(2)} mm` },
   ];
@@ -231,7 +232,7 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
       ) : null}
       {chosen ? (
         <Text variant="small" tone="soft">
-          {buildLine(chosen.derived, chosen.speedFps)} · {storedToText(chosen.diameterMm, 'length', units, shownUnit('length', units) === 'in' ? 3 : 1)} {shownUnit('length', units)} shaft
+          {buildLine(chosen.derived, chosen.speedFps, units)} · {storedToText(chosen.diameterMm, 'length', units, shownUnit('length', units) === 'in' ? 3 : 1)} {shownUnit('length', units)} shaft
         </Text>
       ) : null}
       <FieldGrid minWidth={170}>
