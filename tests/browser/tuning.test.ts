@@ -151,7 +151,7 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     await page.getByText('Tear length (in)').waitFor();
     await page.getByTestId('tear-length').fill('25');
     await page.getByTestId('save-shot').click();
-    await page.getByText('Tear length must be more than 0 and at most 5.90 in').waitFor();
+    await page.getByText('Tear length must be more than 0 and at most 5.9 in').waitFor();
     await page.getByTestId('tear-length').fill('1');
     await page.getByTestId('save-shot').click();
     await page.getByTestId('shot-1').getByText(/Tail high, 1\.00 in/).waitFor();
