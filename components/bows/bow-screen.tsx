@@ -6,7 +6,7 @@ import { useBow } from '@/components/bows/api';
 import { useUnits } from '@/components/account/use-units';
 import { BowDetailPanel, buildRowDetail, SetupPanel, type BowSelection } from '@/components/bows/bow-detail-panel';
 import { sightKindNames } from '@/components/bows/bow-setup-items';
-import { formatLength } from '@/components/forms/form-numbers';
+import { formatDrawLength } from '@/components/forms/form-numbers';
 import { fitWords, formatDay, levelWords, sightInWords, tapeWords } from '@/components/bows/readiness-words';
 import { RecordRow } from '@/components/bows/record-row';
 import { useBowRole } from '@/components/bows/use-bow-role';
@@ -160,7 +160,7 @@ function subtitle(bow: BowDetail, unit: LengthUnit): string {
   return [
     bow.hand === 'right' ? 'Right hand' : 'Left hand',
     `${bow.drawWeightLb} lb`,
-    `${formatLength(bow.drawLengthMm, 'in')} draw`, // draw length is stated in inches in the trade
+    `${formatDrawLength(bow.drawLengthMm, unit)} draw`, // in inches as the trade states it, mm beside it for a millimetre archer
     sightKindNames[bow.sightKind],
   ].join(' · ');
 }

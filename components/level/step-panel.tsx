@@ -1,5 +1,5 @@
 import { useState, type ReactNode } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import { Image, StyleSheet, View } from 'react-native';
 
 import { textFormResolver } from '@/components/forms/text-form-resolver';
@@ -82,11 +82,11 @@ export function StepPanel({ check, stepKey, editable, submitLabel, completes = f
   const removePhoto = useRemoveStepPhoto(check.id);
   const [general, setGeneral] = useState<string | null>(null);
   const [photoError, setPhotoError] = useState<string | null>(null);
-  const { control, handleSubmit, watch, formState } = useForm<StepText, unknown, StepEntry>({
+  const { control, handleSubmit, formState } = useForm<StepText, unknown, StepEntry>({
     resolver: textFormResolver<StepText, StepEntry>(stepTextSchema),
     defaultValues: stepTextFrom(saved, stepKey),
   });
-  const result = watch('result');
+  const result = useWatch({ control, name: 'result' });
 
   const submit = handleSubmit((entry) => {
     setGeneral(null);

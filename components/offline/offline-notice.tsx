@@ -1,5 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useEffect, useState } from 'react';
+import { useCallback, useState, useSyncExternalStore } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 
 import { OutboxPanel, seenAt } from '@/components/offline/outbox-panel';
@@ -19,13 +19,9 @@ function useLastSeen(): number | null {
     }
     return most > 0 ? most : null;
   };
-  const [seen, setSeen] = useState(newest);
-  useEffect(() => {
-    setSeen(newest());
-    return queryClient.getQueryCache().subscribe(() => setSeen(newest()));
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [queryClient]);
-  return seen;
+  // The query cache is an outside store: read it where React can see each change.
+  const subscribe = useCallback((changed: () => void) => queryClient.getQueryCache().subscribe(changed), [queryClient]);
+  return useSyncExternalStore(subscribe, newest, newest);
 }
 
 /**

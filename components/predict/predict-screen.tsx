@@ -9,7 +9,7 @@ import { FieldGrid } from '@/components/forms/field-grid';
 import { applyFieldErrors, flatFieldPath } from '@/components/forms/server-field-errors';
 import { textFormResolver } from '@/components/forms/text-form-resolver';
 import { buildFormDefaults, buildFormFields, buildFormSchema, type BuildFormText } from '@/components/builds/build-form-values';
-import { buildLine, buildName } from '@/components/builds/build-words';
+import { buildLine } from '@/components/builds/build-words';
 import { liveQuantities } from '@/components/builds/live-quantities';
 import { formatFixed } from '@/components/compare/format';
 import { predictedTapeHref, usePredict } from '@/components/predict/api';

@@ -1,5 +1,5 @@
 import { useRouter } from 'expo-router';
-import { useCallback, useDeferredValue, useMemo, useRef, useState } from 'react';
+import { useCallback, useDeferredValue, useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
@@ -159,7 +159,6 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
   const [keptId, setKeptId] = useState<string | null>(null);
   const [keptItem] = useOutbox({ ids: keptId ? [keptId] : [] });
   const [askFalling, setAskFalling] = useState(false);
-  const fallingConfirmed = useRef(false);
   const onSent = useCallback(
     (sent: OutboxSent) => {
       if (sent.id !== keptId) return;
@@ -176,15 +175,16 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
   const buildOptions = bow.builds.map((build) => ({ value: String(build.id), label: build.name }));
   const chosen = bow.builds.find((build) => String(build.id) === buildId);
 
-  const submit = handleSubmit(
+  // `fallingOk`: the archer has confirmed a reading that falls with distance.
+  const submit = (fallingOk: boolean) =>
+    handleSubmit(
     (input) => {
       setGeneral(null);
       // A reading that falls with distance is most often a typo: the archer confirms it before it is saved.
-      if (checks.falling.length > 0 && !fallingConfirmed.current) {
+      if (checks.falling.length > 0 && !fallingOk) {
         setAskFalling(true);
         return;
       }
-      fallingConfirmed.current = false;
       setAskFalling(false);
       const kept = keptRows(marks ?? []);
       save.mutate(
@@ -222,7 +222,7 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
       );
     },
     () => setGeneral('Some fields need another look; nothing was saved.'),
-  );
+  )();
 
   const header = (
     <Card style={styles.section}>
@@ -297,10 +297,7 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
           pendingLabel="Saving…"
           pending={save.isPending}
           error={null}
-          onConfirm={() => {
-            fallingConfirmed.current = true;
-            void submit();
-          }}
+          onConfirm={() => void submit(true)}
           onCancel={() => setAskFalling(false)}
           testID="falling-confirm"
         />
@@ -310,7 +307,7 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
           label={sightIn ? 'Save the marks' : 'Save the sight-in'}
           pendingLabel="Saving…"
           pending={save.isPending}
-          onPress={submit}
+          onPress={() => void submit(false)}
           testID="sight-in-save"
         />
         {sightIn ? (

@@ -21,7 +21,6 @@ import {
   tryFitInput,
   tryFormDefaults,
   tryFormSchema,
-  trySheetInput,
   type TryFormText,
 } from '@/components/try/try-form-values';
 import { Banner } from '@/components/ui/banner';

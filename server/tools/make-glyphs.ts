@@ -9,7 +9,7 @@
  */
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import opentype from 'opentype.js';
+import { parse as parseFont, type PathCommand } from 'opentype.js';
 
 const root = join(__dirname, '..', '..');
 const extras = '±°×·–—−‘’“”…≈µ½';
@@ -27,7 +27,7 @@ const fonts: FontSpec[] = [
 ];
 
 /** Compact path data in font units: M/L/Q/C/Z with space-separated numbers, zero-length lines dropped. */
-function pathData(commands: opentype.PathCommand[]): string {
+function pathData(commands: PathCommand[]): string {
   const parts: string[] = [];
   let x = NaN;
   let y = NaN;
@@ -61,7 +61,7 @@ function pathData(commands: opentype.PathCommand[]): string {
 
 const blocks = fonts.map((spec) => {
   const buffer = readFileSync(join(root, 'assets', 'fonts', spec.file));
-  const font = opentype.parse(buffer.buffer.slice(buffer.byteOffset, buffer.byteOffset + buffer.byteLength));
+  const font = parseFont(buffer.buffer.slice(buffer.byteOffset, buffer.byteOffset + buffer.byteLength));
   const glyphs: Record<string, [number, string]> = {};
   for (const character of characters) {
     const glyph = font.charToGlyph(character);

@@ -163,9 +163,9 @@ describe('the development mail reader', () => {
       process.env.SESSION_SECRET = 'a production secret for this test only';
       jest.isolateModules(() => {
         // A fresh module registry: config, database and app built as production would build them.
-        // eslint-disable-next-line @typescript-eslint/no-require-imports
+        // eslint-disable-next-line @typescript-eslint/no-require-imports -- jest.isolateModules needs a require inside the callback
         const { createApp } = require('@/server/app');
-        // eslint-disable-next-line @typescript-eslint/no-require-imports
+        // eslint-disable-next-line @typescript-eslint/no-require-imports -- as above
         const { sequelize } = require('@/server/db');
         production = { app: createApp({ sessionExpiryTimer: false }), close: () => sequelize.close() };
       });

@@ -35,8 +35,7 @@ import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
 import { Bow, LevelCheck, Photo, SightIn, Tape, ArrowBuild, BowChange, Share } from '@/server/models';
 import { bowBody, buildBody, knownMarks } from './bow-fixtures';
 
-// cookie-signature (express-session's own signer) ships no types.
-// eslint-disable-next-line @typescript-eslint/no-require-imports
+// eslint-disable-next-line @typescript-eslint/no-require-imports -- cookie-signature (express-session's own signer) ships no types, so no typed import
 const signCookie = (require('cookie-signature') as { sign: (value: string, secret: string) => string }).sign;
 
 const BATCH = Number(process.env.PROPERTY_BATCH || 16);

@@ -12,7 +12,7 @@ import { AuditEntry, Bow, SightInMark, Share, SightIn, Token, User } from '@/ser
 import { seedBows } from '@/server/seed/bows';
 import { seedSharingStep } from '@/server/seed/sharing';
 import { CSRF, closeDb, signedInAgent, testApp, uniqueEmail } from '../helpers/api';
-import { bowWithSightIn, buildBody, knownMarks, type Agent } from './bow-fixtures';
+import { bowWithSightIn, knownMarks, type Agent } from './bow-fixtures';
 
 const app = testApp();
 // Many requests per test on a shared 2-core machine (bcrypt at cost 12, PDF drawing).

@@ -6,7 +6,7 @@
  * level screen and the account. The demo scenario's bows (invented) give each
  * screen real content: charts, tables and scrolling regions.
  */
-import AxeBuilder from '@axe-core/playwright';
+import { AxeBuilder } from '@axe-core/playwright';
 import type { Page } from 'playwright-core';
 import { User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
