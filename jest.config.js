@@ -1,6 +1,13 @@
 // One Jest run, four projects. `npm test` (server/tools/test-run.ts) provides the
 // database and the web export that the api and browser projects need.
-const swc = ['@swc/jest', { inputSourceMap: false, jsc: { parser: { syntax: 'typescript', tsx: true }, target: 'es2022', transform: { react: { runtime: 'automatic' } } }, module: { type: 'commonjs' } }];
+const swc = [
+  '@swc/jest',
+  {
+    inputSourceMap: false,
+    jsc: { parser: { syntax: 'typescript', tsx: true }, target: 'es2022', transform: { react: { runtime: 'automatic' } } },
+    module: { type: 'commonjs' },
+  },
+];
 const alias = { '^@/(.*)$': '<rootDir>/$1' };
 
 module.exports = {

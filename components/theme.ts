@@ -79,8 +79,7 @@ export type FontName =
 
 // On the web a CSS fallback list keeps text readable if a font file fails to load.
 // Each face is its own family, so styles never set fontWeight (that would fake-bold a bold face).
-const family = (name: FontName, fallback: string) =>
-  Platform.OS === 'web' ? `${name}, ${fallback}` : name;
+const family = (name: FontName, fallback: string) => (Platform.OS === 'web' ? `${name}, ${fallback}` : name);
 
 /** Font families: Atkinson Hyperlegible for words, Barlow Condensed for numerals. */
 export const fonts = {

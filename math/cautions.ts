@@ -11,7 +11,8 @@ export const SLOPE_CAUTION = 'Slope and altitude corrections are estimates; conf
 /** Beside kinetic energy and momentum. */
 export const ENERGY_CAUTION = 'Energy and momentum figures are no legal determination; follow your local hunting regulations.';
 /** On the print sheet, before cutting. */
-export const PRINT_INSTRUCTION = 'Print at actual size (100 %, no fit-to-page), then measure the bar: it must read 50 mm and 2 in before you cut.';
+export const PRINT_INSTRUCTION =
+  'Print at actual size (100 %, no fit-to-page), then measure the bar: it must read 50 mm and 2 in before you cut.';
 /** On a tape, sheet or screen fitted from one mark and a chronographed speed. */
 export const ONE_MARK_CAUTION = 'Estimate from one mark and the chronographed speed: no other distance has been sighted.';
 /** The short form along a one-mark tape's edge. */

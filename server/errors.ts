@@ -63,7 +63,7 @@ export function validationError(error: ZodError, prefix = ''): ApiError {
 }
 
 export const notFoundHandler: RequestHandler = (req, _res, next) => {
-  next(new ApiError(404, 'not_found', `No such API path: ${req.method} ${req.originalUrl.split("?")[0]}`));
+  next(new ApiError(404, 'not_found', `No such API path: ${req.method} ${req.originalUrl.split('?')[0]}`));
 };
 
 /** Status of an error thrown by the body parser, the URL decoder or another library (http-errors), when it is a 4xx. */
@@ -83,13 +83,17 @@ export function clientError(err: unknown): ApiError | null {
   const type = (err as { type?: unknown } | null)?.type;
   if (type === 'charset.unsupported') return new ApiError(415, 'unsupported_charset', 'Send the request body as UTF-8 JSON.');
   if (type === 'encoding.unsupported') {
-    return new ApiError(415, 'unsupported_encoding', 'The request body\'s Content-Encoding is not supported; send it plain or gzip, deflate or br.');
+    return new ApiError(
+      415,
+      'unsupported_encoding',
+      "The request body's Content-Encoding is not supported; send it plain or gzip, deflate or br.",
+    );
   }
   if (err instanceof URIError) return new ApiError(400, 'bad_url', 'The address has broken percent-encoding.');
   const status = statusOf(err);
   if (status === null) return null;
   if (status === 413) return new ApiError(413, 'too_large', 'The request is too large.');
-  if (status === 415) return new ApiError(415, 'unsupported_type', 'The request\'s content type or encoding is not supported.');
+  if (status === 415) return new ApiError(415, 'unsupported_type', "The request's content type or encoding is not supported.");
   if (status === 400 && /decod|param/i.test(String((err as Error).message))) {
     return new ApiError(400, 'bad_request', 'The request could not be read: its address or body is not encoded correctly.');
   }
@@ -119,9 +123,12 @@ export const errorHandler: ErrorRequestHandler = (err, _req, res, _next) => {
   else if (clientError(err)) apiError = clientError(err)!;
   else if (err?.name === 'SequelizeUniqueConstraintError') apiError = ApiError.conflict('That record already exists.');
   else if (concurrentChange(err)) {
-    apiError = new ApiError(409, 'concurrent_change', 'These records were being changed by another request at the same moment. Nothing was saved; try again.');
-  }
-  else if (err?.name === 'SequelizeConnectionRefusedError' || err?.name === 'SequelizeConnectionError') {
+    apiError = new ApiError(
+      409,
+      'concurrent_change',
+      'These records were being changed by another request at the same moment. Nothing was saved; try again.',
+    );
+  } else if (err?.name === 'SequelizeConnectionRefusedError' || err?.name === 'SequelizeConnectionError') {
     apiError = new ApiError(503, 'db_unavailable', 'The database is not reachable; try again shortly.');
   } else {
     // Logged on the server (never sent to the client); quiet under Jest unless asked for.

@@ -8,7 +8,10 @@ import { config } from './config';
 import { sequelize } from './db';
 import { migrate } from './migrations';
 
-export async function startServer({ port = config.port, host = config.host } = {}): Promise<{ server: Server; close: () => Promise<void> }> {
+export async function startServer({ port = config.port, host = config.host } = {}): Promise<{
+  server: Server;
+  close: () => Promise<void>;
+}> {
   await sequelize.authenticate();
   await migrate(sequelize);
   const app = createApp();

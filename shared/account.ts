@@ -30,7 +30,10 @@ export const passwordChangeSchema = z
 /** POST /api/me/delete: the password typed again, and the words that say it is meant. */
 export const accountDeleteSchema = z.object({
   password: z
-    .string({ required_error: 'Enter your password to delete the account', invalid_type_error: 'Enter your password to delete the account' })
+    .string({
+      required_error: 'Enter your password to delete the account',
+      invalid_type_error: 'Enter your password to delete the account',
+    })
     .min(1, 'Enter your password to delete the account')
     .max(passwordMaxLength, `Password must be at most ${passwordMaxLength} characters`),
 });

@@ -19,30 +19,31 @@ export const arrowStatusNames: Record<ArrowStatus, string> = { quiver: 'In the q
 export const spinKinds = ['none', 'thou', 'mm', 'pass', 'fail'] as const;
 export type SpinKind = (typeof spinKinds)[number];
 
-const arrowFields = z
-  .object({
-    number: z
-      .number({ required_error: 'Enter the arrow’s number', invalid_type_error: 'Arrow number must be a number' })
-      .int('Arrow number must be a whole number')
-      .min(1, 'Arrow number must be at least 1')
-      .max(99, 'Arrow number must be at most 99'),
-    weightGr: z
-      .number({ required_error: 'Enter the arrow’s weight', invalid_type_error: 'Weight must be a number' })
-      .min(100, 'Weight must be at least 100 gr')
-      .max(1500, 'Weight must be at most 1500 gr'),
-    /** 'thou': runout in thousandths of an inch; 'mm': runout in mm; pass / fail; none: not spun. */
-    spinKind: z.enum(spinKinds, { errorMap: () => ({ message: 'Choose how the spin check is given' }) }).default('none'),
-    runout: z.number({ invalid_type_error: 'Runout must be a number' }).nullable().default(null),
-    note: textSchema('Nock or vane note', 200),
-    status: z.enum(arrowStatuses, { errorMap: () => ({ message: 'Choose in the quiver, practice only or retired' }) }).default('quiver'),
-  });
+const arrowFields = z.object({
+  number: z
+    .number({ required_error: 'Enter the arrow’s number', invalid_type_error: 'Arrow number must be a number' })
+    .int('Arrow number must be a whole number')
+    .min(1, 'Arrow number must be at least 1')
+    .max(99, 'Arrow number must be at most 99'),
+  weightGr: z
+    .number({ required_error: 'Enter the arrow’s weight', invalid_type_error: 'Weight must be a number' })
+    .min(100, 'Weight must be at least 100 gr')
+    .max(1500, 'Weight must be at most 1500 gr'),
+  /** 'thou': runout in thousandths of an inch; 'mm': runout in mm; pass / fail; none: not spun. */
+  spinKind: z.enum(spinKinds, { errorMap: () => ({ message: 'Choose how the spin check is given' }) }).default('none'),
+  runout: z.number({ invalid_type_error: 'Runout must be a number' }).nullable().default(null),
+  note: textSchema('Nock or vane note', 200),
+  status: z.enum(arrowStatuses, { errorMap: () => ({ message: 'Choose in the quiver, practice only or retired' }) }).default('quiver'),
+});
 
 function checkRunout(arrow: { spinKind: SpinKind; runout: number | null }, ctx: z.RefinementCtx, prefix: (string | number)[] = []) {
   if (arrow.spinKind !== 'thou' && arrow.spinKind !== 'mm') return;
   const limit = arrow.spinKind === 'thou' ? 50 : 1.5;
   const unit = arrow.spinKind === 'thou' ? 'thousandths' : 'mm';
-  if (arrow.runout === null || Number.isNaN(arrow.runout)) ctx.addIssue({ code: 'custom', path: [...prefix, 'runout'], message: `Enter the runout in ${unit}` });
-  else if (arrow.runout < 0 || arrow.runout > limit) ctx.addIssue({ code: 'custom', path: [...prefix, 'runout'], message: `Runout must be between 0 and ${limit} ${unit}` });
+  if (arrow.runout === null || Number.isNaN(arrow.runout))
+    ctx.addIssue({ code: 'custom', path: [...prefix, 'runout'], message: `Enter the runout in ${unit}` });
+  else if (arrow.runout < 0 || arrow.runout > limit)
+    ctx.addIssue({ code: 'custom', path: [...prefix, 'runout'], message: `Runout must be between 0 and ${limit} ${unit}` });
 }
 
 export const arrowInputSchema = arrowFields.superRefine((arrow, ctx) => checkRunout(arrow, ctx));
@@ -61,7 +62,8 @@ export const arrowSetInputSchema = z
   .superRefine((set, ctx) => {
     const seen = new Set<number>();
     set.arrows.forEach((arrow, index) => {
-      if (seen.has(arrow.number)) ctx.addIssue({ code: 'custom', path: ['arrows', index, 'number'], message: `Arrow ${arrow.number} is numbered twice` });
+      if (seen.has(arrow.number))
+        ctx.addIssue({ code: 'custom', path: ['arrows', index, 'number'], message: `Arrow ${arrow.number} is numbered twice` });
       seen.add(arrow.number);
       checkRunout(arrow, ctx, ['arrows', index]);
     });

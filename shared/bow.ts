@@ -1,12 +1,5 @@
 import { z } from 'zod';
-import {
-  distanceUnitSchema,
-  measureSchema,
-  nameSchema,
-  optionalMeasureSchema,
-  textSchema,
-  timestampsSchema,
-} from './common';
+import { distanceUnitSchema, measureSchema, nameSchema, optionalMeasureSchema, textSchema, timestampsSchema } from './common';
 import { buildSchema } from './build';
 import { sightInListItemSchema } from './sight-in';
 import { tapeSchema } from './tape';

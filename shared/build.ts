@@ -72,7 +72,13 @@ export const buildDerivedSchema = z.object({
 
 /** A build as the API returns it. */
 export const buildSchema = buildFields
-  .extend({ id: z.number().int(), bowId: z.number().int(), derived: buildDerivedSchema, sightInCount: z.number().int(), addedBy: addedBySchema.optional() })
+  .extend({
+    id: z.number().int(),
+    bowId: z.number().int(),
+    derived: buildDerivedSchema,
+    sightInCount: z.number().int(),
+    addedBy: addedBySchema.optional(),
+  })
   .merge(timestampsSchema);
 
 export type BuildInput = z.infer<typeof buildInputSchema>;

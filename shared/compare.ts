@@ -63,7 +63,12 @@ export const compareQuerySchema = z
   })
   .superRefine((value, ctx) => {
     if (!value.builds || value.builds.length < compareBuildLimits.min) {
-      if (!value.builds) ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['builds'], message: `Choose at least ${compareBuildLimits.min} builds to compare` });
+      if (!value.builds)
+        ctx.addIssue({
+          code: z.ZodIssueCode.custom,
+          path: ['builds'],
+          message: `Choose at least ${compareBuildLimits.min} builds to compare`,
+        });
       return;
     }
     const seen = new Set<number>();
@@ -72,7 +77,11 @@ export const compareQuerySchema = z
       seen.add(id);
     });
     if (value.temperatureC !== undefined && value.altitudeM === undefined) {
-      ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['altitudeM'], message: 'Enter the altitude for a common air (the temperature alone is not enough)' });
+      ctx.addIssue({
+        code: z.ZodIssueCode.custom,
+        path: ['altitudeM'],
+        message: 'Enter the altitude for a common air (the temperature alone is not enough)',
+      });
     }
   });
 

@@ -41,7 +41,11 @@ export const mailListQuerySchema = z.object({
 export const mailParamsSchema = z.object({ id: mailIdSchema });
 export const mailAttachmentParamsSchema = z.object({
   id: mailIdSchema,
-  index: z.coerce.number({ invalid_type_error: 'The attachment number must be a number' }).int().min(0).max(999, 'No message has that many attachments'),
+  index: z.coerce
+    .number({ invalid_type_error: 'The attachment number must be a number' })
+    .int()
+    .min(0)
+    .max(999, 'No message has that many attachments'),
 });
 
 export type MailSummary = z.infer<typeof mailSummarySchema>;

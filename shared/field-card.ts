@@ -31,7 +31,8 @@ const distanceSchema = z
 function distinct(label: string) {
   return (values: number[] | undefined, ctx: z.RefinementCtx) => {
     values?.forEach((value, index) => {
-      if (values.indexOf(value) !== index) ctx.addIssue({ code: z.ZodIssueCode.custom, path: [index], message: `${label} ${value} is listed twice` });
+      if (values.indexOf(value) !== index)
+        ctx.addIssue({ code: z.ZodIssueCode.custom, path: [index], message: `${label} ${value} is listed twice` });
     });
   };
 }

@@ -140,7 +140,10 @@ export const tapeOptionsSchema = z
       step: z
         .number({ invalid_type_error: 'Enter the step as a number' })
         .finite('Enter the step as a number')
-        .refine((step) => step >= 0.25 && Math.abs(5 / step - Math.round(5 / step)) < 1e-9, 'The step must divide 5 evenly (0.5, 1, 2.5 or 5)')
+        .refine(
+          (step) => step >= 0.25 && Math.abs(5 / step - Math.round(5 / step)) < 1e-9,
+          'The step must divide 5 evenly (0.5, 1, 2.5 or 5)',
+        )
         .default(1),
       unit: distanceUnitSchema.optional(),
       widthMm: number('the tape width', 6, 40, ' mm').default(12),
@@ -152,7 +155,8 @@ export const tapeOptionsSchema = z
   )
   .strict()
   .superRefine((tape, context) => {
-    if (!(tape.to > tape.from)) context.addIssue({ code: z.ZodIssueCode.custom, path: ['to'], message: 'The last distance must be beyond the first' });
+    if (!(tape.to > tape.from))
+      context.addIssue({ code: z.ZodIssueCode.custom, path: ['to'], message: 'The last distance must be beyond the first' });
   });
 
 /**
@@ -186,7 +190,11 @@ void modelToMath;
 export const paperSchema = z.enum(['a4', 'letter'], { errorMap: () => ({ message: 'Choose a4 or letter' }) });
 
 const label = (what: string) =>
-  z.string({ invalid_type_error: `Enter the ${what} as text` }).trim().max(60, `Keep the ${what} to 60 characters`).optional();
+  z
+    .string({ invalid_type_error: `Enter the ${what} as text` })
+    .trim()
+    .max(60, `Keep the ${what} to 60 characters`)
+    .optional();
 
 /** Small-print labels on the sheet: bow, build and date, free text; `note` is printed large under the title (e.g. "confirm at the range"). */
 export const sheetLabelsSchema = z
@@ -213,7 +221,10 @@ export const sheetOptionsSchema = z.object(sheetFields, { invalid_type_error: 'E
 
 /** `pinwright tape` input: a fit's input plus the tape options. */
 export const tapeInputSchema = z
-  .object({ ...fitFields, tape: tapeOptionsSchema.optional() }, { required_error: 'Send one JSON object', invalid_type_error: 'Send one JSON object' })
+  .object(
+    { ...fitFields, tape: tapeOptionsSchema.optional() },
+    { required_error: 'Send one JSON object', invalid_type_error: 'Send one JSON object' },
+  )
   .strict()
   .superRefine(oneMarkNeedsSpeed);
 

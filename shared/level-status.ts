@@ -56,9 +56,19 @@ export type LevelResult = (typeof levelResults)[number];
 
 /** What can be logged as changed on a bow. */
 export const bowChangeKinds = [
-  'string', 'cables', 'sight-moved', 'sight-remounted', 'rest', 'peep', 'arrows', 'other',
+  'string',
+  'cables',
+  'sight-moved',
+  'sight-remounted',
+  'rest',
+  'peep',
+  'arrows',
+  'other',
   // Tuning changes (migration 0050): a set-up entry or a paper-tune adjustment logs one of these.
-  'nock-height', 'd-loop', 'cams', 'sight-radius',
+  'nock-height',
+  'd-loop',
+  'cams',
+  'sight-radius',
 ] as const;
 export type BowChangeKind = (typeof bowChangeKinds)[number];
 
@@ -90,7 +100,7 @@ export interface LevelCheckFacts {
   id: number;
   startedAt: Date;
   completedAt: Date | null;
-  steps: ReadonlyArray<{ step: LevelStepKey; result: LevelResult | null }>;
+  steps: readonly { step: LevelStepKey; result: LevelResult | null }[];
 }
 
 /** The fields of a logged change the rule reads. */

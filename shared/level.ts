@@ -1,13 +1,6 @@
 import { z } from 'zod';
 import { distanceUnitSchema, isoDateSchema, maxRecordId, textSchema } from './common';
-import {
-  bowChangeKinds,
-  levelResults,
-  levelStates,
-  levelStepKeys,
-  levelStepNames,
-  type LevelStepKey,
-} from './level-status';
+import { bowChangeKinds, levelResults, levelStates, levelStepKeys, levelStepNames, type LevelStepKey } from './level-status';
 
 /**
  * Level-check schemas: starting and working a check step by step, logging a
@@ -63,11 +56,7 @@ export const stepUpdateSchema = z
   .object({
     step: levelStepKeySchema,
     result: levelResultSchema.nullable(),
-    reading: z
-      .number({ invalid_type_error: 'Reading must be a number' })
-      .finite('Reading must be a number')
-      .nullable()
-      .default(null),
+    reading: z.number({ invalid_type_error: 'Reading must be a number' }).finite('Reading must be a number').nullable().default(null),
     readingUnit: readingUnitSchema.nullable().default(null),
     adjustment: textSchema('Adjustment', adjustmentMaxLength),
   })
@@ -118,7 +107,11 @@ export const checkUpdateSchema = z
     const seen = new Set<string>();
     value.steps?.forEach((step, index) => {
       if (seen.has(step.step)) {
-        ctx.addIssue({ code: z.ZodIssueCode.custom, path: ['steps', index, 'step'], message: `The ${levelStepNames[step.step]} is listed twice` });
+        ctx.addIssue({
+          code: z.ZodIssueCode.custom,
+          path: ['steps', index, 'step'],
+          message: `The ${levelStepNames[step.step]} is listed twice`,
+        });
       }
       seen.add(step.step);
     });
@@ -126,12 +119,19 @@ export const checkUpdateSchema = z
 
 /** Params of /api/checks/:id/steps/:step/photo. */
 export const stepPhotoParamsSchema = z.object({
-  id: z.coerce.number({ invalid_type_error: 'The check id must be a number' }).int('The check id must be a whole number').positive('The check id must be a positive number').max(maxRecordId, 'There is no check with so large an id'),
+  id: z.coerce
+    .number({ invalid_type_error: 'The check id must be a number' })
+    .int('The check id must be a whole number')
+    .positive('The check id must be a positive number')
+    .max(maxRecordId, 'There is no check with so large an id'),
   step: levelStepKeySchema,
 });
 
 export const bowChangeKindSchema = z.enum(bowChangeKinds, {
-  errorMap: () => ({ message: 'Choose what changed: string, cables, sight moved, sight re-mounted, rest, peep, arrows, nock height, D-loop, cams, sight radius or other' }),
+  errorMap: () => ({
+    message:
+      'Choose what changed: string, cables, sight moved, sight re-mounted, rest, peep, arrows, nock height, D-loop, cams, sight radius or other',
+  }),
 });
 
 /** Body of POST /api/bows/:bowId/changes. `changedAt` is a full ISO 8601 timestamp with zone. */

@@ -125,15 +125,23 @@ export function checkMarks(rows: readonly (MarkRowInput | undefined)[], context:
     const distance = parseTyped(row.distance);
     const scaleMm = parseTyped(row.scaleMm);
     if (distance === undefined) return problem('empty', 'distance', 'enter the distance');
-    if (Number.isNaN(distance)) return problem('not-a-number', 'distance', `“${row.distance.trim()}” is not a number; enter the distance in ${unit}`);
+    if (Number.isNaN(distance))
+      return problem('not-a-number', 'distance', `“${row.distance.trim()}” is not a number; enter the distance in ${unit}`);
     if (distance < distanceLimits.min || distance > distanceLimits.max) {
-      return problem('out-of-range', 'distance', `enter a distance between ${distanceLimits.min} and ${distanceLimits.max} ${unit} (not ${show(distance)})`);
+      return problem(
+        'out-of-range',
+        'distance',
+        `enter a distance between ${distanceLimits.min} and ${distanceLimits.max} ${unit} (not ${show(distance)})`,
+      );
     }
     const twin = candidates.find((other) => Math.abs(other.distance - distance) < 1e-9);
-    if (twin) return problem('duplicate', 'distance', `${show(distance)} ${unit} is entered twice (also mark ${twin.row + 1}); each distance once`);
+    if (twin)
+      return problem('duplicate', 'distance', `${show(distance)} ${unit} is entered twice (also mark ${twin.row + 1}); each distance once`);
     if (scaleMm === undefined) return problem('empty', 'scaleMm', 'enter the reading');
-    if (Number.isNaN(scaleMm)) return problem('not-a-number', 'scaleMm', `“${row.scaleMm.trim()}” is not a number; enter the reading in mm`);
-    if (scaleMm < 0 || scaleMm > maxScaleMm) return problem('out-of-range', 'scaleMm', `enter a reading between 0 and ${maxScaleMm} mm (not ${show(scaleMm)})`);
+    if (Number.isNaN(scaleMm))
+      return problem('not-a-number', 'scaleMm', `“${row.scaleMm.trim()}” is not a number; enter the reading in mm`);
+    if (scaleMm < 0 || scaleMm > maxScaleMm)
+      return problem('out-of-range', 'scaleMm', `enter a reading between 0 and ${maxScaleMm} mm (not ${show(scaleMm)})`);
     candidates.push({ row: index, distance, scaleMm });
   });
 

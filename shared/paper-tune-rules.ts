@@ -120,13 +120,15 @@ export const paperTuneRules: readonly PaperTuneRule[] = [
   {
     id: 'drop-away-high',
     applies: (f) => vertical(f.tear) === 'up' && f.rest === 'drop-away',
-    words: () => 'With a drop-away rest a high tail can also be a vane striking the launcher: check that the rest falls in time (its cord) and look for vane marks.',
+    words: () =>
+      'With a drop-away rest a high tail can also be a vane striking the launcher: check that the rest falls in time (its cord) and look for vane marks.',
     source,
   },
   {
     id: 'blade-high',
     applies: (f) => vertical(f.tear) === 'up' && f.rest === 'blade',
-    words: () => 'With a blade rest a high tail can also be a blade too stiff for the arrow, or a vane touching it: look for marks on the blade.',
+    words: () =>
+      'With a blade rest a high tail can also be a blade too stiff for the arrow, or a vane touching it: look for marks on the blade.',
     source,
   },
   {
@@ -175,7 +177,7 @@ export interface Suggestion {
   /** One line: the tear and the main move. */
   headline: string;
   /** The rules that apply, in table order, with their words. */
-  lines: Array<{ ruleId: string; words: string; source: string }>;
+  lines: { ruleId: string; words: string; source: string }[];
 }
 
 /**
@@ -184,7 +186,9 @@ export interface Suggestion {
  *   → 'Move the rest left, toward the riser (less centre shot).'
  */
 export function suggestNext(facts: TuneFacts): Suggestion {
-  const lines = paperTuneRules.filter((rule) => rule.applies(facts)).map((rule) => ({ ruleId: rule.id, words: rule.words(facts), source: rule.source }));
+  const lines = paperTuneRules
+    .filter((rule) => rule.applies(facts))
+    .map((rule) => ({ ruleId: rule.id, words: rule.words(facts), source: rule.source }));
   const v = vertical(facts.tear);
   const h = horizontal(facts.tear);
   const headline =

@@ -50,13 +50,17 @@ export const paperTuneShotInputSchema = z
       .max(12, 'Arrows must be at most 12')
       .default(1),
     note: textSchema('Note', 300),
-    changedBefore: z.enum(tuneAdjustmentKinds, { errorMap: () => ({ message: 'Choose what you changed before this shot' }) }).default('none'),
+    changedBefore: z
+      .enum(tuneAdjustmentKinds, { errorMap: () => ({ message: 'Choose what you changed before this shot' }) })
+      .default('none'),
     changeNote: textSchema('What you changed', 300),
   })
   .superRefine((shot, ctx) => {
     if (shot.tear === 'clean') return;
-    if (shot.lengthMm === null || Number.isNaN(shot.lengthMm)) ctx.addIssue({ code: 'custom', path: ['lengthMm'], message: 'Enter the tear length' });
-    else if (shot.lengthMm <= 0 || shot.lengthMm > 150) ctx.addIssue({ code: 'custom', path: ['lengthMm'], message: 'Tear length must be more than 0 and at most 150 mm' });
+    if (shot.lengthMm === null || Number.isNaN(shot.lengthMm))
+      ctx.addIssue({ code: 'custom', path: ['lengthMm'], message: 'Enter the tear length' });
+    else if (shot.lengthMm <= 0 || shot.lengthMm > 150)
+      ctx.addIssue({ code: 'custom', path: ['lengthMm'], message: 'Tear length must be more than 0 and at most 150 mm' });
   })
   .transform((shot) => (shot.tear === 'clean' ? { ...shot, lengthMm: null } : shot));
 

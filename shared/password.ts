@@ -25,8 +25,7 @@ export const passwordResetSchema = z.object({
 });
 
 /** The one answer to a reset request, whether or not the address has an account. */
-export const forgotAnswer =
-  'If an account uses that address, a link to choose a new password is on its way. It works once, for one hour.';
+export const forgotAnswer = 'If an account uses that address, a link to choose a new password is on its way. It works once, for one hour.';
 
 export const messageResponseSchema = z.object({ message: z.string() });
 

@@ -172,7 +172,14 @@ export const predictResponseSchema = z.object({
   chronographed: z.array(z.object({ buildId: z.number().int(), name: z.string(), massGr: z.number(), speedFps: z.number() })),
   /** The sight-in whose geometry carries the new arrow, or null. */
   sightIn: z
-    .object({ id: z.number().int(), date: z.string(), placeLabel: z.string(), buildName: z.string(), altitudeM: finiteOrNull, temperatureC: finiteOrNull })
+    .object({
+      id: z.number().int(),
+      date: z.string(),
+      placeLabel: z.string(),
+      buildName: z.string(),
+      altitudeM: finiteOrNull,
+      temperatureC: finiteOrNull,
+    })
     .nullable(),
   /** Why there are no marks (no fitted sight-in on the bow), or null. */
   marksMissing: z.string().nullable(),

@@ -115,7 +115,14 @@ export const setupMeasures: Record<SetupMeasureKey, MeasureSpec> = {
     hint: 'Deepest point of the grip to the string at rest.',
     changeKind: 'string',
   },
-  'axle-to-axle': { form: 'length', name: 'Axle-to-axle', minMm: 600, maxMm: 1050, hint: 'Centre of one axle to the other.', changeKind: 'string' },
+  'axle-to-axle': {
+    form: 'length',
+    name: 'Axle-to-axle',
+    minMm: 600,
+    maxMm: 1050,
+    hint: 'Centre of one axle to the other.',
+    changeKind: 'string',
+  },
   'peep-height': {
     form: 'length',
     name: 'Peep height',
@@ -209,7 +216,11 @@ export const setupEntryInputSchema = z
       if (entry.valueMm === null || Number.isNaN(entry.valueMm)) {
         ctx.addIssue({ code: 'custom', path: ['valueMm'], message: `Enter the amount of the ${spec.name.toLowerCase()}` });
       } else if (entry.valueMm <= 0 || entry.valueMm > spec.maxMm) {
-        ctx.addIssue({ code: 'custom', path: ['valueMm'], message: `${spec.name} amount must be more than 0 and at most ${spec.maxMm} mm` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['valueMm'],
+          message: `${spec.name} amount must be more than 0 and at most ${spec.maxMm} mm`,
+        });
       }
     }
   })
@@ -271,7 +282,10 @@ export function entryDiffers(
  * An entry's value in words, in the archer's unit (mm, or inches to 1/100).
  * Example: setupValueWords({ measure: 'cam-timing', valueMm: 1.5, choice: 'top-first' }, 'mm') → 'Top stop touches first by 1.5 mm'
  */
-export function setupValueWords(entry: { measure: SetupMeasureKey; valueMm: number | null; choice: string | null }, unit: 'mm' | 'in'): string {
+export function setupValueWords(
+  entry: { measure: SetupMeasureKey; valueMm: number | null; choice: string | null },
+  unit: 'mm' | 'in',
+): string {
   const spec = setupMeasures[entry.measure];
   const length = (mm: number) => (unit === 'in' ? `${(mm / 25.4).toFixed(3).replace(/0$/, '')} in` : `${Number(mm.toFixed(1))} mm`);
   if (spec.form === 'length') return entry.valueMm === null ? '—' : length(entry.valueMm);

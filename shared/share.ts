@@ -16,7 +16,10 @@ export const inviteValidDays = 7;
 
 /** A token from an e-mailed link: 32 random bytes, base64url (43 characters). */
 export const linkTokenSchema = z
-  .string({ required_error: 'The link is missing its code; open it again from the e-mail', invalid_type_error: 'The link is missing its code; open it again from the e-mail' })
+  .string({
+    required_error: 'The link is missing its code; open it again from the e-mail',
+    invalid_type_error: 'The link is missing its code; open it again from the e-mail',
+  })
   .trim()
   .regex(/^[A-Za-z0-9_-]{43}$/, 'The link is not complete; open it again from the e-mail');
 

@@ -22,10 +22,10 @@ export interface NameableSightIn {
 
 export interface SightInNameOptions {
   /** The bow's builds (to name the sight-in's), or the build name itself. */
-  builds?: ReadonlyArray<{ id: number; name: string }>;
+  builds?: readonly { id: number; name: string }[];
   buildName?: string;
   /** The bow's other sight-ins: the time is added when one of them has the same day. */
-  siblings?: ReadonlyArray<NameableSightIn>;
+  siblings?: readonly NameableSightIn[];
   /** Time zone for the time of day (IANA name); default: the runtime's own. "UTC" is written out. */
   timeZone?: string;
   /** Leave the build out (e.g. in a list already under the build's name). */
@@ -49,8 +49,13 @@ function timeOfDay(iso: string | undefined, timeZone?: string): string {
 }
 
 /** The parts of the name: the day (with the time when needed), the place, the build and "(2 of 2)" for twins of one minute. */
-export function sightInNameParts(sightIn: NameableSightIn, options: SightInNameOptions = {}): { day: string; place: string; build: string; ordinal: string } {
-  const sameDay = (options.siblings ?? []).filter((other) => other.id !== sightIn.id && other.date.slice(0, 10) === sightIn.date.slice(0, 10));
+export function sightInNameParts(
+  sightIn: NameableSightIn,
+  options: SightInNameOptions = {},
+): { day: string; place: string; build: string; ordinal: string } {
+  const sameDay = (options.siblings ?? []).filter(
+    (other) => other.id !== sightIn.id && other.date.slice(0, 10) === sightIn.date.slice(0, 10),
+  );
   let day = sightInDay(sightIn.date);
   if (sameDay.length > 0) {
     const time = timeOfDay(sightIn.createdAt, options.timeZone);

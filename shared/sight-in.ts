@@ -1,14 +1,6 @@
 import { z } from 'zod';
 import { addedBySchema } from './added-by';
-import {
-  countSchema,
-  distanceUnitSchema,
-  isoDateSchema,
-  measureSchema,
-  refIdSchema,
-  textSchema,
-  timestampsSchema,
-} from './common';
+import { countSchema, distanceUnitSchema, isoDateSchema, measureSchema, refIdSchema, textSchema, timestampsSchema } from './common';
 import { distanceToMetres } from '@/math/units/convert';
 import { distanceLimits, sightModelSchema } from './fit';
 

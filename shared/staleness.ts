@@ -40,7 +40,17 @@ import { bowChangeLabels } from './level-status';
 
 /** The change kinds that move the point of impact. */
 export const impactChangeKinds: readonly BowChangeKind[] = [
-  'string', 'cables', 'sight-moved', 'sight-remounted', 'rest', 'peep', 'arrows', 'nock-height', 'd-loop', 'cams', 'sight-radius',
+  'string',
+  'cables',
+  'sight-moved',
+  'sight-remounted',
+  'rest',
+  'peep',
+  'arrows',
+  'nock-height',
+  'd-loop',
+  'cams',
+  'sight-radius',
 ];
 
 /** True when a logged change of this kind makes earlier marks need confirming. */
@@ -81,7 +91,7 @@ export interface Staleness {
   /** When the first change that counts happened (ISO), or null. */
   since: string | null;
   /** The changes that count, oldest first. */
-  changeIds: Array<number | string>;
+  changeIds: (number | string)[];
 }
 
 export const currentStaleness: Staleness = { state: 'current', reason: '', since: null, changeIds: [] };

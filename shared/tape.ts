@@ -63,7 +63,8 @@ export const tapeSchema = layoutFields
 const queryNumber = (schema: z.ZodTypeAny) =>
   z.preprocess((raw) => (raw === '' || raw === undefined ? undefined : Number(raw)), schema.optional());
 const queryBoolean = z.preprocess(
-  (raw) => (raw === undefined || raw === '' ? undefined : raw === 'true' || raw === '1' ? true : raw === 'false' || raw === '0' ? false : raw),
+  (raw) =>
+    raw === undefined || raw === '' ? undefined : raw === 'true' || raw === '1' ? true : raw === 'false' || raw === '0' ? false : raw,
   z.boolean({ invalid_type_error: 'Mirror must be true or false' }).optional(),
 );
 
@@ -75,7 +76,13 @@ const queryBoolean = z.preprocess(
  */
 export const tapeQuerySchema = z
   .object({
-    tape: queryNumber(z.number({ invalid_type_error: 'The tape id must be a number' }).int('The tape id must be a whole number').positive('The tape id must be a positive number').max(maxRecordId, 'There is no tape with so large an id')),
+    tape: queryNumber(
+      z
+        .number({ invalid_type_error: 'The tape id must be a number' })
+        .int('The tape id must be a whole number')
+        .positive('The tape id must be a positive number')
+        .max(maxRecordId, 'There is no tape with so large an id'),
+    ),
     from: queryNumber(measureSchema('From distance', '', distanceLimits.min, distanceLimits.max)),
     to: queryNumber(measureSchema('To distance', '', distanceLimits.min, distanceLimits.max)),
     step: queryNumber(tickStepSchema),
@@ -98,7 +105,9 @@ export const tapeQuerySchema = z
  * Example: tapeOptionsOf({ fromDistance: 20, toDistance: 80, step: 1, unit: 'yd', orientation: 'down', widthMm: 8, mirror: false })
  *   → { from: 20, to: 80, step: 1, unit: 'yd', orientation: 'down', widthMm: 8, mirror: false }
  */
-export function tapeOptionsOf(layout: Pick<TapeLayout, 'fromDistance' | 'toDistance' | 'step' | 'unit' | 'orientation' | 'widthMm' | 'mirror'>): TapeOptionsInput {
+export function tapeOptionsOf(
+  layout: Pick<TapeLayout, 'fromDistance' | 'toDistance' | 'step' | 'unit' | 'orientation' | 'widthMm' | 'mirror'>,
+): TapeOptionsInput {
   return {
     from: layout.fromDistance,
     to: layout.toDistance,

@@ -143,7 +143,19 @@ export function fromStored(stored: number, quantity: Quantity, units: UnitsLike)
 
 /** Unit words an archer may type after a number, per quantity, → the symbol they mean. */
 const typedUnits: Record<Quantity, Record<string, string>> = {
-  length: { mm: 'mm', millimetre: 'mm', millimetres: 'mm', millimeter: 'mm', millimeters: 'mm', cm: 'cm', in: 'in', inch: 'in', inches: 'in', '"': 'in', '″': 'in' },
+  length: {
+    mm: 'mm',
+    millimetre: 'mm',
+    millimetres: 'mm',
+    millimeter: 'mm',
+    millimeters: 'mm',
+    cm: 'cm',
+    in: 'in',
+    inch: 'in',
+    inches: 'in',
+    '"': 'in',
+    '″': 'in',
+  },
   altitude: { m: 'm', metre: 'm', metres: 'm', meter: 'm', meters: 'm', ft: 'ft', foot: 'ft', feet: 'ft', "'": 'ft', '′': 'ft' },
   temperature: { c: '°C', '°c': '°C', '°': '', f: '°F', '°f': '°F', k: 'K' },
   speed: { fps: 'fps', 'ft/s': 'fps', 'm/s': 'm/s', mps: 'm/s' },
@@ -217,7 +229,8 @@ export function formatQuantity(stored: number | null | undefined, quantity: Quan
   if (stored === null || stored === undefined || !Number.isFinite(stored)) return '—';
   const symbol = shownUnit(quantity, units);
   const shown = fromStoredTo(stored, symbol);
-  const places = digits ?? ({ in: 2, mm: 0, ft: 0, m: 0, '°F': 0, '°C': 0, fps: 0, 'm/s': 1, gr: 0, g: 1 } as Record<string, number>)[symbol];
+  const places =
+    digits ?? ({ in: 2, mm: 0, ft: 0, m: 0, '°F': 0, '°C': 0, fps: 0, 'm/s': 1, gr: 0, g: 1 } as Record<string, number>)[symbol];
   return `${shown.toFixed(places)} ${symbol}`;
 }
 
@@ -236,7 +249,8 @@ const limitDigits: Record<string, number> = { in: 2, mm: 0, ft: 0, m: 0, '°F': 
  * Example: messageInUnits('Draw length must be at least 500 mm', { lengthUnit: 'in' }) → 'Draw length must be at least 19.69 in'
  */
 export function messageInUnits(message: string, units: UnitsLike, only?: readonly Quantity[]): string {
-  return message.replace(/(at least|at most|between)?(\s*)(-?\d+(?:\.\d+)?)(?:( and )(-?\d+(?:\.\d+)?))? ?(mm|m|°C|fps|gr)(?![\w/])/g,
+  return message.replace(
+    /(at least|at most|between)?(\s*)(-?\d+(?:\.\d+)?)(?:( and )(-?\d+(?:\.\d+)?))? ?(mm|m|°C|fps|gr)(?![\w/])/g,
     (whole, bound: string | undefined, space: string, first: string, and: string | undefined, second: string | undefined, unit: string) => {
       const quantity = messageUnits[unit];
       if (only && !only.includes(quantity)) return whole;
@@ -252,9 +266,11 @@ export function messageInUnits(message: string, units: UnitsLike, only?: readonl
         return plain(whole * step, digits);
       };
       const lowWay = bound === 'at most' ? 'down' : bound ? 'up' : 'near';
-      if (second !== undefined && and) return `${bound ?? ''}${space}${round(Number(first), 'up')}${and}${round(Number(second), 'down')} ${symbol}`;
+      if (second !== undefined && and)
+        return `${bound ?? ''}${space}${round(Number(first), 'up')}${and}${round(Number(second), 'down')} ${symbol}`;
       return `${bound ?? ''}${space}${round(Number(first), lowWay)} ${symbol}`;
-    });
+    },
+  );
 }
 
 // ---- Dates as typed ----
@@ -268,15 +284,33 @@ export type DateOrder = 'DMY' | 'MDY' | 'YMD';
  */
 export function localeDateOrder(locale?: string): DateOrder {
   try {
-    const parts = new Intl.DateTimeFormat(locale, { year: 'numeric', month: '2-digit', day: '2-digit' }).formatToParts(new Date(Date.UTC(2026, 11, 24)));
-    const order = parts.filter((part) => part.type === 'day' || part.type === 'month' || part.type === 'year').map((part) => part.type[0].toUpperCase()).join('');
+    const parts = new Intl.DateTimeFormat(locale, { year: 'numeric', month: '2-digit', day: '2-digit' }).formatToParts(
+      new Date(Date.UTC(2026, 11, 24)),
+    );
+    const order = parts
+      .filter((part) => part.type === 'day' || part.type === 'month' || part.type === 'year')
+      .map((part) => part.type[0].toUpperCase())
+      .join('');
     return order === 'MDY' || order === 'YMD' ? order : 'DMY';
   } catch {
     return 'DMY';
   }
 }
 
-const monthNames = ['January', 'February', 'March', 'April', 'May', 'June', 'July', 'August', 'September', 'October', 'November', 'December'];
+const monthNames = [
+  'January',
+  'February',
+  'March',
+  'April',
+  'May',
+  'June',
+  'July',
+  'August',
+  'September',
+  'October',
+  'November',
+  'December',
+];
 const pad = (value: number) => String(value).padStart(2, '0');
 
 /** A real calendar date → YYYY-MM-DD, else null. */
@@ -324,7 +358,10 @@ export function parseDateText(text: string | null | undefined, order: DateOrder 
       return { error: `${trimmed} could be ${dateWords(dayFirst)} or ${dateWords(monthFirst)}: enter it as YYYY-MM-DD or pick it` };
     }
     const read = order === 'MDY' ? monthFirst : dayFirst;
-    return { iso: read, note: `Read as ${dateWords(read)} (${order === 'MDY' ? 'month' : 'day'} first); if you meant ${dateWords(order === 'MDY' ? dayFirst : monthFirst)}, enter it as YYYY-MM-DD` };
+    return {
+      iso: read,
+      note: `Read as ${dateWords(read)} (${order === 'MDY' ? 'month' : 'day'} first); if you meant ${dateWords(order === 'MDY' ? dayFirst : monthFirst)}, enter it as YYYY-MM-DD`,
+    };
   }
   return { iso: (dayFirst ?? monthFirst) as string };
 }
@@ -336,6 +373,7 @@ export function parseDateText(text: string | null | undefined, order: DateOrder 
  */
 export function airInUnits(air: { altitudeM: number | null; temperatureC: number | null }, units: UnitsLike): string {
   const altitude = air.altitudeM === null ? 'sea level (assumed)' : formatQuantity(air.altitudeM, 'altitude', units);
-  const temperature = air.temperatureC === null ? 'standard temperature' : formatQuantity(air.temperatureC, 'temperature', units).replace(/^-/, '−');
+  const temperature =
+    air.temperatureC === null ? 'standard temperature' : formatQuantity(air.temperatureC, 'temperature', units).replace(/^-/, '−');
   return `${altitude}, ${temperature}`;
 }

@@ -32,7 +32,11 @@ export function AccountScreen() {
       <Card>
         <AccountDetails user={me.data} />
       </Card>
-      <SectionHeading level={2} title="Units" description="How Pinwright shows and takes measurements. Records are kept in one unit underneath, so changing these changes no record." />
+      <SectionHeading
+        level={2}
+        title="Units"
+        description="How Pinwright shows and takes measurements. Records are kept in one unit underneath, so changing these changes no record."
+      />
       <Card>
         <UnitChoices user={me.data} />
       </Card>

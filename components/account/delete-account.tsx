@@ -41,8 +41,8 @@ export function DeleteAccount() {
     return (
       <View style={styles.group}>
         <Text tone="soft">
-          Deletes your bows and every record on them (builds, sight-ins, tapes, level checks, photos) and ends your shares. Marks and checks you added to
-          other archers’ bows stay with them, shown as by “a former account”. Download everything first if you want a copy.
+          Deletes your bows and every record on them (builds, sight-ins, tapes, level checks, photos) and ends your shares. Marks and checks
+          you added to other archers’ bows stay with them, shown as by “a former account”. Download everything first if you want a copy.
         </Text>
         <View style={styles.row}>
           <Button label="Delete my account…" variant="danger" onPress={() => setAsking(true)} testID="account-delete-start" />
@@ -66,7 +66,14 @@ export function DeleteAccount() {
         onSubmitEditing={confirm}
       />
       <View style={styles.row}>
-        <Button label="Delete everything" pendingLabel="Deleting…" pending={remove.isPending} variant="danger" onPress={confirm} testID="account-delete-confirm-button" />
+        <Button
+          label="Delete everything"
+          pendingLabel="Deleting…"
+          pending={remove.isPending}
+          variant="danger"
+          onPress={confirm}
+          testID="account-delete-confirm-button"
+        />
         <Button
           label="Keep my account"
           variant="secondary"

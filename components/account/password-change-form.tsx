@@ -63,7 +63,13 @@ export function PasswordChangeForm() {
         onSubmitEditing={submit}
       />
       <View style={styles.actions}>
-        <Button label="Change the password" pendingLabel="Changing…" pending={change.isPending} onPress={submit} testID="password-change-save" />
+        <Button
+          label="Change the password"
+          pendingLabel="Changing…"
+          pending={change.isPending}
+          onPress={submit}
+          testID="password-change-save"
+        />
       </View>
     </View>
   );

@@ -109,7 +109,12 @@ export function AccountRow({ account, selfId }: AccountRowProps) {
       {!self && !asking ? (
         <View style={styles.row}>
           {account.disabled ? (
-            <Button label="Enable the account" variant="secondary" pending={update.isPending} onPress={() => update.mutate({ id: account.id, update: { disabled: false } })} />
+            <Button
+              label="Enable the account"
+              variant="secondary"
+              pending={update.isPending}
+              onPress={() => update.mutate({ id: account.id, update: { disabled: false } })}
+            />
           ) : (
             <Button label="Disable the account" variant="danger" onPress={() => setAsking(true)} testID={`disable-${account.id}`} />
           )}

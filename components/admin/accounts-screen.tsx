@@ -38,7 +38,11 @@ export function AccountsScreen() {
   return (
     <Screen testID="admin-accounts">
       <ScreenTitle name="Accounts" />
-      <SectionHeading level={1} title="Accounts" description="Everyone with a Pinwright account. Role changes take effect on their next request." />
+      <SectionHeading
+        level={1}
+        title="Accounts"
+        description="Everyone with a Pinwright account. Role changes take effect on their next request."
+      />
       <AdminTabs current="accounts" />
       <View style={[styles.filters, wide && styles.filtersWide]}>
         <View style={wide && styles.searchWide}>
@@ -66,7 +70,9 @@ export function AccountsScreen() {
         />
       </View>
       {accounts.isPending ? <LoadingView label="Loading the accounts…" /> : null}
-      {accounts.isError ? <ErrorView title="The accounts could not be loaded" error={accounts.error} onRetry={() => accounts.refetch()} /> : null}
+      {accounts.isError ? (
+        <ErrorView title="The accounts could not be loaded" error={accounts.error} onRetry={() => accounts.refetch()} />
+      ) : null}
       {accounts.data ? (
         <>
           <Text tone="soft">{`${accounts.data.total} account${accounts.data.total === 1 ? '' : 's'}${q.trim() ? ` matching “${q.trim()}”` : ''}`}</Text>

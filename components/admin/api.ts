@@ -40,7 +40,8 @@ const accountResponse = z.object({ account: adminAccountSchema.partial({ created
 export function useUpdateAccount() {
   const queryClient = useQueryClient();
   return useMutation<Partial<AdminAccount>, ApiError, { id: number; update: AccountUpdate }>({
-    mutationFn: async ({ id, update }) => (await apiFetch(`/api/admin/accounts/${id}`, { method: 'PATCH', body: update, schema: accountResponse })).account,
+    mutationFn: async ({ id, update }) =>
+      (await apiFetch(`/api/admin/accounts/${id}`, { method: 'PATCH', body: update, schema: accountResponse })).account,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: adminKeys.all }),
   });
 }

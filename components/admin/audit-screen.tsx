@@ -54,14 +54,21 @@ export function AdminAuditScreen() {
     const { [key]: _gone, ...rest } = filters;
     setFilters(rest);
   };
-  const kindOptions = [{ value: 'all', label: 'All kinds' }, ...(audit.data?.kinds ?? []).map((kind) => ({ value: kind, label: kindWord(kind) }))];
+  const kindOptions = [
+    { value: 'all', label: 'All kinds' },
+    ...(audit.data?.kinds ?? []).map((kind) => ({ value: kind, label: kindWord(kind) })),
+  ];
   const bowName = audit.data?.filters?.bow?.nickname ?? names.bow;
   const accountName = audit.data?.filters?.account?.name ?? names.account ?? 'a former account';
 
   return (
     <Screen testID="admin-audit">
       <ScreenTitle name="Audit log" />
-      <SectionHeading level={1} title="Audit log" description="Newest first: what technicians did on shared bows, every share, and every account change." />
+      <SectionHeading
+        level={1}
+        title="Audit log"
+        description="Newest first: what technicians did on shared bows, every share, and every account change."
+      />
       <AdminTabs current="audit" />
       <Card style={styles.filters}>
         <SegmentedControl<string>
@@ -74,10 +81,22 @@ export function AdminAuditScreen() {
         {filters.bowId || filters.accountId ? (
           <View style={styles.active} testID="audit-active-filters">
             {filters.bowId ? (
-              <Button label={`Bow: ${bowName ?? filters.bowId} ✕`} variant="secondary" accessibilityLabel={`Stop showing only the bow ${bowName ?? ''}`} onPress={() => clear('bowId')} testID="audit-clear-bow" />
+              <Button
+                label={`Bow: ${bowName ?? filters.bowId} ✕`}
+                variant="secondary"
+                accessibilityLabel={`Stop showing only the bow ${bowName ?? ''}`}
+                onPress={() => clear('bowId')}
+                testID="audit-clear-bow"
+              />
             ) : null}
             {filters.accountId ? (
-              <Button label={`Account: ${accountName} ✕`} variant="secondary" accessibilityLabel={`Stop showing only ${accountName}`} onPress={() => clear('accountId')} testID="audit-clear-account" />
+              <Button
+                label={`Account: ${accountName} ✕`}
+                variant="secondary"
+                accessibilityLabel={`Stop showing only ${accountName}`}
+                onPress={() => clear('accountId')}
+                testID="audit-clear-account"
+              />
             ) : null}
           </View>
         ) : (
@@ -88,14 +107,22 @@ export function AdminAuditScreen() {
       </Card>
       {audit.isPending ? <LoadingView label="Loading the log…" /> : null}
       {audit.isError ? <ErrorView title="The log could not be loaded" error={audit.error} onRetry={() => audit.refetch()} /> : null}
-      {audit.data && audit.data.entries.length === 0 ? <Text tone="soft">Nothing has been recorded{filters.bowId || filters.accountId || filters.kind ? ' that matches' : ' yet'}.</Text> : null}
+      {audit.data && audit.data.entries.length === 0 ? (
+        <Text tone="soft">Nothing has been recorded{filters.bowId || filters.accountId || filters.kind ? ' that matches' : ' yet'}.</Text>
+      ) : null}
       {audit.data ? (
         <>
-          <Text variant="small" tone="soft" testID="audit-total">{`${audit.data.total} ${audit.data.total === 1 ? 'entry' : 'entries'}`}</Text>
+          <Text
+            variant="small"
+            tone="soft"
+            testID="audit-total"
+          >{`${audit.data.total} ${audit.data.total === 1 ? 'entry' : 'entries'}`}</Text>
           <AuditList
             entries={audit.data.entries}
             showBow
-            onFilter={({ bow, account }) => narrow(bow ? { bowId: bow.id } : { accountId: account!.id }, bow ? { bow: bow.nickname } : { account: account!.name })}
+            onFilter={({ bow, account }) =>
+              narrow(bow ? { bowId: bow.id } : { accountId: account!.id }, bow ? { bow: bow.nickname } : { account: account!.name })
+            }
           />
         </>
       ) : null}

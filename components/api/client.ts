@@ -66,12 +66,9 @@ function stringRecord(value: unknown): Record<string, string> {
 /** Builds an ApiError from a failed response's status and (maybe) JSON body. */
 function errorFrom(status: number, payload: unknown): ApiError {
   const error = (payload as { error?: { code?: unknown; message?: unknown; fields?: unknown } } | null)?.error;
-  const code =
-    typeof error?.code === 'string' ? error.code : (statusCodes[status] ?? (status >= 500 ? 'server_error' : 'error'));
+  const code = typeof error?.code === 'string' ? error.code : (statusCodes[status] ?? (status >= 500 ? 'server_error' : 'error'));
   const message =
-    typeof error?.message === 'string' && error.message
-      ? error.message
-      : (statusMessages[code] ?? `The request failed (HTTP ${status}).`);
+    typeof error?.message === 'string' && error.message ? error.message : (statusMessages[code] ?? `The request failed (HTTP ${status}).`);
   return new ApiError(status, code, message, stringRecord(error?.fields));
 }
 

@@ -26,7 +26,8 @@ export function useArrowSets(buildId: number | undefined) {
 export function useAddArrowSet(buildId: number) {
   const queryClient = useQueryClient();
   return useMutation<ArrowSet, ApiError, ArrowSetInput>({
-    mutationFn: async (input) => (await apiFetch(`/api/builds/${buildId}/arrow-sets`, { method: 'POST', body: input, schema: setResponse })).set,
+    mutationFn: async (input) =>
+      (await apiFetch(`/api/builds/${buildId}/arrow-sets`, { method: 'POST', body: input, schema: setResponse })).set,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: arrowSetKeys.ofBuild(buildId) }),
   });
 }
@@ -35,7 +36,8 @@ export function useAddArrowSet(buildId: number) {
 export function useUpdateArrow(buildId: number) {
   const queryClient = useQueryClient();
   return useMutation<ArrowSet, ApiError, { arrowId: number; update: ArrowUpdate }>({
-    mutationFn: async ({ arrowId, update }) => (await apiFetch(`/api/arrows/${arrowId}`, { method: 'PATCH', body: update, schema: setResponse })).set,
+    mutationFn: async ({ arrowId, update }) =>
+      (await apiFetch(`/api/arrows/${arrowId}`, { method: 'PATCH', body: update, schema: setResponse })).set,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: arrowSetKeys.ofBuild(buildId) }),
   });
 }

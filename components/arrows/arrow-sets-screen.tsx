@@ -29,7 +29,8 @@ import { fromStored, shownUnit, type UnitsLike } from '@/shared/units';
 /** Decimals for arrow weights: 0.1 gr, 0.01 g (a grain is about 0.065 g). */
 const massDigits = (units: UnitsLike) => (shownUnit('mass', units) === 'g' ? 2 : 1);
 /** A weight stored in grains, in the archer's mass unit: "500.2 gr" or "32.41 g". */
-const gr = (value: number, units: UnitsLike) => `${Number(fromStored(value, 'mass', units).toFixed(massDigits(units)))} ${shownUnit('mass', units)}`;
+const gr = (value: number, units: UnitsLike) =>
+  `${Number(fromStored(value, 'mass', units).toFixed(massDigits(units)))} ${shownUnit('mass', units)}`;
 /** "+0.4 gr", "−0.3 gr", "±0 gr" (rounded first, so −0.04 gr reads ±0). */
 const signedGr = (value: number, units: UnitsLike) => {
   const rounded = Number(fromStored(value, 'mass', units).toFixed(massDigits(units)));
@@ -48,7 +49,10 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
   const update = useUpdateArrow(set.buildId);
   const flier = useAddFlier(set.buildId);
   const units = useUnits();
-  const stats = arrowSetStats(set.arrows.filter((a) => a.status !== 'retired'), set.toleranceGr);
+  const stats = arrowSetStats(
+    set.arrows.filter((a) => a.status !== 'retired'),
+    set.toleranceGr,
+  );
   const check = buildWeightCheck(stats.medianGr, set.buildTotalGr, set.toleranceGr);
   const flagOf = (arrow: Arrow) => stats.flags.find((flag) => flag.number === arrow.number);
   const sightIns = bow.sightIns.filter((s) => s.buildId === set.buildId);
@@ -57,7 +61,8 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
     <View style={styles.card} testID={`arrow-set-${set.id}`}>
       <Text variant="title">{set.name}</Text>
       <Text variant="small" tone="soft">
-        Tolerance ±{gr(set.toleranceGr, units)} around the median{set.byTechnician ? ` · added by ${set.addedBy.name}` : ''} · {formatDay(set.createdAt)}
+        Tolerance ±{gr(set.toleranceGr, units)} around the median{set.byTechnician ? ` · added by ${set.addedBy.name}` : ''} ·{' '}
+        {formatDay(set.createdAt)}
       </Text>
       <View style={styles.figures}>
         <Figure label="Median" value={stats.medianGr === null ? '—' : gr(stats.medianGr, units)} testID={`set-${set.id}-median`} />
@@ -71,7 +76,8 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
         </Text>
       ) : null}
       <Text variant="caption" tone="soft">
-        Retired arrows are left out of the figures. ±{gr(defaultToleranceGr, units)} is the usual default (common practice, no published source).
+        Retired arrows are left out of the figures. ±{gr(defaultToleranceGr, units)} is the usual default (common practice, no published
+        source).
       </Text>
       <View accessibilityLabel={`Arrows of ${set.name}`}>
         {set.arrows.map((arrow) => {
@@ -87,7 +93,12 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
                 <Text variant="small" style={styles.off}>
                   {off === null ? '' : signedGr(off, units)}
                 </Text>
-                <Text variant="label" tone={flag ? 'failed' : 'verified'} style={styles.flag} testID={`arrow-${set.id}-${arrow.number}-flag`}>
+                <Text
+                  variant="label"
+                  tone={flag ? 'failed' : 'verified'}
+                  style={styles.flag}
+                  testID={`arrow-${set.id}-${arrow.number}-flag`}
+                >
                   {flag ? (flag.side === 'heavy' ? 'Heavy' : 'Light') : arrow.status === 'retired' ? '—' : 'In'}
                 </Text>
               </View>
@@ -97,7 +108,12 @@ function SetCard({ set, bow, canChange, canAdd }: { set: ArrowSet; bow: BowDetai
                 {arrow.note ? ` · ${arrow.note}` : ''}
               </Text>
               {canChange && arrow.status !== 'retired' ? (
-                <Button label="Retire" variant="quiet" onPress={() => update.mutate({ arrowId: arrow.id, update: { status: 'retired' } })} testID={`retire-${set.id}-${arrow.number}`} />
+                <Button
+                  label="Retire"
+                  variant="quiet"
+                  onPress={() => update.mutate({ arrowId: arrow.id, update: { status: 'retired' } })}
+                  testID={`retire-${set.id}-${arrow.number}`}
+                />
               ) : null}
               {canAdd && latestSightIn && !arrow.fliers.some((f) => f.sightInId === latestSightIn.id) ? (
                 <Button
@@ -136,7 +152,7 @@ function Figure({ label, value, testID }: { label: string; value: string; testID
   );
 }
 
-const spinOptions: Array<{ value: SpinKind; label: string }> = [
+const spinOptions: { value: SpinKind; label: string }[] = [
   { value: 'none', label: 'Not spun' },
   { value: 'thou', label: 'Thousandths (in)' },
   { value: 'mm', label: 'mm' },
@@ -161,7 +177,16 @@ function NewSetForm({ buildId, onDone }: { buildId: number; onDone: () => void }
   const submit = () => {
     const arrows = rows.map((row, index) => {
       const spinText = row.spin.trim().toLowerCase();
-      const kind: SpinKind = spinKind === 'pass' ? (spinText === 'fail' || spinText === 'f' ? 'fail' : spinText === '' ? 'none' : 'pass') : spinText === '' ? 'none' : spinKind;
+      const kind: SpinKind =
+        spinKind === 'pass'
+          ? spinText === 'fail' || spinText === 'f'
+            ? 'fail'
+            : spinText === ''
+              ? 'none'
+              : 'pass'
+          : spinText === ''
+            ? 'none'
+            : spinKind;
       return {
         number: index + 1,
         weightGr: quantityTextToStored(row.weight, 'mass', units),
@@ -177,13 +202,17 @@ function NewSetForm({ buildId, onDone }: { buildId: number; onDone: () => void }
       for (const issue of parsed.error.issues) {
         const key = issue.path.join('.');
         const message = messageForUnits(issue.message, units, ['mass']);
-        if (!next[key]) next[key] = issue.path[0] === 'arrows' && typeof issue.path[1] === 'number' ? `Arrow ${issue.path[1] + 1}: ${message}` : message;
+        if (!next[key])
+          next[key] = issue.path[0] === 'arrows' && typeof issue.path[1] === 'number' ? `Arrow ${issue.path[1] + 1}: ${message}` : message;
       }
       setErrors(next);
       return;
     }
     setErrors({});
-    add.mutate(parsed.data, { onSuccess: onDone, onError: (error) => setErrors({ ...error.fields, form: Object.keys(error.fields).length ? '' : error.message }) });
+    add.mutate(parsed.data, {
+      onSuccess: onDone,
+      onError: (error) => setErrors({ ...error.fields, form: Object.keys(error.fields).length ? '' : error.message }),
+    });
   };
   const rowError = (index: number, field: string) => errors[`arrows.${index}.${field}`];
   const listed = Object.entries(errors).filter(([key, value]) => key !== 'form' && value);
@@ -195,17 +224,41 @@ function NewSetForm({ buildId, onDone }: { buildId: number; onDone: () => void }
           <TextField label="Set name" value={name} onChangeText={setName} error={errors.name} testID="set-name" />
         </View>
         <View style={styles.cell}>
-          <TextField label={`Tolerance (${massUnit})`} hint="± around the median" numeric unit={massUnit} value={tolerance} onChangeText={setTolerance} error={errors.toleranceGr} testID="set-tolerance" />
+          <TextField
+            label={`Tolerance (${massUnit})`}
+            hint="± around the median"
+            numeric
+            unit={massUnit}
+            value={tolerance}
+            onChangeText={setTolerance}
+            error={errors.toleranceGr}
+            testID="set-tolerance"
+          />
         </View>
       </View>
-      <SegmentedControl label="Spin check given as" options={spinOptions} value={spinKind} onChange={setSpinKind} optionBasis={120} testID="set-spin-kind" />
+      <SegmentedControl
+        label="Spin check given as"
+        options={spinOptions}
+        value={spinKind}
+        onChange={setSpinKind}
+        optionBasis={120}
+        testID="set-spin-kind"
+      />
       {rows.map((row, index) => (
         <View key={index} style={styles.row} testID={`new-arrow-${index + 1}`}>
           <Text variant="label" style={styles.rowNumber}>
             #{index + 1}
           </Text>
           <View style={styles.cell}>
-            <TextField label={`Arrow ${index + 1} weight (${massUnit})`} numeric unit={massUnit} value={row.weight} onChangeText={(weight) => setRow(index, { weight })} error={rowError(index, 'weightGr')} testID={`arrow-weight-${index + 1}`} />
+            <TextField
+              label={`Arrow ${index + 1} weight (${massUnit})`}
+              numeric
+              unit={massUnit}
+              value={row.weight}
+              onChangeText={(weight) => setRow(index, { weight })}
+              error={rowError(index, 'weightGr')}
+              testID={`arrow-weight-${index + 1}`}
+            />
           </View>
           {spinKind !== 'none' ? (
             <View style={styles.cell}>
@@ -219,12 +272,25 @@ function NewSetForm({ buildId, onDone }: { buildId: number; onDone: () => void }
             </View>
           ) : null}
           <View style={styles.cellWide}>
-            <TextField label="Nock or vane note" value={row.note} onChangeText={(note) => setRow(index, { note })} error={rowError(index, 'note')} testID={`arrow-note-${index + 1}`} />
+            <TextField
+              label="Nock or vane note"
+              value={row.note}
+              onChangeText={(note) => setRow(index, { note })}
+              error={rowError(index, 'note')}
+              testID={`arrow-note-${index + 1}`}
+            />
           </View>
         </View>
       ))}
       <View style={styles.row}>
-        <Button label="Add an arrow" icon={PlusIcon} variant="secondary" disabled={rows.length >= 48} onPress={() => setRows((all) => [...all, ...emptyRows(1)])} testID="add-arrow-row" />
+        <Button
+          label="Add an arrow"
+          icon={PlusIcon}
+          variant="secondary"
+          disabled={rows.length >= 48}
+          onPress={() => setRows((all) => [...all, ...emptyRows(1)])}
+          testID="add-arrow-row"
+        />
         {rows.length > 1 ? <Button label="Remove the last" variant="quiet" onPress={() => setRows((all) => all.slice(0, -1))} /> : null}
       </View>
       {listed.length > 0 || errors.form ? (
@@ -258,7 +324,12 @@ export function ArrowSetsScreen({ buildId }: { buildId: number }) {
     return (
       <>
         <ScreenTitle name="Arrow sets" />
-        <ErrorView title="The arrow sets could not be loaded" error={failed} onRetry={() => Promise.all([build.refetch(), sets.refetch()])} retrying={build.isFetching || sets.isFetching} />
+        <ErrorView
+          title="The arrow sets could not be loaded"
+          error={failed}
+          onRetry={() => Promise.all([build.refetch(), sets.refetch()])}
+          retrying={build.isFetching || sets.isFetching}
+        />
       </>
     );
   }
@@ -295,7 +366,14 @@ export function ArrowSetsScreen({ buildId }: { buildId: number }) {
 }
 
 const styles = StyleSheet.create({
-  card: { gap: space.md, padding: space.lg, borderRadius: radii.lg, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line },
+  card: {
+    gap: space.md,
+    padding: space.lg,
+    borderRadius: radii.lg,
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+  },
   figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xl },
   figure: { gap: space.xxs },
   arrowRow: {

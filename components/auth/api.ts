@@ -66,8 +66,7 @@ export function useMe() {
 export function useSignIn() {
   const queryClient = useQueryClient();
   return useMutation<User, ApiError, SignInInput>({
-    mutationFn: async (input) =>
-      (await apiFetch('/api/auth/sign-in', { method: 'POST', body: input, schema: userResponse })).user,
+    mutationFn: async (input) => (await apiFetch('/api/auth/sign-in', { method: 'POST', body: input, schema: userResponse })).user,
     onSuccess: (user) => {
       // A new sign-in replaces the sign-in session an offline sign-out meant to end.
       storage()?.removeItem(pendingSignOutKey);
@@ -83,8 +82,7 @@ export function useSignIn() {
 export function useSignUp() {
   const queryClient = useQueryClient();
   return useMutation<User, ApiError, SignUpInput>({
-    mutationFn: async (input) =>
-      (await apiFetch('/api/auth/sign-up', { method: 'POST', body: input, schema: userResponse })).user,
+    mutationFn: async (input) => (await apiFetch('/api/auth/sign-up', { method: 'POST', body: input, schema: userResponse })).user,
     onSuccess: (user) => {
       // A new sign-in replaces the sign-in session an offline sign-out meant to end.
       storage()?.removeItem(pendingSignOutKey);

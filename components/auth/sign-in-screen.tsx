@@ -1,4 +1,3 @@
-
 import { AuthFrame } from '@/components/auth/auth-frame';
 import { SignInForm } from '@/components/auth/sign-in-form';
 import { Button } from '@/components/ui/button';

@@ -55,8 +55,14 @@ export function SignOutButton({ label, variant = 'secondary', icon, testID }: Si
   const count = unsent.length;
   const message = [
     `${unsentPhrase(count)} not sent yet; signing out deletes ${count === 1 ? 'it' : 'them'}.`,
-    refused > 0 ? `${refused} of them ${refused === 1 ? 'was' : 'were'} refused by the server: open the list at the top to copy or discard ${refused === 1 ? 'it' : 'them'}.` : null,
-    waiting > 0 ? (online ? 'Stay signed in to keep them, or send them now.' : 'Stay signed in to keep them: they are sent when this phone is online again.') : null,
+    refused > 0
+      ? `${refused} of them ${refused === 1 ? 'was' : 'were'} refused by the server: open the list at the top to copy or discard ${refused === 1 ? 'it' : 'them'}.`
+      : null,
+    waiting > 0
+      ? online
+        ? 'Stay signed in to keep them, or send them now.'
+        : 'Stay signed in to keep them: they are sent when this phone is online again.'
+      : null,
   ]
     .filter(Boolean)
     .join(' ');

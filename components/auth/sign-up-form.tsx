@@ -94,13 +94,7 @@ export function SignUpForm({ onSignedUp }: SignUpFormProps) {
         options={unitOptions}
         testID="sign-up-units"
       />
-      <Button
-        label="Create account"
-        pendingLabel="Creating account…"
-        pending={signUp.isPending}
-        onPress={submit}
-        fullWidth
-      />
+      <Button label="Create account" pendingLabel="Creating account…" pending={signUp.isPending} onPress={submit} fullWidth />
     </View>
   );
 }

@@ -1,4 +1,3 @@
-
 import { AuthFrame } from '@/components/auth/auth-frame';
 import { SignUpForm } from '@/components/auth/sign-up-form';
 import { TextLink } from '@/components/ui/text-link';

@@ -74,12 +74,24 @@ export function SetupPanel({ bow, unit }: { bow: BowDetail; unit: LengthUnit }) 
 function BuildPanel({ bow, build, unit }: { bow: BowDetail; build: Build; unit: LengthUnit }) {
   const units = useUnits();
   const items = [
-    { label: 'Total', value: formatQuantity(build.derived.totalGr, 'mass', units, shownUnit('mass', units) === 'g' ? 2 : 1), numeric: true },
-    { label: 'FOC', value: build.derived.focPct === null ? 'Balance point not measured' : `${build.derived.focPct.toFixed(1)} %`, numeric: true },
+    {
+      label: 'Total',
+      value: formatQuantity(build.derived.totalGr, 'mass', units, shownUnit('mass', units) === 'g' ? 2 : 1),
+      numeric: true,
+    },
+    {
+      label: 'FOC',
+      value: build.derived.focPct === null ? 'Balance point not measured' : `${build.derived.focPct.toFixed(1)} %`,
+      numeric: true,
+    },
     { label: 'Shaft', value: [build.shaftLabel, build.spine ? `spine ${build.spine}` : ''].filter(Boolean).join(', ') || '—' },
     { label: 'Cut length', value: formatLength(build.cutLengthMm, unit, 1), numeric: true },
     { label: 'Point', value: formatQuantity(build.pointGr, 'mass', units), numeric: true },
-    { label: 'Speed', value: build.speedFps === null ? 'Not chronographed' : formatQuantity(build.speedFps, 'speed', units), numeric: true },
+    {
+      label: 'Speed',
+      value: build.speedFps === null ? 'Not chronographed' : formatQuantity(build.speedFps, 'speed', units),
+      numeric: true,
+    },
   ];
   if (build.derived.kineticEnergyJ !== null && build.derived.kineticEnergyFtLb !== null) {
     items.push({
@@ -110,7 +122,8 @@ function SightInPanel({ bow, sightIn }: { bow: BowDetail; sightIn: SightInListIt
     { label: 'Place', value: sightIn.placeLabel || '—' },
     { label: 'Marks', value: words.detail },
   ];
-  if (sightIn.summary.speedFps !== null) items.push({ label: 'Fitted speed', value: formatQuantity(sightIn.summary.speedFps, 'speed', units) });
+  if (sightIn.summary.speedFps !== null)
+    items.push({ label: 'Fitted speed', value: formatQuantity(sightIn.summary.speedFps, 'speed', units) });
   return (
     <Card style={styles.panel} testID="sight-in-detail">
       <SectionHeading title={`Sight-in, ${formatDay(sightIn.date)}`} description={sightIn.placeLabel || undefined} />

@@ -82,7 +82,9 @@ export function BowForm({ bow, lengthUnit, distanceUnit, onSaved, onCancel }: Bo
       // An edit sends only what changed, so an untouched length is not re-rounded through inches.
       const body = bow
         ? Object.fromEntries(
-            Object.entries(input).filter(([key]) => dirtyFields[key as keyof BowFormText] || (key === 'pinDistances' && dirtyFields.sightKind)),
+            Object.entries(input).filter(
+              ([key]) => dirtyFields[key as keyof BowFormText] || (key === 'pinDistances' && dirtyFields.sightKind),
+            ),
           )
         : input;
       save.mutate(
@@ -107,7 +109,13 @@ export function BowForm({ bow, lengthUnit, distanceUnit, onSaved, onCancel }: Bo
       <Card style={styles.section}>
         <SectionHeading title="The bow" />
         <FieldGrid>
-          <FormField control={control} name="nickname" label="Nickname" hint="Your own name for it, e.g. “Elk slider”." autoCapitalize="words" />
+          <FormField
+            control={control}
+            name="nickname"
+            label="Nickname"
+            hint="Your own name for it, e.g. “Elk slider”."
+            autoCapitalize="words"
+          />
           <FormChoice control={control} name="hand" label="Hand" options={handOptions} />
         </FieldGrid>
         <FieldGrid minWidth={160}>
@@ -120,7 +128,12 @@ export function BowForm({ bow, lengthUnit, distanceUnit, onSaved, onCancel }: Bo
 
       <Card style={styles.section}>
         <SectionHeading title="The sight" description={`Lengths in ${lengthHint}; change the unit on your account page.`} />
-        <FormField control={control} name="sightDescription" label="Sight description" hint="Optional, in your words: housing, scale, pin size." />
+        <FormField
+          control={control}
+          name="sightDescription"
+          label="Sight description"
+          hint="Optional, in your words: housing, scale, pin size."
+        />
         <FormChoice control={control} name="sightKind" label="Kind of sight" options={sightKindOptions} />
         <FieldGrid>
           <FormField
@@ -166,7 +179,14 @@ export function BowForm({ bow, lengthUnit, distanceUnit, onSaved, onCancel }: Bo
       </Card>
 
       <Card style={styles.section}>
-        <FormField control={control} name="notes" label="Notes" hint="Optional: string, rest, anything you will want to remember." multiline numberOfLines={4} />
+        <FormField
+          control={control}
+          name="notes"
+          label="Notes"
+          hint="Optional: string, rest, anything you will want to remember."
+          multiline
+          numberOfLines={4}
+        />
       </Card>
 
       <View style={styles.actions}>

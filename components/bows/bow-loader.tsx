@@ -37,7 +37,13 @@ export interface BowLoaderProps {
  * renders `children` with them.
  * Example: `<BowLoader bowId={3} title="Sight-in">{({ bow, me, role }) => …}</BowLoader>`
  */
-export function BowLoader({ bowId, title, failedTitle = 'The bow could not be loaded', loadingLabel = 'Loading the bow…', children }: BowLoaderProps) {
+export function BowLoader({
+  bowId,
+  title,
+  failedTitle = 'The bow could not be loaded',
+  loadingLabel = 'Loading the bow…',
+  children,
+}: BowLoaderProps) {
   const me = useMe();
   const bow = useBow(bowId);
   const role = useBowRole(bow.data);

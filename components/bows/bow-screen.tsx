@@ -72,7 +72,12 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
   return (
     <View style={styles.lists}>
       {split ? (
-        <RecordRow title="Set-up" detail="Draw, sight and peep" selected={isSelected('setup')} onSelect={() => onSelect({ kind: 'setup' })} />
+        <RecordRow
+          title="Set-up"
+          detail="Draw, sight and peep"
+          selected={isSelected('setup')}
+          onSelect={() => onSelect({ kind: 'setup' })}
+        />
       ) : null}
 
       <View style={styles.section}>
@@ -80,7 +85,9 @@ function Lists({ bow, selection, onSelect }: ListsProps) {
           title="Arrow builds"
           level={2}
           action={
-            canAdd ? <Button label="Add a build" icon={PlusIcon} variant="secondary" href={`/bows/${bow.id}/builds/new`} testID="add-build" /> : undefined
+            canAdd ? (
+              <Button label="Add a build" icon={PlusIcon} variant="secondary" href={`/bows/${bow.id}/builds/new`} testID="add-build" />
+            ) : undefined
           }
         />
         {bow.builds.length === 0 ? (
@@ -201,7 +208,12 @@ export function BowScreen({ bowId }: { bowId: number }) {
   return (
     <Screen testID="bow-screen">
       <ScreenTitle name={data.nickname} />
-      <SectionHeading level={1} title={data.nickname} description={subtitle(data, unit)} action={<Button label="Bench" variant="quiet" href="/" />} />
+      <SectionHeading
+        level={1}
+        title={data.nickname}
+        description={subtitle(data, unit)}
+        action={<Button label="Bench" variant="quiet" href="/" />}
+      />
       <Readiness bow={data} />
       <BowSharingLink bow={data} />
       {split ? (

@@ -22,7 +22,8 @@ export function bowSetupItems(bow: Bow, unit: LengthUnit, units?: UnitsLike): Ke
     { label: 'Draw length', value: formatDrawLength(bow.drawLengthMm, unit), numeric: true },
   ];
   if (bow.letOffPct !== null) items.push({ label: 'Let-off', value: `${bow.letOffPct} %`, numeric: true });
-  if (bow.ratedSpeedFps !== null) items.push({ label: 'Rated speed', value: formatQuantity(bow.ratedSpeedFps, 'speed', units), numeric: true });
+  if (bow.ratedSpeedFps !== null)
+    items.push({ label: 'Rated speed', value: formatQuantity(bow.ratedSpeedFps, 'speed', units), numeric: true });
   items.push(
     { label: 'Sight', value: [sightKindNames[bow.sightKind], bow.sightDescription].filter(Boolean).join(' · ') },
     { label: 'Sight radius', value: formatLength(bow.sightRadiusMm, unit), numeric: true },

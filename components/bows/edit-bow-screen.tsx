@@ -47,7 +47,11 @@ export function EditBowScreen({ bowId }: { bowId: number }) {
   return (
     <Screen>
       {title}
-      <SectionHeading level={1} title={`Edit ${bow.data.nickname}`} description="A change to the sight or peep may move your marks: confirm them at the range." />
+      <SectionHeading
+        level={1}
+        title={`Edit ${bow.data.nickname}`}
+        description="A change to the sight or peep may move your marks: confirm them at the range."
+      />
       <BowForm bow={bow.data} lengthUnit={me.data.lengthUnit} distanceUnit={me.data.distanceUnit} onSaved={back} onCancel={back} />
     </Screen>
   );

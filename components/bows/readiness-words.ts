@@ -29,7 +29,9 @@ export function formatDay(isoDate: string): string {
  * Example: fitWords({ rmsMm: 0.12, markCount: 4, longestDistance: 60, longestUnit: 'yd', … })
  *   → { state: 'verified', label: 'Tight fit', detail: '4 marks to 60 yd, RMS 0.12 mm.' }
  */
-export function fitWords(summary: Pick<SightInFitSummary, 'rmsMm' | 'markCount' | 'longestDistance' | 'longestUnit'> & { warningCount?: number }): ReadinessWords {
+export function fitWords(
+  summary: Pick<SightInFitSummary, 'rmsMm' | 'markCount' | 'longestDistance' | 'longestUnit'> & { warningCount?: number },
+): ReadinessWords {
   const reach =
     summary.longestDistance !== null && summary.longestUnit ? ` to ${Math.round(summary.longestDistance)} ${summary.longestUnit}` : '';
   const marks = `${summary.markCount} ${summary.markCount === 1 ? 'mark' : 'marks'}${reach}`;
@@ -52,7 +54,8 @@ export function sightInWords(readiness: BowReadiness): ReadinessWords {
   const latest = readiness.latestSightIn;
   if (!latest) return { state: 'none', label: 'Not sighted in', detail: 'No sight-in yet.' };
   // A change after it (and no tape to carry the message): shared/staleness.ts.
-  if (readiness.confirm && readiness.confirm.tapeId === null) return { state: 'due', label: 'Confirm at the range', detail: readiness.confirm.reason };
+  if (readiness.confirm && readiness.confirm.tapeId === null)
+    return { state: 'due', label: 'Confirm at the range', detail: readiness.confirm.reason };
   const words = fitWords(latest);
   return { ...words, detail: `Last sight-in ${formatDay(latest.date)}: ${words.detail}` };
 }
@@ -60,7 +63,8 @@ export function sightInWords(readiness: BowReadiness): ReadinessWords {
 /** The tape part of a bow's readiness. */
 export function tapeWords(readiness: BowReadiness): ReadinessWords {
   // A change that moves the point of impact came after the tape's sight-in: shared/staleness.ts.
-  if (readiness.confirm && readiness.confirm.tapeId !== null) return { state: 'due', label: 'Confirm at the range', detail: readiness.confirm.reason };
+  if (readiness.confirm && readiness.confirm.tapeId !== null)
+    return { state: 'due', label: 'Confirm at the range', detail: readiness.confirm.reason };
   if (readiness.hasTape) return { state: 'verified', label: 'Tape saved', detail: 'A tape layout is saved; confirm it at the range.' };
   if (readiness.latestSightIn) return { state: 'due', label: 'No tape yet', detail: 'Sighted in, but no tape layout saved.' };
   return { state: 'none', label: 'No tape', detail: 'A tape comes from a sight-in.' };

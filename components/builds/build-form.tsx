@@ -74,19 +74,51 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel, readOnl
       <Card style={styles.section}>
         <SectionHeading title="Name and shaft" />
         <FieldGrid>
-          <FormField control={control} disabled={readOnly} name="name" label="Build name" hint="e.g. “Heavy elk arrows”" autoCapitalize="sentences" />
-          <FormField control={control} disabled={readOnly} name="shaftLabel" label="Shaft label" hint="Optional: what the shaft says on it, in your words." />
+          <FormField
+            control={control}
+            disabled={readOnly}
+            name="name"
+            label="Build name"
+            hint="e.g. “Heavy elk arrows”"
+            autoCapitalize="sentences"
+          />
+          <FormField
+            control={control}
+            disabled={readOnly}
+            name="shaftLabel"
+            label="Shaft label"
+            hint="Optional: what the shaft says on it, in your words."
+          />
         </FieldGrid>
         <FieldGrid minWidth={120}>
           <FormField control={control} disabled={readOnly} name="spine" label="Spine" hint="Optional" numeric />
-          <FormField control={control} disabled={readOnly} name="grainsPerInch" label="Grains per inch" hint="Bare shaft" unit="gpi" numeric />
-          <FormField control={control} disabled={readOnly} name="cutLengthMm" label="Cut length" hint="From the nock throat" unit={unit} numeric />
+          <FormField
+            control={control}
+            disabled={readOnly}
+            name="grainsPerInch"
+            label="Grains per inch"
+            hint="Bare shaft"
+            unit="gpi"
+            numeric
+          />
+          <FormField
+            control={control}
+            disabled={readOnly}
+            name="cutLengthMm"
+            label="Cut length"
+            hint="From the nock throat"
+            unit={unit}
+            numeric
+          />
           <FormField control={control} disabled={readOnly} name="diameterMm" label="Diameter" hint="Shaft outside" unit={unit} numeric />
         </FieldGrid>
       </Card>
 
       <Card style={styles.section}>
-        <SectionHeading title="Components" description={`Weights in ${mass === 'g' ? 'grams' : 'grains'}. Leave a part you do not use empty.`} />
+        <SectionHeading
+          title="Components"
+          description={`Weights in ${mass === 'g' ? 'grams' : 'grains'}. Leave a part you do not use empty.`}
+        />
         <FieldGrid minWidth={120}>
           <FormField control={control} disabled={readOnly} name="pointGr" label="Point" hint="Or broadhead" unit={mass} numeric />
           <FormField control={control} disabled={readOnly} name="insertGr" label="Insert" hint="If any" unit={mass} numeric />
@@ -112,7 +144,15 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel, readOnl
             unit={unit}
             numeric
           />
-          <FormField control={control} disabled={readOnly} name="speedFps" label="Chronographed speed" hint="From this bow. Gives energy." unit={shownUnit('speed', units)} numeric />
+          <FormField
+            control={control}
+            disabled={readOnly}
+            name="speedFps"
+            label="Chronographed speed"
+            hint="From this bow. Gives energy."
+            unit={shownUnit('speed', units)}
+            numeric
+          />
           <FormField
             control={control}
             disabled={readOnly}
@@ -149,7 +189,13 @@ export function BuildForm({ bowId, build, lengthUnit, onSaved, onCancel, readOnl
       )}
       {readOnly ? null : (
         <View style={styles.actions}>
-          <Button label={build ? 'Save the build' : 'Add the build'} pendingLabel="Saving…" pending={save.isPending} onPress={submit} testID="build-save" />
+          <Button
+            label={build ? 'Save the build' : 'Add the build'}
+            pendingLabel="Saving…"
+            pending={save.isPending}
+            onPress={submit}
+            testID="build-save"
+          />
           <Button label="Cancel" variant="secondary" onPress={onCancel} disabled={save.isPending} />
         </View>
       )}

@@ -36,7 +36,12 @@ export function BuildScreen({ buildId }: { buildId: number }) {
     return (
       <>
         <ScreenTitle name="Arrow build" />
-        <ErrorView title="The build could not be loaded" error={failed.error} onRetry={() => failed.refetch()} retrying={failed.isFetching} />
+        <ErrorView
+          title="The build could not be loaded"
+          error={failed.error}
+          onRetry={() => failed.refetch()}
+          retrying={failed.isFetching}
+        />
       </>
     );
   }
@@ -67,7 +72,15 @@ export function BuildScreen({ buildId }: { buildId: number }) {
         action={<Button label="Back to the bow" variant="quiet" href={`/bows/${data.bowId}`} />}
       />
       <AddedByLine addedBy={data.addedBy} meId={me.data.id} testID="build-added-by" />
-      <BuildForm key={data.updatedAt} bowId={data.bowId} build={data} lengthUnit={me.data.lengthUnit} onSaved={back} onCancel={back} readOnly={!isOwner} />
+      <BuildForm
+        key={data.updatedAt}
+        bowId={data.bowId}
+        build={data}
+        lengthUnit={me.data.lengthUnit}
+        onSaved={back}
+        onCancel={back}
+        readOnly={!isOwner}
+      />
       {!isOwner ? null : used ? (
         <Text variant="small" tone="soft">
           Sight-ins use this build, so it cannot be deleted while they exist: their marks were shot with this arrow.

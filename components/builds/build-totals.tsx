@@ -14,7 +14,19 @@ import { formatQuantity, shownUnit } from '@/shared/units';
 export const ENERGY_CAUTION_TEXT =
   'Energy figures are estimates, not a legal determination; hunting rules on arrow weight and energy vary — follow your local regulations.';
 
-function Figure({ label, value, unit, testID, second }: { label: string; value: string | null; unit: string; testID: string; second?: string | null }) {
+function Figure({
+  label,
+  value,
+  unit,
+  testID,
+  second,
+}: {
+  label: string;
+  value: string | null;
+  unit: string;
+  testID: string;
+  second?: string | null;
+}) {
   return (
     <View style={styles.figure}>
       <Text variant="small" tone="soft">
@@ -48,7 +60,9 @@ function Figure({ label, value, unit, testID, second }: { label: string; value: 
 export function BuildTotalsStrip({ text, lengthUnit }: { text: BuildFormText; lengthUnit: FormUnits }) {
   const live = liveQuantities(text, lengthUnit);
   const parts = [
-    live.totalGr === null ? `— ${shownUnit('mass', unitsOf(lengthUnit))}` : formatQuantity(live.totalGr, 'mass', unitsOf(lengthUnit), shownUnit('mass', unitsOf(lengthUnit)) === 'g' ? 2 : 1),
+    live.totalGr === null
+      ? `— ${shownUnit('mass', unitsOf(lengthUnit))}`
+      : formatQuantity(live.totalGr, 'mass', unitsOf(lengthUnit), shownUnit('mass', unitsOf(lengthUnit)) === 'g' ? 2 : 1),
     live.focPct === null ? 'FOC —' : `FOC ${live.focPct.toFixed(1)} %`,
   ];
   return (
@@ -74,7 +88,13 @@ export function BuildTotals({ text, lengthUnit }: { text: BuildFormText; lengthU
         This arrow
       </Text>
       <View style={styles.grid} aria-live="polite">
-        <Figure label="Total weight" value={fixed(live.totalGr, 1)} unit="gr" testID="total-grains" second={live.totalGr === null ? null : `${grainsToGrams(live.totalGr).toFixed(2)} g`} />
+        <Figure
+          label="Total weight"
+          value={fixed(live.totalGr, 1)}
+          unit="gr"
+          testID="total-grains"
+          second={live.totalGr === null ? null : `${grainsToGrams(live.totalGr).toFixed(2)} g`}
+        />
         <Figure label="FOC" value={fixed(live.focPct, 1)} unit="%" testID="foc" />
         <Figure
           label="Kinetic energy"

@@ -30,7 +30,14 @@ export function ClientList({ headingLevel = 2 }: { headingLevel?: 2 | 3 }) {
   const wide = useWide();
   if (clients.isPending) return <LoadingView label="Loading your clients…" />;
   if (clients.isError) {
-    return <ErrorView title="Your clients could not be loaded" error={clients.error} onRetry={() => clients.refetch()} retrying={clients.isFetching} />;
+    return (
+      <ErrorView
+        title="Your clients could not be loaded"
+        error={clients.error}
+        onRetry={() => clients.refetch()}
+        retrying={clients.isFetching}
+      />
+    );
   }
   if (clients.data.length === 0) {
     return (
@@ -47,7 +54,12 @@ export function ClientList({ headingLevel = 2 }: { headingLevel?: 2 | 3 }) {
         <View key={client.archer.id} style={[styles.client, wide && styles.clientWide]} testID={`client-${client.archer.id}`}>
           <SectionHeading title={client.archer.name} description={client.archer.email} level={headingLevel} />
           {client.bows.map((bow) => (
-            <Card key={bow.id} href={`/bows/${bow.id}`} accessibilityLabel={`Open ${bow.nickname}, shared by ${client.archer.name}`} testID={`client-bow-${bow.id}`}>
+            <Card
+              key={bow.id}
+              href={`/bows/${bow.id}`}
+              accessibilityLabel={`Open ${bow.nickname}, shared by ${client.archer.name}`}
+              testID={`client-bow-${bow.id}`}
+            >
               <View style={styles.bowRow}>
                 <View style={styles.bowWords}>
                   <Text variant="title">{bow.nickname}</Text>

@@ -11,7 +11,11 @@ export function ClientsScreen() {
   return (
     <Screen testID="clients-screen">
       <ScreenTitle name="Clients" />
-      <SectionHeading level={1} title="Clients" description="Archers who share a bow with you. Open a bow to see its records and add to them." />
+      <SectionHeading
+        level={1}
+        title="Clients"
+        description="Archers who share a bow with you. Open a bow to see its records and add to them."
+      />
       <ClientList />
     </Screen>
   );

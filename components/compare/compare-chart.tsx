@@ -56,17 +56,17 @@ export function CompareChart({ comparison }: { comparison: BuildComparison }) {
         <View role="img" accessibilityLabel={`Chart: ${compareChartWords(comparison)}`} testID="compare-chart-img">
           {/* The label above is the chart's text alternative; victory's own svg is hidden from assistive technology. */}
           <View aria-hidden>
-          <VictoryChart width={width} height={height} padding={{ top: 16, bottom: 48, left: 58, right: 16 }} domainPadding={{ y: 4 }}>
-            <VictoryAxis crossAxis={false} label={`Distance (${unit})`} style={axisStyle} />
-            <VictoryAxis dependentAxis crossAxis={false} label="Reading (mm)" style={axisStyle} />
-            {curves.map((curve, index) => (
-              <VictoryLine
-                key={curve.label + index}
-                data={curve.data}
-                style={{ data: { stroke: buildStyle(index).color, strokeWidth: 2.5, strokeDasharray: buildStyle(index).dash } }}
-              />
-            ))}
-          </VictoryChart>
+            <VictoryChart width={width} height={height} padding={{ top: 16, bottom: 48, left: 58, right: 16 }} domainPadding={{ y: 4 }}>
+              <VictoryAxis crossAxis={false} label={`Distance (${unit})`} style={axisStyle} />
+              <VictoryAxis dependentAxis crossAxis={false} label="Reading (mm)" style={axisStyle} />
+              {curves.map((curve, index) => (
+                <VictoryLine
+                  key={curve.label + index}
+                  data={curve.data}
+                  style={{ data: { stroke: buildStyle(index).color, strokeWidth: 2.5, strokeDasharray: buildStyle(index).dash } }}
+                />
+              ))}
+            </VictoryChart>
           </View>
         </View>
       ) : null}
@@ -74,7 +74,15 @@ export function CompareChart({ comparison }: { comparison: BuildComparison }) {
         {curves.map((curve, index) => (
           <View key={curve.label + index} style={styles.legendItem}>
             <Svg width={36} height={12}>
-              <Line x1={2} y1={6} x2={34} y2={6} stroke={buildStyle(index).color} strokeWidth={3} strokeDasharray={buildStyle(index).dash} />
+              <Line
+                x1={2}
+                y1={6}
+                x2={34}
+                y2={6}
+                stroke={buildStyle(index).color}
+                strokeWidth={3}
+                strokeDasharray={buildStyle(index).dash}
+              />
             </Svg>
             <Text variant="small">
               {index + 1}. {curve.label}

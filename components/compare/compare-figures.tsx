@@ -33,8 +33,14 @@ export function CompareFigures({ comparison, chronographed }: { comparison: Buil
     },
     { label: 'Total weight', value: (build) => formatQuantity(build.massGr, 'mass', units) },
     { label: 'FOC', value: (build) => (build.focPct === null ? 'not measured' : `${formatFixed(build.focPct, 1)} %`) },
-    { label: 'Kinetic energy', value: (build) => `${formatFixed(build.kineticEnergyFtLbf, 1)} ft·lbf\n${formatFixed(build.kineticEnergyJ, 1)} J` },
-    { label: 'Momentum', value: (build) => `${formatFixed(build.momentumSlugFps, 3)} slug·ft/s\n${formatFixed(build.momentumKgMps, 2)} kg·m/s` },
+    {
+      label: 'Kinetic energy',
+      value: (build) => `${formatFixed(build.kineticEnergyFtLbf, 1)} ft·lbf\n${formatFixed(build.kineticEnergyJ, 1)} J`,
+    },
+    {
+      label: 'Momentum',
+      value: (build) => `${formatFixed(build.momentumSlugFps, 3)} slug·ft/s\n${formatFixed(build.momentumKgMps, 2)} kg·m/s`,
+    },
     {
       label: `Drop ${comparison.near}–${comparison.far} ${unit}`,
       hint: `held for ${comparison.near}, below the line of sight at ${comparison.far}`,
@@ -56,7 +62,12 @@ export function CompareFigures({ comparison, chronographed }: { comparison: Buil
   const minWidth = labelColumn + buildColumn * comparison.builds.length;
   return (
     <ScrollView horizontal contentContainerStyle={styles.scroll} onLayout={onLayout}>
-      <View style={[styles.table, { width: Math.max(minWidth, roomWidth) }]} role="table" aria-label="The builds side by side" testID="compare-figures">
+      <View
+        style={[styles.table, { width: Math.max(minWidth, roomWidth) }]}
+        role="table"
+        aria-label="The builds side by side"
+        testID="compare-figures"
+      >
         <View style={[styles.row, styles.head]} role="row">
           <View style={styles.label} />
           {comparison.builds.map((build, index) => (

@@ -27,7 +27,12 @@ export function CompareMarksTable({ comparison }: { comparison: BuildComparison 
   return (
     <View style={styles.box}>
       <ScrollView horizontal contentContainerStyle={styles.scroll} onLayout={onLayout}>
-        <View style={[styles.table, { width: Math.max(minWidth, roomWidth) }]} role="table" aria-label="Marks by distance" testID="compare-marks">
+        <View
+          style={[styles.table, { width: Math.max(minWidth, roomWidth) }]}
+          role="table"
+          aria-label="Marks by distance"
+          testID="compare-marks"
+        >
           <View style={[styles.row, styles.head]} role="row">
             <Text variant="label" style={styles.distance} role="columnheader">
               {unit}
@@ -45,7 +50,12 @@ export function CompareMarksTable({ comparison }: { comparison: BuildComparison 
             ))}
           </View>
           {comparison.rows.map((row, rowIndex) => (
-            <View key={row.distance} style={[styles.row, rowIndex % 2 === 1 && styles.stripe]} role="row" testID={`compare-row-${row.distance}`}>
+            <View
+              key={row.distance}
+              style={[styles.row, rowIndex % 2 === 1 && styles.stripe]}
+              role="row"
+              testID={`compare-row-${row.distance}`}
+            >
               <Text variant="numeral" style={styles.distance} role="rowheader">
                 {formatFixed(row.distance, 0)}
               </Text>

@@ -127,14 +127,25 @@ function CompareBody({ bow, initialBuilds }: { bow: BowDetail; initialBuilds: nu
 
       {sightedCount < 2 ? (
         <Banner tone="info" title="Two sighted builds needed" testID="compare-needs">
-          A comparison needs two builds that each have a sight-in on this bow. Sight in another build (two marks are enough), then come back.
+          A comparison needs two builds that each have a sight-in on this bow. Sight in another build (two marks are enough), then come
+          back.
         </Banner>
       ) : null}
 
       <Card>
-        <SectionHeading title="Builds" level={2} description="Choose two to four. The first you choose is the reference for the differences." />
+        <SectionHeading
+          title="Builds"
+          level={2}
+          description="Choose two to four. The first you choose is the reference for the differences."
+        />
         <BuildPicker builds={builds} chosen={chosen} onChange={setChosen} />
-        <SegmentedControl label="Forgiveness at" hint="The distance where the ±100 mm window is measured" options={forgivenessOptions} value={at} onChange={setAt} />
+        <SegmentedControl
+          label="Forgiveness at"
+          hint="The distance where the ±100 mm window is measured"
+          options={forgivenessOptions}
+          value={at}
+          onChange={setAt}
+        />
         <SegmentedControl
           label="Air"
           hint="One air compares the arrows alone; as sighted matches your tapes."
@@ -145,7 +156,15 @@ function CompareBody({ bow, initialBuilds }: { bow: BowDetail; initialBuilds: nu
         {air === 'common' ? (
           <View style={styles.airFields}>
             <View style={styles.airField}>
-              <TextField label="Altitude" unit={shownUnit('altitude', units)} numeric value={altitudeText} onChangeText={setAltitudeText} error={altitudeError} testID="compare-altitude" />
+              <TextField
+                label="Altitude"
+                unit={shownUnit('altitude', units)}
+                numeric
+                value={altitudeText}
+                onChangeText={setAltitudeText}
+                error={altitudeError}
+                testID="compare-altitude"
+              />
             </View>
             <View style={styles.airField}>
               <TextField
@@ -178,14 +197,17 @@ function CompareBody({ bow, initialBuilds }: { bow: BowDetail; initialBuilds: nu
             </Text>
             <Text variant="small" tone="soft">
               {compare.data.sources
-                .map((source) => `${source.name}: sight-in ${formatDay(source.sightInDate)}${source.placeLabel ? `, ${source.placeLabel}` : ''} (${source.markCount} marks)`)
+                .map(
+                  (source) =>
+                    `${source.name}: sight-in ${formatDay(source.sightInDate)}${source.placeLabel ? `, ${source.placeLabel}` : ''} (${source.markCount} marks)`,
+                )
                 .join(' · ')}
             </Text>
             <Text variant="small" tone="soft">
               {compare.data.comparison.commonAirDensityKgM3 === null
                 ? 'Each build in the air of its own sight-in.'
-                : `Every build in one air: ${airInUnits({ altitudeM: params.altitudeM ?? null, temperatureC: params.temperatureC ?? null }, units)} (${compare.data.comparison.commonAirDensityKgM3.toFixed(3)} kg/m³).`}
-              {' '}Sight radius {formatLength(bow.sightRadiusMm, 'mm')}, readings as your scale reads them.
+                : `Every build in one air: ${airInUnits({ altitudeM: params.altitudeM ?? null, temperatureC: params.temperatureC ?? null }, units)} (${compare.data.comparison.commonAirDensityKgM3.toFixed(3)} kg/m³).`}{' '}
+              Sight radius {formatLength(bow.sightRadiusMm, 'mm')}, readings as your scale reads them.
             </Text>
           </View>
           <View style={wide ? styles.split : styles.stack}>
@@ -200,7 +222,10 @@ function CompareBody({ bow, initialBuilds }: { bow: BowDetail; initialBuilds: nu
           </View>
           <Card>
             <SectionHeading title="Side by side" level={2} />
-            <CompareFigures comparison={compare.data.comparison} chronographed={compare.data.sources.map((source) => source.chronographedSpeedFps)} />
+            <CompareFigures
+              comparison={compare.data.comparison}
+              chronographed={compare.data.sources.map((source) => source.chronographedSpeedFps)}
+            />
           </Card>
           <Banner tone="caution" testID="compare-caution">
             {`${compare.data.comparison.caution} The marks are estimates from each fit: confirm every distance at the range.`}

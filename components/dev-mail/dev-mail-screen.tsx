@@ -184,6 +184,12 @@ const styles = StyleSheet.create({
   signIn: { gap: space.md, alignItems: 'flex-start' },
   message: { gap: space.md },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  body: { padding: space.lg, borderRadius: radii.md, backgroundColor: colors.surface, borderWidth: borders.hairline, borderColor: colors.line },
+  body: {
+    padding: space.lg,
+    borderRadius: radii.md,
+    backgroundColor: colors.surface,
+    borderWidth: borders.hairline,
+    borderColor: colors.line,
+  },
   bodyText: { fontFamily: fonts.body, fontSize: 15, lineHeight: 22 },
 });

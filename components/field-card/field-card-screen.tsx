@@ -45,7 +45,10 @@ const distanceSets = {
   '20-70': [20, 30, 40, 50, 60, 70],
   '30-80': [30, 40, 50, 60, 70, 80],
 } as const;
-const distanceOptions = (Object.keys(distanceSets) as (keyof typeof distanceSets)[]).map((value) => ({ value, label: value.replace('-', '–') }));
+const distanceOptions = (Object.keys(distanceSets) as (keyof typeof distanceSets)[]).map((value) => ({
+  value,
+  label: value.replace('-', '–'),
+}));
 
 /**
  * A sight-in's field card: for the chosen slopes and slant distances, the mark
@@ -66,7 +69,9 @@ export function FieldCardScreen({ sightInId }: { sightInId: number }) {
   const altitude = quantityTextToStored(altitudeText, 'altitude', units);
   const temperature = quantityTextToStored(temperatureText, 'temperature', units);
   const altitudeError =
-    altitude !== undefined && (Number.isNaN(altitude) || altitude < -500 || altitude > 5000) ? messageInUnits('Enter an altitude between -500 and 5000 m', units) : undefined;
+    altitude !== undefined && (Number.isNaN(altitude) || altitude < -500 || altitude > 5000)
+      ? messageInUnits('Enter an altitude between -500 and 5000 m', units)
+      : undefined;
   const temperatureError =
     temperature !== undefined && (Number.isNaN(temperature) || temperature < -40 || temperature > 50)
       ? messageInUnits('Enter a temperature between -40 and 50 °C', units)
@@ -83,7 +88,12 @@ export function FieldCardScreen({ sightInId }: { sightInId: number }) {
     return (
       <>
         <ScreenTitle name="Field card" />
-        <ErrorView title="The field card could not be made" error={failed.error!} onRetry={() => failed.refetch()} retrying={failed.isFetching} />
+        <ErrorView
+          title="The field card could not be made"
+          error={failed.error!}
+          onRetry={() => failed.refetch()}
+          retrying={failed.isFetching}
+        />
       </>
     );
   }
@@ -108,10 +118,23 @@ export function FieldCardScreen({ sightInId }: { sightInId: number }) {
       />
 
       <Card>
-        <SectionHeading title="Where you will hunt" level={2} description={`Sight-in air: ${airInUnits(data.sightIn, units)}. Leave the altitude empty for that air.`} />
+        <SectionHeading
+          title="Where you will hunt"
+          level={2}
+          description={`Sight-in air: ${airInUnits(data.sightIn, units)}. Leave the altitude empty for that air.`}
+        />
         <View style={styles.airFields}>
           <View style={styles.airField}>
-            <TextField label="Altitude" unit={shownUnit('altitude', units)} numeric value={altitudeText} onChangeText={setAltitudeText} error={altitudeError} placeholder="sight-in" testID="field-card-altitude" />
+            <TextField
+              label="Altitude"
+              unit={shownUnit('altitude', units)}
+              numeric
+              value={altitudeText}
+              onChangeText={setAltitudeText}
+              error={altitudeError}
+              placeholder="sight-in"
+              testID="field-card-altitude"
+            />
           </View>
           <View style={styles.airField}>
             <TextField
@@ -127,7 +150,13 @@ export function FieldCardScreen({ sightInId }: { sightInId: number }) {
           </View>
         </View>
         <SegmentedControl label="Slopes" options={angleOptions} value={angles} onChange={setAngles} />
-        <SegmentedControl label="Slant distances" hint={`In ${data.unit}, as a rangefinder reads them`} options={distanceOptions} value={distances} onChange={setDistances} />
+        <SegmentedControl
+          label="Slant distances"
+          hint={`In ${data.unit}, as a rangefinder reads them`}
+          options={distanceOptions}
+          value={distances}
+          onChange={setDistances}
+        />
       </Card>
 
       <Card>
@@ -151,7 +180,11 @@ export function FieldCardScreen({ sightInId }: { sightInId: number }) {
       </Banner>
 
       <Card>
-        <SectionHeading title="The printed card" level={2} description="100 × 150 mm, to tape inside the bow case lid. Print at actual size (100 %)." />
+        <SectionHeading
+          title="The printed card"
+          level={2}
+          description="100 × 150 mm, to tape inside the bow case lid. Print at actual size (100 %)."
+        />
         <CardPreview card={data} labels={labels} />
         <View style={styles.actions}>
           <CardPrint svg={fieldCardSvg(data, labels)} testID="field-card-print" />
@@ -167,7 +200,9 @@ export function FieldCardScreen({ sightInId }: { sightInId: number }) {
 function ShiftTable({ card }: { card: FieldCardData }) {
   return (
     <View style={styles.shift} testID="field-card-shift">
-      <Text variant="label">{card.sameAirAsSightIn ? 'Level marks (mm), sight-in air' : `Level marks (mm) at ${airWords(card.air)} against the sight-in`}</Text>
+      <Text variant="label">
+        {card.sameAirAsSightIn ? 'Level marks (mm), sight-in air' : `Level marks (mm) at ${airWords(card.air)} against the sight-in`}
+      </Text>
       <View style={styles.shiftTable} role="table" aria-label="Level marks and their shift">
         {[
           { label: card.unit, values: card.shift.map((row) => String(row.distance)) },

@@ -31,8 +31,19 @@ export function SlopeTable({ card }: { card: FieldCardData }) {
   const minWidth = angleColumn + distanceColumn * card.distances.length;
   return (
     // Focusable with a name, so a keyboard can scroll it (WCAG 2.1.1; axe "scrollable-region-focusable").
-    <ScrollView horizontal contentContainerStyle={styles.scroll} onLayout={onLayout} tabIndex={0} aria-label="Marks for slopes (scrolls sideways)">
-      <View style={[styles.table, { width: Math.max(minWidth, roomWidth) }]} role="table" aria-label="Marks for slopes" testID="field-card-table">
+    <ScrollView
+      horizontal
+      contentContainerStyle={styles.scroll}
+      onLayout={onLayout}
+      tabIndex={0}
+      aria-label="Marks for slopes (scrolls sideways)"
+    >
+      <View
+        style={[styles.table, { width: Math.max(minWidth, roomWidth) }]}
+        role="table"
+        aria-label="Marks for slopes"
+        testID="field-card-table"
+      >
         <View style={[styles.row, styles.head]} role="row">
           <Text variant="label" style={styles.angle} role="columnheader">
             slope
@@ -68,7 +79,8 @@ export function SlopeTable({ card }: { card: FieldCardData }) {
                         </Text>
                         <Text style={styles.aim}>≈ {cell.aimAsIf === null ? 'none' : formatFixed(cell.aimAsIf, 1)}</Text>
                         <Text style={styles.rule}>
-                          {formatFixed(cell.horizontal, 1)} {cell.aimAsIfMinusHorizontal === null ? '' : formatSigned(cell.aimAsIfMinusHorizontal, 1)}
+                          {formatFixed(cell.horizontal, 1)}{' '}
+                          {cell.aimAsIfMinusHorizontal === null ? '' : formatSigned(cell.aimAsIfMinusHorizontal, 1)}
                         </Text>
                       </>
                     )}

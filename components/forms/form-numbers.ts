@@ -125,5 +125,8 @@ export function formatDrawLength(mm: number | null | undefined, unit: LengthUnit
  * Example: withInches('Sight radius must be at least 400 mm') → 'Sight radius must be at least 400 mm (15.75 in)'
  */
 export function withInches(message: string): string {
-  return message.replace(/(-?\d+(?:\.\d+)?) mm\b/g, (_, digits: string) => `${digits} mm (${numberToText(mmToInches(Number(digits)), 2)} in)`);
+  return message.replace(
+    /(-?\d+(?:\.\d+)?) mm\b/g,
+    (_, digits: string) => `${digits} mm (${numberToText(mmToInches(Number(digits)), 2)} in)`,
+  );
 }

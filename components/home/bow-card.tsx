@@ -22,10 +22,9 @@ export function BowCard({ bow }: { bow: BowSummary }) {
   // Fit quality of the latest sight-in and whether a tape is saved (words shared with the Bow screen).
   const sightIn = sightInWords(bow.readiness);
   const tape = tapeWords(bow.readiness);
-  const records = [
-    count(bow.readiness.buildCount, 'build', 'builds'),
-    count(bow.readiness.sightInCount, 'sight-in', 'sight-ins'),
-  ].join(' · ');
+  const records = [count(bow.readiness.buildCount, 'build', 'builds'), count(bow.readiness.sightInCount, 'sight-in', 'sight-ins')].join(
+    ' · ',
+  );
   return (
     <Card href={`/bows/${bow.id}`} accessibilityLabel={`Open ${bow.nickname}`} testID={`bow-card-${bow.id}`}>
       <View style={styles.row}>

@@ -46,12 +46,7 @@ export function HomeScreen() {
     return (
       <>
         {title}
-        <ErrorView
-          title="Your bench could not be loaded"
-          error={bows.error}
-          onRetry={() => bows.refetch()}
-          retrying={bows.isFetching}
-        />
+        <ErrorView title="Your bench could not be loaded" error={bows.error} onRetry={() => bows.refetch()} retrying={bows.isFetching} />
       </>
     );
   }
@@ -69,7 +64,11 @@ export function HomeScreen() {
         <ClientList />
         {list.length > 0 ? (
           <>
-            <SectionHeading level={2} title="Your own bows" action={<Button label="Add a bow" icon={PlusIcon} variant="quiet" href="/bows/new" />} />
+            <SectionHeading
+              level={2}
+              title="Your own bows"
+              action={<Button label="Add a bow" icon={PlusIcon} variant="quiet" href="/bows/new" />}
+            />
             <View style={[styles.grid, wide && styles.gridWide]}>
               {list.map((bow) => (
                 <View key={bow.id} style={wide ? styles.cellWide : styles.cell}>

@@ -19,7 +19,8 @@ export const exportPaths = {
  */
 export function usePreviewImport(sightInId: number) {
   return useMutation<ImportResult, ApiError, MarkImport>({
-    mutationFn: (input) => apiFetch(`/api/sight-ins/${sightInId}/marks/import?dryRun=1`, { method: 'POST', body: input, schema: importResultSchema }),
+    mutationFn: (input) =>
+      apiFetch(`/api/sight-ins/${sightInId}/marks/import?dryRun=1`, { method: 'POST', body: input, schema: importResultSchema }),
   });
 }
 
@@ -27,7 +28,8 @@ export function usePreviewImport(sightInId: number) {
 export function useImportMarks(sightInId: number) {
   const queryClient = useQueryClient();
   return useMutation<ImportResult, ApiError, MarkImport>({
-    mutationFn: (input) => apiFetch(`/api/sight-ins/${sightInId}/marks/import`, { method: 'POST', body: input, schema: importResultSchema }),
+    mutationFn: (input) =>
+      apiFetch(`/api/sight-ins/${sightInId}/marks/import`, { method: 'POST', body: input, schema: importResultSchema }),
     onSuccess: () => {
       queryClient.invalidateQueries({ queryKey: sightInKeys.all });
       queryClient.invalidateQueries({ queryKey: bowKeys.all });
@@ -40,6 +42,7 @@ const messageResponse = z.object({ message: z.string() });
 /** E-mails the sight-in's print sheet as a PDF. */
 export function useSendTape(sightInId: number) {
   return useMutation<string, ApiError, SendTape>({
-    mutationFn: async (input) => (await apiFetch(`/api/sight-ins/${sightInId}/send-tape`, { method: 'POST', body: input, schema: messageResponse })).message,
+    mutationFn: async (input) =>
+      (await apiFetch(`/api/sight-ins/${sightInId}/send-tape`, { method: 'POST', body: input, schema: messageResponse })).message,
   });
 }

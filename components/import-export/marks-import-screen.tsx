@@ -42,7 +42,8 @@ export function MarksImportScreen({ sightInId }: { sightInId: number }) {
   const [checked, setChecked] = useState<ImportResult | null>(null);
 
   if (!Number.isInteger(sightInId) || sightInId <= 0) return <NotFoundScreen />;
-  if (sightIn.isError) return <ErrorView title="The sight-in could not be loaded" error={sightIn.error} onRetry={() => sightIn.refetch()} />;
+  if (sightIn.isError)
+    return <ErrorView title="The sight-in could not be loaded" error={sightIn.error} onRetry={() => sightIn.refetch()} />;
   if (sightIn.isPending || !me.data) return <LoadingView label="Loading the sight-in…" />;
 
   const chosenUnit = unit ?? me.data.distanceUnit;
@@ -106,7 +107,15 @@ export function MarksImportScreen({ sightInId }: { sightInId: number }) {
         />
       </View>
       <View style={styles.row}>
-        <Button label="Check the file" pendingLabel="Checking…" pending={preview.isPending} disabled={csv.trim() === ''} onPress={check} variant={ready ? 'secondary' : 'primary'} testID="check-csv" />
+        <Button
+          label="Check the file"
+          pendingLabel="Checking…"
+          pending={preview.isPending}
+          disabled={csv.trim() === ''}
+          onPress={check}
+          variant={ready ? 'secondary' : 'primary'}
+          testID="check-csv"
+        />
         {ready ? (
           <Button
             label={`Add ${checked.okCount} mark${checked.okCount === 1 ? '' : 's'}`}
@@ -129,7 +138,12 @@ export function MarksImportScreen({ sightInId }: { sightInId: number }) {
         </Banner>
       ) : null}
       {save.isSuccess ? (
-        <Banner tone="info" title="Marks added" testID="import-done" action={<Button label="Open the sight-in" href={`/sight-ins/${sightInId}`} />}>
+        <Banner
+          tone="info"
+          title="Marks added"
+          testID="import-done"
+          action={<Button label="Open the sight-in" href={`/sight-ins/${sightInId}`} />}
+        >
           {`${save.data.okCount} mark${save.data.okCount === 1 ? ' was' : 's were'} added and the fit was worked out again.`}
         </Banner>
       ) : null}

@@ -34,7 +34,11 @@ export function SendTapeForm({ sightInId, layoutQuery }: SendTapeFormProps) {
   };
   return (
     <Card style={styles.box} testID="send-tape">
-      <SectionHeading title="Send the sheet by e-mail" level={3} description="As a PDF, laid out as above. Print it at 100 % and measure its 50 mm bar before cutting." />
+      <SectionHeading
+        title="Send the sheet by e-mail"
+        level={3}
+        description="As a PDF, laid out as above. Print it at 100 % and measure its 50 mm bar before cutting."
+      />
       <TextField
         label="Send to"
         value={to}
@@ -46,14 +50,25 @@ export function SendTapeForm({ sightInId, layoutQuery }: SendTapeFormProps) {
         {...emailInputProps}
         onSubmitEditing={submit}
       />
-      {send.isSuccess ? <Banner tone="info" title="Sent">{send.data}</Banner> : null}
+      {send.isSuccess ? (
+        <Banner tone="info" title="Sent">
+          {send.data}
+        </Banner>
+      ) : null}
       {send.isError && !send.error.fields.to ? (
         <Banner tone="error" title="Could not send">
           {send.error.message}
         </Banner>
       ) : null}
       <View style={styles.row}>
-        <Button label="Send the PDF" variant="secondary" pendingLabel="Sending…" pending={send.isPending} disabled={!layoutQuery} onPress={submit} />
+        <Button
+          label="Send the PDF"
+          variant="secondary"
+          pendingLabel="Sending…"
+          pending={send.isPending}
+          disabled={!layoutQuery}
+          onPress={submit}
+        />
       </View>
     </Card>
   );

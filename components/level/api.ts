@@ -98,7 +98,14 @@ export function withUpdate(check: LevelCheck, update: CheckUpdate, now = new Dat
   const steps = check.steps.map((step) => {
     const entry = update.steps?.find((item) => item.step === step.step);
     return entry
-      ? { ...step, result: entry.result ?? step.result, reading: entry.reading ?? null, readingUnit: entry.readingUnit ?? null, adjustment: entry.adjustment ?? '', updatedAt: now }
+      ? {
+          ...step,
+          result: entry.result ?? step.result,
+          reading: entry.reading ?? null,
+          readingUnit: entry.readingUnit ?? null,
+          adjustment: entry.adjustment ?? '',
+          updatedAt: now,
+        }
       : step;
   });
   return {
@@ -180,18 +187,43 @@ export function useLogChange(bowId: number) {
     mutationFn: async (input) => {
       const result = await sendOrKeep(
         queryClient,
-        { kind: 'change', title: `Change logged: ${input.kind}`, method: 'POST', path: `/api/bows/${bowId}/changes`, body: input, bowId, recordId: null },
+        {
+          kind: 'change',
+          title: `Change logged: ${input.kind}`,
+          method: 'POST',
+          path: `/api/bows/${bowId}/changes`,
+          body: input,
+          bowId,
+          recordId: null,
+        },
         changeResponseSchema,
       );
       if (!result.kept) return result.data;
       const me = queryClient.getQueryData<{ id: number; name: string }>(['me']);
       const summary = queryClient.getQueryData<LevelSummary>(levelKeys.summary(bowId));
       const now = new Date().toISOString();
-      const change = { id: 0, bowId, kind: input.kind, changedAt: input.changedAt, note: input.note ?? '', loggedBy: { id: me?.id ?? 0, name: me?.name ?? '' }, createdAt: now };
+      const change = {
+        id: 0,
+        bowId,
+        kind: input.kind,
+        changedAt: input.changedAt,
+        note: input.note ?? '',
+        loggedBy: { id: me?.id ?? 0, name: me?.name ?? '' },
+        createdAt: now,
+      };
       const reason = 'A change is kept on this phone, not sent yet: check the level once it is sent.';
       const level: LevelSummary = summary
         ? { ...summary, state: summary.state === 'verified' ? 'due' : summary.state, reason }
-        : { state: 'due', reason, lastCheck: null, changesSince: [], openCheckId: null, ageDays: null, maxAgeDays: 0, rangeConfirmed: false };
+        : {
+            state: 'due',
+            reason,
+            lastCheck: null,
+            changesSince: [],
+            openCheckId: null,
+            ageDays: null,
+            maxAgeDays: 0,
+            rangeConfirmed: false,
+          };
       return { change, level };
     },
     onSuccess: (result) => {
@@ -241,7 +273,8 @@ export async function uploadStepPhoto(checkId: number, step: LevelStepKey, file:
   }
   const payload = (await res.json().catch(() => null)) as { error?: { code?: string; message?: string } } | null;
   if (!res.ok) {
-    const message = payload?.error?.message ?? (res.status === 413 ? 'The photo is larger than 5 MB.' : `The upload failed (HTTP ${res.status}).`);
+    const message =
+      payload?.error?.message ?? (res.status === 413 ? 'The photo is larger than 5 MB.' : `The upload failed (HTTP ${res.status}).`);
     throw new ApiError(res.status, payload?.error?.code ?? 'error', message);
   }
   const parsed = photoResponseSchema.safeParse(payload);

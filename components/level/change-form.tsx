@@ -82,7 +82,15 @@ export function ChangeForm({ bowId, onLogged, onCancel }: ChangeFormProps) {
         control={control}
         name="kind"
         render={({ field, fieldState }) => (
-          <SegmentedControl size="large" label="What changed" options={kindOptions} value={field.value} onChange={field.onChange} error={fieldState.error?.message} testID="change-kind" />
+          <SegmentedControl
+            size="large"
+            label="What changed"
+            options={kindOptions}
+            value={field.value}
+            onChange={field.onChange}
+            error={fieldState.error?.message}
+            testID="change-kind"
+          />
         )}
       />
       <View style={styles.row}>
@@ -93,14 +101,28 @@ export function ChangeForm({ bowId, onLogged, onCancel }: ChangeFormProps) {
           <FormField control={control} name="time" label="Time (optional)" hint="HH:MM, 24-hour" autoCorrect={false} testID="change-time" />
         </View>
       </View>
-      <FormField control={control} name="note" label="Note (optional)" hint="E.g. new string, 20 twists, peep re-served" multiline testID="change-note" />
+      <FormField
+        control={control}
+        name="note"
+        label="Note (optional)"
+        hint="E.g. new string, 20 twists, peep re-served"
+        multiline
+        testID="change-note"
+      />
       {general ? (
         <Banner tone="error" title="Not logged">
           {general}
         </Banner>
       ) : null}
       <View style={styles.row}>
-        <Button label="Log the change" pendingLabel="Logging…" pending={log.isPending} onPress={submit} style={styles.big} testID="change-submit" />
+        <Button
+          label="Log the change"
+          pendingLabel="Logging…"
+          pending={log.isPending}
+          onPress={submit}
+          style={styles.big}
+          testID="change-submit"
+        />
         {onCancel ? <Button label="Cancel" variant="secondary" onPress={onCancel} style={styles.big} /> : null}
       </View>
     </View>

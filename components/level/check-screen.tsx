@@ -89,7 +89,12 @@ function Outcome({ check }: { check: LevelCheck }) {
       </Text>
       {level.data ? (
         <View style={styles.outcomeState}>
-          <ReadinessBadge state={level.data.state} label={levelStateLabels[level.data.state]} subject="Level" testID="check-outcome-state" />
+          <ReadinessBadge
+            state={level.data.state}
+            label={levelStateLabels[level.data.state]}
+            subject="Level"
+            testID="check-outcome-state"
+          />
           <Text>{level.data.reason}</Text>
           {level.data.state === 'failed' ? (
             <Text tone="soft">
@@ -121,7 +126,11 @@ function FinishBox({ check }: { check: LevelCheck }) {
           ? 'Every step has a result. Finishing records the check; it cannot be changed afterwards.'
           : `Still without a result: ${missing.map((step) => stepGuides[step.step].title.toLowerCase()).join(', ')}. Save each step first (choose "Skipped" for a step you leave out).`}
       </Text>
-      {save.error ? <Banner tone="error" title="Not finished">{save.error.message}</Banner> : null}
+      {save.error ? (
+        <Banner tone="error" title="Not finished">
+          {save.error.message}
+        </Banner>
+      ) : null}
       <Button
         label="Finish the check"
         pendingLabel="Finishing…"
@@ -139,7 +148,8 @@ function Discard({ check }: { check: LevelCheck }) {
   const router = useRouter();
   const discard = useDiscardCheck();
   const [asking, setAsking] = useState(false);
-  if (!asking) return <Button label="Discard this check" variant="quiet" onPress={() => setAsking(true)} style={styles.big} testID="discard-check" />;
+  if (!asking)
+    return <Button label="Discard this check" variant="quiet" onPress={() => setAsking(true)} style={styles.big} testID="discard-check" />;
   return (
     <ConfirmBar
       title="Discard this check?"
@@ -171,7 +181,9 @@ export function CheckScreen({ checkId }: { checkId: number }) {
   if (check.isPending) return <LoadingView label="Opening the check…" />;
   if (check.isError) {
     if (isApiError(check.error, 404) || isApiError(check.error, 400)) return <NotFoundScreen />;
-    return <ErrorView title="The check could not be loaded" error={check.error} onRetry={() => check.refetch()} retrying={check.isFetching} />;
+    return (
+      <ErrorView title="The check could not be loaded" error={check.error} onRetry={() => check.refetch()} retrying={check.isFetching} />
+    );
   }
 
   const data = check.data;
@@ -199,19 +211,23 @@ export function CheckScreen({ checkId }: { checkId: number }) {
   if (!editable) {
     body = (
       <>
-        {data.status === 'complete' ? <Outcome check={data} /> : <Banner tone="info">This check is in progress by {data.performedBy.name}; it is shown read-only.</Banner>}
+        {data.status === 'complete' ? (
+          <Outcome check={data} />
+        ) : (
+          <Banner tone="info">This check is in progress by {data.performedBy.name}; it is shown read-only.</Banner>
+        )}
         <View style={[styles.readGrid, wide && styles.readGridWide]}>
-        {data.steps.map((step) => (
-          <Card key={step.step} testID={`read-${step.step}`} style={wide ? styles.readCellWide : undefined}>
-            <Text variant="caption" tone="soft">
-              Step {levelStepKeys.indexOf(step.step) + 1}
-            </Text>
-            <Text role="heading" aria-level={2} variant="title">
-              {stepGuides[step.step].title}
-            </Text>
-            <SavedStep check={data} stepKey={step.step} />
-          </Card>
-        ))}
+          {data.steps.map((step) => (
+            <Card key={step.step} testID={`read-${step.step}`} style={wide ? styles.readCellWide : undefined}>
+              <Text variant="caption" tone="soft">
+                Step {levelStepKeys.indexOf(step.step) + 1}
+              </Text>
+              <Text role="heading" aria-level={2} variant="title">
+                {stepGuides[step.step].title}
+              </Text>
+              <SavedStep check={data} stepKey={step.step} />
+            </Card>
+          ))}
         </View>
         {data.note ? <Text>Note: {data.note}</Text> : null}
       </>

@@ -13,7 +13,19 @@ const checked = colors.signal;
 const good = colors.verified;
 const wrong = colors.failed;
 
-function Label({ x, y, children, anchor = 'start', color = colors.inkSoft }: { x: number; y: number; children: string; anchor?: 'start' | 'middle' | 'end'; color?: string }) {
+function Label({
+  x,
+  y,
+  children,
+  anchor = 'start',
+  color = colors.inkSoft,
+}: {
+  x: number;
+  y: number;
+  children: string;
+  anchor?: 'start' | 'middle' | 'end';
+  color?: string;
+}) {
   return (
     <SvgText x={x} y={y} fontSize={13} fill={color} fontFamily={fonts.bold} textAnchor={anchor}>
       {children}
@@ -22,7 +34,21 @@ function Label({ x, y, children, anchor = 'start', color = colors.inkSoft }: { x
 }
 
 /** A bubble vial centred on (cx, cy); `vertical` turns it upright; `offset` moves the bubble off centre (px). */
-function Vial({ cx, cy, length = 56, vertical = false, offset = 0, edge = checked }: { cx: number; cy: number; length?: number; vertical?: boolean; offset?: number; edge?: string }) {
+function Vial({
+  cx,
+  cy,
+  length = 56,
+  vertical = false,
+  offset = 0,
+  edge = checked,
+}: {
+  cx: number;
+  cy: number;
+  length?: number;
+  vertical?: boolean;
+  offset?: number;
+  edge?: string;
+}) {
   const thick = 14;
   const w = vertical ? thick : length;
   const h = vertical ? length : thick;
@@ -49,7 +75,21 @@ function Vial({ cx, cy, length = 56, vertical = false, offset = 0, edge = checke
 }
 
 /** A straight arrow from (x1, y1) to (x2, y2), with heads at one or both ends. */
-function Arrow({ x1, y1, x2, y2, color = checked, both = false }: { x1: number; y1: number; x2: number; y2: number; color?: string; both?: boolean }) {
+function Arrow({
+  x1,
+  y1,
+  x2,
+  y2,
+  color = checked,
+  both = false,
+}: {
+  x1: number;
+  y1: number;
+  x2: number;
+  y2: number;
+  color?: string;
+  both?: boolean;
+}) {
   const head = (fromX: number, fromY: number, toX: number, toY: number) => {
     const angle = Math.atan2(toY - fromY, toX - fromX);
     const size = 8;
@@ -72,8 +112,20 @@ function SideBow({ cx, cy, tall = 200, opacity = 1 }: { cx: number; cy: number; 
   const tipX = cx + 44;
   return (
     <G opacity={opacity}>
-      <Path d={`M${cx} ${cy - half * 0.55} Q ${cx + 12} ${cy - half * 0.9} ${tipX} ${cy - half}`} stroke={ink} strokeWidth={6} fill="none" strokeLinecap="round" />
-      <Path d={`M${cx} ${cy + half * 0.55} Q ${cx + 12} ${cy + half * 0.9} ${tipX} ${cy + half}`} stroke={ink} strokeWidth={6} fill="none" strokeLinecap="round" />
+      <Path
+        d={`M${cx} ${cy - half * 0.55} Q ${cx + 12} ${cy - half * 0.9} ${tipX} ${cy - half}`}
+        stroke={ink}
+        strokeWidth={6}
+        fill="none"
+        strokeLinecap="round"
+      />
+      <Path
+        d={`M${cx} ${cy + half * 0.55} Q ${cx + 12} ${cy + half * 0.9} ${tipX} ${cy + half}`}
+        stroke={ink}
+        strokeWidth={6}
+        fill="none"
+        strokeLinecap="round"
+      />
       <Rect x={cx - 8} y={cy - half * 0.6} width={16} height={half * 1.2} rx={7} fill={colors.slate} />
       <Line x1={tipX} y1={cy - half} x2={tipX} y2={cy + half} stroke={colors.inkSoft} strokeWidth={2} />
       {/* The cams at the limb tips (a compound bow). */}
@@ -99,9 +151,15 @@ function SetupDiagram() {
       {/* String level on the bowstring, and the plumb reference beside it. */}
       <Line x1={206} y1={8} x2={206} y2={232} stroke={reference} strokeWidth={1.5} strokeDasharray="5 5" />
       <Vial cx={184} cy={168} length={50} vertical />
-      <Label x={56} y={76} anchor="middle">Arrow level</Label>
-      <Label x={214} y={164} color={reference}>String plumb</Label>
-      <Label x={100} y={224}>Vise</Label>
+      <Label x={56} y={76} anchor="middle">
+        Arrow level
+      </Label>
+      <Label x={214} y={164} color={reference}>
+        String plumb
+      </Label>
+      <Label x={100} y={224}>
+        Vise
+      </Label>
     </>
   );
 }
@@ -111,11 +169,26 @@ function FirstAxisDiagram() {
     <>
       {/* Seen from behind: the string as the plumb reference, the sight bar beside it. */}
       <Line x1={232} y1={8} x2={232} y2={232} stroke={reference} strokeWidth={2.5} />
-      <Label x={240} y={24} color={reference}>String</Label>
-      <Label x={240} y={40} color={reference}>(plumb)</Label>
+      <Label x={240} y={24} color={reference}>
+        String
+      </Label>
+      <Label x={240} y={40} color={reference}>
+        (plumb)
+      </Label>
       {/* A mis-set bar, for contrast. */}
       <G opacity={0.55}>
-        <Rect x={138} y={36} width={14} height={168} rx={3} fill="none" stroke={wrong} strokeWidth={2} strokeDasharray="5 4" transform="rotate(7 145 120)" />
+        <Rect
+          x={138}
+          y={36}
+          width={14}
+          height={168}
+          rx={3}
+          fill="none"
+          stroke={wrong}
+          strokeWidth={2}
+          strokeDasharray="5 4"
+          transform="rotate(7 145 120)"
+        />
       </G>
       <Rect x={138} y={36} width={14} height={168} rx={3} fill={colors.slate} />
       {/* Pin housing on the bar, and the mount to the riser. */}
@@ -125,10 +198,18 @@ function FirstAxisDiagram() {
       {/* The level held against the bar's face. */}
       <Vial cx={131} cy={150} length={64} vertical />
       <Arrow x1={180} y1={60} x2={180} y2={120} both />
-      <Label x={186} y={94} color={checked}>Pin</Label>
-      <Label x={186} y={110} color={checked}>travel</Label>
-      <Label x={20} y={228}>Level on the bar face</Label>
-      <Label x={166} y={228} color={wrong}>tilted bar</Label>
+      <Label x={186} y={94} color={checked}>
+        Pin
+      </Label>
+      <Label x={186} y={110} color={checked}>
+        travel
+      </Label>
+      <Label x={20} y={228}>
+        Level on the bar face
+      </Label>
+      <Label x={166} y={228} color={wrong}>
+        tilted bar
+      </Label>
     </>
   );
 }
@@ -150,8 +231,12 @@ function SecondAxisDiagram() {
       <Polygon points="98,20 86,22 94,32" fill={checked} />
       <Path d="M 228 70 A 98 98 0 0 0 186 24" stroke={checked} strokeWidth={2.5} fill="none" />
       <Polygon points="182,20 194,22 186,32" fill={checked} />
-      <Label x={140} y={222} anchor="middle">Bubble centred</Label>
-      <Label x={12} y={100} color={checked}>roll</Label>
+      <Label x={140} y={222} anchor="middle">
+        Bubble centred
+      </Label>
+      <Label x={12} y={100} color={checked}>
+        roll
+      </Label>
     </>
   );
 }
@@ -162,7 +247,9 @@ function ThirdAxisDiagram() {
       {/* The plumb line with its weight. */}
       <Line x1={150} y1={4} x2={150} y2={216} stroke={reference} strokeWidth={2} />
       <Polygon points="150,232 142,216 158,216" fill={reference} />
-      <Label x={158} y={16} color={reference}>Plumb line</Label>
+      <Label x={158} y={16} color={reference}>
+        Plumb line
+      </Label>
       {/* The bow pitched up and pitched down along the line. */}
       <G transform="rotate(-18 150 120)">
         <SideBow cx={106} cy={120} tall={176} opacity={0.22} />
@@ -174,12 +261,18 @@ function ThirdAxisDiagram() {
       <Path d="M 52 70 A 80 80 0 0 0 52 170" stroke={checked} strokeWidth={2.5} fill="none" />
       <Polygon points="48,62 60,68 50,76" fill={checked} />
       <Polygon points="48,178 60,172 50,164" fill={checked} />
-      <Label x={6} y={58} color={checked}>up</Label>
-      <Label x={6} y={196} color={checked}>down</Label>
+      <Label x={6} y={58} color={checked}>
+        up
+      </Label>
+      <Label x={6} y={196} color={checked}>
+        down
+      </Label>
       {/* The bubble stays centred. */}
       <Rect x={196} y={88} width={116} height={66} rx={10} fill={colors.surface} stroke={colors.line} strokeWidth={1.5} />
       <Vial cx={254} cy={112} length={80} />
-      <Label x={254} y={144} anchor="middle">stays centred</Label>
+      <Label x={254} y={144} anchor="middle">
+        stays centred
+      </Label>
     </>
   );
 }
@@ -207,8 +300,12 @@ function RangeDiagram() {
       <Path d="M 62 68 L 236 186" stroke={reference} strokeWidth={2} strokeDasharray="6 5" fill="none" />
       {target(296, 64, 16)}
       {target(244, 192, 16)}
-      <Label x={300} y={100} anchor="end">Long shot</Label>
-      <Label x={180} y={140}>Steep shot</Label>
+      <Label x={300} y={100} anchor="end">
+        Long shot
+      </Label>
+      <Label x={180} y={140}>
+        Steep shot
+      </Label>
     </>
   );
 }

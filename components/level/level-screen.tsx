@@ -44,7 +44,8 @@ function StateCard({ level }: { level: LevelSummary }) {
       </Text>
       {level.lastCheck ? (
         <Text tone="soft">
-          Last check: {placeLabels[level.lastCheck.place].toLowerCase()}, {formatWhen(level.lastCheck.startedAt)}, by {level.lastCheck.performedBy.name}.
+          Last check: {placeLabels[level.lastCheck.place].toLowerCase()}, {formatWhen(level.lastCheck.startedAt)}, by{' '}
+          {level.lastCheck.performedBy.name}.
         </Text>
       ) : null}
       <Text variant="small" tone="soft">
@@ -98,7 +99,11 @@ function StartOrResume({ bowId, level, myOpenCheck }: { bowId: number; level: Le
 
 function CheckRow({ check }: { check: LevelCheck }) {
   return (
-    <Card href={`/checks/${check.id}`} accessibilityLabel={`Open the check of ${formatWhen(check.startedAt)}`} testID={`check-row-${check.id}`}>
+    <Card
+      href={`/checks/${check.id}`}
+      accessibilityLabel={`Open the check of ${formatWhen(check.startedAt)}`}
+      testID={`check-row-${check.id}`}
+    >
       <View style={styles.rowHead}>
         <Text variant="label">
           {formatWhen(check.startedAt)} · {placeLabels[check.place]}
@@ -165,9 +170,27 @@ function Changes({ bowId, level }: { bowId: number; level: LevelSummary }) {
       <SectionHeading
         title="Changes on the bow"
         description="A new string or cables, a moved sight, rest, peep or arrows: log it, and the level is due again."
-        action={!open ? <Button label="Log a change" icon={PlusIcon} variant="secondary" onPress={() => { setOpen(true); setLogged(null); }} style={styles.big} testID="log-change" /> : null}
+        action={
+          !open ? (
+            <Button
+              label="Log a change"
+              icon={PlusIcon}
+              variant="secondary"
+              onPress={() => {
+                setOpen(true);
+                setLogged(null);
+              }}
+              style={styles.big}
+              testID="log-change"
+            />
+          ) : null
+        }
       />
-      {logged ? <Banner tone="info" title="Change logged">{logged}</Banner> : null}
+      {logged ? (
+        <Banner tone="info" title="Change logged">
+          {logged}
+        </Banner>
+      ) : null}
       {open ? (
         <Card>
           <LevelCaution />
@@ -182,7 +205,11 @@ function Changes({ bowId, level }: { bowId: number; level: LevelSummary }) {
         </Card>
       ) : null}
       {changes.isPending ? <LoadingView label="Loading the change log…" /> : null}
-      {changes.isError ? <Banner tone="error" title="The change log could not be loaded">{changes.error.message}</Banner> : null}
+      {changes.isError ? (
+        <Banner tone="error" title="The change log could not be loaded">
+          {changes.error.message}
+        </Banner>
+      ) : null}
       {changes.data?.length === 0 ? <Text tone="soft">Nothing logged yet.</Text> : null}
       {changes.data?.map((change) => (
         <ChangeRow key={change.id} change={change} mine={change.loggedBy.id === me.data?.id} since={since.has(change.id)} />
@@ -207,7 +234,9 @@ export function LevelScreen({ bowId }: { bowId: number }) {
   if (level.isPending) return <LoadingView label="Loading the level…" />;
   if (level.isError) {
     if (isApiError(level.error, 404) || isApiError(level.error, 400)) return <NotFoundScreen />;
-    return <ErrorView title="The level could not be loaded" error={level.error} onRetry={() => level.refetch()} retrying={level.isFetching} />;
+    return (
+      <ErrorView title="The level could not be loaded" error={level.error} onRetry={() => level.refetch()} retrying={level.isFetching} />
+    );
   }
   const nickname = bow.data?.nickname ?? 'Bow';
   const myOpenCheck = checks.data?.find((check) => check.status === 'open' && check.performedBy.id === me.data?.id) ?? null;
@@ -220,7 +249,9 @@ export function LevelScreen({ bowId }: { bowId: number }) {
         <SectionHeading title="Checks" />
         {checks.isPending ? <LoadingView label="Loading the checks…" /> : null}
         {checks.data?.length === 0 ? <Text tone="soft">No checks yet.</Text> : null}
-        {checks.data?.map((check) => <CheckRow key={check.id} check={check} />)}
+        {checks.data?.map((check) => (
+          <CheckRow key={check.id} check={check} />
+        ))}
       </View>
     </View>
   );
@@ -234,7 +265,15 @@ export function LevelScreen({ bowId }: { bowId: number }) {
           level={1}
           title="Level"
           description={`${nickname}: sight level on all three axes`}
-          action={<Button label="Before a trip" variant="secondary" href={`/bows/${bowId}/readiness`} style={styles.big} testID="open-readiness" />}
+          action={
+            <Button
+              label="Before a trip"
+              variant="secondary"
+              href={`/bows/${bowId}/readiness`}
+              style={styles.big}
+              testID="open-readiness"
+            />
+          }
         />
       </View>
       {wide ? (

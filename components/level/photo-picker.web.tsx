@@ -24,7 +24,14 @@ export function PhotoPicker({ photo, onPick, onRemove, pending = false, error, d
       <Text variant="small" tone="soft">
         A JPEG, PNG or WebP picture of the level or the bubble, up to 5 MB.
       </Text>
-      {photo ? <Image source={{ uri: photo.url }} style={styles.image} accessibilityLabel="Photo of this step" testID={testID ? `${testID}-image` : undefined} /> : null}
+      {photo ? (
+        <Image
+          source={{ uri: photo.url }}
+          style={styles.image}
+          accessibilityLabel="Photo of this step"
+          testID={testID ? `${testID}-image` : undefined}
+        />
+      ) : null}
       <input
         ref={input}
         type="file"

@@ -8,7 +8,9 @@ import { Button } from '@/components/ui/button';
 
 /** A "Print" button that opens the browser's print dialog. */
 export function PrintButton({ testID }: { testID?: string }) {
-  return <Button label="Print this page" variant="secondary" onPress={() => window.print()} style={{ minHeight: bigTap }} testID={testID} />;
+  return (
+    <Button label="Print this page" variant="secondary" onPress={() => window.print()} style={{ minHeight: bigTap }} testID={testID} />
+  );
 }
 
 /**

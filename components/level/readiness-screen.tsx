@@ -114,7 +114,14 @@ export function ReadinessScreen({ bowId }: { bowId: number }) {
   if (readiness.isPending) return <LoadingView label="Gathering the bow's records…" />;
   if (readiness.isError) {
     if (isApiError(readiness.error, 404) || isApiError(readiness.error, 400)) return <NotFoundScreen />;
-    return <ErrorView title="The summary could not be loaded" error={readiness.error} onRetry={() => readiness.refetch()} retrying={readiness.isFetching} />;
+    return (
+      <ErrorView
+        title="The summary could not be loaded"
+        error={readiness.error}
+        onRetry={() => readiness.refetch()}
+        retrying={readiness.isFetching}
+      />
+    );
   }
   const data = readiness.data;
   const { level } = data;
@@ -144,7 +151,8 @@ export function ReadinessScreen({ bowId }: { bowId: number }) {
             <Text>{level.reason}</Text>
             {level.lastCheck ? (
               <Text variant="small" tone="soft">
-                Last check {formatWhen(level.lastCheck.startedAt)} ({level.lastCheck.place}){level.rangeConfirmed ? ', confirmed at the range' : ''}.
+                Last check {formatWhen(level.lastCheck.startedAt)} ({level.lastCheck.place})
+                {level.rangeConfirmed ? ', confirmed at the range' : ''}.
               </Text>
             ) : null}
           </Card>
@@ -162,8 +170,8 @@ export function ReadinessScreen({ bowId }: { bowId: number }) {
 
         {sighted.length > 1 ? (
           <Text tone="soft">
-            {sighted.length} arrow builds are sighted in on this bow. Each tape below is checked against its own build’s sight-ins only: take the tape of the arrows
-            you will shoot.
+            {sighted.length} arrow builds are sighted in on this bow. Each tape below is checked against its own build’s sight-ins only:
+            take the tape of the arrows you will shoot.
           </Text>
         ) : null}
         {sighted.map((part) => (
@@ -182,8 +190,8 @@ export function ReadinessScreen({ bowId }: { bowId: number }) {
         ) : null}
 
         <Banner tone="caution">
-          A printed tape is an estimate until every distance you will shoot has been confirmed at the range. Slope and altitude
-          corrections are estimates too: confirm on real terrain.
+          A printed tape is an estimate until every distance you will shoot has been confirmed at the range. Slope and altitude corrections
+          are estimates too: confirm on real terrain.
         </Banner>
       </View>
     </Screen>

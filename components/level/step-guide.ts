@@ -43,7 +43,8 @@ export const stepGuides: Record<LevelStepKey, StepGuide> = {
   'first-axis': {
     title: 'First axis',
     summary: 'The sight’s travel runs parallel to the string.',
-    setUp: 'Keep the bow as the set-up left it: arrow level, string plumb. Hold a small level flat against the sight’s vertical face, the bar the elevation slide runs on.',
+    setUp:
+      'Keep the bow as the set-up left it: arrow level, string plumb. Hold a small level flat against the sight’s vertical face, the bar the elevation slide runs on.',
     lookAt: 'The level on the sight’s face, compared with the string.',
     levelMeans:
       'With the string plumb, the sight’s face reads plumb too. Then moving the pin up or down for distance does not also move it left or right.',
@@ -74,8 +75,7 @@ export const stepGuides: Record<LevelStepKey, StepGuide> = {
     setUp:
       'Hang a plumb line (a weighted string) in front of you. Hold the bow upright with the string lined up on the plumb line and the sight’s bubble centred.',
     lookAt: 'The bubble, while you pitch the bow to aim up the plumb line and then down it, keeping the string on the line.',
-    levelMeans:
-      'The bubble stays centred through the whole pitch. Then steep uphill and downhill shots do not drift left or right.',
+    levelMeans: 'The bubble stays centred through the whole pitch. Then steep uphill and downhill shots do not drift left or right.',
     adjust:
       'If the bubble runs off as you pitch, turn the third-axis adjustment a little, re-centre with the second axis, and pitch again. Small steps: each one affects the other.',
     adjustExample: 'Two small turns of the third-axis screw, then re-centred the bubble',

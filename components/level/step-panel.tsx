@@ -17,20 +17,13 @@ import { FormField } from '@/components/ui/form-field';
 import { SegmentedControl } from '@/components/ui/segmented-control';
 import { Text } from '@/components/ui/text';
 import { borders, colors, radii, space } from '@/components/theme';
-import {
-  levelStepKeys,
-  readingUnitLabels,
-  type LevelCheck,
-  type LevelStepKey,
-  type ReadingUnit,
-  type StepEntry,
-} from '@/shared/level';
+import { levelStepKeys, readingUnitLabels, type LevelCheck, type LevelStepKey, type ReadingUnit, type StepEntry } from '@/shared/level';
 
 const unitOptions = (Object.keys(readingUnitLabels) as ReadingUnit[]).map((value) => ({ value, label: readingUnitLabels[value] }));
 
 function Guidance({ stepKey }: { stepKey: LevelStepKey }) {
   const guide = stepGuides[stepKey];
-  const rows: Array<[string, string]> = [
+  const rows: [string, string][] = [
     ['Set up', guide.setUp],
     ['Look at', guide.lookAt],
     ['Level means', guide.levelMeans],
@@ -73,7 +66,16 @@ export interface StepPanelProps {
  * `completes`).
  * Example: `<StepPanel check={check} stepKey="second-axis" editable submitLabel="Save and continue" onSaved={next} />`
  */
-export function StepPanel({ check, stepKey, editable, submitLabel, completes = false, onSaved, secondary, sideBySide = false }: StepPanelProps) {
+export function StepPanel({
+  check,
+  stepKey,
+  editable,
+  submitLabel,
+  completes = false,
+  onSaved,
+  secondary,
+  sideBySide = false,
+}: StepPanelProps) {
   const saved = check.steps.find((step) => step.step === stepKey);
   const guide = stepGuides[stepKey];
   const number = levelStepKeys.indexOf(stepKey) + 1;
@@ -124,14 +126,28 @@ export function StepPanel({ check, stepKey, editable, submitLabel, completes = f
       />
       <View style={styles.readingRow}>
         <View style={styles.readingField}>
-          <FormField control={control} name="reading" label="Reading (optional)" hint="Bubble or plumb offset, or degrees" numeric testID={`${stepKey}-reading`} />
+          <FormField
+            control={control}
+            name="reading"
+            label="Reading (optional)"
+            hint="Bubble or plumb offset, or degrees"
+            numeric
+            testID={`${stepKey}-reading`}
+          />
         </View>
         <View style={styles.readingUnit}>
           <Controller
             control={control}
             name="readingUnit"
             render={({ field, fieldState }) => (
-              <SegmentedControl size="large" label="Unit" options={unitOptions} value={field.value} onChange={field.onChange} error={fieldState.error?.message} />
+              <SegmentedControl
+                size="large"
+                label="Unit"
+                options={unitOptions}
+                value={field.value}
+                onChange={field.onChange}
+                error={fieldState.error?.message}
+              />
             )}
           />
         </View>
@@ -226,7 +242,13 @@ export function SavedStep({ check, stepKey }: { check: LevelCheck; stepKey: Leve
         ) : null}
       </View>
       {step.adjustment ? <Text>{step.adjustment}</Text> : null}
-      {step.photo ? <Image source={{ uri: step.photo.url }} style={styles.savedImage} accessibilityLabel={`Photo of the ${stepGuides[stepKey].title.toLowerCase()}`} /> : null}
+      {step.photo ? (
+        <Image
+          source={{ uri: step.photo.url }}
+          style={styles.savedImage}
+          accessibilityLabel={`Photo of the ${stepGuides[stepKey].title.toLowerCase()}`}
+        />
+      ) : null}
     </View>
   );
 }

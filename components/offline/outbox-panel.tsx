@@ -2,13 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import {
-  discardOutboxItem,
-  flushOutbox,
-  outboxItemText,
-  retryOutboxItem,
-  type OutboxItem,
-} from '@/components/offline/outbox';
+import { discardOutboxItem, flushOutbox, outboxItemText, retryOutboxItem, type OutboxItem } from '@/components/offline/outbox';
 import { useOutbox } from '@/components/offline/use-outbox';
 import { useOnline } from '@/components/offline/use-online';
 import { Button } from '@/components/ui/button';
@@ -47,7 +41,12 @@ function OutboxRow({ item, index }: { item: OutboxItem; index: number }) {
   const [copied, setCopied] = useState<'yes' | 'no' | null>(null);
   const refused = item.state === 'refused';
   return (
-    <View style={[styles.item, refused && styles.itemRefused]} testID={`outbox-item-${index}`} aria-label={`${item.title}: ${stateWords[item.state]}`} role="group">
+    <View
+      style={[styles.item, refused && styles.itemRefused]}
+      testID={`outbox-item-${index}`}
+      aria-label={`${item.title}: ${stateWords[item.state]}`}
+      role="group"
+    >
       <Text variant="label">{item.title}</Text>
       <Text variant="small" tone={refused ? 'failed' : 'due'} testID={`outbox-state-${index}`}>
         {stateWords[item.state]} · made {seenAt(Date.parse(item.createdAt))}
@@ -74,7 +73,12 @@ function OutboxRow({ item, index }: { item: OutboxItem; index: number }) {
         </Text>
       ) : null}
       <View style={styles.actions}>
-        <Button label={showing ? 'Hide what was typed' : 'Show what was typed'} variant="quiet" onPress={() => setShowing(!showing)} testID={`outbox-show-${index}`} />
+        <Button
+          label={showing ? 'Hide what was typed' : 'Show what was typed'}
+          variant="quiet"
+          onPress={() => setShowing(!showing)}
+          testID={`outbox-show-${index}`}
+        />
         <Button
           label="Copy"
           variant="quiet"
@@ -84,14 +88,27 @@ function OutboxRow({ item, index }: { item: OutboxItem; index: number }) {
           }}
           testID={`outbox-copy-${index}`}
         />
-        {refused ? <Button label="Try again" variant="quiet" onPress={() => retryOutboxItem(item.id)} testID={`outbox-retry-${index}`} /> : null}
+        {refused ? (
+          <Button label="Try again" variant="quiet" onPress={() => retryOutboxItem(item.id)} testID={`outbox-retry-${index}`} />
+        ) : null}
         {asking ? (
           <>
-            <Button label="Discard for good" variant="danger" onPress={() => discardOutboxItem(item.id)} testID={`outbox-discard-confirm-${index}`} />
+            <Button
+              label="Discard for good"
+              variant="danger"
+              onPress={() => discardOutboxItem(item.id)}
+              testID={`outbox-discard-confirm-${index}`}
+            />
             <Button label="Keep it" variant="quiet" onPress={() => setAsking(false)} />
           </>
         ) : (
-          <Button label="Discard" variant="quiet" onPress={() => setAsking(true)} disabled={item.state === 'sending'} testID={`outbox-discard-${index}`} />
+          <Button
+            label="Discard"
+            variant="quiet"
+            onPress={() => setAsking(true)}
+            disabled={item.state === 'sending'}
+            testID={`outbox-discard-${index}`}
+          />
         )}
       </View>
     </View>
@@ -111,18 +128,24 @@ export function OutboxPanel() {
   if (items.length === 0) return null;
   const waiting = items.filter((item) => item.state !== 'refused').length;
   const refused = items.length - waiting;
-  const summary = [waiting > 0 ? `${waiting} on this phone, not sent yet` : null, refused > 0 ? `${refused} refused by the server` : null].filter(Boolean).join(' · ');
+  const summary = [waiting > 0 ? `${waiting} on this phone, not sent yet` : null, refused > 0 ? `${refused} refused by the server` : null]
+    .filter(Boolean)
+    .join(' · ');
   return (
     <View style={styles.panel} testID="outbox-panel" role="region" aria-label="Kept on this phone">
       <View style={styles.head}>
         <Text variant="label" style={styles.grow}>
           {summary}
         </Text>
-        {online && waiting > 0 ? <Button label="Send now" variant="secondary" onPress={() => flushOutbox(queryClient)} testID="outbox-send" /> : null}
+        {online && waiting > 0 ? (
+          <Button label="Send now" variant="secondary" onPress={() => flushOutbox(queryClient)} testID="outbox-send" />
+        ) : null}
       </View>
       {waiting > 0 ? (
         <Text variant="small" tone="soft">
-          {online ? 'Sending in the order you made them.' : 'Sent in the order you made them when the signal is back. They stay here if you close the app.'}
+          {online
+            ? 'Sending in the order you made them.'
+            : 'Sent in the order you made them when the signal is back. They stay here if you close the app.'}
         </Text>
       ) : null}
       {items.map((item, index) => (

@@ -140,7 +140,9 @@ async function save(item: OutboxItem) {
   await outboxDb.put(item.id, item);
 }
 
-export type NewOutboxItem = Pick<OutboxItem, 'userId' | 'kind' | 'title' | 'method' | 'path' | 'body' | 'bowId' | 'recordId'> & { id?: string };
+export type NewOutboxItem = Pick<OutboxItem, 'userId' | 'kind' | 'title' | 'method' | 'path' | 'body' | 'bowId' | 'recordId'> & {
+  id?: string;
+};
 
 /**
  * Keeps a write on the device. With the id of a waiting item, that item's
@@ -185,7 +187,12 @@ export async function retryOutboxItem(id: string) {
 }
 
 /** Statuses that say nothing final about the write: keep it waiting and try later. */
-const tryLater = (error: ApiError) => error.status === 0 || error.status >= 500 || [401, 408, 429].includes(error.status) || error.code === 'in_progress' || error.code === 'csrf';
+const tryLater = (error: ApiError) =>
+  error.status === 0 ||
+  error.status >= 500 ||
+  [401, 408, 429].includes(error.status) ||
+  error.code === 'in_progress' ||
+  error.code === 'csrf';
 
 /** What to do with a sent write's answer (refresh queries); set once by the provider. */
 export function setOutboxAfterSend(handler: (queryClient: QueryClient, sent: OutboxSent) => void) {

@@ -55,7 +55,12 @@ export const keptAccount = () => current?.userId ?? null;
 export async function keepCacheFor(queryClient: QueryClient, userId: number) {
   if (current?.userId === userId) return;
   stopKeeping();
-  const entry: AccountPersister = { userId, persister: persisterFor(userId, () => entry.closed), closed: false, unsubscribe: () => undefined };
+  const entry: AccountPersister = {
+    userId,
+    persister: persisterFor(userId, () => entry.closed),
+    closed: false,
+    unsubscribe: () => undefined,
+  };
   entry.unsubscribe = persistQueryClientSubscribe({
     queryClient,
     persister: entry.persister,

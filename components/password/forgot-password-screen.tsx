@@ -47,14 +47,7 @@ export function ForgotPasswordScreen() {
               {forgot.error.message}
             </Banner>
           ) : null}
-          <FormField
-            control={control}
-            name="email"
-            label="E-mail"
-            {...emailInputProps}
-            returnKeyType="send"
-            onSubmitEditing={submit}
-          />
+          <FormField control={control} name="email" label="E-mail" {...emailInputProps} returnKeyType="send" onSubmitEditing={submit} />
           <Button
             label={forgot.isSuccess ? 'Send another link' : 'Send the link'}
             pendingLabel="Sending…"

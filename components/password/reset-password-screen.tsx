@@ -73,7 +73,11 @@ export function ResetPasswordScreen({ token }: { token: string | undefined }) {
             </Banner>
           ) : null}
           {reset.isError && !reset.error.fields.password ? (
-            <Banner tone="error" title="Could not change the password" action={linkDead ? <Button label="Ask for a new link" variant="secondary" href="/forgot-password" /> : undefined}>
+            <Banner
+              tone="error"
+              title="Could not change the password"
+              action={linkDead ? <Button label="Ask for a new link" variant="secondary" href="/forgot-password" /> : undefined}
+            >
               {reset.error.message}
             </Banner>
           ) : null}
@@ -89,7 +93,15 @@ export function ResetPasswordScreen({ token }: { token: string | undefined }) {
                 returnKeyType="next"
                 onSubmitEditing={() => setFocus('repeat')}
               />
-              <FormField control={control} name="repeat" label="New password again" autoComplete="new-password" secureTextEntry returnKeyType="go" onSubmitEditing={submit} />
+              <FormField
+                control={control}
+                name="repeat"
+                label="New password again"
+                autoComplete="new-password"
+                secureTextEntry
+                returnKeyType="go"
+                onSubmitEditing={submit}
+              />
               <Button label="Change the password" pendingLabel="Changing…" pending={reset.isPending} onPress={submit} fullWidth />
             </>
           ) : null}

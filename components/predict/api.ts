@@ -15,7 +15,8 @@ export type PredictVariables = { bowId: number; request: PredictRequest };
  */
 export function usePredict() {
   return useMutation<PredictResponse, ApiError, PredictVariables>({
-    mutationFn: ({ bowId, request }) => apiFetch(`/api/bows/${bowId}/predict`, { method: 'POST', body: request, schema: predictResponseSchema }),
+    mutationFn: ({ bowId, request }) =>
+      apiFetch(`/api/bows/${bowId}/predict`, { method: 'POST', body: request, schema: predictResponseSchema }),
   });
 }
 
@@ -24,7 +25,11 @@ export function usePredict() {
  * the build's components, the sight-in and the tape's range and width.
  * Example: predictedTapeHref(3, build, { sightInId: 12, from: 20, to: 80, width: 12 }) → '/api/bows/3/predict/tape.svg?name=…&grainsPerInch=9.3&…'
  */
-export function predictedTapeHref(bowId: number, build: BuildInput, options: { sightInId?: number; from: number; to: number; width: number }): string {
+export function predictedTapeHref(
+  bowId: number,
+  build: BuildInput,
+  options: { sightInId?: number; from: number; to: number; width: number },
+): string {
   const query = new URLSearchParams();
   for (const [key, value] of Object.entries(build)) {
     if (value === null || value === undefined || value === '') continue;

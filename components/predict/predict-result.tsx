@@ -65,14 +65,26 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHre
         <SectionHeading title={`${result.build.name}, ${mass(result.build.totalGr)}`} level={2} description={source} />
         <View style={styles.figures}>
           <Figure label="Speed" value={speed(prediction.speedFps)} testID="predict-speed" />
-          <Figure label="Kinetic energy" value={`${formatFixed(prediction.kineticEnergyFtLbf, 1)} ft·lbf`} detail={`${formatFixed(prediction.kineticEnergyJ, 1)} J`} />
-          <Figure label="Momentum" value={`${formatFixed(prediction.momentumSlugFps, 3)}`} detail={`slug·ft/s · ${formatFixed(prediction.momentumKgMps, 2)} kg·m/s`} />
-          <Figure label="FOC" value={result.build.focPct === null ? '—' : `${formatFixed(result.build.focPct, 1)} %`} detail={result.build.focPct === null ? 'balance point not given' : undefined} />
+          <Figure
+            label="Kinetic energy"
+            value={`${formatFixed(prediction.kineticEnergyFtLbf, 1)} ft·lbf`}
+            detail={`${formatFixed(prediction.kineticEnergyJ, 1)} J`}
+          />
+          <Figure
+            label="Momentum"
+            value={`${formatFixed(prediction.momentumSlugFps, 3)}`}
+            detail={`slug·ft/s · ${formatFixed(prediction.momentumKgMps, 2)} kg·m/s`}
+          />
+          <Figure
+            label="FOC"
+            value={result.build.focPct === null ? '—' : `${formatFixed(result.build.focPct, 1)} %`}
+            detail={result.build.focPct === null ? 'balance point not given' : undefined}
+          />
         </View>
         {prediction.virtualMass ? (
           <Text variant="small" tone="soft">
-            The bow’s fit: {formatFixed(prediction.virtualMass.energyJ, 1)} J shared with a virtual mass of {formatFixed(prediction.virtualMass.virtualMassGr, 0)} gr of limbs
-            and string (speed = √(2E / (arrow + virtual mass))).{' '}
+            The bow’s fit: {formatFixed(prediction.virtualMass.energyJ, 1)} J shared with a virtual mass of{' '}
+            {formatFixed(prediction.virtualMass.virtualMassGr, 0)} gr of limbs and string (speed = √(2E / (arrow + virtual mass))).{' '}
             {result.chronographed.length === 2
               ? 'Two builds fit it exactly; a third chronographed build would check it.'
               : `The chronographed builds sit ${formatFixed(prediction.virtualMass.rmsFps, 1)} fps (RMS) off it.`}
@@ -111,24 +123,30 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHre
                 Δ mm
               </Text>
             </View>
-            {prediction.marks.filter((mark) => shown(mark.distance)).map((mark, index) => (
-              <View key={mark.distance} style={[styles.row, index % 2 === 1 && styles.stripe]} role="row">
-                <Text variant="numeral" style={styles.distance} role="rowheader">
-                  {mark.distance}
-                </Text>
-                <Text variant="numeral" style={styles.cell} role="cell">
-                  {formatFixed(mark.markMm, 1)}
-                </Text>
-                <Text variant="numeral" style={[styles.cell, styles.soft]} role="cell">
-                  {formatFixed(mark.sightedBuildMarkMm, 1)}
-                </Text>
-                <Text variant="numeral" style={styles.cell} role="cell">
-                  {formatSigned(mark.differenceMm, 1)}
-                </Text>
-              </View>
-            ))}
+            {prediction.marks
+              .filter((mark) => shown(mark.distance))
+              .map((mark, index) => (
+                <View key={mark.distance} style={[styles.row, index % 2 === 1 && styles.stripe]} role="row">
+                  <Text variant="numeral" style={styles.distance} role="rowheader">
+                    {mark.distance}
+                  </Text>
+                  <Text variant="numeral" style={styles.cell} role="cell">
+                    {formatFixed(mark.markMm, 1)}
+                  </Text>
+                  <Text variant="numeral" style={[styles.cell, styles.soft]} role="cell">
+                    {formatFixed(mark.sightedBuildMarkMm, 1)}
+                  </Text>
+                  <Text variant="numeral" style={styles.cell} role="cell">
+                    {formatSigned(mark.differenceMm, 1)}
+                  </Text>
+                </View>
+              ))}
           </View>
-          <SectionHeading title="Predicted tape" level={3} description="PREDICTED runs along its edge, so a cut-out tape still says so. Confirm two distances at the range before you trust the rest." />
+          <SectionHeading
+            title="Predicted tape"
+            level={3}
+            description="PREDICTED runs along its edge, so a cut-out tape still says so. Confirm two distances at the range before you trust the rest."
+          />
           <PredictedTapePreview
             model={result.model}
             from={20}
@@ -136,14 +154,31 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHre
             widthMm={tapeWidthMm}
             labels={{ bow: bowName, build: `${result.build.name}, ${mass(result.build.totalGr)}`, speed: speedWords }}
           />
-          {tapeHref ? <DownloadLink label="Download the predicted tape (SVG)" href={tapeHref(20, tapeTo)} fileName="predicted-tape.svg" testID="predict-download" /> : null}
+          {tapeHref ? (
+            <DownloadLink
+              label="Download the predicted tape (SVG)"
+              href={tapeHref(20, tapeTo)}
+              fileName="predicted-tape.svg"
+              testID="predict-download"
+            />
+          ) : null}
           {sheetHref ? (
             <View style={styles.downloads}>
               <Text variant="small" tone="soft">
                 The print sheet: PREDICTED — NOT SIGHTED at its head, calibration bars, the tape at 100 %. Print at actual size.
               </Text>
-              <DownloadLink label="Print sheet (PDF)" href={sheetHref(20, tapeTo, 'pdf')} fileName="predicted-sheet.pdf" testID="predict-sheet-pdf" />
-              <DownloadLink label="Print sheet (SVG)" href={sheetHref(20, tapeTo, 'svg')} fileName="predicted-sheet.svg" testID="predict-sheet-svg" />
+              <DownloadLink
+                label="Print sheet (PDF)"
+                href={sheetHref(20, tapeTo, 'pdf')}
+                fileName="predicted-sheet.pdf"
+                testID="predict-sheet-pdf"
+              />
+              <DownloadLink
+                label="Print sheet (SVG)"
+                href={sheetHref(20, tapeTo, 'svg')}
+                fileName="predicted-sheet.svg"
+                testID="predict-sheet-svg"
+              />
             </View>
           ) : null}
         </Card>

@@ -114,7 +114,12 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
 
   const chooseStart = (value: string) => {
     setStartFrom(value);
-    reset(startingText(bow.builds.find((build) => String(build.id) === value), units));
+    reset(
+      startingText(
+        bow.builds.find((build) => String(build.id) === value),
+        units,
+      ),
+    );
     predict.reset();
   };
 
@@ -188,7 +193,14 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
           ))}
         </View>
       ) : null}
-      <Button label="Predict" pendingLabel="Predicting…" pending={predict.isPending} disabled={missing.length > 0} onPress={submit} testID="predict-submit" />
+      <Button
+        label="Predict"
+        pendingLabel="Predicting…"
+        pending={predict.isPending}
+        disabled={missing.length > 0}
+        onPress={submit}
+        testID="predict-submit"
+      />
     </Card>
   );
 
@@ -207,10 +219,18 @@ function PredictBody({ bow, unit, startFromBuildId }: { bow: BowDetail; unit: Le
       result={predict.data}
       bowName={bow.nickname}
       tapeWidthMm={bow.tapeWidthMm}
-      tapeHref={sent ? (from, to) => predictedTapeHref(bow.id, sent, { sightInId: predict.data!.sightIn?.id, from, to, width: bow.tapeWidthMm }) : null}
+      tapeHref={
+        sent
+          ? (from, to) => predictedTapeHref(bow.id, sent, { sightInId: predict.data!.sightIn?.id, from, to, width: bow.tapeWidthMm })
+          : null
+      }
       sheetHref={
         sent
-          ? (from, to, format) => predictedTapeHref(bow.id, sent, { sightInId: predict.data!.sightIn?.id, from, to, width: bow.tapeWidthMm }).replace('/predict/tape.svg?', `/predict/sheet.${format}?`)
+          ? (from, to, format) =>
+              predictedTapeHref(bow.id, sent, { sightInId: predict.data!.sightIn?.id, from, to, width: bow.tapeWidthMm }).replace(
+                '/predict/tape.svg?',
+                `/predict/sheet.${format}?`,
+              )
           : null
       }
       sightInName={(() => {

@@ -35,7 +35,11 @@ export function PredictedTapePreview({ model, from, to, widthMm, labels, zoom = 
   if (!drawing) return <Text tone="soft">The tape cannot be drawn for this range.</Text>;
   return (
     <View style={styles.box} testID="predicted-tape-preview">
-      <View role="img" accessibilityLabel={`Predicted tape, ${from} to ${to} ${model.distanceUnit}, marked predicted, not sighted`} style={styles.paper}>
+      <View
+        role="img"
+        accessibilityLabel={`Predicted tape, ${from} to ${to} ${model.distanceUnit}, marked predicted, not sighted`}
+        style={styles.paper}
+      >
         <SvgXml xml={drawing.xml} width={drawing.widthMm * zoom} height={drawing.heightMm * zoom} />
       </View>
       <Text variant="caption" tone="soft" style={styles.caption}>

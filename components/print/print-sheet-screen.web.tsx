@@ -95,8 +95,8 @@ export function PrintSheetScreen({ sightInId, query, source }: PrintSheetScreenP
           {TAPE_VIEW_CAUTION}
         </p>
         <p style={styles.note}>
-          In the print dialog choose {paper === 'a4' ? 'A4' : 'Letter'} paper, scale 100 % (“Actual size”), margins none. The preview here is shrunk to fit
-          your screen; the printed sheet is true size.
+          In the print dialog choose {paper === 'a4' ? 'A4' : 'Letter'} paper, scale 100 % (“Actual size”), margins none. The preview here
+          is shrunk to fit your screen; the printed sheet is true size.
         </p>
         {sheet.isPending ? <p style={styles.note}>Drawing the sheet…</p> : null}
         {sheet.isError ? (
@@ -114,7 +114,12 @@ export function PrintSheetScreen({ sightInId, query, source }: PrintSheetScreenP
           data-paper={paper}
           onLoad={onLoad}
           // On screen: as wide as the paper or the screen, whichever is less, keeping its shape; printed: true size (printCss).
-          style={{ ...styles.sheet, width: `min(100%, ${size.widthMm}mm)`, height: 'auto', aspectRatio: `${size.widthMm} / ${size.heightMm}` }}
+          style={{
+            ...styles.sheet,
+            width: `min(100%, ${size.widthMm}mm)`,
+            height: 'auto',
+            aspectRatio: `${size.widthMm} / ${size.heightMm}`,
+          }}
         />
       ) : null}
     </div>

@@ -32,7 +32,11 @@ export function AccountShares() {
   }
   return (
     <Card testID="account-shares">
-      <SectionHeading title="Sharing" level={2} description="Bows you share with a technician. Share a bow from its page: Share, log and export." />
+      <SectionHeading
+        title="Sharing"
+        level={2}
+        description="Bows you share with a technician. Share a bow from its page: Share, log and export."
+      />
       {shares.isError ? <Text tone="failed">{shares.error.message}</Text> : null}
       {shares.data && shares.data.length === 0 ? <Text tone="soft">You share no bows. Your records are yours alone.</Text> : null}
       {shares.data?.map((share) => (

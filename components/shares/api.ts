@@ -60,7 +60,8 @@ export function useBowAudit(bowId: number, enabled = true) {
 export function useInviteTech(bowId: number) {
   const queryClient = useQueryClient();
   return useMutation<Share, ApiError, { email: string }>({
-    mutationFn: async (input) => (await apiFetch(`/api/bows/${bowId}/shares`, { method: 'POST', body: input, schema: shareResponseSchema })).share,
+    mutationFn: async (input) =>
+      (await apiFetch(`/api/bows/${bowId}/shares`, { method: 'POST', body: input, schema: shareResponseSchema })).share,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: shareKeys.all }),
   });
 }
@@ -88,7 +89,8 @@ export function useInvitePreview(token: string | undefined) {
 export function useAcceptInvite() {
   const queryClient = useQueryClient();
   return useMutation<Share, ApiError, string>({
-    mutationFn: async (token) => (await apiFetch('/api/invites/accept', { method: 'POST', body: { token }, schema: shareResponseSchema })).share,
+    mutationFn: async (token) =>
+      (await apiFetch('/api/invites/accept', { method: 'POST', body: { token }, schema: shareResponseSchema })).share,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['clients'] }),
   });
 }

@@ -67,10 +67,20 @@ export function AuditList({ entries, showBow = false, onFilter, testID }: AuditL
           {onFilter ? (
             <View style={styles.filters}>
               {entry.bow ? (
-                <Button label={`Only ${entry.bow.nickname}`} variant="quiet" onPress={() => onFilter({ bow: entry.bow! })} testID={`audit-${entry.id}-only-bow`} />
+                <Button
+                  label={`Only ${entry.bow.nickname}`}
+                  variant="quiet"
+                  onPress={() => onFilter({ bow: entry.bow! })}
+                  testID={`audit-${entry.id}-only-bow`}
+                />
               ) : null}
               {entry.actor ? (
-                <Button label={`Only ${entry.actor.name}`} variant="quiet" onPress={() => onFilter({ account: entry.actor! })} testID={`audit-${entry.id}-only-actor`} />
+                <Button
+                  label={`Only ${entry.actor.name}`}
+                  variant="quiet"
+                  onPress={() => onFilter({ account: entry.actor! })}
+                  testID={`audit-${entry.id}-only-actor`}
+                />
               ) : null}
               {entry.account && entry.account.id !== entry.actor?.id ? (
                 <Button label={`Only ${entry.account.name}`} variant="quiet" onPress={() => onFilter({ account: entry.account! })} />

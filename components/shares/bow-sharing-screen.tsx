@@ -112,7 +112,12 @@ function ShareRow({ share, bowId }: { share: Share; bowId: number }) {
               onPress={() => invite.mutate({ email: share.invitedEmail })}
             />
           ) : null}
-          <Button label={share.state === 'active' ? 'End the share' : 'Withdraw the invitation'} variant="danger" onPress={() => setAsking(true)} testID={`revoke-${share.id}`} />
+          <Button
+            label={share.state === 'active' ? 'End the share' : 'Withdraw the invitation'}
+            variant="danger"
+            onPress={() => setAsking(true)}
+            testID={`revoke-${share.id}`}
+          />
         </View>
       ) : null}
       {invite.isSuccess ? <Text variant="small">A fresh link is on its way; the old one no longer works.</Text> : null}
@@ -192,7 +197,11 @@ export function BowSharingScreen({ bowId }: { bowId: number }) {
       </View>
 
       <View style={styles.section}>
-        <SectionHeading title="What was done on this bow" level={2} description="Everything a technician added or changed, and each invitation and share." />
+        <SectionHeading
+          title="What was done on this bow"
+          level={2}
+          description="Everything a technician added or changed, and each invitation and share."
+        />
         {audit.isPending ? <LoadingView label="Loading the log…" /> : null}
         {audit.isError ? <ErrorView title="The log could not be loaded" error={audit.error} onRetry={() => audit.refetch()} /> : null}
         {audit.data && audit.data.entries.length === 0 ? <Text tone="soft">Nothing yet.</Text> : null}

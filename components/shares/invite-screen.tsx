@@ -63,10 +63,34 @@ function NewTechForm({ token, invite, onDone }: { token: string; invite: InviteP
           {general}
         </Banner>
       ) : null}
-      <FormField control={control} name="name" label="Name" hint="Shown to the archers who share bows with you, e.g. your name and shop." autoComplete="name" returnKeyType="next" onSubmitEditing={() => setFocus('password')} />
+      <FormField
+        control={control}
+        name="name"
+        label="Name"
+        hint="Shown to the archers who share bows with you, e.g. your name and shop."
+        autoComplete="name"
+        returnKeyType="next"
+        onSubmitEditing={() => setFocus('password')}
+      />
       <FormField control={control} name="email" label="E-mail" hint="The invited address." {...emailInputProps} />
-      <FormField control={control} name="password" label="Password" hint={`At least ${passwordMinLength} characters. A short sentence works well.`} autoComplete="new-password" secureTextEntry returnKeyType="go" onSubmitEditing={submit} />
-      <Button label="Create the account and accept" pendingLabel="Creating…" pending={create.isPending} onPress={submit} fullWidth testID="create-tech" />
+      <FormField
+        control={control}
+        name="password"
+        label="Password"
+        hint={`At least ${passwordMinLength} characters. A short sentence works well.`}
+        autoComplete="new-password"
+        secureTextEntry
+        returnKeyType="go"
+        onSubmitEditing={submit}
+      />
+      <Button
+        label="Create the account and accept"
+        pendingLabel="Creating…"
+        pending={create.isPending}
+        onPress={submit}
+        fullWidth
+        testID="create-tech"
+      />
     </View>
   );
 }
@@ -116,7 +140,14 @@ export function InviteScreen({ token }: { token: string | undefined }) {
         {user && user.role === 'tech' ? (
           <>
             <Text>{`Signed in as ${user.name} (${user.email}).`}</Text>
-            <Button label="Accept the invitation" pendingLabel="Accepting…" pending={accept.isPending} onPress={() => accept.mutate(token, { onSuccess: setAccepted })} fullWidth testID="accept-invite" />
+            <Button
+              label="Accept the invitation"
+              pendingLabel="Accepting…"
+              pending={accept.isPending}
+              onPress={() => accept.mutate(token, { onSuccess: setAccepted })}
+              fullWidth
+              testID="accept-invite"
+            />
             <SignOutButton label="Sign out and use another account" variant="quiet" />
           </>
         ) : null}

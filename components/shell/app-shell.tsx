@@ -45,11 +45,7 @@ function TabLink({ item, active }: { item: NavItem; active: boolean }) {
     <LinkPressable
       href={item.href}
       aria-current={active ? 'page' : undefined}
-      style={({ pressed, focused }: PressState) => [
-        styles.tab,
-        pressed && styles.tabPressed,
-        focused && styles.focused,
-      ]}
+      style={({ pressed, focused }: PressState) => [styles.tab, pressed && styles.tabPressed, focused && styles.focused]}
     >
       <View style={[styles.tabIndicator, active && styles.tabIndicatorActive]} />
       <Icon size={26} color={active ? colors.signal : colors.inkSoft} />

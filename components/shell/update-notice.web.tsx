@@ -68,7 +68,13 @@ export function UpdateNotice() {
         <Text variant="body" tone="onSlate" style={styles.text}>
           A new version of Pinwright is ready.
         </Text>
-        <Button label="Reload" pendingLabel="Reloading…" pending={reloading} onPress={reload} accessibilityLabel="Reload for the new version" />
+        <Button
+          label="Reload"
+          pendingLabel="Reloading…"
+          pending={reloading}
+          onPress={reload}
+          accessibilityLabel="Reload for the new version"
+        />
       </View>
     </View>
   );

@@ -21,10 +21,7 @@ export function Wordmark({ tone = 'onSlate', size = 28 }: WordmarkProps) {
   return (
     <View style={styles.row} accessibilityLabel="Pinwright" role="img">
       <Mark size={size} color={ink} accent={accent} />
-      <Text
-        style={[styles.name, { color: ink, fontSize: Math.round(size * 0.82), lineHeight: Math.round(size * 1.05) }]}
-        aria-hidden
-      >
+      <Text style={[styles.name, { color: ink, fontSize: Math.round(size * 0.82), lineHeight: Math.round(size * 1.05) }]} aria-hidden>
         Pinwright
       </Text>
     </View>

@@ -37,14 +37,18 @@ export function fitChartWords(fit: FitResult, sign: 1 | -1, marks: UsableMark[])
   const bands = predicted.map((mark) => mark.sigmaMm);
   const markWords = marks.map((mark) => `${mark.distance} ${unit} at ${mm(mark.scaleMm)}`).join(', ');
   const curveWords = shown.map((mark) => `${mark.distance} ${unit} ${mm(sign * mark.markMm)}`).join(', ');
-  const bandWords = bands.length ? ` Its one-sigma band is ±${Math.min(...bands).toFixed(2)} to ±${Math.max(...bands).toFixed(2)} mm wide.` : '';
+  const bandWords = bands.length
+    ? ` Its one-sigma band is ±${Math.min(...bands).toFixed(2)} to ±${Math.max(...bands).toFixed(2)} mm wide.`
+    : '';
   return `Reading against distance. Your marks: ${markWords || 'none'}. The fitted curve: ${curveWords}.${bandWords}`;
 }
 
 /** The residual chart in words: each mark's residual, and whether it lies within the band. */
 export function residualChartWords(fit: FitResult, sign: 1 | -1): string {
   const unit = fit.distanceUnit;
-  const words = fit.residuals.map((residual) => `${residual.distance} ${unit} ${signed(sign * residual.residualMm)}${residual.outlier ? ' (an outlier)' : ''}`);
+  const words = fit.residuals.map(
+    (residual) => `${residual.distance} ${unit} ${signed(sign * residual.residualMm)}${residual.outlier ? ' (an outlier)' : ''}`,
+  );
   return `Each mark's distance from the fit: ${words.join(', ') || 'none'}.`;
 }
 
@@ -80,13 +84,13 @@ export function FitChart({ fit, sign, marks }: FitChartProps) {
         <View accessibilityLabel={`Chart: ${fitChartWords(fit, sign, marks)}`} role="img" testID="fit-chart-marks">
           {/* The label above is the chart's text alternative; victory's own svg is hidden from assistive technology. */}
           <View aria-hidden>
-          <VictoryChart width={width} height={height} padding={padding} domainPadding={{ y: 4 }}>
-            <VictoryAxis crossAxis={false} offsetY={padding.bottom} label={`Distance (${unit})`} style={axisStyle} />
-            <VictoryAxis dependentAxis crossAxis={false} offsetX={padding.left} label="Reading (mm)" style={axisStyle} />
-            <VictoryArea data={band} style={{ data: { fill: colors.signalTint, stroke: colors.signal, strokeWidth: 0.5 } }} />
-            <VictoryLine data={curve} style={{ data: { stroke: colors.signal, strokeWidth: 2.5 } }} />
-            <VictoryScatter data={points} size={6} style={{ data: { fill: colors.slate, stroke: colors.surface, strokeWidth: 2 } }} />
-          </VictoryChart>
+            <VictoryChart width={width} height={height} padding={padding} domainPadding={{ y: 4 }}>
+              <VictoryAxis crossAxis={false} offsetY={padding.bottom} label={`Distance (${unit})`} style={axisStyle} />
+              <VictoryAxis dependentAxis crossAxis={false} offsetX={padding.left} label="Reading (mm)" style={axisStyle} />
+              <VictoryArea data={band} style={{ data: { fill: colors.signalTint, stroke: colors.signal, strokeWidth: 0.5 } }} />
+              <VictoryLine data={curve} style={{ data: { stroke: colors.signal, strokeWidth: 2.5 } }} />
+              <VictoryScatter data={points} size={6} style={{ data: { fill: colors.slate, stroke: colors.surface, strokeWidth: 2 } }} />
+            </VictoryChart>
           </View>
         </View>
       ) : null}
@@ -100,23 +104,41 @@ export function FitChart({ fit, sign, marks }: FitChartProps) {
       {width > 0 ? (
         <View accessibilityLabel={`Chart: ${residualChartWords(fit, sign)}`} role="img" testID="fit-chart-residuals">
           <View aria-hidden>
-          <VictoryChart width={width} height={Math.round(height * 0.7)} padding={padding} domain={{ x: [first, last], y: [-residualReach, residualReach] }}>
-            <VictoryAxis crossAxis={false} offsetY={padding.bottom} label={`Distance (${unit})`} style={axisStyle} />
-            <VictoryAxis dependentAxis crossAxis={false} offsetX={padding.left} label="mm" style={axisStyle} tickFormat={(tick: number) => tick.toFixed(2)} />
-            <VictoryArea data={residualBand} style={{ data: { fill: colors.infoTint, stroke: colors.info, strokeWidth: 0.5 } }} />
-            <VictoryLine data={[{ x: first, y: 0 }, { x: last, y: 0 }]} style={{ data: { stroke: colors.inkSoft, strokeWidth: 1 } }} />
-            <VictoryScatter
-              data={residuals}
-              size={6}
-              style={{
-                data: {
-                  fill: ({ datum }: { datum?: { outlier?: boolean } }) => (datum?.outlier ? colors.failed : colors.slate),
-                  stroke: colors.surface,
-                  strokeWidth: 2,
-                },
-              }}
-            />
-          </VictoryChart>
+            <VictoryChart
+              width={width}
+              height={Math.round(height * 0.7)}
+              padding={padding}
+              domain={{ x: [first, last], y: [-residualReach, residualReach] }}
+            >
+              <VictoryAxis crossAxis={false} offsetY={padding.bottom} label={`Distance (${unit})`} style={axisStyle} />
+              <VictoryAxis
+                dependentAxis
+                crossAxis={false}
+                offsetX={padding.left}
+                label="mm"
+                style={axisStyle}
+                tickFormat={(tick: number) => tick.toFixed(2)}
+              />
+              <VictoryArea data={residualBand} style={{ data: { fill: colors.infoTint, stroke: colors.info, strokeWidth: 0.5 } }} />
+              <VictoryLine
+                data={[
+                  { x: first, y: 0 },
+                  { x: last, y: 0 },
+                ]}
+                style={{ data: { stroke: colors.inkSoft, strokeWidth: 1 } }}
+              />
+              <VictoryScatter
+                data={residuals}
+                size={6}
+                style={{
+                  data: {
+                    fill: ({ datum }: { datum?: { outlier?: boolean } }) => (datum?.outlier ? colors.failed : colors.slate),
+                    stroke: colors.surface,
+                    strokeWidth: 2,
+                  },
+                }}
+              />
+            </VictoryChart>
           </View>
         </View>
       ) : null}

@@ -60,13 +60,20 @@ export function fitAdvice(live: LiveFit, checks?: MarkCheckResult): FitAdvice[] 
       ? [
           {
             tone: 'error',
-            title: problems.length === 1 ? `Check mark ${problems[0].mark}` : `Check marks ${problems.map((problem) => problem.mark).join(', ')}`,
+            title:
+              problems.length === 1
+                ? `Check mark ${problems[0].mark}`
+                : `Check marks ${problems.map((problem) => problem.mark).join(', ')}`,
             message: `${leftOutWords(checks)} Checks of the chronograph, drag and sight radius wait until the marks are fixed.`,
             key: 'left-out',
           },
         ]
       : [];
-  if (live.state === 'refused') return [...first, { tone: 'error', title: 'These marks cannot be fitted', message: `${live.message}.`.replace(/\.\.$/, '.'), key: 'refused' }];
+  if (live.state === 'refused')
+    return [
+      ...first,
+      { tone: 'error', title: 'These marks cannot be fitted', message: `${live.message}.`.replace(/\.\.$/, '.'), key: 'refused' },
+    ];
   if (live.state !== 'fit') return first;
   const { fit, marks } = live;
   const unit = fit.distanceUnit;
@@ -79,13 +86,15 @@ export function fitAdvice(live: LiveFit, checks?: MarkCheckResult): FitAdvice[] 
       warning.code === 'one-mark'
         ? 'Only one distance sighted'
         : warning.code === 'outlier'
-        ? 'A mark stands out'
-        : warning.code === 'scatter'
-          ? 'The marks scatter'
-          : 'The marks disagree with a measurement';
+          ? 'A mark stands out'
+          : warning.code === 'scatter'
+            ? 'The marks scatter'
+            : 'The marks disagree with a measurement';
     advice.push({ tone: 'warn', title, message: `${warning.message}.`, key: `${warning.code}-${warning.distance ?? ''}` });
   }
-  const confirm = fit.marks.filter((mark) => mark.verify && Number.isFinite(mark.markMm) && !sighted(mark.distance)).map((mark) => mark.distance);
+  const confirm = fit.marks
+    .filter((mark) => mark.verify && Number.isFinite(mark.markMm) && !sighted(mark.distance))
+    .map((mark) => mark.distance);
   // One mark: every other distance is to confirm, and the one-mark warning says so already.
   if (confirm.length > 0 && fit.method !== 'one-mark') {
     advice.push({
@@ -97,7 +106,12 @@ export function fitAdvice(live: LiveFit, checks?: MarkCheckResult): FitAdvice[] 
   }
   const unreachable = fit.marks.filter((mark) => !Number.isFinite(mark.markMm)).map((mark) => mark.distance);
   if (unreachable.length > 0) {
-    advice.push({ tone: 'info', title: 'Out of reach', message: `With this fit the arrow cannot reach ${listDistances(unreachable, unit)}.`, key: 'reach' });
+    advice.push({
+      tone: 'info',
+      title: 'Out of reach',
+      message: `With this fit the arrow cannot reach ${listDistances(unreachable, unit)}.`,
+      key: 'reach',
+    });
   }
   if (fit.nextDistance !== null) {
     advice.push({
@@ -143,11 +157,20 @@ export function FitStrip({ live, checks }: { live: LiveFit; checks: MarkCheckRes
     live.state === 'fit'
       ? [
           formatQuantity(live.fit.speedFps, 'speed', units),
-          live.fit.method === 'one-mark' ? 'estimate from 1 mark' : live.fit.method === 'two-mark' ? 'exact (2 marks)' : `RMS ${live.fit.rmsMm.toFixed(2)} mm`,
+          live.fit.method === 'one-mark'
+            ? 'estimate from 1 mark'
+            : live.fit.method === 'two-mark'
+              ? 'exact (2 marks)'
+              : `RMS ${live.fit.rmsMm.toFixed(2)} mm`,
           live.fit.nextDistance !== null ? `next ${live.fit.nextDistance} ${live.fit.distanceUnit}` : null,
         ].filter(Boolean)
       : [];
-  const line = live.state === 'fit' ? figures.join(' · ') : live.state === 'waiting' ? 'Live fit: waiting for two usable marks' : 'Live fit: these marks cannot be fitted';
+  const line =
+    live.state === 'fit'
+      ? figures.join(' · ')
+      : live.state === 'waiting'
+        ? 'Live fit: waiting for two usable marks'
+        : 'Live fit: these marks cannot be fitted';
   return (
     <View style={styles.strip} testID="fit-strip" role="status" aria-label="Live fit">
       <Text variant="label" testID="fit-strip-figures">

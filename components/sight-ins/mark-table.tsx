@@ -36,7 +36,10 @@ export const compactBelow = 600;
 
 /** "on the fit", "Outlier: +0.42 mm off the fit". */
 function residualWords(fit: RowFit): string {
-  const off = Math.abs(fit.residualMm) < 0.005 ? 'on the fit' : `${fit.residualMm > 0 ? '+' : '−'}${Math.abs(fit.residualMm).toFixed(2)} mm off the fit`;
+  const off =
+    Math.abs(fit.residualMm) < 0.005
+      ? 'on the fit'
+      : `${fit.residualMm > 0 ? '+' : '−'}${Math.abs(fit.residualMm).toFixed(2)} mm off the fit`;
   return `${fit.outlier ? 'Outlier: ' : ''}${off}`;
 }
 
@@ -71,7 +74,14 @@ function CompactNumber({
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <View style={[styles.cellBox, focused && styles.cellFocused, (invalid || fieldState.error) && styles.cellInvalid, disabled && styles.cellDisabled]}>
+        <View
+          style={[
+            styles.cellBox,
+            focused && styles.cellFocused,
+            (invalid || fieldState.error) && styles.cellInvalid,
+            disabled && styles.cellDisabled,
+          ]}
+        >
           <TextInput
             ref={field.ref}
             value={field.value === null || field.value === undefined ? '' : String(field.value)}
@@ -150,7 +160,13 @@ export function MarkTable({ control, unit, rowFits, refusedRow = null, lockedRow
   };
 
   const removeButton = (index: number) => (
-    <Button label="Remove" variant="quiet" onPress={() => remove(index)} accessibilityLabel={`Remove mark ${index + 1}`} testID={`mark-remove-${index}`} />
+    <Button
+      label="Remove"
+      variant="quiet"
+      onPress={() => remove(index)}
+      accessibilityLabel={`Remove mark ${index + 1}`}
+      testID={`mark-remove-${index}`}
+    />
   );
 
   return (
@@ -180,19 +196,49 @@ export function MarkTable({ control, unit, rowFits, refusedRow = null, lockedRow
         if (compact) {
           const open = openRows[field.id] ?? false;
           return (
-            <View key={field.id} style={[styles.compactRow, ...flagged]} testID={`mark-row-${index}`} role="group" aria-label={`Mark ${index + 1}`}>
+            <View
+              key={field.id}
+              style={[styles.compactRow, ...flagged]}
+              testID={`mark-row-${index}`}
+              role="group"
+              aria-label={`Mark ${index + 1}`}
+            >
               <View style={styles.compactCells}>
                 <Text variant="label" style={styles.numberColumn}>
                   {index + 1}
                 </Text>
                 <View style={styles.wideColumn}>
-                  <CompactNumber control={control} name={`marks.${index}.distance`} label={`Mark ${index + 1} distance, ${unit}`} unit={unit} disabled={locked} invalid={problem?.field === 'distance'} testID={`mark-distance-${index}`} />
+                  <CompactNumber
+                    control={control}
+                    name={`marks.${index}.distance`}
+                    label={`Mark ${index + 1} distance, ${unit}`}
+                    unit={unit}
+                    disabled={locked}
+                    invalid={problem?.field === 'distance'}
+                    testID={`mark-distance-${index}`}
+                  />
                 </View>
                 <View style={styles.wideColumn}>
-                  <CompactNumber control={control} name={`marks.${index}.scaleMm`} label={`Mark ${index + 1} reading, mm`} unit="mm" disabled={locked} invalid={problem?.field === 'scaleMm'} testID={`mark-reading-${index}`} />
+                  <CompactNumber
+                    control={control}
+                    name={`marks.${index}.scaleMm`}
+                    label={`Mark ${index + 1} reading, mm`}
+                    unit="mm"
+                    disabled={locked}
+                    invalid={problem?.field === 'scaleMm'}
+                    testID={`mark-reading-${index}`}
+                  />
                 </View>
                 <View style={styles.arrowsColumn}>
-                  <CompactNumber control={control} name={`marks.${index}.arrowsShot`} label={`Mark ${index + 1} arrows shot`} whole disabled={locked} invalid={false} testID={`mark-arrows-${index}`} />
+                  <CompactNumber
+                    control={control}
+                    name={`marks.${index}.arrowsShot`}
+                    label={`Mark ${index + 1} arrows shot`}
+                    whole
+                    disabled={locked}
+                    invalid={false}
+                    testID={`mark-arrows-${index}`}
+                  />
                 </View>
                 <Pressable
                   role="button"
@@ -210,7 +256,14 @@ export function MarkTable({ control, unit, rowFits, refusedRow = null, lockedRow
               {rowLine(index)}
               {open ? (
                 <View style={styles.fold}>
-                  <FormField control={control} name={`marks.${index}.note`} label={`Note, mark ${index + 1}`} placeholder="Optional" disabled={locked} testID={`mark-note-${index}`} />
+                  <FormField
+                    control={control}
+                    name={`marks.${index}.note`}
+                    label={`Note, mark ${index + 1}`}
+                    placeholder="Optional"
+                    disabled={locked}
+                    testID={`mark-note-${index}`}
+                  />
                   {locked ? (
                     <Text variant="small" tone="soft" testID={`mark-locked-${index}`}>
                       Saved
@@ -239,16 +292,47 @@ export function MarkTable({ control, unit, rowFits, refusedRow = null, lockedRow
             </View>
             <View style={styles.inputs}>
               <View style={styles.numberCell}>
-                <FormField control={control} name={`marks.${index}.distance`} label="Distance" unit={unit} numeric disabled={locked} testID={`mark-distance-${index}`} />
+                <FormField
+                  control={control}
+                  name={`marks.${index}.distance`}
+                  label="Distance"
+                  unit={unit}
+                  numeric
+                  disabled={locked}
+                  testID={`mark-distance-${index}`}
+                />
               </View>
               <View style={styles.numberCell}>
-                <FormField control={control} name={`marks.${index}.scaleMm`} label="Reading" unit="mm" numeric disabled={locked} testID={`mark-reading-${index}`} />
+                <FormField
+                  control={control}
+                  name={`marks.${index}.scaleMm`}
+                  label="Reading"
+                  unit="mm"
+                  numeric
+                  disabled={locked}
+                  testID={`mark-reading-${index}`}
+                />
               </View>
               <View style={styles.smallCell}>
-                <FormField control={control} name={`marks.${index}.arrowsShot`} label="Arrows" numeric inputMode="numeric" disabled={locked} testID={`mark-arrows-${index}`} />
+                <FormField
+                  control={control}
+                  name={`marks.${index}.arrowsShot`}
+                  label="Arrows"
+                  numeric
+                  inputMode="numeric"
+                  disabled={locked}
+                  testID={`mark-arrows-${index}`}
+                />
               </View>
               <View style={styles.noteCell}>
-                <FormField control={control} name={`marks.${index}.note`} label="Note" placeholder="Optional" disabled={locked} testID={`mark-note-${index}`} />
+                <FormField
+                  control={control}
+                  name={`marks.${index}.note`}
+                  label="Note"
+                  placeholder="Optional"
+                  disabled={locked}
+                  testID={`mark-note-${index}`}
+                />
               </View>
             </View>
           </View>

@@ -13,7 +13,11 @@ export function NewSightInScreen({ bowId, buildId }: { bowId: number; buildId?: 
       {({ me, bow: data, role: { isOwner } }) => (
         <Screen>
           <ScreenTitle name="Sight-in" />
-          <SectionHeading level={1} title="New sight-in" description={`${data.nickname}: two marks, a short and a long one, are enough to start.`} />
+          <SectionHeading
+            level={1}
+            title="New sight-in"
+            description={`${data.nickname}: two marks, a short and a long one, are enough to start.`}
+          />
           {data.builds.length === 0 ? (
             <EmptyState
               title="Add an arrow build first"

@@ -65,7 +65,12 @@ export function PredictedMarks({ fit, sign, marks }: PredictedMarksProps) {
                 </Text>
               ) : null}
             </View>
-            <Text variant="small" tone={status === 'Confirm' ? 'due' : status === 'Sighted' ? 'verified' : 'soft'} style={styles.status} role="cell">
+            <Text
+              variant="small"
+              tone={status === 'Confirm' ? 'due' : status === 'Sighted' ? 'verified' : 'soft'}
+              style={styles.status}
+              role="cell"
+            >
               {status}
             </Text>
           </View>
@@ -76,7 +81,13 @@ export function PredictedMarks({ fit, sign, marks }: PredictedMarksProps) {
 }
 
 const styles = StyleSheet.create({
-  table: { borderRadius: radii.md, borderWidth: borders.hairline, borderColor: colors.line, overflow: 'hidden', backgroundColor: colors.surface },
+  table: {
+    borderRadius: radii.md,
+    borderWidth: borders.hairline,
+    borderColor: colors.line,
+    overflow: 'hidden',
+    backgroundColor: colors.surface,
+  },
   // Fits a 390 px phone (about 320 px inside its card): the middle columns give way, Status keeps its words.
   row: { flexDirection: 'row', alignItems: 'center', paddingHorizontal: space.sm, paddingVertical: space.xs, gap: space.xs, minHeight: 40 },
   head: { backgroundColor: colors.sunken, borderBottomWidth: borders.hairline, borderBottomColor: colors.line },

@@ -70,7 +70,8 @@ function rowFitsOf(live: LiveFit): Record<number, RowFit> {
   const fits: Record<number, RowFit> = {};
   for (const mark of live.marks) {
     const residual = live.fit.residuals.find((item) => Math.abs(item.distance - mark.distance) < 1e-9);
-    if (residual) fits[mark.row] = { fittedMm: live.sign * residual.fittedMm, residualMm: live.sign * residual.residualMm, outlier: residual.outlier };
+    if (residual)
+      fits[mark.row] = { fittedMm: live.sign * residual.fittedMm, residualMm: live.sign * residual.residualMm, outlier: residual.outlier };
   }
   return fits;
 }
@@ -85,7 +86,10 @@ function refusedRowOf(live: LiveFit): number | null {
 /** The form's text for the fit with each row that has a problem blanked (the fit leaves it out; row numbers stay). */
 function withoutProblemRows(text: LiveFitText, checks: MarkCheckResult): LiveFitText {
   const flagged = new Set(checks.problems.map((problem) => problem.row));
-  return { ...text, marks: (text.marks ?? []).map((row, index) => (flagged.has(index) ? { distance: '', scaleMm: '', arrowsShot: '', note: '' } : row)) };
+  return {
+    ...text,
+    marks: (text.marks ?? []).map((row, index) => (flagged.has(index) ? { distance: '', scaleMm: '', arrowsShot: '', note: '' } : row)),
+  };
 }
 
 function FitSummary({ live }: { live: Extract<LiveFit, { state: 'fit' }> }) {
@@ -94,7 +98,10 @@ function FitSummary({ live }: { live: Extract<LiveFit, { state: 'fit' }> }) {
   const figures = [
     { label: 'Arrow speed', value: formatQuantity(fit.speedFps, 'speed', units) },
     { label: 'Marks', value: String(fit.residuals.length) },
-    { label: 'RMS off the fit', value: fit.method === 'one-mark' ? 'estimate (1 mark)' : fit.method === 'two-mark' ? 'exact (2 marks)' : `${fit.rmsMm.toFixed(2)} mm` },
+    {
+      label: 'RMS off the fit',
+      value: fit.method === 'one-mark' ? 'estimate (1 mark)' : fit.method === 'two-mark' ? 'exact (2 marks)' : `${fit.rmsMm.toFixed(2)} mm`,
+    },
   ];
   return (
     <View style={styles.figures} testID="fit-summary">
@@ -151,10 +158,21 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
   const checks = useMemo(() => {
     const text = JSON.parse(deferredKey) as LiveFitText;
     const build = bow.builds.find((item) => String(item.id) === text.buildId);
-    return checkMarks(text.marks ?? [], { unit: text.unit, scaleDirection: bow.scaleDirection, peepHeightMm: bow.peepHeightMm, speedFps: build?.speedFps ?? null });
+    return checkMarks(text.marks ?? [], {
+      unit: text.unit,
+      scaleDirection: bow.scaleDirection,
+      peepHeightMm: bow.peepHeightMm,
+      speedFps: build?.speedFps ?? null,
+    });
   }, [deferredKey, bow]);
-  const live = useMemo(() => liveFitInUnits(liveFit(withoutProblemRows(JSON.parse(deferredKey) as LiveFitText, checks), bow, bow.builds), units), [deferredKey, bow, checks, units]);
-  const problemsByRow = useMemo(() => Object.fromEntries(checks.problems.map((problem) => [problem.row, problem])) as Record<number, MarkProblem>, [checks]);
+  const live = useMemo(
+    () => liveFitInUnits(liveFit(withoutProblemRows(JSON.parse(deferredKey) as LiveFitText, checks), bow, bow.builds), units),
+    [deferredKey, bow, checks, units],
+  );
+  const problemsByRow = useMemo(
+    () => Object.fromEntries(checks.problems.map((problem) => [problem.row, problem])) as Record<number, MarkProblem>,
+    [checks],
+  );
   // A save made with no signal is kept on this phone (components/offline) until it is sent.
   const [keptId, setKeptId] = useState<string | null>(null);
   const [keptItem] = useOutbox({ ids: keptId ? [keptId] : [] });
@@ -178,61 +196,71 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
   // `fallingOk`: the archer has confirmed a reading that falls with distance.
   const submit = (fallingOk: boolean) =>
     handleSubmit(
-    (input) => {
-      setGeneral(null);
-      // A reading that falls with distance is most often a typo: the archer confirms it before it is saved.
-      if (checks.falling.length > 0 && !fallingOk) {
-        setAskFalling(true);
-        return;
-      }
-      setAskFalling(false);
-      const kept = keptRows(marks ?? []);
-      save.mutate(
-        {
-          id: sightIn?.id,
-          bowId: bow.id,
-          input: keepSaved ? appendOnlyUpdate(sightIn, input) : input,
-          title: sightIn ? `New marks for the ${sightIn.date} sight-in · ${bow.nickname}` : `New sight-in · ${bow.nickname} · ${input.marks.length} marks`,
-          outboxId: keptItem?.state === 'waiting' ? keptItem.id : undefined,
-        },
-        {
-          onSuccess: (result) => {
-            if (result.kept) {
-              setKeptId(result.item.id);
-              return;
-            }
-            setKeptId(null);
-            const saved = result.sightIn;
-            if (sightIn) reset(sightInFormDefaults(saved, undefined, distanceUnit, units));
-            else router.replace(`/sight-ins/${saved.id}`);
+      (input) => {
+        setGeneral(null);
+        // A reading that falls with distance is most often a typo: the archer confirms it before it is saved.
+        if (checks.falling.length > 0 && !fallingOk) {
+          setAskFalling(true);
+          return;
+        }
+        setAskFalling(false);
+        const kept = keptRows(marks ?? []);
+        save.mutate(
+          {
+            id: sightIn?.id,
+            bowId: bow.id,
+            input: keepSaved ? appendOnlyUpdate(sightIn, input) : input,
+            title: sightIn
+              ? `New marks for the ${sightIn.date} sight-in · ${bow.nickname}`
+              : `New sight-in · ${bow.nickname} · ${input.marks.length} marks`,
+            outboxId: keptItem?.state === 'waiting' ? keptItem.id : undefined,
           },
-          onError: (error) =>
-            setGeneral(
-              applyFieldErrors(
-                error,
-                (field) => {
-                  const parts = field.split('.').map((part) => (/^\d+$/.test(part) ? Number(part) : part));
-                  const known = ['buildId', 'date', 'placeLabel', 'altitudeM', 'temperatureC', 'notes', 'marks'];
-                  return known.includes(String(parts[0])) ? tablePath(parts, kept) : null;
-                },
-                setError,
+          {
+            onSuccess: (result) => {
+              if (result.kept) {
+                setKeptId(result.item.id);
+                return;
+              }
+              setKeptId(null);
+              const saved = result.sightIn;
+              if (sightIn) reset(sightInFormDefaults(saved, undefined, distanceUnit, units));
+              else router.replace(`/sight-ins/${saved.id}`);
+            },
+            onError: (error) =>
+              setGeneral(
+                applyFieldErrors(
+                  error,
+                  (field) => {
+                    const parts = field.split('.').map((part) => (/^\d+$/.test(part) ? Number(part) : part));
+                    const known = ['buildId', 'date', 'placeLabel', 'altitudeM', 'temperatureC', 'notes', 'marks'];
+                    return known.includes(String(parts[0])) ? tablePath(parts, kept) : null;
+                  },
+                  setError,
+                ),
               ),
-            ),
-        },
-      );
-    },
-    () => setGeneral('Some fields need another look; nothing was saved.'),
-  )();
+          },
+        );
+      },
+      () => setGeneral('Some fields need another look; nothing was saved.'),
+    )();
 
   const header = (
     <Card style={styles.section}>
       <SectionHeading title="The sight-in" />
       {buildOptions.length > 0 ? (
-        <FormChoice control={control} name="buildId" label="Arrow build" options={buildOptions} disabled={keepSaved} testID="sight-in-build" />
+        <FormChoice
+          control={control}
+          name="buildId"
+          label="Arrow build"
+          options={buildOptions}
+          disabled={keepSaved}
+          testID="sight-in-build"
+        />
       ) : null}
       {chosen ? (
         <Text variant="small" tone="soft">
-          {buildLine(chosen.derived, chosen.speedFps, units)} · {storedToText(chosen.diameterMm, 'length', units, shownUnit('length', units) === 'in' ? 3 : 1)} {shownUnit('length', units)} shaft
+          {buildLine(chosen.derived, chosen.speedFps, units)} ·{' '}
+          {storedToText(chosen.diameterMm, 'length', units, shownUnit('length', units) === 'in' ? 3 : 1)} {shownUnit('length', units)} shaft
         </Text>
       ) : null}
       <FieldGrid minWidth={170}>
@@ -240,8 +268,26 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
         <FormField control={control} name="placeLabel" label="Place" hint="Optional, e.g. “home range”" disabled={keepSaved} />
       </FieldGrid>
       <FieldGrid minWidth={140}>
-        <FormField control={control} name="altitudeM" label="Altitude" hint="Optional" unit={shownUnit('altitude', units)} numeric disabled={keepSaved} testID="sight-in-altitude" />
-        <FormField control={control} name="temperatureC" label="Temperature" hint="Optional" unit={shownUnit('temperature', units)} numeric disabled={keepSaved} testID="sight-in-temperature" />
+        <FormField
+          control={control}
+          name="altitudeM"
+          label="Altitude"
+          hint="Optional"
+          unit={shownUnit('altitude', units)}
+          numeric
+          disabled={keepSaved}
+          testID="sight-in-altitude"
+        />
+        <FormField
+          control={control}
+          name="temperatureC"
+          label="Temperature"
+          hint="Optional"
+          unit={shownUnit('temperature', units)}
+          numeric
+          disabled={keepSaved}
+          testID="sight-in-temperature"
+        />
       </FieldGrid>
       <FormChoice control={control} name="unit" label="Distances in" options={unitOptions} disabled={keepSaved} testID="sight-in-unit" />
     </Card>
@@ -255,7 +301,14 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
           {`The saved marks and the sight-in’s details are ${bow.ownerName || 'the archer'}’s: you can add marks below them.`}
         </Text>
       ) : null}
-      <MarkTable control={control} unit={unit} rowFits={rowFits} refusedRow={refusedRowOf(live)} lockedRows={lockedRows} problems={problemsByRow} />
+      <MarkTable
+        control={control}
+        unit={unit}
+        rowFits={rowFits}
+        refusedRow={refusedRowOf(live)}
+        lockedRows={lockedRows}
+        problems={problemsByRow}
+      />
       <FormField
         control={control}
         name="notes"
@@ -270,7 +323,10 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
 
   const results = (
     <Card style={styles.section} testID="live-fit">
-      <SectionHeading title="Live fit" description="Refitted as you type, with drag, from your marks and the bow's sight radius and peep height." />
+      <SectionHeading
+        title="Live fit"
+        description="Refitted as you type, with drag, from your marks and the bow's sight radius and peep height."
+      />
       {live.state === 'waiting' ? <Text tone="soft">{live.message}</Text> : null}
       <FitWarnings live={live} checks={checks} />
       {live.state === 'fit' ? (
@@ -311,13 +367,7 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
           testID="sight-in-save"
         />
         {sightIn ? (
-          <Button
-            label="Tape"
-            variant="secondary"
-            href={`/sight-ins/${sightIn.id}/tape`}
-            disabled={formState.isDirty}
-            testID="open-tape"
-          />
+          <Button label="Tape" variant="secondary" href={`/sight-ins/${sightIn.id}/tape`} disabled={formState.isDirty} testID="open-tape" />
         ) : null}
         <Button label="Back to the bow" variant="quiet" href={`/bows/${bow.id}`} />
       </View>
@@ -350,7 +400,12 @@ export function SightInEditor({ bow, sightIn, initialBuildId, distanceUnit, addO
       {sightIn && !formState.isDirty ? (
         <View style={styles.topActions}>
           <Button label="Open the tape" href={`/sight-ins/${sightIn.id}/tape`} testID="open-tape-top" />
-          <Button label="Field card: slopes, altitude" variant="secondary" href={`/sight-ins/${sightIn.id}/field-card`} testID="open-field-card" />
+          <Button
+            label="Field card: slopes, altitude"
+            variant="secondary"
+            href={`/sight-ins/${sightIn.id}/field-card`}
+            testID="open-field-card"
+          />
           <Text variant="small" tone="soft" style={styles.topHint}>
             Drawn from the fit saved with these marks.
           </Text>

@@ -1,6 +1,12 @@
 import { set, type FieldErrors, type Resolver } from 'react-hook-form';
 
-import { numberToText, optionalQuantityTextToStored, optionalTextToNumber, storedToInputText, textToNumber } from '@/components/forms/form-numbers';
+import {
+  numberToText,
+  optionalQuantityTextToStored,
+  optionalTextToNumber,
+  storedToInputText,
+  textToNumber,
+} from '@/components/forms/form-numbers';
 import { distanceToMetres, metresToDistance } from '@/math/units/convert';
 import type { DistanceUnit } from '@/shared/auth';
 import { sightInInputSchema, type SightIn, type SightInInput, type SightInUpdate } from '@/shared/sight-in';
@@ -60,7 +66,10 @@ export function todayIso(now = new Date()): string {
  * fit (which reads the stored units); unreadable text stays as typed.
  * Example: airInStoredUnits({ altitudeM: '9200', temperatureC: '41' }, { altitudeUnit: 'ft', temperatureUnit: 'F' }) → { altitudeM: '2804.16', temperatureC: '5' }
  */
-export function airInStoredUnits(text: { altitudeM?: string; temperatureC?: string }, units: UnitsLike): { altitudeM: string; temperatureC: string } {
+export function airInStoredUnits(
+  text: { altitudeM?: string; temperatureC?: string },
+  units: UnitsLike,
+): { altitudeM: string; temperatureC: string } {
   const stored = (value: string | undefined, quantity: 'altitude' | 'temperature') => {
     const number = optionalQuantityTextToStored(value, quantity, units);
     return number === null || !Number.isFinite(number) ? (value ?? '') : String(number);
@@ -133,7 +142,10 @@ export function tablePath(path: readonly (string | number)[], kept: readonly num
  * be read says why (e.g. both readings of 12/02/2026 when the order is unknown).
  * Example: `useForm<SightInFormText, unknown, SightInInput>({ resolver: sightInFormResolverFor(me) })`
  */
-export function sightInFormResolverFor(units?: UnitsLike, order: DateOrder | null = localeDateOrder()): Resolver<SightInFormText, unknown, SightInInput> {
+export function sightInFormResolverFor(
+  units?: UnitsLike,
+  order: DateOrder | null = localeDateOrder(),
+): Resolver<SightInFormText, unknown, SightInInput> {
   return async (values) => {
     const kept = keptRows(values.marks ?? []);
     const result = sightInInputSchema.safeParse(sightInTextToInput(values, units, order));
@@ -165,7 +177,12 @@ export const sightInFormResolver: Resolver<SightInFormText, unknown, SightInInpu
  * own unit: the first mark's), or a new sight-in for `buildId` with two empty rows.
  * Example: sightInFormDefaults(undefined, 4, 'yd').marks.length → 2
  */
-export function sightInFormDefaults(sightIn: SightIn | undefined, buildId: number | undefined, unit: DistanceUnit, units?: UnitsLike): SightInFormText {
+export function sightInFormDefaults(
+  sightIn: SightIn | undefined,
+  buildId: number | undefined,
+  unit: DistanceUnit,
+  units?: UnitsLike,
+): SightInFormText {
   if (!sightIn) {
     return {
       buildId: buildId ? String(buildId) : '',

@@ -11,7 +11,12 @@ import { sightInName } from '@/shared/sight-in-name';
 /** A saved sight-in: its marks (editable by the bow's owner; a technician adds marks), the live fit, and the way to its tape. */
 export function SightInScreen({ sightInId }: { sightInId: number }) {
   return (
-    <SightInLoader sightInId={sightInId} title="Sight-in" failedTitle="The sight-in could not be loaded" loadingLabel="Loading the sight-in…">
+    <SightInLoader
+      sightInId={sightInId}
+      title="Sight-in"
+      failedTitle="The sight-in could not be loaded"
+      loadingLabel="Loading the sight-in…"
+    >
       {({ me, sightIn, bow, role }) => (
         <Screen>
           <ScreenTitle name={`Sight-in ${sightIn.date}`} />
@@ -19,7 +24,9 @@ export function SightInScreen({ sightInId }: { sightInId: number }) {
             level={1}
             title={`Sight-in, ${sightInName(sightIn, { builds: bow.builds, siblings: bow.sightIns })}`}
             description={bow.nickname}
-            action={<Button label="Import marks (CSV)" variant="secondary" href={`/sight-ins/${sightIn.id}/import`} testID="import-marks" />}
+            action={
+              <Button label="Import marks (CSV)" variant="secondary" href={`/sight-ins/${sightIn.id}/import`} testID="import-marks" />
+            }
           />
           <ConfirmAtRangeBanner sightInId={sightIn.id} subject="sight-in" />
           <MarkAuthors marks={sightIn.marks} meId={me.id} sightInAddedBy={sightIn.addedBy} />

@@ -8,7 +8,6 @@ import { space } from '@/components/theme';
 import { localeDateOrder, parseDateText } from '@/shared/units';
 
 export interface TypedDateFieldProps<TValues extends FieldValues> {
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
   control: Control<TValues, any, any>;
   name: FieldPath<TValues>;
   label: string;
@@ -24,7 +23,14 @@ export interface TypedDateFieldProps<TValues extends FieldValues> {
  * a native date picker beside it (date-field.web.tsx).
  * Example: `<TypedDateField control={control} name="date" label="Date" />`
  */
-export function TypedDateField<TValues extends FieldValues>({ control, name, label, disabled = false, testID, picker }: TypedDateFieldProps<TValues>) {
+export function TypedDateField<TValues extends FieldValues>({
+  control,
+  name,
+  label,
+  disabled = false,
+  testID,
+  picker,
+}: TypedDateFieldProps<TValues>) {
   const order = localeDateOrder();
   const example = order === 'MDY' ? '12/02/2026' : order === 'DMY' ? '02/12/2026' : '2026-12-02';
   return (
@@ -51,7 +57,9 @@ export function TypedDateField<TValues extends FieldValues>({ control, name, lab
                   autoComplete="off"
                 />
               </View>
-              {picker ? picker({ iso: read.iso, disabled, label: `${label}: pick on a calendar`, onPick: (iso) => field.onChange(iso) }) : null}
+              {picker
+                ? picker({ iso: read.iso, disabled, label: `${label}: pick on a calendar`, onPick: (iso) => field.onChange(iso) })
+                : null}
             </View>
             {read.note && !fieldState.error ? (
               <Text variant="small" tone="soft" testID={testID ? `${testID}-read` : undefined}>

@@ -65,7 +65,13 @@ export function PinGaps({ model, pinDistances, pinUnit, sign }: PinGapsProps) {
 }
 
 const styles = StyleSheet.create({
-  table: { borderRadius: radii.md, borderWidth: borders.hairline, borderColor: colors.line, overflow: 'hidden', backgroundColor: colors.surface },
+  table: {
+    borderRadius: radii.md,
+    borderWidth: borders.hairline,
+    borderColor: colors.line,
+    overflow: 'hidden',
+    backgroundColor: colors.surface,
+  },
   row: { flexDirection: 'row', paddingHorizontal: space.md, paddingVertical: space.xs, gap: space.sm, minHeight: 40, alignItems: 'center' },
   head: { backgroundColor: colors.sunken },
   stripe: { backgroundColor: colors.paper },

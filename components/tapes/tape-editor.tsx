@@ -144,7 +144,13 @@ export function TapeEditor({ bow, sightIn, tape, lengthUnit, distanceUnit, addOn
         <FormChoice control={control} name="step" label="Tick every" options={stepOptions} />
       </FieldGrid>
       <FormChoice control={control} name="orientation" label="Orientation" options={orientationOptions} />
-      <FormChoice control={control} name="mirror" label="Tick side" hint="Mirrored puts the ticks on the right, for a pointer on the right of the tape." options={mirrorOptions} />
+      <FormChoice
+        control={control}
+        name="mirror"
+        label="Tick side"
+        hint="Mirrored puts the ticks on the right, for a pointer on the right of the tape."
+        options={mirrorOptions}
+      />
       <FieldGrid minWidth={200}>
         <FormChoice control={control} name="paper" label="Paper" options={paperOptions} />
         <FormField control={control} name="label" label="Label" hint="Optional, printed on the sheet" />
@@ -244,11 +250,16 @@ export function TapeEditor({ bow, sightIn, tape, lengthUnit, distanceUnit, addOn
 export function oneMarkWords(fit: SightIn['fit']): string {
   const unit = fit.distanceUnit;
   const sighted = fit.residuals[0]?.distance;
-  const widest = fit.marks.reduce<(typeof fit.marks)[number] | null>((a, b) => (b.sigmaMm !== null && (!a || (a.sigmaMm ?? 0) < b.sigmaMm) ? b : a), null);
+  const widest = fit.marks.reduce<(typeof fit.marks)[number] | null>(
+    (a, b) => (b.sigmaMm !== null && (!a || (a.sigmaMm ?? 0) < b.sigmaMm) ? b : a),
+    null,
+  );
   return [
     sighted !== undefined ? `Only ${sighted} ${unit} is sighted;` : 'One mark is sighted;',
     `every other tick comes from the chronographed speed${widest?.sigmaMm ? ` and is uncertain by up to ±${widest.sigmaMm.toFixed(1)} mm (${widest.distance} ${unit})` : ''}.`,
-    fit.nextDistance !== null ? `Shoot ${fit.nextDistance} ${unit} next, save the sight-in and print again.` : 'Shoot another distance, save the sight-in and print again.',
+    fit.nextDistance !== null
+      ? `Shoot ${fit.nextDistance} ${unit} next, save the sight-in and print again.`
+      : 'Shoot another distance, save the sight-in and print again.',
     'The printed tape says ESTIMATE FROM ONE MARK along its edge.',
   ].join(' ');
 }

@@ -50,8 +50,22 @@ const handOptions = [
 const today = () => new Date().toISOString().slice(0, 10);
 
 /** Field of the form a schema path belongs to, for each of the three records. */
-const bowField: Record<string, keyof KeepText> = { nickname: 'nickname', hand: 'hand', drawWeightLb: 'drawWeightLb', drawLengthMm: 'drawLength', sightRadiusMm: 'sightRadius', peepHeightMm: 'peepHeight' };
-const buildField: Record<string, keyof KeepText> = { name: 'buildName', grainsPerInch: 'grainsPerInch', cutLengthMm: 'cutLength', diameterMm: 'diameter', pointGr: 'pointGr', speedFps: 'speedFps' };
+const bowField: Record<string, keyof KeepText> = {
+  nickname: 'nickname',
+  hand: 'hand',
+  drawWeightLb: 'drawWeightLb',
+  drawLengthMm: 'drawLength',
+  sightRadiusMm: 'sightRadius',
+  peepHeightMm: 'peepHeight',
+};
+const buildField: Record<string, keyof KeepText> = {
+  name: 'buildName',
+  grainsPerInch: 'grainsPerInch',
+  cutLengthMm: 'cutLength',
+  diameterMm: 'diameter',
+  pointGr: 'pointGr',
+  speedFps: 'speedFps',
+};
 const sightInField: Record<string, keyof KeepText> = { date: 'date', placeLabel: 'placeLabel' };
 
 /**
@@ -106,8 +120,20 @@ function KeepTryForm({ carried }: { carried: TryFormText }) {
     },
   });
   const marks = [
-    { distance: textToNumber(carried.nearDistance) as number, unit: distance, scaleMm: textToNumber(carried.nearReading) as number, arrowsShot: null, note: '' },
-    { distance: textToNumber(carried.farDistance) as number, unit: distance, scaleMm: textToNumber(carried.farReading) as number, arrowsShot: null, note: '' },
+    {
+      distance: textToNumber(carried.nearDistance) as number,
+      unit: distance,
+      scaleMm: textToNumber(carried.nearReading) as number,
+      arrowsShot: null,
+      note: '',
+    },
+    {
+      distance: textToNumber(carried.farDistance) as number,
+      unit: distance,
+      scaleMm: textToNumber(carried.farReading) as number,
+      arrowsShot: null,
+      note: '',
+    },
   ];
 
   const save = handleSubmit(async (text) => {
@@ -133,7 +159,13 @@ function KeepTryForm({ carried }: { carried: TryFormText }) {
       pointGr: textToNumber(text.pointGr),
       speedFps: textToNumber(text.speedFps) ?? null,
     });
-    const sightIn = sightInInputSchema.safeParse({ buildId: 1, date: text.date, placeLabel: text.placeLabel, notes: 'Carried over from the try page.', marks });
+    const sightIn = sightInInputSchema.safeParse({
+      buildId: 1,
+      date: text.date,
+      placeLabel: text.placeLabel,
+      notes: 'Carried over from the try page.',
+      marks,
+    });
     let bad = false;
     for (const [result, fields] of [
       [bow, bowField],
@@ -158,9 +190,13 @@ function KeepTryForm({ carried }: { carried: TryFormText }) {
       setStep('Saving the bow… (1 of 3)');
       bowId = (await apiFetch<{ bow: { id: number } }>('/api/bows', { method: 'POST', body: bow.data })).bow.id;
       setStep('Saving the arrow build… (2 of 3)');
-      const buildId = (await apiFetch<{ build: { id: number } }>(`/api/bows/${bowId}/builds`, { method: 'POST', body: build.data })).build.id;
+      const buildId = (await apiFetch<{ build: { id: number } }>(`/api/bows/${bowId}/builds`, { method: 'POST', body: build.data })).build
+        .id;
       setStep('Fitting and saving the sight-in… (3 of 3)');
-      const saved = await apiFetch<{ sightIn: { id: number } }>(`/api/bows/${bowId}/sight-ins`, { method: 'POST', body: { ...sightIn.data, buildId } });
+      const saved = await apiFetch<{ sightIn: { id: number } }>(`/api/bows/${bowId}/sight-ins`, {
+        method: 'POST',
+        body: { ...sightIn.data, buildId },
+      });
       clearTryCarry();
       await queryClient.invalidateQueries();
       router.replace(`/sight-ins/${saved.sightIn.id}`);
@@ -193,7 +229,11 @@ function KeepTryForm({ carried }: { carried: TryFormText }) {
         </FieldGrid>
       </Card>
       <Card>
-        <SectionHeading title="The arrow" level={2} description="The fit needs its weight and diameter; you can add the insert, nock and vanes later." />
+        <SectionHeading
+          title="The arrow"
+          level={2}
+          description="The fit needs its weight and diameter; you can add the insert, nock and vanes later."
+        />
         <FieldGrid minWidth={150}>
           <FormField control={control} name="buildName" label="Build name" autoCapitalize="sentences" testID="keep-build-name" />
           <FormField control={control} name="grainsPerInch" label="Grains per inch" unit="gpi" numeric testID="keep-gpi" />

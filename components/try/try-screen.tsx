@@ -15,14 +15,7 @@ import { TAPE_VIEW_CAUTION } from '@/components/tapes/tape-form-values';
 import { TapePreview } from '@/components/tapes/tape-preview';
 import { savePostedFile } from '@/components/try/save-posted-file';
 import { saveTryCarry } from '@/components/try/try-carry';
-import {
-  ASSUMED_ARROW,
-  tryFieldOf,
-  tryFitInput,
-  tryFormDefaults,
-  tryFormSchema,
-  type TryFormText,
-} from '@/components/try/try-form-values';
+import { ASSUMED_ARROW, tryFieldOf, tryFitInput, tryFormDefaults, tryFormSchema, type TryFormText } from '@/components/try/try-form-values';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -60,7 +53,11 @@ function outcomeOf(text: TryFormText): Outcome {
   const input = tryFitInput(text);
   const marks = input.marks.map((mark, row) => ({ row, distance: mark.distance, scaleMm: mark.markMm }));
   if (required.some((value) => value.trim() === '')) {
-    return { live: { state: 'waiting', message: 'Enter the sight radius, the peep height and both readings to see your tape.', marks: [] }, tape: null, tapeProblem: null };
+    return {
+      live: { state: 'waiting', message: 'Enter the sight radius, the peep height and both readings to see your tape.', marks: [] },
+      tape: null,
+      tapeProblem: null,
+    };
   }
   // Predicted marks, and so the "confirm at" warnings, only for distances on the tape (every 10, and its ends).
   const from = textToNumber(text.tapeFrom);
@@ -71,7 +68,8 @@ function outcomeOf(text: TryFormText): Outcome {
     input.predict = [...new Set([from, ...tens, to])].sort((a, b) => a - b);
   }
   const attempt = attemptSightFit(input);
-  if (!attempt.ok) return { live: { state: 'refused', message: attempt.error.message, field: attempt.error.field, marks }, tape: null, tapeProblem: null };
+  if (!attempt.ok)
+    return { live: { state: 'refused', message: attempt.error.message, field: attempt.error.field, marks }, tape: null, tapeProblem: null };
   try {
     const tape = tapeLayout(attempt.fit.model, {
       from: textToNumber(text.tapeFrom),
@@ -95,7 +93,8 @@ function readingLabelsOf(text: TryFormText): { near: string; far: string } {
   const near = text.nearDistance.trim();
   const far = text.farDistance.trim();
   const usable = (value: string) => value !== '' && Number.isFinite(Number(value.replace(',', '.')));
-  if (usable(near) && usable(far) && near !== far) return { near: `Reading at ${near} ${text.distanceUnit}`, far: `Reading at ${far} ${text.distanceUnit}` };
+  if (usable(near) && usable(far) && near !== far)
+    return { near: `Reading at ${near} ${text.distanceUnit}`, far: `Reading at ${far} ${text.distanceUnit}` };
   return { near: 'Short-distance reading', far: 'Long-distance reading' };
 }
 
@@ -181,7 +180,10 @@ export function TryScreen() {
       </Card>
 
       <Card style={styles.section}>
-        <SectionHeading title="Two marks" description="A short and a long distance you have sighted in; readings from the sight's scale in mm." />
+        <SectionHeading
+          title="Two marks"
+          description="A short and a long distance you have sighted in; readings from the sight's scale in mm."
+        />
         <FieldGrid minWidth={140}>
           <FormField control={control} name="nearDistance" label="Short distance" unit={distance} numeric testID="try-near-distance" />
           <FormField control={control} name="nearReading" label={readingLabels.near} unit="mm" numeric testID="try-near-reading" />
@@ -228,8 +230,20 @@ export function TryScreen() {
         ) : null}
         <View style={styles.actions}>
           <Button label="Print" onPress={print} disabled={!outcome.tape} testID="try-print" />
-          <Button label="Download SVG" variant="secondary" onPress={() => download('svg')} pending={busy === 'svg'} disabled={!outcome.tape} />
-          <Button label="Download PDF" variant="secondary" onPress={() => download('pdf')} pending={busy === 'pdf'} disabled={!outcome.tape} />
+          <Button
+            label="Download SVG"
+            variant="secondary"
+            onPress={() => download('svg')}
+            pending={busy === 'svg'}
+            disabled={!outcome.tape}
+          />
+          <Button
+            label="Download PDF"
+            variant="secondary"
+            onPress={() => download('pdf')}
+            pending={busy === 'pdf'}
+            disabled={!outcome.tape}
+          />
         </View>
       </Card>
       {outcome.live.state === 'fit' ? (
@@ -253,8 +267,8 @@ export function TryScreen() {
           />
         }
       >
-        Nothing here is sent or saved. Make an account and what you typed here becomes your first bow and sight-in; then you keep every sight-in and its
-        tape, refit as you add marks, and check the sight level.
+        Nothing here is sent or saved. Make an account and what you typed here becomes your first bow and sight-in; then you keep every
+        sight-in and its tape, refit as you add marks, and check the sight level.
       </Banner>
     </View>
   );
@@ -264,7 +278,11 @@ export function TryScreen() {
       <ScreenTitle name="Try a tape" />
       <VisitorBar />
       <Screen>
-        <SectionHeading level={1} title="Try a tape" description="Two marks are enough to print a sight tape for every distance. No account needed." />
+        <SectionHeading
+          level={1}
+          title="Try a tape"
+          description="Two marks are enough to print a sight tape for every distance. No account needed."
+        />
         {wide ? (
           <View style={styles.split}>
             {form}

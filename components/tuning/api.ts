@@ -5,7 +5,13 @@ import { ApiError, apiFetch } from '@/components/api/client';
 import { bowKeys } from '@/components/bows/api';
 import { levelKeys } from '@/components/level/api';
 import { setupEntrySchema, setupListSchema, type SetupEntryInput, type SetupList } from '@/shared/setup-measures';
-import { paperTuneRunSchema, type PaperTuneEnd, type PaperTuneRun, type PaperTuneShotInput, type PaperTuneStart } from '@/shared/paper-tune';
+import {
+  paperTuneRunSchema,
+  type PaperTuneEnd,
+  type PaperTuneRun,
+  type PaperTuneShotInput,
+  type PaperTuneStart,
+} from '@/shared/paper-tune';
 import { sightInStalenessSchema, type SightInStaleness } from '@/shared/staleness-api';
 
 /** Query keys of the tuning feature; every key starts with 'tuning'. */
@@ -41,7 +47,8 @@ export function useSetup(bowId: number | undefined) {
 export function useAddSetupEntry(bowId: number) {
   const queryClient = useQueryClient();
   return useMutation<unknown, ApiError, SetupEntryInput>({
-    mutationFn: (input) => apiFetch(`/api/bows/${bowId}/setup`, { method: 'POST', body: input, schema: z.object({ entry: setupEntrySchema }) }),
+    mutationFn: (input) =>
+      apiFetch(`/api/bows/${bowId}/setup`, { method: 'POST', body: input, schema: z.object({ entry: setupEntrySchema }) }),
     onSuccess: () => refresh(queryClient),
   });
 }
@@ -71,7 +78,8 @@ export function useRun(id: number | undefined) {
 export function useStartRun(bowId: number) {
   const queryClient = useQueryClient();
   return useMutation<PaperTuneRun, ApiError, PaperTuneStart>({
-    mutationFn: async (input) => (await apiFetch(`/api/bows/${bowId}/paper-tunes`, { method: 'POST', body: input, schema: runResponse })).run,
+    mutationFn: async (input) =>
+      (await apiFetch(`/api/bows/${bowId}/paper-tunes`, { method: 'POST', body: input, schema: runResponse })).run,
     onSuccess: (run) => {
       queryClient.setQueryData(tuningKeys.run(run.id), run);
       return refresh(queryClient);
@@ -83,7 +91,8 @@ export function useStartRun(bowId: number) {
 export function useAddShot(runId: number) {
   const queryClient = useQueryClient();
   return useMutation<PaperTuneRun, ApiError, PaperTuneShotInput>({
-    mutationFn: async (input) => (await apiFetch(`/api/paper-tunes/${runId}/shots`, { method: 'POST', body: input, schema: runResponse })).run,
+    mutationFn: async (input) =>
+      (await apiFetch(`/api/paper-tunes/${runId}/shots`, { method: 'POST', body: input, schema: runResponse })).run,
     onSuccess: (run) => {
       queryClient.setQueryData(tuningKeys.run(run.id), run);
       return refresh(queryClient);
@@ -95,7 +104,8 @@ export function useAddShot(runId: number) {
 export function useEndRun(runId: number) {
   const queryClient = useQueryClient();
   return useMutation<PaperTuneRun, ApiError, PaperTuneEnd>({
-    mutationFn: async (input) => (await apiFetch(`/api/paper-tunes/${runId}/end`, { method: 'POST', body: input, schema: runResponse })).run,
+    mutationFn: async (input) =>
+      (await apiFetch(`/api/paper-tunes/${runId}/end`, { method: 'POST', body: input, schema: runResponse })).run,
     onSuccess: (run) => {
       queryClient.setQueryData(tuningKeys.run(run.id), run);
       return refresh(queryClient);
@@ -123,7 +133,8 @@ export function useSightInStaleness(sightInId: number | undefined) {
 export function useConfirmAtRange(sightInId: number) {
   const queryClient = useQueryClient();
   return useMutation<SightInStaleness, ApiError, { note: string }>({
-    mutationFn: (input) => apiFetch(`/api/sight-ins/${sightInId}/confirm-range`, { method: 'POST', body: input, schema: sightInStalenessSchema }),
+    mutationFn: (input) =>
+      apiFetch(`/api/sight-ins/${sightInId}/confirm-range`, { method: 'POST', body: input, schema: sightInStalenessSchema }),
     onSuccess: (result) => {
       queryClient.setQueryData(tuningKeys.staleness(sightInId), result);
       return refresh(queryClient);

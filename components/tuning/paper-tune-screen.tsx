@@ -82,7 +82,8 @@ function ShotForm({ run }: { run: PaperTuneRun }) {
         setChanged('none');
         setChangeNote('');
       },
-      onError: (error) => setErrors({ ...(error.fields as ShotErrors), form: Object.keys(error.fields).length ? undefined : error.message }),
+      onError: (error) =>
+        setErrors({ ...(error.fields as ShotErrors), form: Object.keys(error.fields).length ? undefined : error.message }),
     });
   };
 
@@ -101,13 +102,29 @@ function ShotForm({ run }: { run: PaperTuneRun }) {
             testID="changed-before"
           />
           {changed !== 'none' ? (
-            <TextField label="How much (optional)" hint="E.g. rest left 1/32 in" value={changeNote} onChangeText={setChangeNote} error={errors.changeNote} testID="change-note" />
+            <TextField
+              label="How much (optional)"
+              hint="E.g. rest left 1/32 in"
+              value={changeNote}
+              onChangeText={setChangeNote}
+              error={errors.changeNote}
+              testID="change-note"
+            />
           ) : null}
         </>
       ) : null}
       <TearDiagram value={tear} onChange={setTear} error={errors.tear} />
       {tear !== 'clean' ? (
-        <TextField label={`Tear length (${lengthUnit})`} hint="Hole to the end of the tail’s tear." numeric unit={lengthUnit} value={length} onChangeText={setLength} error={errors.lengthMm} testID="tear-length" />
+        <TextField
+          label={`Tear length (${lengthUnit})`}
+          hint="Hole to the end of the tail’s tear."
+          numeric
+          unit={lengthUnit}
+          value={length}
+          onChangeText={setLength}
+          error={errors.lengthMm}
+          testID="tear-length"
+        />
       ) : null}
       <View style={styles.row}>
         <View style={styles.cell}>
@@ -182,7 +199,8 @@ export function PaperTuneScreen({ runId }: { runId: number }) {
       </>
     );
   }
-  if (bow.isError) return <ErrorView title="The bow could not be loaded" error={bow.error} onRetry={() => bow.refetch()} retrying={bow.isFetching} />;
+  if (bow.isError)
+    return <ErrorView title="The bow could not be loaded" error={bow.error} onRetry={() => bow.refetch()} retrying={bow.isFetching} />;
   const data = run.data;
   const rest = (setup.data?.latest['rest-kind']?.choice ?? null) as RestKind | null;
   const cam = (setup.data?.latest['cam-system']?.choice ?? null) as CamSystem | null;
@@ -202,14 +220,17 @@ export function PaperTuneScreen({ runId }: { runId: number }) {
       <TearHistory shots={data.shots} />
       {advice ? (
         <View style={[styles.card, styles.advice]} testID="advice">
-          <Text variant="label">After shot {last.position + 1}: {advice.headline}</Text>
+          <Text variant="label">
+            After shot {last.position + 1}: {advice.headline}
+          </Text>
           {advice.lines.map((line) => (
             <Text key={line.ruleId} variant="small">
               • {line.words}
             </Text>
           ))}
           <Text variant="caption" tone="soft">
-            Trade practice, no published source; for a release-aid compound bow, {bow.data.hand === 'right' ? 'right' : 'left'}-handed. When unsure, a pro shop.
+            Trade practice, no published source; for a release-aid compound bow, {bow.data.hand === 'right' ? 'right' : 'left'}-handed. When
+            unsure, a pro shop.
           </Text>
         </View>
       ) : null}
@@ -218,7 +239,9 @@ export function PaperTuneScreen({ runId }: { runId: number }) {
           {data.shots.map((shot) => (
             <Text key={shot.id} variant="small" testID={`shot-${shot.position + 1}`}>
               {`Shot ${shot.position + 1}: ${tearNames[shot.tear]}${shot.lengthMm ? `, ${formatQuantity(shot.lengthMm, 'length', units, lengthUnits === 'in' ? 2 : 0)}` : ''} · ${shot.arrows} ${shot.arrows === 1 ? 'arrow' : 'arrows'}`}
-              {shot.changedBefore !== 'none' ? ` · changed before: ${tuneAdjustmentNames[shot.changedBefore].toLowerCase()}${shot.changeNote ? ` (${shot.changeNote})` : ''}` : ''}
+              {shot.changedBefore !== 'none'
+                ? ` · changed before: ${tuneAdjustmentNames[shot.changedBefore].toLowerCase()}${shot.changeNote ? ` (${shot.changeNote})` : ''}`
+                : ''}
               {shot.note ? ` · ${shot.note}` : ''}
               {shot.addedBy.id !== data.addedBy.id ? ` · by ${shot.addedBy.name}` : ''}
             </Text>
@@ -244,7 +267,14 @@ export function PaperTuneScreen({ runId }: { runId: number }) {
 }
 
 const styles = StyleSheet.create({
-  card: { gap: space.md, padding: space.lg, borderRadius: radii.lg, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line },
+  card: {
+    gap: space.md,
+    padding: space.lg,
+    borderRadius: radii.lg,
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+  },
   advice: { backgroundColor: colors.infoTint, borderColor: colors.info, gap: space.xs },
   list: { gap: space.xs },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'center' },

@@ -41,7 +41,13 @@ export function SetupEntryForm({ bowId, measure, unit, onDone }: SetupEntryFormP
 
   const submit = () => {
     const valueMm = showAmount ? lengthTextToMm(valueText, unit) : undefined;
-    const parsed = setupEntryInputSchema.safeParse({ measure, valueMm: valueMm === undefined ? null : valueMm, choice, measuredOn: date.trim(), note });
+    const parsed = setupEntryInputSchema.safeParse({
+      measure,
+      valueMm: valueMm === undefined ? null : valueMm,
+      choice,
+      measuredOn: date.trim(),
+      note,
+    });
     if (!parsed.success) {
       const next: Errors = {};
       for (const issue of parsed.error.issues) {
@@ -56,7 +62,11 @@ export function SetupEntryForm({ bowId, measure, unit, onDone }: SetupEntryFormP
       onSuccess: onDone,
       onError: (error) => {
         const fields = error.fields as Errors;
-        setErrors({ ...fields, valueMm: fields.valueMm ? messageForUnits(fields.valueMm, unit) : undefined, form: Object.keys(fields).length ? undefined : error.message });
+        setErrors({
+          ...fields,
+          valueMm: fields.valueMm ? messageForUnits(fields.valueMm, unit) : undefined,
+          form: Object.keys(fields).length ? undefined : error.message,
+        });
       },
     });
   };
@@ -88,7 +98,15 @@ export function SetupEntryForm({ bowId, measure, unit, onDone }: SetupEntryFormP
       ) : null}
       <View style={styles.row}>
         <View style={styles.cell}>
-          <TextField label="Date" hint="YYYY-MM-DD" value={date} onChangeText={setDate} error={errors.measuredOn} autoCorrect={false} testID={`${testID}-date`} />
+          <TextField
+            label="Date"
+            hint="YYYY-MM-DD"
+            value={date}
+            onChangeText={setDate}
+            error={errors.measuredOn}
+            autoCorrect={false}
+            testID={`${testID}-date`}
+          />
         </View>
         <View style={styles.cell}>
           <TextField label="Note (optional)" value={note} onChangeText={setNote} error={errors.note} testID={`${testID}-note`} />

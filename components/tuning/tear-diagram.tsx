@@ -17,12 +17,28 @@ const grid: Tear[][] = [
  * (`scale` 0..1 of the half-width), as seen from behind the paper.
  * Example: `<TearMark tear="up-left" scale={0.8} size={56} />`
  */
-export function TearMark({ tear, scale = 0.8, size = 56, tone = colors.ink }: { tear: Tear; scale?: number; size?: number; tone?: string }) {
+export function TearMark({
+  tear,
+  scale = 0.8,
+  size = 56,
+  tone = colors.ink,
+}: {
+  tear: Tear;
+  scale?: number;
+  size?: number;
+  tone?: string;
+}) {
   const half = size / 2;
   const v = tearVector(tear);
   const reach = Math.max(0, Math.min(1, scale)) * (half - 6);
   return (
-    <Svg width={size} height={size} viewBox={`0 0 ${size} ${size}`} accessibilityElementsHidden importantForAccessibility="no-hide-descendants">
+    <Svg
+      width={size}
+      height={size}
+      viewBox={`0 0 ${size} ${size}`}
+      accessibilityElementsHidden
+      importantForAccessibility="no-hide-descendants"
+    >
       <Rect x={1} y={1} width={size - 2} height={size - 2} fill={colors.surface} stroke={colors.line} strokeWidth={1} />
       {tear === 'clean' ? null : (
         <Line x1={half} y1={half} x2={half + v.x * reach} y2={half - v.y * reach} stroke={tone} strokeWidth={5} strokeLinecap="round" />

@@ -30,13 +30,22 @@ export function TearHistory({ shots }: { shots: readonly PaperTuneShot[] }) {
             const x0 = index * (cell + 8);
             const half = cell / 2;
             const v = tearVector(shot.tear);
-            const reach = shot.tear === 'clean' ? 0 : Math.max(0.15, Math.min(1, (shot.lengthMm ?? fullLengthMm) / fullLengthMm)) * (half - 6);
+            const reach =
+              shot.tear === 'clean' ? 0 : Math.max(0.15, Math.min(1, (shot.lengthMm ?? fullLengthMm) / fullLengthMm)) * (half - 6);
             const tone = shot.tear === 'clean' ? colors.verified : colors.ink;
             return (
               <G key={shot.id}>
                 <Rect x={x0 + 1} y={1} width={cell - 2} height={cell - 2} fill={colors.surface} stroke={colors.line} strokeWidth={1} />
                 {reach > 0 ? (
-                  <Line x1={x0 + half} y1={half} x2={x0 + half + v.x * reach} y2={half - v.y * reach} stroke={tone} strokeWidth={5} strokeLinecap="round" />
+                  <Line
+                    x1={x0 + half}
+                    y1={half}
+                    x2={x0 + half + v.x * reach}
+                    y2={half - v.y * reach}
+                    stroke={tone}
+                    strokeWidth={5}
+                    strokeLinecap="round"
+                  />
                 ) : null}
                 <Circle cx={x0 + half} cy={half} r={5} fill={tone} />
                 <SvgText x={x0 + half} y={cell + 16} fontSize={13} fontFamily={fonts.numeral} fill={colors.inkSoft} textAnchor="middle">

@@ -27,9 +27,19 @@ import type { BowDetail } from '@/shared/bow';
 import { paperTuneStartSchema, runOutcomeNames } from '@/shared/paper-tune';
 import { setupMeasureKeys, setupMeasures, setupValueWords, type SetupEntry, type SetupMeasureKey } from '@/shared/setup-measures';
 
-const addedByWords = (entry: { addedBy: { name: string }; byTechnician: boolean }) => (entry.byTechnician ? ` · added by ${entry.addedBy.name}` : '');
+const addedByWords = (entry: { addedBy: { name: string }; byTechnician: boolean }) =>
+  entry.byTechnician ? ` · added by ${entry.addedBy.name}` : '';
 
-function MeasureRow({ bow, measure, unit, entries, open, onOpen, onClose, canAdd }: {
+function MeasureRow({
+  bow,
+  measure,
+  unit,
+  entries,
+  open,
+  onOpen,
+  onClose,
+  canAdd,
+}: {
   bow: BowDetail;
   measure: SetupMeasureKey;
   unit: LengthUnit;
@@ -59,16 +69,23 @@ function MeasureRow({ bow, measure, unit, entries, open, onOpen, onClose, canAdd
           ) : null}
           {bowDiffers ? (
             <Text variant="small" tone="due" testID={`measure-${measure}-bow-differs`}>
-              The bow’s set-up says {setupValueWords({ measure, valueMm: bowValueMm, choice: null }, unit)}; the fit uses that until the bow is edited.
+              The bow’s set-up says {setupValueWords({ measure, valueMm: bowValueMm, choice: null }, unit)}; the fit uses that until the bow
+              is edited.
             </Text>
           ) : null}
         </View>
-        {canAdd && !open ? <Button label={latest ? 'New entry' : 'Record'} variant="secondary" onPress={onOpen} testID={`measure-${measure}-add`} /> : null}
+        {canAdd && !open ? (
+          <Button label={latest ? 'New entry' : 'Record'} variant="secondary" onPress={onOpen} testID={`measure-${measure}-add`} />
+        ) : null}
       </View>
       {open ? <SetupEntryForm bowId={bow.id} measure={measure} unit={unit} onDone={onClose} /> : null}
       {older.length > 0 ? (
         <Text variant="small" tone="soft" testID={`measure-${measure}-history`}>
-          Before: {older.slice(0, 4).map((entry) => `${setupValueWords(entry, unit)} (${formatDay(entry.measuredOn)}${addedByWords(entry)})`).join('; ')}
+          Before:{' '}
+          {older
+            .slice(0, 4)
+            .map((entry) => `${setupValueWords(entry, unit)} (${formatDay(entry.measuredOn)}${addedByWords(entry)})`)
+            .join('; ')}
           {older.length > 4 ? `; and ${older.length - 4} more` : ''}
         </Text>
       ) : null}
@@ -80,10 +97,17 @@ function SetupSection({ bow, unit, canAdd }: { bow: BowDetail; unit: LengthUnit;
   const setup = useSetup(bow.id);
   const [open, setOpen] = useState<SetupMeasureKey | null>(null);
   if (setup.isPending) return <LoadingView label="Loading the set-up…" />;
-  if (setup.isError) return <ErrorView title="The set-up could not be loaded" error={setup.error} onRetry={() => setup.refetch()} retrying={setup.isFetching} />;
+  if (setup.isError)
+    return (
+      <ErrorView title="The set-up could not be loaded" error={setup.error} onRetry={() => setup.refetch()} retrying={setup.isFetching} />
+    );
   return (
     <View style={styles.section}>
-      <SectionHeading title="Set-up" level={2} description="Each entry is kept; the newest shows. A new value that differs from the last is logged as a change: the level check becomes due and tapes must be confirmed at the range." />
+      <SectionHeading
+        title="Set-up"
+        level={2}
+        description="Each entry is kept; the newest shows. A new value that differs from the last is logged as a change: the level check becomes due and tapes must be confirmed at the range."
+      />
       {setupMeasureKeys.map((measure) => (
         <MeasureRow
           key={measure}
@@ -108,7 +132,12 @@ function StartRunForm({ bow, distanceUnit }: { bow: BowDetail; distanceUnit: 'yd
   const [distance, setDistance] = useState(distanceUnit === 'yd' ? '5' : '4.5');
   const [error, setError] = useState<string | null>(null);
   const submit = () => {
-    const parsed = paperTuneStartSchema.safeParse({ distance: textToNumber(distance), unit: distanceUnit, startedOn: todayIso(), buildId: bow.builds[0]?.id ?? null });
+    const parsed = paperTuneStartSchema.safeParse({
+      distance: textToNumber(distance),
+      unit: distanceUnit,
+      startedOn: todayIso(),
+      buildId: bow.builds[0]?.id ?? null,
+    });
     if (!parsed.success) {
       setError(parsed.error.issues[0].message);
       return;
@@ -122,9 +151,25 @@ function StartRunForm({ bow, distanceUnit }: { bow: BowDetail; distanceUnit: 'yd
   return (
     <View style={styles.startRow}>
       <View style={styles.distance}>
-        <TextField label={`Distance to the paper (${distanceUnit})`} hint="Commonly about 5 yd (common practice)." numeric unit={distanceUnit} value={distance} onChangeText={setDistance} error={error ?? undefined} testID="run-distance" />
+        <TextField
+          label={`Distance to the paper (${distanceUnit})`}
+          hint="Commonly about 5 yd (common practice)."
+          numeric
+          unit={distanceUnit}
+          value={distance}
+          onChangeText={setDistance}
+          error={error ?? undefined}
+          testID="run-distance"
+        />
       </View>
-      <Button label="Start a paper-tune run" icon={PlusIcon} pendingLabel="Starting…" pending={start.isPending} onPress={submit} testID="start-run" />
+      <Button
+        label="Start a paper-tune run"
+        icon={PlusIcon}
+        pendingLabel="Starting…"
+        pending={start.isPending}
+        onPress={submit}
+        testID="start-run"
+      />
     </View>
   );
 }
@@ -133,10 +178,16 @@ function PaperSection({ bow, distanceUnit, canAdd }: { bow: BowDetail; distanceU
   const runs = useRuns(bow.id);
   return (
     <View style={styles.section}>
-      <SectionHeading title="Paper tuning" level={2} description="Shoot through paper from a few yards, read the tear, change one thing, shoot again." />
+      <SectionHeading
+        title="Paper tuning"
+        level={2}
+        description="Shoot through paper from a few yards, read the tear, change one thing, shoot again."
+      />
       {canAdd ? <StartRunForm bow={bow} distanceUnit={distanceUnit} /> : null}
       {runs.isPending ? <LoadingView label="Loading the runs…" /> : null}
-      {runs.isError ? <ErrorView title="The runs could not be loaded" error={runs.error} onRetry={() => runs.refetch()} retrying={runs.isFetching} /> : null}
+      {runs.isError ? (
+        <ErrorView title="The runs could not be loaded" error={runs.error} onRetry={() => runs.refetch()} retrying={runs.isFetching} />
+      ) : null}
       {runs.data?.length === 0 ? <Text tone="soft">No paper-tune runs yet.</Text> : null}
       {runs.data?.map((run) => (
         <RecordRow
@@ -162,7 +213,12 @@ export function TuningScreen({ bowId }: { bowId: number }) {
       {({ bow, me, role }) => (
         <Screen testID="tuning-screen">
           <ScreenTitle name={`Tuning · ${bow.nickname}`} />
-          <SectionHeading level={1} title="Tuning" description={`${bow.nickname} · ${bow.hand === 'right' ? 'right hand' : 'left hand'}`} action={<Button label="Bow" variant="quiet" href={`/bows/${bow.id}`} />} />
+          <SectionHeading
+            level={1}
+            title="Tuning"
+            description={`${bow.nickname} · ${bow.hand === 'right' ? 'right hand' : 'left hand'}`}
+            action={<Button label="Bow" variant="quiet" href={`/bows/${bow.id}`} />}
+          />
           <TuningCautions />
           {!role.isOwner ? (
             <Banner tone="info" title={`${bow.ownerName || 'The archer'}’s bow`}>
@@ -175,12 +231,27 @@ export function TuningScreen({ bowId }: { bowId: number }) {
             <SectionHeading title="Arrow sets" level={2} description="Numbered arrows of a build: weights, spin checks, the odd one out." />
             {bow.builds.length === 0 ? <Text tone="soft">Add an arrow build first.</Text> : null}
             {bow.builds.map((build) => (
-              <RecordRow key={build.id} testID={`arrow-sets-${build.id}`} title={build.name} detail="Arrow sets" href={`/builds/${build.id}/arrows`} />
+              <RecordRow
+                key={build.id}
+                testID={`arrow-sets-${build.id}`}
+                title={build.name}
+                detail="Arrow sets"
+                href={`/builds/${build.id}/arrows`}
+              />
             ))}
           </View>
           <View style={styles.section}>
-            <SectionHeading title="Take them with you" level={2} description="Set-up entries, paper-tune shots, arrows and range confirmations, one row each (lengths in mm, weights in gr). The bow’s JSON export carries them too." />
-            <DownloadLink label="Download the tuning records (CSV)" href={`/api/bows/${bow.id}/tuning.csv`} fileName={`tuning-${bow.id}.csv`} testID="tuning-csv" />
+            <SectionHeading
+              title="Take them with you"
+              level={2}
+              description="Set-up entries, paper-tune shots, arrows and range confirmations, one row each (lengths in mm, weights in gr). The bow’s JSON export carries them too."
+            />
+            <DownloadLink
+              label="Download the tuning records (CSV)"
+              href={`/api/bows/${bow.id}/tuning.csv`}
+              fileName={`tuning-${bow.id}.csv`}
+              testID="tuning-csv"
+            />
           </View>
         </Screen>
       )}
@@ -190,7 +261,14 @@ export function TuningScreen({ bowId }: { bowId: number }) {
 
 const styles = StyleSheet.create({
   section: { gap: space.sm },
-  measure: { gap: space.sm, padding: space.md, borderRadius: radii.md, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line },
+  measure: {
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radii.md,
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+  },
   measureHead: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'center', justifyContent: 'space-between' },
   measureWords: { flexGrow: 1, flexShrink: 1, flexBasis: 200, gap: space.xxs },
   startRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md, alignItems: 'flex-end' },

@@ -29,7 +29,11 @@ export function TuningSummary({ bowId, unit }: { bowId: number; unit: LengthUnit
   return (
     <View style={styles.wrap} testID="tuning-summary">
       <Text variant="label">Tuning</Text>
-      {items.length > 0 ? <KeyValueList items={items} /> : <Text tone="soft">{setup.isPending ? 'Loading…' : 'No tuning measures recorded yet.'}</Text>}
+      {items.length > 0 ? (
+        <KeyValueList items={items} />
+      ) : (
+        <Text tone="soft">{setup.isPending ? 'Loading…' : 'No tuning measures recorded yet.'}</Text>
+      )}
       <TextLink href={`/bows/${bowId}/tuning`} label="Tuning, paper tune and arrow sets" testID="tuning-summary-link" />
     </View>
   );

@@ -23,10 +23,7 @@ export interface BannerProps {
   style?: StyleProp<ViewStyle>;
 }
 
-const tones: Record<
-  BannerTone,
-  { ground: string; edge: string; text: string; icon: (props: IconProps) => ReactElement; word: string }
-> = {
+const tones: Record<BannerTone, { ground: string; edge: string; text: string; icon: (props: IconProps) => ReactElement; word: string }> = {
   info: { ground: colors.infoTint, edge: colors.info, text: colors.ink, icon: InfoIcon, word: 'Note' },
   warn: { ground: colors.dueTint, edge: colors.due, text: colors.ink, icon: WarningIcon, word: 'Check' },
   error: { ground: colors.failedTint, edge: colors.failed, text: colors.ink, icon: ErrorIcon, word: 'Problem' },

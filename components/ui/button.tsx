@@ -73,11 +73,7 @@ export function Button({
   ];
   const content = (
     <View style={styles.content}>
-      {pending ? (
-        <ActivityIndicator size="small" color={colorsFor.text} />
-      ) : Icon ? (
-        <Icon size={22} color={colorsFor.text} />
-      ) : null}
+      {pending ? <ActivityIndicator size="small" color={colorsFor.text} /> : Icon ? <Icon size={22} color={colorsFor.text} /> : null}
       <Text variant="label" style={{ color: colorsFor.text }}>
         {shown}
       </Text>

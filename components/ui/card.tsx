@@ -35,11 +35,7 @@ export function Card({ children, href, accessibilityLabel, tone = 'raised', test
       href={href}
       accessibilityLabel={accessibilityLabel}
       testID={testID}
-      style={({ pressed, hovered, focused }: PressState) => [
-        ...look,
-        (pressed || hovered) && styles.hovered,
-        focused && styles.focused,
-      ]}
+      style={({ pressed, hovered, focused }: PressState) => [...look, (pressed || hovered) && styles.hovered, focused && styles.focused]}
     >
       {children}
     </LinkPressable>

@@ -27,7 +27,9 @@ export function DownloadLink({ label, href, testID }: DownloadLinkProps) {
     return (
       <View style={styles.offline}>
         <Button label={label} variant="secondary" disabled testID={testID} />
-        <Text variant="small" tone="soft">Needs a connection</Text>
+        <Text variant="small" tone="soft">
+          Needs a connection
+        </Text>
       </View>
     );
   }

@@ -38,7 +38,13 @@ export function DownloadLink({ label, href, fileName, testID }: DownloadLinkProp
   if (!online) {
     return (
       <span style={{ display: 'inline-flex', alignItems: 'center', flexWrap: 'wrap', gap: space.sm }}>
-        <button type="button" disabled aria-describedby={testID ? `${testID}-offline` : undefined} data-testid={testID} style={{ ...style, opacity: 0.6, cursor: 'not-allowed' }}>
+        <button
+          type="button"
+          disabled
+          aria-describedby={testID ? `${testID}-offline` : undefined}
+          data-testid={testID}
+          style={{ ...style, opacity: 0.6, cursor: 'not-allowed' }}
+        >
           {label}
         </button>
         <span id={testID ? `${testID}-offline` : undefined} style={{ color: colors.inkSoft, fontFamily: fonts.body, fontSize: 15 }}>

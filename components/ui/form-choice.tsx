@@ -3,7 +3,6 @@ import { Controller, type Control, type FieldPath, type FieldValues } from 'reac
 import { SegmentedControl, type SegmentOption } from '@/components/ui/segmented-control';
 
 export interface FormChoiceProps<TValues extends FieldValues, TValue extends string> {
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
   control: Control<TValues, any, any>;
   name: FieldPath<TValues>;
   label: string;

@@ -2,10 +2,9 @@ import { Controller, type Control, type FieldPath, type FieldValues } from 'reac
 
 import { TextField, type TextFieldProps } from '@/components/ui/text-field';
 
-export interface FormFieldProps<TValues extends FieldValues>
-  extends Omit<TextFieldProps, 'value' | 'onChangeText' | 'onBlur' | 'error'> {
+export interface FormFieldProps<TValues extends FieldValues> extends Omit<TextFieldProps, 'value' | 'onChangeText' | 'onBlur' | 'error'> {
   // Any transformed-values type: forms whose resolver turns text into numbers (e.g. the bow form) bind here too.
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+
   control: Control<TValues, any, any>;
   name: FieldPath<TValues>;
   /** Turns the form value into the input's text. Default: '' for null/undefined, else String(value). */

@@ -21,17 +21,14 @@ interface StatefulPressableProps extends Omit<PressableProps, 'style'> {
 
 // Link's asChild merges the child's `style` as a plain object, which drops a style
 // function (and arrays); so the function travels under another name and is flattened here.
-const StatefulPressable = forwardRef<ComponentRef<typeof Pressable>, StatefulPressableProps>(
-  function StatefulPressable({ pressStyle, ...rest }, ref) {
-    return (
-      <Pressable
-        ref={ref}
-        {...rest}
-        style={(state) => (pressStyle ? StyleSheet.flatten(pressStyle(state as PressState)) : undefined)}
-      />
-    );
-  },
-);
+const StatefulPressable = forwardRef<ComponentRef<typeof Pressable>, StatefulPressableProps>(function StatefulPressable(
+  { pressStyle, ...rest },
+  ref,
+) {
+  return (
+    <Pressable ref={ref} {...rest} style={(state) => (pressStyle ? StyleSheet.flatten(pressStyle(state as PressState)) : undefined)} />
+  );
+});
 
 /**
  * A Pressable that is a router link (an <a href> on the web) and still gets

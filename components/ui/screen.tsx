@@ -24,9 +24,7 @@ export function Screen({ children, width = 'content', scroll = true, centered = 
   const wide = useWide();
   const padded = [styles.padded, wide && styles.paddedWide];
   const column = (
-    <View style={[styles.column, { maxWidth: width === 'form' ? layout.formMax : layout.contentMax }, style]}>
-      {children}
-    </View>
+    <View style={[styles.column, { maxWidth: width === 'form' ? layout.formMax : layout.contentMax }, style]}>{children}</View>
   );
   if (!scroll) {
     return (

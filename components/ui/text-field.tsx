@@ -44,14 +44,7 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
           {hint}
         </Text>
       ) : null}
-      <View
-        style={[
-          styles.box,
-          focused ? styles.boxFocused : null,
-          error ? styles.boxError : null,
-          disabled ? styles.boxDisabled : null,
-        ]}
-      >
+      <View style={[styles.box, focused ? styles.boxFocused : null, error ? styles.boxError : null, disabled ? styles.boxDisabled : null]}>
         <TextInput
           ref={ref}
           aria-labelledby={labelId}

@@ -18,11 +18,7 @@ export interface TextLinkProps {
  */
 export function TextLink({ label, href, testID }: TextLinkProps) {
   return (
-    <LinkPressable
-      href={href}
-      testID={testID}
-      style={({ focused }: PressState) => [styles.tap, focused && styles.focused]}
-    >
+    <LinkPressable href={href} testID={testID} style={({ focused }: PressState) => [styles.tap, focused && styles.focused]}>
       {({ hovered }: PressState) => (
         <Text variant="label" tone="signal" style={[styles.text, hovered && styles.hovered]}>
           {label}

@@ -20,7 +20,17 @@ export interface ArrowComponents {
 }
 
 export function totalArrowGrains(parts: ArrowComponents): number {
-  const values = [parts.shaftGpi, parts.cutLengthIn, parts.pointGr, parts.insertGr, parts.nockGr, parts.vaneCount, parts.vaneGr, parts.wrapGr, parts.collarGr];
+  const values = [
+    parts.shaftGpi,
+    parts.cutLengthIn,
+    parts.pointGr,
+    parts.insertGr,
+    parts.nockGr,
+    parts.vaneCount,
+    parts.vaneGr,
+    parts.wrapGr,
+    parts.collarGr,
+  ];
   if (values.some((value) => value !== undefined && !(Number.isFinite(value) && value >= 0))) {
     throw new RangeError('totalArrowGrains: every weight, length and count must be a number of zero or more');
   }

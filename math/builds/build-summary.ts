@@ -14,7 +14,10 @@ import { ENERGY_CAUTION } from '@/math/cautions';
  *
  * Example: buildSummary(withArrow(model, { massGr: 500, diameterMm: 6.5, speedFps: 262 })).drop.dropMm → 779
  */
-export function withArrow(model: SightModel, arrow: { massGr: number; diameterMm: number; speedFps: number; dragCoefficient?: number }): SightModel {
+export function withArrow(
+  model: SightModel,
+  arrow: { massGr: number; diameterMm: number; speedFps: number; dragCoefficient?: number },
+): SightModel {
   const { covariance: _covariance, ...rest } = model;
   return {
     ...rest,
@@ -38,7 +41,10 @@ export interface BuildSummary {
 }
 
 /** Units: distances in model.distanceUnit, window mm. Example: see the module comment. */
-export function buildSummary(model: SightModel, options: { near?: number; far?: number; forgivenessAt?: number; windowMm?: number } = {}): BuildSummary {
+export function buildSummary(
+  model: SightModel,
+  options: { near?: number; far?: number; forgivenessAt?: number; windowMm?: number } = {},
+): BuildSummary {
   const arrow = { massGr: model.arrowMassGr, speedFps: model.speedFps };
   const energy = kineticEnergy(arrow);
   const push = momentum(arrow);

@@ -58,7 +58,8 @@ const DEFAULT_DISTANCES = Array.from({ length: 19 }, (_, i) => 10 + 5 * i);
 export function predictBuild(input: PredictBuildInput): BuildPrediction & { model: SightModel | null } {
   const { arrow } = input;
   if (!(arrow.massGr > 0 && Number.isFinite(arrow.massGr))) throw new FitInputError('arrow.massGr', 'Enter the arrow mass in grains');
-  if (!(arrow.diameterMm > 0 && Number.isFinite(arrow.diameterMm))) throw new FitInputError('arrow.diameterMm', 'Enter the shaft diameter in mm');
+  if (!(arrow.diameterMm > 0 && Number.isFinite(arrow.diameterMm)))
+    throw new FitInputError('arrow.diameterMm', 'Enter the shaft diameter in mm');
   const warnings: string[] = [];
 
   let virtualMass: VirtualMassFit | null = null;
@@ -104,7 +105,8 @@ export function predictBuild(input: PredictBuildInput): BuildPrediction & { mode
       sightedBuildMarkMm: finite(sign * sighted[i]),
       differenceMm: finite(sign * (predicted[i] - sighted[i])),
     }));
-    if (predicted.some((mark) => !Number.isFinite(mark))) warnings.push('Some distances are out of reach for the new arrow; they are left off its tape.');
+    if (predicted.some((mark) => !Number.isFinite(mark)))
+      warnings.push('Some distances are out of reach for the new arrow; they are left off its tape.');
   }
 
   const energy = kineticEnergy({ massGr: arrow.massGr, speedFps });

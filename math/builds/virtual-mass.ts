@@ -33,14 +33,20 @@ export interface VirtualMassFit {
 export function fitVirtualMass(builds: readonly ChronographedBuild[]): VirtualMassFit {
   if (builds.length < 2) throw new FitInputError('builds', 'Enter at least two chronographed builds');
   builds.forEach((build, index) => {
-    if (!(build.massGr > 0 && Number.isFinite(build.massGr))) throw new FitInputError(`builds[${index}].massGr`, 'Enter the arrow mass in grains');
-    if (!(build.speedFps > 0 && Number.isFinite(build.speedFps))) throw new FitInputError(`builds[${index}].speedFps`, 'Enter the chronographed speed in fps');
+    if (!(build.massGr > 0 && Number.isFinite(build.massGr)))
+      throw new FitInputError(`builds[${index}].massGr`, 'Enter the arrow mass in grains');
+    if (!(build.speedFps > 0 && Number.isFinite(build.speedFps)))
+      throw new FitInputError(`builds[${index}].speedFps`, 'Enter the chronographed speed in fps');
   });
   const masses = builds.map((build) => grainsToKg(build.massGr));
   const inverseSquares = builds.map((build) => 1 / fpsToMps(build.speedFps) ** 2);
   const weights = builds.map((build) => fpsToMps(build.speedFps) ** 6 / 4);
   // Weighted normal equations for y = a·m + b.
-  let sw = 0, swm = 0, swmm = 0, swy = 0, swmy = 0;
+  let sw = 0,
+    swm = 0,
+    swmm = 0,
+    swy = 0,
+    swmy = 0;
   builds.forEach((_, i) => {
     sw += weights[i];
     swm += weights[i] * masses[i];

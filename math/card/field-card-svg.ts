@@ -32,15 +32,30 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
   const { widthMm, heightMm } = FIELD_CARD_SIZE_MM;
   const contentMm = widthMm - 2 * MARGIN_MM;
   const parts: string[] = [];
-  const text = (value: string, font: GlyphFont, x: number, y: number, sizeMm: number, anchor: 'start' | 'middle' | 'end' = 'start', fill = INK) =>
-    parts.push(textElement(value, font, { x, y, sizeMm, anchor }, `fill="${fill}"`));
+  const text = (
+    value: string,
+    font: GlyphFont,
+    x: number,
+    y: number,
+    sizeMm: number,
+    anchor: 'start' | 'middle' | 'end' = 'start',
+    fill = INK,
+  ) => parts.push(textElement(value, font, { x, y, sizeMm, anchor }, `fill="${fill}"`));
   const unit = data.unit;
 
   // Heading.
   let y = MARGIN_MM + 3.2;
   text(`Field card · ${clip(labels.bow, 34)}`, NUMERAL_FONT, MARGIN_MM, y, 3.2);
   y += 3.4;
-  text(`${clip(labels.build, 30)} · sighted ${labels.date}${labels.place ? `, ${clip(labels.place, 28)}` : ''}`, SMALL_PRINT_FONT, MARGIN_MM, y, 1.7, 'start', SOFT);
+  text(
+    `${clip(labels.build, 30)} · sighted ${labels.date}${labels.place ? `, ${clip(labels.place, 28)}` : ''}`,
+    SMALL_PRINT_FONT,
+    MARGIN_MM,
+    y,
+    1.7,
+    'start',
+    SOFT,
+  );
   y += 2.9;
   text(`Sight-in air: ${airWords(data.sightIn)}`, SMALL_PRINT_FONT, MARGIN_MM, y, 1.7, 'start', SOFT);
   y += 3.6;
@@ -64,7 +79,9 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
   y += 1.2;
   parts.push(`<g class="slope-table" data-unit="${unit}">`);
   text('slope', SMALL_PRINT_FONT, MARGIN_MM, y + 2.2, 1.6, 'start', SOFT);
-  data.distances.forEach((distance, index) => text(`${formatDistance(distance)} ${unit}`, NUMERAL_FONT, columnX(index), y + 2.4, 2.2, 'middle'));
+  data.distances.forEach((distance, index) =>
+    text(`${formatDistance(distance)} ${unit}`, NUMERAL_FONT, columnX(index), y + 2.4, 2.2, 'middle'),
+  );
   y += 3.6;
   parts.push(`<line x1="${MARGIN_MM}" y1="${fixed(y)}" x2="${widthMm - MARGIN_MM}" y2="${fixed(y)}" stroke="${INK}" stroke-width="0.2"/>`);
   const rowMm = 6.9;
@@ -96,7 +113,13 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
 
   // Level marks in the card's air against the sight-in's, and the crosswind, on the same distance columns.
   y += 3.8;
-  text(data.sameAirAsSightIn ? 'Level marks, sight-in air (mm)' : 'Level marks here against the sight-in (mm)', NUMERAL_FONT, MARGIN_MM, y, 2.2);
+  text(
+    data.sameAirAsSightIn ? 'Level marks, sight-in air (mm)' : 'Level marks here against the sight-in (mm)',
+    NUMERAL_FONT,
+    MARGIN_MM,
+    y,
+    2.2,
+  );
   const labelColumnMm = 14;
   const shiftColumnMm = (contentMm - labelColumnMm) / Math.max(1, data.shift.length);
   const shiftX = (index: number) => MARGIN_MM + labelColumnMm + shiftColumnMm * (index + 0.5);
@@ -124,9 +147,16 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
 
   // Crosswind: per speed, the drift at the target (in/cm) and the hold at the sight (mm).
   y += 1.2;
-  parts.push(`<line x1="${MARGIN_MM}" y1="${fixed(y)}" x2="${widthMm - MARGIN_MM}" y2="${fixed(y)}" stroke="${SOFT}" stroke-width="0.15"/>`);
+  parts.push(
+    `<line x1="${MARGIN_MM}" y1="${fixed(y)}" x2="${widthMm - MARGIN_MM}" y2="${fixed(y)}" stroke="${SOFT}" stroke-width="0.15"/>`,
+  );
   const wind = data.wind;
-  for (const line of wrapText(`Crosswind from 3 or 9 o'clock, level: drift in/cm at the target; hold mm at the sight, into the wind (from 1, 5, 7, 11 o'clock: half)`, SMALL_PRINT_FONT, 1.6, contentMm)) {
+  for (const line of wrapText(
+    `Crosswind from 3 or 9 o'clock, level: drift in/cm at the target; hold mm at the sight, into the wind (from 1, 5, 7, 11 o'clock: half)`,
+    SMALL_PRINT_FONT,
+    1.6,
+    contentMm,
+  )) {
     y += 2.3;
     text(line, SMALL_PRINT_FONT, MARGIN_MM, y, 1.6, 'start', SOFT);
   }
@@ -135,8 +165,19 @@ export function fieldCardSvg(data: FieldCardData, labels: FieldCardLabels): stri
     y += 2.6;
     text(`${formatDistance(row.speed)} ${wind.speedUnit}`, NUMERAL_FONT, MARGIN_MM, y, 1.9);
     row.cells.forEach((cell, index) => {
-      parts.push(`<g data-wind="${row.speed}" data-distance="${cell.distance}" data-drift-cm="${cell.driftCm ?? ''}" data-hold-mm="${cell.holdMm ?? ''}">`);
-      text(cell.driftIn === null || cell.driftCm === null ? '—' : `${formatNumber(cell.driftIn, 1)}/${formatNumber(cell.driftCm, Math.abs(cell.driftCm) < 9.95 ? 1 : 0)}`, NUMERAL_FONT, shiftX(index), y, 1.9, 'middle');
+      parts.push(
+        `<g data-wind="${row.speed}" data-distance="${cell.distance}" data-drift-cm="${cell.driftCm ?? ''}" data-hold-mm="${cell.holdMm ?? ''}">`,
+      );
+      text(
+        cell.driftIn === null || cell.driftCm === null
+          ? '—'
+          : `${formatNumber(cell.driftIn, 1)}/${formatNumber(cell.driftCm, Math.abs(cell.driftCm) < 9.95 ? 1 : 0)}`,
+        NUMERAL_FONT,
+        shiftX(index),
+        y,
+        1.9,
+        'middle',
+      );
       text(cell.holdMm === null ? '' : formatNumber(cell.holdMm, 1), NUMERAL_FONT, shiftX(index), y + 2.1, 1.6, 'middle', SOFT);
       parts.push('</g>');
     });

@@ -2,7 +2,13 @@ import type { TapeOptionsInput } from '@/shared/fit';
 import type { SightModel } from '@/math/flight/sight-model';
 import { FitInputError } from '@/math/fit/fit-input-error';
 import { NUMERAL_FONT, SMALL_PRINT_FONT } from '@/math/tape/glyphs';
-import { SHEET_LINE_MM as LINE_MM, SHEET_MARGIN_MM as MARGIN_MM, SHEET_SMALL_MM as SMALL_MM, fixedMm as fixed, sheetPage } from '@/math/sheet/sheet-page';
+import {
+  SHEET_LINE_MM as LINE_MM,
+  SHEET_MARGIN_MM as MARGIN_MM,
+  SHEET_SMALL_MM as SMALL_MM,
+  fixedMm as fixed,
+  sheetPage,
+} from '@/math/sheet/sheet-page';
 import { PRINT_INSTRUCTION, TAPE_CAUTION } from '@/math/cautions';
 import { PREDICTED_CAUTION } from '@/math/builds/predict-build';
 import { predictedTapeSvg } from '@/math/card/predicted-tape-svg';
@@ -70,14 +76,19 @@ export function predictedSheetSvg(
   const tapeWidthMm = Number(size?.[1] ?? 0);
   const tapeHeightMm = Number(size?.[2] ?? 0);
   if (y + tapeHeightMm > paper.heightMm - MARGIN_MM) {
-    throw new FitInputError('tape', `The predicted tape needs ${tapeHeightMm.toFixed(0)} mm of the page and does not fit; shorten the range`);
+    throw new FitInputError(
+      'tape',
+      `The predicted tape needs ${tapeHeightMm.toFixed(0)} mm of the page and does not fit; shorten the range`,
+    );
   }
   if (tapeWidthMm > usableMm) {
-    throw new FitInputError('tape', `The predicted tape and its words need ${tapeWidthMm.toFixed(0)} mm across and do not fit; narrow the tape`);
+    throw new FitInputError(
+      'tape',
+      `The predicted tape and its words need ${tapeWidthMm.toFixed(0)} mm across and do not fit; narrow the tape`,
+    );
   }
   const inner = tapeSvg.slice(tapeSvg.indexOf('>') + 1, tapeSvg.lastIndexOf('</svg>'));
   page.add(`<g class="predicted-tape" data-predicted="true" transform="translate(${fixed(MARGIN_MM)} ${fixed(y)})">${inner}</g>`);
 
   return page.svg(`data-paper="${paperName}" data-predicted="true"`);
 }
-

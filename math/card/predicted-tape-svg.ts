@@ -19,7 +19,11 @@ import { TAPE_CAUTION } from '@/math/cautions';
  *
  * Units: mm. Example: predictedTapeSvg(prediction.model, { from: 20, to: 80 }, { build: 'Elk 520', speed: '264 fps (predicted)' }) → '<svg … width="63mm" height="42.1565mm" …'
  */
-export function predictedTapeSvg(model: SightModel, options: TapeOptionsInput = {}, labels: { bow?: string; build?: string; speed?: string } = {}): string {
+export function predictedTapeSvg(
+  model: SightModel,
+  options: TapeOptionsInput = {},
+  labels: { bow?: string; build?: string; speed?: string } = {},
+): string {
   const layout = tapeLayout(model, options);
   const gapMm = 4;
   const columnMm = 46;
@@ -29,7 +33,9 @@ export function predictedTapeSvg(model: SightModel, options: TapeOptionsInput = 
   // The free strip along the tape's edge, beyond the numerals.
   const widest = Math.max(
     0,
-    ...layout.ticks.filter((tick) => tick.numeral).map((tick) => measureTextMm(formatTapeNumber(tick.distance), NUMERAL_FONT, layout.numeralHeightMm)),
+    ...layout.ticks
+      .filter((tick) => tick.numeral)
+      .map((tick) => measureTextMm(formatTapeNumber(tick.distance), NUMERAL_FONT, layout.numeralHeightMm)),
   );
   const freeMm = layout.widthMm - (layout.numeralXMm + widest) - 0.3;
   const stripSizeMm = Math.min(1.8, freeMm - 0.6);

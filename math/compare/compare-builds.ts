@@ -78,7 +78,8 @@ export function compareBuilds(entries: readonly CompareEntry[], options: Compare
   const far = options.far ?? 60;
   const sign = options.scaleSign ?? 1;
   const distances = [...new Set([...(options.distances ?? DEFAULT_DISTANCES), at])].sort((a, b) => a - b);
-  if (distances.some((distance) => !(distance >= 5 && distance <= 150))) throw new FitInputError('distances', 'Enter distances between 5 and 150');
+  if (distances.some((distance) => !(distance >= 5 && distance <= 150)))
+    throw new FitInputError('distances', 'Enter distances between 5 and 150');
 
   // The model's distances are read in `unit`; its physics is in SI, so changing the unit changes nothing else.
   const models = entries.map((entry) => ({

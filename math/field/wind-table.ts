@@ -18,12 +18,19 @@ import { WIND_CAUTION } from '@/math/cautions';
  */
 export interface WindTable {
   speedUnit: 'mph' | 'km/h';
-  rows: { speed: number; crossMps: number; cells: { distance: number; driftCm: number | null; driftIn: number | null; holdMm: number | null }[] }[];
+  rows: {
+    speed: number;
+    crossMps: number;
+    cells: { distance: number; driftCm: number | null; driftIn: number | null; holdMm: number | null }[];
+  }[];
   caution: string;
 }
 
 /** Wind speeds of the table, by the archer's distance unit. */
-export const WIND_SPEEDS = { yd: { unit: 'mph', speeds: [5, 10, 15], mps: 0.44704 }, m: { unit: 'km/h', speeds: [8, 16, 24], mps: 1 / 3.6 } } as const;
+export const WIND_SPEEDS = {
+  yd: { unit: 'mph', speeds: [5, 10, 15], mps: 0.44704 },
+  m: { unit: 'km/h', speeds: [8, 16, 24], mps: 1 / 3.6 },
+} as const;
 
 export function windTable(model: SightModel, distances: readonly number[]): WindTable {
   const scale = WIND_SPEEDS[model.distanceUnit];

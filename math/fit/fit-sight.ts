@@ -66,7 +66,17 @@ export interface MarkResidual {
 
 /** Something the archer should know, in plain words; `distance` when it concerns one. */
 export interface FitWarning {
-  code: 'one-mark' | 'verify' | 'outlier' | 'scatter' | 'chronograph' | 'peep-height' | 'sight-radius' | 'drag' | 'out-of-reach' | 'slope-estimate';
+  code:
+    | 'one-mark'
+    | 'verify'
+    | 'outlier'
+    | 'scatter'
+    | 'chronograph'
+    | 'peep-height'
+    | 'sight-radius'
+    | 'drag'
+    | 'out-of-reach'
+    | 'slope-estimate';
   message: string;
   distance?: number;
 }
@@ -124,7 +134,12 @@ export function fitSight(input: FitInput): FitResult {
 
   const chronograph = data.arrow.speedFps;
   const peepHeightM = data.sight.peepHeightMm / 1000;
-  const dragPerM = dragFactorPerM({ airDensityKgM3: density, dragCoefficient, diameterMm: data.arrow.diameterMm, massGr: data.arrow.massGr });
+  const dragPerM = dragFactorPerM({
+    airDensityKgM3: density,
+    dragCoefficient,
+    diameterMm: data.arrow.diameterMm,
+    massGr: data.arrow.massGr,
+  });
   const oneMark = marks.length === 1;
   let start: { speedMps: number; scaleZeroMm: number };
   if (oneMark) {
@@ -132,7 +147,11 @@ export function fitSight(input: FitInput): FitResult {
     // the mark fixes the scale zero, the priors carry everything else.
     const shot = { speedMps: fpsToMps(chronograph!), dragPerM, peepHeightM, gravityMps2: STANDARD_GRAVITY_MPS2 };
     const solved = solveElevation(shot, rangesM[0], 0);
-    if (!solved) throw new FitInputError('marks[0].distance', `At ${chronograph} fps the arrow cannot reach ${label(marks[0].distance)}; check the speed and the distance`);
+    if (!solved)
+      throw new FitInputError(
+        'marks[0].distance',
+        `At ${chronograph} fps the arrow cannot reach ${label(marks[0].distance)}; check the speed and the distance`,
+      );
     start = { speedMps: shot.speedMps, scaleZeroMm: marks[0].markMm - data.sight.radiusMm * Math.tan(solved.elevationRad) };
   } else {
     // Start (and, for two marks, answer): speed and scale zero from the nearest and farthest marks.
@@ -201,12 +220,14 @@ export function fitSight(input: FitInput): FitResult {
   // Analysis, 3rd ed., §2.6). Raising σ only when the scatter is larger, as
   // before, gave 75 % one-sigma coverage for four marks (tests/math/band-coverage.test.ts).
   const freedom = marks.length - leverages.reduce((sum, leverage) => sum + leverage, 0) / (sigma * sigma);
-  const sigmaEffective = marks.length >= 4 && freedom > 0.5 ? sigma * Math.sqrt((POOLED_PRIOR_DOF + chiSquare) / (POOLED_PRIOR_DOF + freedom)) : sigma;
+  const sigmaEffective =
+    marks.length >= 4 && freedom > 0.5 ? sigma * Math.sqrt((POOLED_PRIOR_DOF + chiSquare) / (POOLED_PRIOR_DOF + freedom)) : sigma;
   const covariance = sigmaEffective === sigma ? unscaled : covarianceAt(sigmaEffective);
   let outlierIndex = -1;
   if (marks.length >= 4) {
     standardised.forEach((z, i) => {
-      if (Math.abs(z) > FIT_THRESHOLDS.outlierStandardised && (outlierIndex < 0 || Math.abs(z) > Math.abs(standardised[outlierIndex]))) outlierIndex = i;
+      if (Math.abs(z) > FIT_THRESHOLDS.outlierStandardised && (outlierIndex < 0 || Math.abs(z) > Math.abs(standardised[outlierIndex])))
+        outlierIndex = i;
     });
   }
 
@@ -230,7 +251,11 @@ export function fitSight(input: FitInput): FitResult {
     }
     const verify = band.sigmaMm > FIT_THRESHOLDS.verifyBandMm;
     if (verify && !oneMark) {
-      warnings.push({ code: 'verify', distance, message: `Confirm at ${label(distance)}: the predicted mark there is uncertain by ±${band.sigmaMm.toFixed(1)} mm` });
+      warnings.push({
+        code: 'verify',
+        distance,
+        message: `Confirm at ${label(distance)}: the predicted mark there is uncertain by ±${band.sigmaMm.toFixed(1)} mm`,
+      });
     }
     return { distance, markMm: band.markMm, sigmaMm: band.sigmaMm, sigmaDistance: band.sigmaDistance, verify };
   });
@@ -248,7 +273,9 @@ export function fitSight(input: FitInput): FitResult {
   if (oneMark) {
     // The band where the archer will shoot next (or the widest predicted one).
     const nextBand = next !== null ? bandAt(next) : null;
-    const widest = predicted.filter((mark) => Number.isFinite(mark.sigmaMm)).reduce<PredictedMark | null>((a, b) => (a && a.sigmaMm >= b.sigmaMm ? a : b), null);
+    const widest = predicted
+      .filter((mark) => Number.isFinite(mark.sigmaMm))
+      .reduce<PredictedMark | null>((a, b) => (a && a.sigmaMm >= b.sigmaMm ? a : b), null);
     const shown = nextBand && Number.isFinite(nextBand.sigmaMm) ? nextBand : widest;
     model.oneMark = { distance: marks[0].distance, nextDistance: next };
     warnings.unshift({
@@ -277,25 +304,46 @@ export function fitSight(input: FitInput): FitResult {
     });
   }
   if (marks.length >= 3 && rmsMm > FIT_THRESHOLDS.scatterRmsMm) {
-    warnings.push({ code: 'scatter', message: `The marks scatter by ${rmsMm.toFixed(2)} mm (RMS) around the fit: check the readings and shoot the worst again` });
+    warnings.push({
+      code: 'scatter',
+      message: `The marks scatter by ${rmsMm.toFixed(2)} mm (RMS) around the fit: check the readings and shoot the worst again`,
+    });
   }
-  const strays = (value: number, prior: Prior | null) => prior !== null && Math.abs(value - prior.mean) > FIT_THRESHOLDS.priorSigmas * prior.sigma;
+  const strays = (value: number, prior: Prior | null) =>
+    prior !== null && Math.abs(value - prior.mean) > FIT_THRESHOLDS.priorSigmas * prior.sigma;
   if (chronograph !== undefined && strays(parameters[0], priors[0])) {
-    warnings.push({ code: 'chronograph', message: `The marks fit best with ${parameters[0].toFixed(0)} fps; the chronograph gave ${chronograph.toFixed(0)} fps. Check the chronograph reading and the marks` });
+    warnings.push({
+      code: 'chronograph',
+      message: `The marks fit best with ${parameters[0].toFixed(0)} fps; the chronograph gave ${chronograph.toFixed(0)} fps. Check the chronograph reading and the marks`,
+    });
   }
   if (strays(parameters[2], priors[2])) {
-    warnings.push({ code: 'drag', message: `The marks need a drag coefficient of ${parameters[2].toFixed(2)}, far from the ${dragCoefficient.toFixed(2)} assumed: check the long marks` });
+    warnings.push({
+      code: 'drag',
+      message: `The marks need a drag coefficient of ${parameters[2].toFixed(2)}, far from the ${dragCoefficient.toFixed(2)} assumed: check the long marks`,
+    });
   }
   if (strays(parameters[3], priors[3])) {
-    warnings.push({ code: 'peep-height', message: `The marks fit best with a peep height of ${parameters[3].toFixed(0)} mm, not the ${data.sight.peepHeightMm} mm entered: measure it again at full draw` });
+    warnings.push({
+      code: 'peep-height',
+      message: `The marks fit best with a peep height of ${parameters[3].toFixed(0)} mm, not the ${data.sight.peepHeightMm} mm entered: measure it again at full draw`,
+    });
   }
   if (strays(parameters[4], priors[4])) {
-    warnings.push({ code: 'sight-radius', message: `The marks fit best with a sight radius of ${parameters[4].toFixed(0)} mm, not the ${data.sight.radiusMm} mm entered: measure it again at full draw` });
+    warnings.push({
+      code: 'sight-radius',
+      message: `The marks fit best with a sight radius of ${parameters[4].toFixed(0)} mm, not the ${data.sight.radiusMm} mm entered: measure it again at full draw`,
+    });
   }
 
   const shots = (data.shots ?? []).map((shot) => slopeShot(model, shot.distance, shot.angleDeg));
   shots.forEach((shot) => {
-    if (!Number.isFinite(shot.markMm)) warnings.push({ code: 'out-of-reach', distance: shot.distance, message: `The arrow cannot reach ${label(shot.distance)} at ${shot.angleDeg}° with this fit` });
+    if (!Number.isFinite(shot.markMm))
+      warnings.push({
+        code: 'out-of-reach',
+        distance: shot.distance,
+        message: `The arrow cannot reach ${label(shot.distance)} at ${shot.angleDeg}° with this fit`,
+      });
   });
   if (shots.length > 0) warnings.push({ code: 'slope-estimate', message: SLOPE_CAUTION });
 

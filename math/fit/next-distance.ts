@@ -13,7 +13,12 @@ import type { MarkBand } from '@/math/fit/mark-band';
  * distances (with gradients), which of them may be chosen, the mark sigma (mm).
  * Example: nextDistance(covariance, bands, (band) => band.distance !== 20, 0.2) → 100
  */
-export function nextDistance(covariance: number[][], bands: readonly MarkBand[], eligible: (band: MarkBand) => boolean, markSigmaMm: number): number | null {
+export function nextDistance(
+  covariance: number[][],
+  bands: readonly MarkBand[],
+  eligible: (band: MarkBand) => boolean,
+  markSigmaMm: number,
+): number | null {
   const spread = bands.map((band) => matrixVector(covariance, band.gradient));
   let best: number | null = null;
   let bestFall = 0;

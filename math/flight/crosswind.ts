@@ -47,7 +47,12 @@ export function crosswindDriftM(model: SightModel, distance: number, crossMps: n
   if (!solution) return NaN;
   const gamma = solution.elevationRad;
   return integrateDrift(
-    { x: shot.peepHeightM * Math.sin(gamma), y: -shot.peepHeightM * Math.cos(gamma), vx: shot.speedMps * Math.cos(gamma), vy: shot.speedMps * Math.sin(gamma) },
+    {
+      x: shot.peepHeightM * Math.sin(gamma),
+      y: -shot.peepHeightM * Math.cos(gamma),
+      vx: shot.speedMps * Math.cos(gamma),
+      vy: shot.speedMps * Math.sin(gamma),
+    },
     shot.dragPerM,
     shot.gravityMps2,
     crossMps,
@@ -78,7 +83,13 @@ export function windHold(model: SightModel, distance: number, crossMps: number):
   };
 }
 
-function integrateDrift(start: { x: number; y: number; vx: number; vy: number }, k: number, g: number, wind: number, rangeM: number): number {
+function integrateDrift(
+  start: { x: number; y: number; vx: number; vy: number },
+  k: number,
+  g: number,
+  wind: number,
+  rangeM: number,
+): number {
   const count = Math.max(MIN_STEPS, Math.ceil(Math.abs(rangeM) / DEFAULT_STEP_M));
   const dx = (rangeM - start.x) / count;
   // State: y, z, vx, vy, vz; derivatives with respect to x.

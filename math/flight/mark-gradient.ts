@@ -39,11 +39,13 @@ export function markGradient(
   const dMissDElevation = (missAtRange(shot, rangeM, losAngleRad, elevationRad + elevationStep).w - base) / elevationStep;
 
   const speedStep = 1e-6 * shot.speedMps;
-  const dMissDSpeed = (missAtRange({ ...shot, speedMps: shot.speedMps + speedStep }, rangeM, losAngleRad, elevationRad).w - base) / speedStep;
+  const dMissDSpeed =
+    (missAtRange({ ...shot, speedMps: shot.speedMps + speedStep }, rangeM, losAngleRad, elevationRad).w - base) / speedStep;
   const dragStep = shot.dragPerM > 0 ? 1e-6 * shot.dragPerM : 1e-12;
   const dMissDDrag = (missAtRange({ ...shot, dragPerM: shot.dragPerM + dragStep }, rangeM, losAngleRad, elevationRad).w - base) / dragStep;
   const peepStep = 1e-6; // m
-  const dMissDPeep = (missAtRange({ ...shot, peepHeightM: shot.peepHeightM + peepStep }, rangeM, losAngleRad, elevationRad).w - base) / peepStep;
+  const dMissDPeep =
+    (missAtRange({ ...shot, peepHeightM: shot.peepHeightM + peepStep }, rangeM, losAngleRad, elevationRad).w - base) / peepStep;
 
   const tan = Math.tan(elevationRad);
   const scale = model.sightRadiusMm * (1 + tan * tan); // mm per rad of elevation

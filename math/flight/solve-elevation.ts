@@ -106,8 +106,10 @@ export function solveElevation(shot: ShotParameters, rangeM: number, losAngleRad
     if (bracketed && high - low < 1e-15) return finite ? { elevationRad: elevation, crossing, flights } : null;
 
     let next: number;
-    if (finite && Number.isFinite(previousMiss) && missM !== previousMiss) next = elevation - (missM * (elevation - previous)) / (missM - previousMiss);
-    else if (finite) next = elevation - missM / rangeM; // turning the launch by dγ moves the arrow about S·dγ at range S
+    if (finite && Number.isFinite(previousMiss) && missM !== previousMiss)
+      next = elevation - (missM * (elevation - previous)) / (missM - previousMiss);
+    else if (finite)
+      next = elevation - missM / rangeM; // turning the launch by dγ moves the arrow about S·dγ at range S
     else next = Number.isFinite(previous) ? 0.5 * (elevation + previous) : 0.5 * (elevation + MIN_ELEVATION_RAD);
 
     if (bracketed && !(next > low && next < high)) next = 0.5 * (low + high);

@@ -7,7 +7,15 @@
  * bracket is narrower than `tolerance` (in x) or f is exactly zero.
  * Example: brentRoot((x) => x * x - 2, 0, 2, 1e-12) → 1.41421356237
  */
-export function brentRoot(f: (x: number) => number, a: number, b: number, tolerance: number, maxIterations = 100, fa = f(a), fb = f(b)): number {
+export function brentRoot(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  tolerance: number,
+  maxIterations = 100,
+  fa = f(a),
+  fb = f(b),
+): number {
   if (fa === 0) return a;
   if (fb === 0) return b;
   if (!(fa * fb < 0)) throw new RangeError('brentRoot: f(a) and f(b) must have opposite signs');

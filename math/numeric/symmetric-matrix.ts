@@ -36,7 +36,12 @@ export function inverseSpd(a: readonly (readonly number[])[]): number[][] | null
   const l = cholesky(a);
   if (!l) return null;
   const n = a.length;
-  const columns = Array.from({ length: n }, (_, j) => solveWithFactor(l, Array.from({ length: n }, (_, i) => (i === j ? 1 : 0))));
+  const columns = Array.from({ length: n }, (_, j) =>
+    solveWithFactor(
+      l,
+      Array.from({ length: n }, (_, i) => (i === j ? 1 : 0)),
+    ),
+  );
   // Symmetrise: the two triangles agree to rounding.
   return Array.from({ length: n }, (_, i) => Array.from({ length: n }, (_, j) => 0.5 * (columns[j][i] + columns[i][j])));
 }

@@ -25,10 +25,12 @@ export interface PinPosition {
 export function pinPositions(model: SightModel, distances: readonly number[], minGapMm = 0): { pins: PinPosition[] } {
   if (distances.length === 0) throw new FitInputError('pins', 'Choose at least one distance for a pin');
   const sorted = [...distances].sort((a, b) => a - b);
-  if (sorted.some((distance, i) => i > 0 && Math.abs(distance - sorted[i - 1]) < 1e-9)) throw new FitInputError('pins', 'Each pin needs its own distance');
+  if (sorted.some((distance, i) => i > 0 && Math.abs(distance - sorted[i - 1]) < 1e-9))
+    throw new FitInputError('pins', 'Each pin needs its own distance');
   const marks = predictMarksMm(model, sorted);
   const unreachable = marks.findIndex((mark) => !Number.isFinite(mark));
-  if (unreachable >= 0) throw new FitInputError('pins', `The arrow cannot reach ${sorted[unreachable]} ${model.distanceUnit} with this fit`);
+  if (unreachable >= 0)
+    throw new FitInputError('pins', `The arrow cannot reach ${sorted[unreachable]} ${model.distanceUnit} with this fit`);
   return {
     pins: sorted.map((distance, i) => {
       const gapMm = i === 0 ? null : marks[i] - marks[i - 1];

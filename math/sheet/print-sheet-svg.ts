@@ -4,7 +4,13 @@ import { FitInputError } from '@/math/fit/fit-input-error';
 import { NUMERAL_FONT, SMALL_PRINT_FONT } from '@/math/tape/glyphs';
 import { tapeLayouts } from '@/math/tape/tape-layout';
 import { tapeGroup } from '@/math/tape/tape-svg';
-import { SHEET_LINE_MM as LINE_MM, SHEET_MARGIN_MM as MARGIN_MM, SHEET_SMALL_MM as SMALL_MM, fixedMm as fixed, sheetPage } from '@/math/sheet/sheet-page';
+import {
+  SHEET_LINE_MM as LINE_MM,
+  SHEET_MARGIN_MM as MARGIN_MM,
+  SHEET_SMALL_MM as SMALL_MM,
+  fixedMm as fixed,
+  sheetPage,
+} from '@/math/sheet/sheet-page';
 import { ONE_MARK_CAUTION, ONE_MARK_STRIP, PRINT_INSTRUCTION, TAPE_CAUTION } from '@/math/cautions';
 
 /**
@@ -79,7 +85,11 @@ export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): s
 
   // Tapes: 100 % first, then the variants, wrapping to more rows if needed.
   const percents = sheet.variants ? [0, ...SHEET_VARIANT_PERCENTS] : [0];
-  const layouts = tapeLayouts(model, sheet.tape ?? {}, percents.map((percent) => 1 + percent / 100)).map((layout, i) => ({ percent: percents[i], layout }));
+  const layouts = tapeLayouts(
+    model,
+    sheet.tape ?? {},
+    percents.map((percent) => 1 + percent / 100),
+  ).map((layout, i) => ({ percent: percents[i], layout }));
   const labelOf = (percent: number) => (percent === 0 ? '100 %' : `${percent > 0 ? '+' : '−'}${Math.abs(percent)} %`);
   const widthMm = layouts[0].layout.widthMm;
   const pitchMm = Math.max(widthMm, 12) + 6;
@@ -87,7 +97,10 @@ export function printSheetSvg(fit: SheetFit, options: SheetOptionsInput = {}): s
   const rowLengthMm = Math.max(...layouts.map(({ layout }) => layout.lengthMm)) + 8;
   const rows = Math.ceil(layouts.length / perRow);
   if (y + rows * rowLengthMm > paper.heightMm - MARGIN_MM) {
-    throw new FitInputError('tape', `The tapes need ${(rows * rowLengthMm).toFixed(0)} mm of the page and do not fit; shorten the range, narrow the tape or leave out the variants`);
+    throw new FitInputError(
+      'tape',
+      `The tapes need ${(rows * rowLengthMm).toFixed(0)} mm of the page and do not fit; shorten the range, narrow the tape or leave out the variants`,
+    );
   }
   layouts.forEach(({ percent, layout }, index) => {
     const column = index % perRow;

@@ -98,10 +98,14 @@ export function tapeLayouts(model: SightModel, options: TapeOptionsInput, scales
   const inModelUnit = distances.map((distance) => metresToDistance(distanceToMetres(distance, unit), model.distanceUnit));
   const marks = predictMarksMm(model, inModelUnit);
   const unreachable = marks.findIndex((mark) => !Number.isFinite(mark));
-  if (unreachable >= 0) throw new FitInputError('tape.to', `The arrow cannot reach ${distances[unreachable]} ${unit} with this fit; end the tape sooner`);
+  if (unreachable >= 0)
+    throw new FitInputError('tape.to', `The arrow cannot reach ${distances[unreachable]} ${unit} with this fit; end the tape sooner`);
 
   const numeralHeightMm = tape.numeralHeightMm;
-  const widest = Math.max(...distances.filter(isMultipleOf5).map((distance) => measureTextMm(formatTapeNumber(distance), NUMERAL_FONT, numeralHeightMm)), 0);
+  const widest = Math.max(
+    ...distances.filter(isMultipleOf5).map((distance) => measureTextMm(formatTapeNumber(distance), NUMERAL_FONT, numeralHeightMm)),
+    0,
+  );
   const edgeMm = 0.4;
   const gapMm = 0.5;
   const majorMm = Math.min(0.45 * tape.widthMm, tape.widthMm - widest - gapMm - edgeMm);

@@ -45,14 +45,26 @@ export function tapeGroup(layout: TapeLayout, extraAttributes = ''): string {
       textElement(
         formatTapeNumber(tick.distance),
         NUMERAL_FONT,
-        { x: across(layout.numeralXMm), y: tick.offsetMm, sizeMm: layout.numeralHeightMm, anchor: layout.mirror ? 'end' : 'start', baseline: 'middle' },
+        {
+          x: across(layout.numeralXMm),
+          y: tick.offsetMm,
+          sizeMm: layout.numeralHeightMm,
+          anchor: layout.mirror ? 'end' : 'start',
+          baseline: 'middle',
+        },
         `data-numeral="${formatTapeNumber(tick.distance)}"`,
       ),
     );
   const unitLabel = textElement(
     layout.unit,
     NUMERAL_FONT,
-    { x: across(layout.numeralXMm), y: 0.4 + layout.numeralHeightMm / 2, sizeMm: layout.numeralHeightMm, anchor: layout.mirror ? 'end' : 'start', baseline: 'middle' },
+    {
+      x: across(layout.numeralXMm),
+      y: 0.4 + layout.numeralHeightMm / 2,
+      sizeMm: layout.numeralHeightMm,
+      anchor: layout.mirror ? 'end' : 'start',
+      baseline: 'middle',
+    },
     'class="unit"',
   );
   const estimate = layout.estimate ? estimateStrip(layout) : '';
@@ -80,7 +92,9 @@ function estimateStrip(layout: TapeLayout): string {
   const estimate = layout.estimate!;
   const widest = Math.max(
     0,
-    ...layout.ticks.filter((tick) => tick.numeral).map((tick) => measureTextMm(formatTapeNumber(tick.distance), NUMERAL_FONT, layout.numeralHeightMm)),
+    ...layout.ticks
+      .filter((tick) => tick.numeral)
+      .map((tick) => measureTextMm(formatTapeNumber(tick.distance), NUMERAL_FONT, layout.numeralHeightMm)),
   );
   const freeMm = layout.widthMm - (layout.numeralXMm + widest) - 0.3;
   const sizeMm = Math.min(1.8, freeMm - 0.6);

@@ -34,7 +34,11 @@ const schemas = { fit: fitInputSchema, tape: tapeInputSchema, sheet: sheetInputS
 export async function runCommand(args: readonly string[], stdinText: string, today: () => string = todayIso): Promise<CommandOutcome> {
   const [command, ...flags] = args;
   if (command === undefined || command === 'help' || command === '--help' || command === '-h') {
-    return { code: command === undefined ? 2 : 0, stdout: command === undefined ? '' : `${USAGE}\n`, stderr: command === undefined ? `${USAGE}\n` : '' };
+    return {
+      code: command === undefined ? 2 : 0,
+      stdout: command === undefined ? '' : `${USAGE}\n`,
+      stderr: command === undefined ? `${USAGE}\n` : '',
+    };
   }
   if (!(command in schemas)) return bad(`command: "${command}" is not a pinwright command (fit, tape, sheet)`);
   const pdf = flags.includes('--pdf');

@@ -83,7 +83,10 @@ export function parseCsvRecords(text: string): CsvRecord[] {
       }
       const next = input[i];
       if (next !== undefined && next !== ',' && next !== '\r' && next !== '\n') {
-        throw new CsvError(`On line ${line}, text follows a closing quote; put the whole field in quotes and write a quote inside it twice ("")`, line);
+        throw new CsvError(
+          `On line ${line}, text follows a closing quote; put the whole field in quotes and write a quote inside it twice ("")`,
+          line,
+        );
       }
       atFieldStart = false;
       continue;
@@ -101,7 +104,10 @@ export function parseCsvRecords(text: string): CsvRecord[] {
       continue;
     }
     if (ch === '"') {
-      throw new CsvError(`On line ${line}, a quote appears inside a field that is not quoted; put the whole field in quotes and write the quote twice ("")`, line);
+      throw new CsvError(
+        `On line ${line}, a quote appears inside a field that is not quoted; put the whole field in quotes and write the quote twice ("")`,
+        line,
+      );
     }
     field += ch;
     atFieldStart = false;

@@ -24,7 +24,7 @@ export type StoredMail = {
   to: string;
   text: string | null;
   html: string | null;
-  attachments: Array<{ filename: string; contentType: string; sizeBytes: number; contentBase64: string }>;
+  attachments: { filename: string; contentType: string; sizeBytes: number; contentBase64: string }[];
 };
 
 function newId(at: Date): string {
@@ -95,7 +95,9 @@ export function listStoredMail(dir: string, { to }: { to?: string } = {}): Store
 
 /** Summaries for the mail reader's list, newest first, at most `limit`. */
 export function listMail(dir: string, options: { to?: string; limit?: number } = {}): MailSummary[] {
-  return listStoredMail(dir, options).slice(0, options.limit ?? 200).map(summary);
+  return listStoredMail(dir, options)
+    .slice(0, options.limit ?? 200)
+    .map(summary);
 }
 
 /** The links in a message's text (http and https), each with its path in this app when it points here. */

@@ -32,7 +32,17 @@ ${foot}
 }
 
 /** An archer invites a technician to one bow. */
-export function inviteMessage({ archerName, bowNickname, link, expiresAt }: { archerName: string; bowNickname: string; link: string; expiresAt: Date }): MailBody {
+export function inviteMessage({
+  archerName,
+  bowNickname,
+  link,
+  expiresAt,
+}: {
+  archerName: string;
+  bowNickname: string;
+  link: string;
+  expiresAt: Date;
+}): MailBody {
   const until = expiresAt.toISOString().slice(0, 10);
   const subject = `${archerName} shared a bow with you on Pinwright`;
   const text = [
@@ -87,7 +97,17 @@ export function resetMessage({ name, link }: { name: string; link: string }): Ma
 }
 
 /** A sight tape's print sheet sent as a PDF attachment. */
-export function tapeMessage({ senderName, bowNickname, sightInDate, filename }: { senderName: string; bowNickname: string; sightInDate: string; filename: string }): MailBody {
+export function tapeMessage({
+  senderName,
+  bowNickname,
+  sightInDate,
+  filename,
+}: {
+  senderName: string;
+  bowNickname: string;
+  sightInDate: string;
+  filename: string;
+}): MailBody {
   const subject = `Sight tape for ${bowNickname} (${sightInDate})`;
   const caution = 'A printed tape is an estimate until every distance you will shoot has been confirmed at the range.';
   const text = [
@@ -100,13 +120,10 @@ export function tapeMessage({ senderName, bowNickname, sightInDate, filename }: 
     ``,
     `Pinwright`,
   ].join('\n');
-  const html = page(
-    'A sight tape for you',
-    [
-      `${escapeHtml(senderName)} sent you the print sheet of a sight tape for the bow <strong>${escapeHtml(bowNickname)}</strong>, from the sight-in of ${escapeHtml(sightInDate)}. It is attached as ${escapeHtml(filename)}.`,
-      `Print it at 100 % (actual size, no “fit to page”) and measure the 50 mm bar on the sheet with a ruler before you cut the tape.`,
-      `<strong>Caution:</strong> ${escapeHtml(caution)}`,
-    ],
-  );
+  const html = page('A sight tape for you', [
+    `${escapeHtml(senderName)} sent you the print sheet of a sight tape for the bow <strong>${escapeHtml(bowNickname)}</strong>, from the sight-in of ${escapeHtml(sightInDate)}. It is attached as ${escapeHtml(filename)}.`,
+    `Print it at 100 % (actual size, no “fit to page”) and measure the 50 mm bar on the sheet with a ruler before you cut the tape.`,
+    `<strong>Caution:</strong> ${escapeHtml(caution)}`,
+  ]);
   return { subject, text, html };
 }

@@ -33,9 +33,7 @@ export function decodeEncodedWords(value: string): string {
   const joined = value.replace(/(\?=)\s+(=\?)/g, '$1$2');
   return joined.replace(/=\?([^?]+)\?([bBqQ])\?([^?]*)\?=/g, (_all, charset: string, encoding: string, data: string) => {
     const bytes =
-      encoding.toUpperCase() === 'B'
-        ? Buffer.from(data, 'base64')
-        : Buffer.from(decodeQuotedPrintable(data.replace(/_/g, ' ')), 'latin1');
+      encoding.toUpperCase() === 'B' ? Buffer.from(data, 'base64') : Buffer.from(decodeQuotedPrintable(data.replace(/_/g, ' ')), 'latin1');
     return bytesToText(bytes, charset);
   });
 }
@@ -48,9 +46,7 @@ function bytesToText(bytes: Buffer, charset = 'utf-8'): string {
 
 /** Quoted-printable (RFC 2045 §6.7) to a binary ("latin1") string of the original bytes. */
 export function decodeQuotedPrintable(input: string): string {
-  return input
-    .replace(/=\r?\n/g, '')
-    .replace(/=([0-9A-Fa-f]{2})/g, (_all, hex: string) => String.fromCharCode(parseInt(hex, 16)));
+  return input.replace(/=\r?\n/g, '').replace(/=([0-9A-Fa-f]{2})/g, (_all, hex: string) => String.fromCharCode(parseInt(hex, 16)));
 }
 
 /** Splits `a/b; x=1; y="two"` into the value and its parameters (names lower-cased). */

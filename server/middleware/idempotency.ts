@@ -26,7 +26,9 @@ const keyPattern = /^[A-Za-z0-9_-]{8,100}$/;
 const transient = (status: number) => status >= 500 || [401, 403, 408, 429].includes(status);
 
 function requestHash(method: string, path: string, body: unknown): string {
-  return createHash('sha256').update(`${method} ${path}\n${JSON.stringify(body ?? null)}`).digest('hex');
+  return createHash('sha256')
+    .update(`${method} ${path}\n${JSON.stringify(body ?? null)}`)
+    .digest('hex');
 }
 
 function replay(res: Response, stored: IdempotencyKey) {
@@ -46,7 +48,15 @@ export function idempotency(): RequestHandler {
     const hash = requestHash(req.method, path, req.body);
     let claimed: IdempotencyKey;
     try {
-      claimed = await IdempotencyKey.create({ userId, idemKey: key, method: req.method, path, requestHash: hash, statusCode: null, responseBody: null });
+      claimed = await IdempotencyKey.create({
+        userId,
+        idemKey: key,
+        method: req.method,
+        path,
+        requestHash: hash,
+        statusCode: null,
+        responseBody: null,
+      });
     } catch (error) {
       if (!(error instanceof UniqueConstraintError)) throw error;
       const stored = await IdempotencyKey.findOne({ where: { userId, idemKey: key } });

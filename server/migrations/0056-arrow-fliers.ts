@@ -7,7 +7,12 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     {
       id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
       arrow_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: 'arrows', key: 'id' }, onDelete: 'CASCADE' },
-      session_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, references: { model: 'sight_sessions', key: 'id' }, onDelete: 'CASCADE' },
+      session_id: {
+        type: DataTypes.INTEGER.UNSIGNED,
+        allowNull: false,
+        references: { model: 'sight_sessions', key: 'id' },
+        onDelete: 'CASCADE',
+      },
       user_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },
       note: { type: DataTypes.STRING(200), allowNull: false, defaultValue: '' },
       created_at: { type: DataTypes.DATE(3), allowNull: false },

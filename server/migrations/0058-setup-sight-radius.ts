@@ -6,7 +6,18 @@ import { DataTypes, type QueryInterface } from 'sequelize';
  * entry of their own, as they can a peep height. Widening an ENUM keeps every
  * stored row.
  */
-const before = ['centre-shot', 'nock-height', 'brace-height', 'axle-to-axle', 'peep-height', 'd-loop', 'cam-timing', 'cam-lean', 'rest-kind', 'cam-system'];
+const before = [
+  'centre-shot',
+  'nock-height',
+  'brace-height',
+  'axle-to-axle',
+  'peep-height',
+  'd-loop',
+  'cam-timing',
+  'cam-lean',
+  'rest-kind',
+  'cam-system',
+];
 const after = [...before, 'sight-radius'];
 
 export async function up({ context: qi }: { context: QueryInterface }) {

@@ -13,7 +13,9 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     references: { model: 'users', key: 'id' },
     onDelete: 'SET NULL',
   });
-  await qi.sequelize.query('UPDATE session_marks t JOIN sight_sessions s ON s.id = t.session_id JOIN bows b ON b.id = s.bow_id SET t.added_by_id = b.user_id');
+  await qi.sequelize.query(
+    'UPDATE session_marks t JOIN sight_sessions s ON s.id = t.session_id JOIN bows b ON b.id = s.bow_id SET t.added_by_id = b.user_id',
+  );
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {

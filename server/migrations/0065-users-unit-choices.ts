@@ -17,5 +17,7 @@ export async function up({ context: qi }: { context: QueryInterface }) {
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
-  await qi.sequelize.query('ALTER TABLE users DROP COLUMN altitude_unit, DROP COLUMN temperature_unit, DROP COLUMN speed_unit, DROP COLUMN mass_unit');
+  await qi.sequelize.query(
+    'ALTER TABLE users DROP COLUMN altitude_unit, DROP COLUMN temperature_unit, DROP COLUMN speed_unit, DROP COLUMN mass_unit',
+  );
 }

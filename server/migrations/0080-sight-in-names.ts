@@ -32,7 +32,7 @@ const auditKinds: Step = {
   },
 };
 
-export const sightInRenames: Array<[string, Step]> = [
+export const sightInRenames: [string, Step][] = [
   ['0080-rename-sight-sessions-table', sql('RENAME TABLE sight_sessions TO sight_ins', 'RENAME TABLE sight_ins TO sight_sessions')],
   ['0081-rename-session-marks-table', sql('RENAME TABLE session_marks TO sight_in_marks', 'RENAME TABLE sight_in_marks TO session_marks')],
   ['0082-rename-marks-sight-in-column', renameColumn('sight_in_marks')],

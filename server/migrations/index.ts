@@ -38,7 +38,7 @@ import { sightInRenames } from './0080-sight-in-names';
 
 type Step = { up: (p: { context: QueryInterface }) => Promise<void>; down: (p: { context: QueryInterface }) => Promise<void> };
 
-export const migrations: Array<[string, Step]> = [
+export const migrations: [string, Step][] = [
   ['0001-users', m0001],
   ['0002-web-sessions', m0002],
   ['0010-bows', m0010],

@@ -71,8 +71,16 @@ AuditEntry.belongsTo(Bow, { foreignKey: 'bowId', as: 'bow' });
 ArrowBuild.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
 SightIn.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
 SightInMark.belongsTo(User, { foreignKey: 'addedById', as: 'addedBy' });
-installAddedByHooks(ArrowBuild, async (build, transaction) => (await Bow.findByPk(build.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null);
-installAddedByHooks(SightIn, async (sightIn, transaction) => (await Bow.findByPk(sightIn.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null);
+installAddedByHooks(
+  ArrowBuild,
+  async (build, transaction) =>
+    (await Bow.findByPk(build.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null,
+);
+installAddedByHooks(
+  SightIn,
+  async (sightIn, transaction) =>
+    (await Bow.findByPk(sightIn.bowId, { attributes: ['id', 'userId'], transaction: transaction ?? undefined }))?.userId ?? null,
+);
 installAddedByHooks(SightInMark, async (mark, transaction) => {
   const sightIn = await SightIn.findByPk(mark.sightInId, { attributes: ['id', 'bowId'], transaction: transaction ?? undefined });
   if (!sightIn) return null;
@@ -102,5 +110,21 @@ SightIn.hasMany(RangeConfirmation, { foreignKey: 'sightInId', as: 'rangeConfirma
 RangeConfirmation.belongsTo(SightIn, { foreignKey: 'sightInId', as: 'sightIn' });
 RangeConfirmation.belongsTo(User, { foreignKey: 'userId', as: 'confirmedBy' });
 
-export { User, WebSession, Bow, ArrowBuild, SightIn, SightInMark, Tape, Photo, LevelCheck, LevelStep, BowChange, Share, Token, AuditEntry, IdempotencyKey };
+export {
+  User,
+  WebSession,
+  Bow,
+  ArrowBuild,
+  SightIn,
+  SightInMark,
+  Tape,
+  Photo,
+  LevelCheck,
+  LevelStep,
+  BowChange,
+  Share,
+  Token,
+  AuditEntry,
+  IdempotencyKey,
+};
 export { SetupEntry, PaperTuneRun, PaperTuneShot, ArrowSet, Arrow, ArrowFlier, RangeConfirmation };

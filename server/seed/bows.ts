@@ -30,16 +30,14 @@ const INCH_MM = 25.4; // exact (international yard and pound, 1959)
 type BuildSeed = BuildInput & {
   /** The arrow as it really flies from this bow, which the marks are drawn from. */
   truth: { speedFps: number; dragCoefficient: number };
-  sightIns: Array<
-    Omit<SightInInput, 'buildId' | 'marks'> & {
-      distances: number[];
-      /** Scatter added to each exact reading, mm (fixed, so the scenario is the same on every machine). */
-      scatterMm: number[];
-      /** Where the scale reads zero for this sight set-up, mm. */
-      scaleZeroMm: number;
-      tapes: TapeLayout[];
-    }
-  >;
+  sightIns: (Omit<SightInInput, 'buildId' | 'marks'> & {
+    distances: number[];
+    /** Scatter added to each exact reading, mm (fixed, so the scenario is the same on every machine). */
+    scatterMm: number[];
+    /** Where the scale reads zero for this sight set-up, mm. */
+    scaleZeroMm: number;
+    tapes: TapeLayout[];
+  })[];
 };
 
 type BowSeed = BowInput & { builds: BuildSeed[] };

@@ -14,7 +14,7 @@ export const demoAccounts = [
   { role: 'archer', name: 'Marit Oakhollow', email: 'marit@demo.pinwright.test', password: 'pinwright-archer' },
   { role: 'tech', name: 'Desmond Tull (Kettle Creek bow bench)', email: 'desmond@demo.pinwright.test', password: 'pinwright-tech-01' },
   { role: 'admin', name: 'Pinwright Admin', email: 'admin@demo.pinwright.test', password: 'pinwright-admin-01' },
-] as const satisfies ReadonlyArray<{ role: DemoRole; name: string; email: string; password: string }>;
+] as const satisfies readonly { role: DemoRole; name: string; email: string; password: string }[];
 
 /** Extra seeding steps registered by features (bows, checks, …); each must be idempotent. */
 export const seedSteps: SeedStep[] = [];

@@ -21,7 +21,15 @@ type StepSeed = { step: LevelStepKey; result: LevelResult; reading?: number; rea
 async function seedCheck(bow: Bow, archer: User, startedAt: Date, place: 'bench' | 'range', note: string, steps: StepSeed[]) {
   await sequelize.transaction(async (transaction) => {
     const check = await LevelCheck.create(
-      { bowId: bow.id, userId: archer.id, place, status: 'complete', startedAt, completedAt: new Date(startedAt.getTime() + 50 * minuteMs), note },
+      {
+        bowId: bow.id,
+        userId: archer.id,
+        place,
+        status: 'complete',
+        startedAt,
+        completedAt: new Date(startedAt.getTime() + 50 * minuteMs),
+        note,
+      },
       { transaction },
     );
     await LevelStep.bulkCreate(
@@ -43,13 +51,26 @@ async function seedCheck(bow: Bow, archer: User, startedAt: Date, place: 'bench'
 export async function seedLevel(archer: User, now = new Date()): Promise<void> {
   const hunting = await Bow.findOne({ where: { userId: archer.id, nickname: 'Timberline slider' } });
   if (hunting && (await LevelCheck.count({ where: { bowId: hunting.id } })) === 0) {
-    await seedCheck(hunting, archer, new Date(now.getTime() - 9 * dayMs), 'range', 'Bench in the garage, then the club range at Hollow Pine.', [
-      { step: 'setup', result: 'pass' },
-      { step: 'first-axis', result: 'pass', reading: 0, readingUnit: 'deg' },
-      { step: 'second-axis', result: 'adjusted', reading: 0.5, readingUnit: 'bubble', adjustment: 'Rotated the housing about half a bubble toward the riser.' },
-      { step: 'third-axis', result: 'pass' },
-      { step: 'range', result: 'pass', adjustment: '60 yd group on the mark; the steep shot down from the tower held left-right.' },
-    ]);
+    await seedCheck(
+      hunting,
+      archer,
+      new Date(now.getTime() - 9 * dayMs),
+      'range',
+      'Bench in the garage, then the club range at Hollow Pine.',
+      [
+        { step: 'setup', result: 'pass' },
+        { step: 'first-axis', result: 'pass', reading: 0, readingUnit: 'deg' },
+        {
+          step: 'second-axis',
+          result: 'adjusted',
+          reading: 0.5,
+          readingUnit: 'bubble',
+          adjustment: 'Rotated the housing about half a bubble toward the riser.',
+        },
+        { step: 'third-axis', result: 'pass' },
+        { step: 'range', result: 'pass', adjustment: '60 yd group on the mark; the steep shot down from the tower held left-right.' },
+      ],
+    );
   }
 
   const backup = await Bow.findOne({ where: { userId: archer.id, nickname: 'Cedar five-pin' } });

@@ -10,9 +10,33 @@ export const seedSharingStep: SeedStep = async ({ archer, tech }) => {
   const bow = await Bow.findOne({ where: { userId: archer.id }, order: [['id', 'ASC']] });
   if (!bow || (await Share.count({ where: { bowId: bow.id } })) > 0) return;
   const acceptedAt = new Date(Date.now() - 3 * 24 * 3600 * 1000);
-  const share = await Share.create({ bowId: bow.id, archerId: archer.id, techId: tech.id, invitedEmail: tech.email, state: 'active', acceptedAt, revokedAt: null });
+  const share = await Share.create({
+    bowId: bow.id,
+    archerId: archer.id,
+    techId: tech.id,
+    invitedEmail: tech.email,
+    state: 'active',
+    acceptedAt,
+    revokedAt: null,
+  });
   await AuditEntry.bulkCreate([
-    { actorId: archer.id, action: 'invited', bowId: bow.id, recordType: 'share', recordId: share.id, summary: `Invited ${tech.email} to see and add to this bow`, at: new Date(acceptedAt.getTime() - 3600 * 1000) },
-    { actorId: tech.id, action: 'accepted', bowId: bow.id, recordType: 'share', recordId: share.id, summary: `${tech.name} accepted the invitation`, at: acceptedAt },
+    {
+      actorId: archer.id,
+      action: 'invited',
+      bowId: bow.id,
+      recordType: 'share',
+      recordId: share.id,
+      summary: `Invited ${tech.email} to see and add to this bow`,
+      at: new Date(acceptedAt.getTime() - 3600 * 1000),
+    },
+    {
+      actorId: tech.id,
+      action: 'accepted',
+      bowId: bow.id,
+      recordType: 'share',
+      recordId: share.id,
+      summary: `${tech.name} accepted the invitation`,
+      at: acceptedAt,
+    },
   ]);
 };

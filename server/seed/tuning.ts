@@ -20,7 +20,7 @@ export async function seedTuning(archer: User): Promise<void> {
   if (!bow || (await SetupEntry.count({ where: { bowId: bow.id } })) > 0) return;
   const build = await ArrowBuild.findOne({ where: { bowId: bow.id, name: 'Elk heavy' } });
   await sequelize.transaction(async (transaction) => {
-    const entries: Array<[SetupEntry['measure'], number | null, string | null, string]> = [
+    const entries: [SetupEntry['measure'], number | null, string | null, string][] = [
       ['rest-kind', null, 'drop-away', ''],
       ['cam-system', null, 'hybrid', ''],
       ['centre-shot', 20.6, null, 'Set with a bow square and an arrow on the rest.'],
@@ -32,19 +32,77 @@ export async function seedTuning(archer: User): Promise<void> {
       ['cam-lean', null, 'none', ''],
     ];
     for (const [measure, valueMm, choice, note] of entries) {
-      await SetupEntry.create({ bowId: bow.id, userId: archer.id, measure, valueMm, choice, measuredOn: day, note, changeId: null }, { transaction });
+      await SetupEntry.create(
+        { bowId: bow.id, userId: archer.id, measure, valueMm, choice, measuredOn: day, note, changeId: null },
+        { transaction },
+      );
     }
     const run = await PaperTuneRun.create(
-      { bowId: bow.id, userId: archer.id, buildId: build?.id ?? null, distance: 5, unit: 'yd', startedOn: day, outcome: 'clean', endedAt: at('18:10'), note: 'Garage, bare shafts then fletched.' },
+      {
+        bowId: bow.id,
+        userId: archer.id,
+        buildId: build?.id ?? null,
+        distance: 5,
+        unit: 'yd',
+        startedOn: day,
+        outcome: 'clean',
+        endedAt: at('18:10'),
+        note: 'Garage, bare shafts then fletched.',
+      },
       { transaction },
     );
-    const nock = await BowChange.create({ bowId: bow.id, userId: archer.id, kind: 'nock-height', changedAt: at('17:40'), note: 'Paper tune, before shot 2: nock down 1/32 in' }, { transaction });
-    const rest = await BowChange.create({ bowId: bow.id, userId: archer.id, kind: 'rest', changedAt: at('17:55'), note: 'Paper tune, before shot 3: rest right 1/32 in' }, { transaction });
+    const nock = await BowChange.create(
+      {
+        bowId: bow.id,
+        userId: archer.id,
+        kind: 'nock-height',
+        changedAt: at('17:40'),
+        note: 'Paper tune, before shot 2: nock down 1/32 in',
+      },
+      { transaction },
+    );
+    const rest = await BowChange.create(
+      { bowId: bow.id, userId: archer.id, kind: 'rest', changedAt: at('17:55'), note: 'Paper tune, before shot 3: rest right 1/32 in' },
+      { transaction },
+    );
     await PaperTuneShot.bulkCreate(
       [
-        { runId: run.id, userId: archer.id, position: 0, tear: 'up', lengthMm: 18, arrows: 1, note: '', changedBefore: 'none', changeNote: '', changeId: null },
-        { runId: run.id, userId: archer.id, position: 1, tear: 'right', lengthMm: 8, arrows: 1, note: '', changedBefore: 'nock-height', changeNote: 'down 1/32 in', changeId: nock.id },
-        { runId: run.id, userId: archer.id, position: 2, tear: 'clean', lengthMm: null, arrows: 3, note: 'Three in a row.', changedBefore: 'rest', changeNote: 'right 1/32 in', changeId: rest.id },
+        {
+          runId: run.id,
+          userId: archer.id,
+          position: 0,
+          tear: 'up',
+          lengthMm: 18,
+          arrows: 1,
+          note: '',
+          changedBefore: 'none',
+          changeNote: '',
+          changeId: null,
+        },
+        {
+          runId: run.id,
+          userId: archer.id,
+          position: 1,
+          tear: 'right',
+          lengthMm: 8,
+          arrows: 1,
+          note: '',
+          changedBefore: 'nock-height',
+          changeNote: 'down 1/32 in',
+          changeId: nock.id,
+        },
+        {
+          runId: run.id,
+          userId: archer.id,
+          position: 2,
+          tear: 'clean',
+          lengthMm: null,
+          arrows: 3,
+          note: 'Three in a row.',
+          changedBefore: 'rest',
+          changeNote: 'right 1/32 in',
+          changeId: rest.id,
+        },
       ],
       { transaction },
     );
@@ -56,9 +114,25 @@ export async function seedTuning(archer: User): Promise<void> {
           { setId: set.id, number: 1, weightGr: base + 0.4, spinKind: 'thou', runout: 1.5, note: '', status: 'quiver' },
           { setId: set.id, number: 2, weightGr: base - 0.3, spinKind: 'thou', runout: 2, note: '', status: 'quiver' },
           { setId: set.id, number: 3, weightGr: base + 0.1, spinKind: 'thou', runout: 1, note: 'New nock', status: 'quiver' },
-          { setId: set.id, number: 4, weightGr: base + 2.9, spinKind: 'thou', runout: 2.5, note: 'Extra glue on the insert?', status: 'practice' },
+          {
+            setId: set.id,
+            number: 4,
+            weightGr: base + 2.9,
+            spinKind: 'thou',
+            runout: 2.5,
+            note: 'Extra glue on the insert?',
+            status: 'practice',
+          },
           { setId: set.id, number: 5, weightGr: base - 0.6, spinKind: 'thou', runout: 1, note: '', status: 'quiver' },
-          { setId: set.id, number: 6, weightGr: base + 0.2, spinKind: 'fail', runout: null, note: 'Wobbles: bent shaft', status: 'retired' },
+          {
+            setId: set.id,
+            number: 6,
+            weightGr: base + 0.2,
+            spinKind: 'fail',
+            runout: null,
+            note: 'Wobbles: bent shaft',
+            status: 'retired',
+          },
         ].map((arrow) => ({ ...arrow, spinKind: arrow.spinKind as Arrow['spinKind'], status: arrow.status as Arrow['status'] })),
         { transaction },
       );

@@ -33,8 +33,14 @@ export async function exportAccountJson(user: User, now = new Date()): Promise<E
   const owned = await Bow.findAll({ where: { userId: user.id }, attributes: ['id'], order: [['id', 'ASC']] });
   const bows = [];
   for (const { id } of owned) {
-    const { format: _format, version: _version, exportedAt: _at, note: _note, ...records } = JSON.parse(String((await exportBowJson(user, id, now)).body));
-    const sightInIds = (records.sightIns as Array<{ id: number }>).map((sightIn) => sightIn.id);
+    const {
+      format: _format,
+      version: _version,
+      exportedAt: _at,
+      note: _note,
+      ...records
+    } = JSON.parse(String((await exportBowJson(user, id, now)).body));
+    const sightInIds = (records.sightIns as { id: number }[]).map((sightIn) => sightIn.id);
     const [tapes, checks, changes, photos] = await Promise.all([
       sightInIds.length ? Tape.findAll({ where: { sightInId: { [Op.in]: sightInIds } }, order: [['id', 'ASC']] }) : Promise.resolve([]),
       LevelCheck.findAll({ where: { bowId: id }, include: [{ model: LevelStep, as: 'steps' }], order: [['id', 'ASC']] }),
@@ -57,5 +63,9 @@ export async function exportAccountJson(user: User, now = new Date()): Promise<E
     account: user.toPublic(),
     bows,
   };
-  return { body: `${JSON.stringify(document, null, 2)}\n`, contentType: 'application/json; charset=utf-8', fileName: `pinwright-${slug(user.name)}-everything.json` };
+  return {
+    body: `${JSON.stringify(document, null, 2)}\n`,
+    contentType: 'application/json; charset=utf-8',
+    fileName: `pinwright-${slug(user.name)}-everything.json`,
+  };
 }

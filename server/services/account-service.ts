@@ -42,11 +42,25 @@ export async function updateAccount(actor: User, id: number, update: AccountUpda
   if (update.disabled) await endAllSessions(user.id);
   const who = `${user.name} <${user.email}>`;
   if (user.role !== before.role) {
-    await recordAudit({ actorId: actor.id, action: 'role-changed', bowId: null, recordType: 'account', recordId: user.id, summary: `Changed the role of ${who} from ${before.role} to ${user.role}` });
+    await recordAudit({
+      actorId: actor.id,
+      action: 'role-changed',
+      bowId: null,
+      recordType: 'account',
+      recordId: user.id,
+      summary: `Changed the role of ${who} from ${before.role} to ${user.role}`,
+    });
   }
   if (user.disabled !== before.disabled) {
     const action = user.disabled ? 'disabled' : 'enabled';
-    await recordAudit({ actorId: actor.id, action, bowId: null, recordType: 'account', recordId: user.id, summary: `${user.disabled ? 'Disabled' : 'Enabled'} the account of ${who}` });
+    await recordAudit({
+      actorId: actor.id,
+      action,
+      bowId: null,
+      recordType: 'account',
+      recordId: user.id,
+      summary: `${user.disabled ? 'Disabled' : 'Enabled'} the account of ${who}`,
+    });
   }
   return { ...user.toPublic(), disabled: user.disabled };
 }
@@ -86,7 +100,9 @@ export async function changePassword(user: User, keepSid: string, input: Passwor
 export async function deleteOwnAccount(user: User, input: AccountDelete): Promise<void> {
   await checkOwnPassword(user, input.password, 'password');
   const bowIds = (await Bow.findAll({ where: { userId: user.id }, attributes: ['id'] })).map((bow) => bow.id);
-  const photoKeys = bowIds.length ? (await Photo.findAll({ where: { bowId: { [Op.in]: bowIds } }, attributes: ['storageKey'] })).map((photo) => photo.storageKey) : [];
+  const photoKeys = bowIds.length
+    ? (await Photo.findAll({ where: { bowId: { [Op.in]: bowIds } }, attributes: ['storageKey'] })).map((photo) => photo.storageKey)
+    : [];
   const sequelize = User.sequelize as Sequelize;
   await sequelize.transaction(async (transaction) => {
     if (bowIds.length) await AuditEntry.destroy({ where: { bowId: { [Op.in]: bowIds } }, transaction });
@@ -102,7 +118,17 @@ export async function deleteOwnAccount(user: User, input: AccountDelete): Promis
     await Share.destroy({ where: { invitedEmail: user.email }, transaction });
     await Bow.destroy({ where: { userId: user.id }, transaction });
     await user.destroy({ transaction });
-    await recordAudit({ actorId: null, action: 'account-deleted', bowId: null, recordType: 'account', recordId: null, summary: 'An account was deleted at its owner’s request, with its bows and records' }, transaction);
+    await recordAudit(
+      {
+        actorId: null,
+        action: 'account-deleted',
+        bowId: null,
+        recordType: 'account',
+        recordId: null,
+        summary: 'An account was deleted at its owner’s request, with its bows and records',
+      },
+      transaction,
+    );
   });
   // The rows are gone; the files follow (a file left by a crash is unreachable: no row names it).
   await removeStoredPhotos(photoKeys);

@@ -10,7 +10,7 @@ import { User } from '@/server/models';
 import type { AddedBy } from '@/shared/added-by';
 
 /** The account names of the rows' `addedById`s, by id. */
-export async function addedByNames(rows: Array<{ addedById?: number | null }>, transaction?: Transaction): Promise<Map<number, string>> {
+export async function addedByNames(rows: { addedById?: number | null }[], transaction?: Transaction): Promise<Map<number, string>> {
   const ids = [...new Set(rows.map((row) => row.addedById).filter((id): id is number => typeof id === 'number'))];
   if (ids.length === 0) return new Map();
   const users = await User.findAll({ where: { id: { [Op.in]: ids } }, attributes: ['id', 'name'], transaction });

@@ -18,7 +18,11 @@ import { arrowInputSchema, type ArrowSet as ArrowSetJson, type ArrowSetInput, ty
 
 const setIncludes = () => [
   { model: User, as: 'addedBy', attributes: ['id', 'name'] },
-  { model: Arrow, as: 'arrows', include: [{ model: ArrowFlier, as: 'fliers', include: [{ model: User, as: 'addedBy', attributes: ['id', 'name'] }] }] },
+  {
+    model: Arrow,
+    as: 'arrows',
+    include: [{ model: ArrowFlier, as: 'fliers', include: [{ model: User, as: 'addedBy', attributes: ['id', 'name'] }] }],
+  },
 ];
 
 function setJson(set: ArrowSet, build: ArrowBuild, ownerId: number): ArrowSetJson {
@@ -60,7 +64,11 @@ export async function createArrowSet(user: User, buildId: number, input: ArrowSe
   const id = await sequelize.transaction(async (transaction) => {
     const set = await ArrowSet.create({ buildId, userId: user.id, name: input.name, toleranceGr: input.toleranceGr }, { transaction });
     await Arrow.bulkCreate(
-      input.arrows.map((arrow) => ({ ...arrow, runout: arrow.spinKind === 'thou' || arrow.spinKind === 'mm' ? arrow.runout : null, setId: set.id })),
+      input.arrows.map((arrow) => ({
+        ...arrow,
+        runout: arrow.spinKind === 'thou' || arrow.spinKind === 'mm' ? arrow.runout : null,
+        setId: set.id,
+      })),
       { transaction },
     );
     return set.id;
@@ -99,11 +107,13 @@ export async function updateArrow(user: User, arrowId: number, update: ArrowUpda
 export async function addFlier(user: User, arrowId: number, input: { sightInId: number; note: string }): Promise<ArrowSetJson> {
   const { arrow, set, build, bow } = await arrowFor(user, arrowId, 'add');
   const sightIn = await SightIn.findByPk(input.sightInId, { attributes: ['id', 'bowId'] });
-  if (!sightIn || sightIn.bowId !== bow.id) throw ApiError.badRequest('That sight-in is not one of this bow’s.', { sightInId: 'Choose one of this bow’s sight-ins' });
+  if (!sightIn || sightIn.bowId !== bow.id)
+    throw ApiError.badRequest('That sight-in is not one of this bow’s.', { sightInId: 'Choose one of this bow’s sight-ins' });
   try {
     await ArrowFlier.create({ arrowId, sightInId: input.sightInId, userId: user.id, note: input.note });
   } catch (err) {
-    if (err instanceof UniqueConstraintError) throw ApiError.conflict(`Arrow ${arrow.number} is already marked as flying out at that sight-in.`);
+    if (err instanceof UniqueConstraintError)
+      throw ApiError.conflict(`Arrow ${arrow.number} is already marked as flying out at that sight-in.`);
     throw err;
   }
   return setJson(found(await ArrowSet.findByPk(set.id, { include: setIncludes() }), 'That arrow set'), build, bow.userId);

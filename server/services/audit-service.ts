@@ -37,7 +37,10 @@ export async function recordAudit(input: AuditInput, transaction?: Transaction |
   await AuditEntry.create({ ...input, summary }, { transaction: transaction ?? undefined });
 }
 
-type Names = { bows: Map<number, { id: number; nickname: string; userId: number }>; users: Map<number, { id: number; name: string; email: string }> };
+type Names = {
+  bows: Map<number, { id: number; nickname: string; userId: number }>;
+  users: Map<number, { id: number; name: string; email: string }>;
+};
 
 function entryJson(entry: AuditEntry, names: Names): AuditEntryJson {
   const bow = entry.bowId !== null ? names.bows.get(entry.bowId) : undefined;
@@ -105,7 +108,11 @@ export async function listAllAudit({ page: pageNumber, bowId, accountId, kind }:
     account = found ? { id: found.id, name: found.name } : null;
     const owned = (await Bow.findAll({ where: { userId: accountId }, attributes: ['id'] })).map((b) => b.id);
     conditions.push({
-      [Op.or]: [{ actorId: accountId }, { recordType: 'account', recordId: accountId }, ...(owned.length ? [{ bowId: { [Op.in]: owned } }] : [])],
+      [Op.or]: [
+        { actorId: accountId },
+        { recordType: 'account', recordId: accountId },
+        ...(owned.length ? [{ bowId: { [Op.in]: owned } }] : []),
+      ],
     });
   }
   const bow = bowId !== undefined ? await Bow.findByPk(bowId, { attributes: ['id', 'nickname'] }) : null;
@@ -141,13 +148,30 @@ type Audited = {
 
 /** Fields worked out by the server (refits, totals, time stamps): not named in summaries. */
 const derivedFields = new Set([
-  'createdAt', 'updatedAt', 'fit', 'fitSpeedFps', 'fitRmsMm',
-  'totalGr', 'focPct', 'kineticEnergyFtLb', 'kineticEnergyJ', 'momentumSlugFtPerS', 'momentumKgMPerS',
+  'createdAt',
+  'updatedAt',
+  'fit',
+  'fitSpeedFps',
+  'fitRmsMm',
+  'totalGr',
+  'focPct',
+  'kineticEnergyFtLb',
+  'kineticEnergyJ',
+  'momentumSlugFtPerS',
+  'momentumKgMPerS',
 ]);
 const fieldWords: Record<string, string> = {
-  placeLabel: 'place', scaleMm: 'scale reading', arrowsShot: 'arrows shot', buildId: 'arrow build',
-  altitudeM: 'altitude', temperatureC: 'temperature', completedAt: 'finish time', startedAt: 'start time',
-  readingUnit: 'reading unit', photoId: 'photo', changedAt: 'time of the change',
+  placeLabel: 'place',
+  scaleMm: 'scale reading',
+  arrowsShot: 'arrows shot',
+  buildId: 'arrow build',
+  altitudeM: 'altitude',
+  temperatureC: 'temperature',
+  completedAt: 'finish time',
+  startedAt: 'start time',
+  readingUnit: 'reading unit',
+  photoId: 'photo',
+  changedAt: 'time of the change',
 };
 /** "placeLabel" → "place", "sightRadiusMm" → "sight radius mm". */
 const fieldWord = (field: string) => fieldWords[field] ?? field.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase();
@@ -225,7 +249,10 @@ const audited: Record<string, Audited> = {
   SetupEntry: {
     type: 'setup-entry',
     noun: 'a set-up entry',
-    describe: (v) => [text(v.measure).replace(/-/g, ' '), v.valueMm !== null && v.valueMm !== undefined ? `${number(v.valueMm)} mm` : '', text(v.choice)].filter(Boolean).join(' '),
+    describe: (v) =>
+      [text(v.measure).replace(/-/g, ' '), v.valueMm !== null && v.valueMm !== undefined ? `${number(v.valueMm)} mm` : '', text(v.choice)]
+        .filter(Boolean)
+        .join(' '),
     bowOf: direct,
   },
   PaperTuneRun: { type: 'paper-tune-run', noun: 'a paper-tune run', describe: (v) => text(v.outcome), bowOf: direct },
@@ -317,7 +344,8 @@ async function trail(
   const spec = audited[modelName];
   if (!actor || !spec || rows.length === 0) return;
   // A refit alone (only worked-out fields changed) is no change of the actor's.
-  if (action === 'updated' && !spec.updateVerb?.(rows[0], changedFields) && changedFields.every((field) => derivedFields.has(field))) return;
+  if (action === 'updated' && !spec.updateVerb?.(rows[0], changedFields) && changedFields.every((field) => derivedFields.has(field)))
+    return;
   // One event per bow touched (a bulk write of 12 marks is one entry).
   const byBow = new Map<number, Values[]>();
   for (const row of rows) {
@@ -343,7 +371,7 @@ async function trail(
 }
 
 // Loose on purpose: one shape for the create, update and destroy hooks' options.
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
+
 type HookOptions = { transaction?: Transaction | null; model?: ModelStatic<Model>; where?: any; attributes?: any; fields?: any };
 const stash = Symbol('audit rows');
 

@@ -28,7 +28,9 @@ export async function signUp(input: SignUpInput, role: User['role'] = 'archer'):
 }
 
 // A hash to compare against when the e-mail is unknown, so both paths take as long.
-const decoyHash = bcrypt.hashSync('pinwright-decoy-password', 4).replace(/^\$2b\$04\$/, `$2b$${String(config.bcryptCost).padStart(2, '0')}$`);
+const decoyHash = bcrypt
+  .hashSync('pinwright-decoy-password', 4)
+  .replace(/^\$2b\$04\$/, `$2b$${String(config.bcryptCost).padStart(2, '0')}$`);
 
 export async function checkCredentials(input: SignInInput): Promise<User> {
   const user = await User.findOne({ where: { email: input.email } });

@@ -150,10 +150,10 @@ export type BowFacts = {
   /** Latest completion first, then start, then id (nulls last), as levelStatus reads them. */
   checks: CheckFact[];
   /** Steps of the bow's last complete check. */
-  steps: Array<{ id: number; checkId: number; step: string; result: string }>;
+  steps: { id: number; checkId: number; step: string; result: string }[];
   /** Who did each check. */
-  performers: Array<{ id: number; name: string }>;
-  confirmations: Array<{ sightInId: number; confirmedAt: Date }>;
+  performers: { id: number; name: string }[];
+  confirmations: { sightInId: number; confirmedAt: Date }[];
 };
 
 /** A row as the connector returns it (typed by Sequelize's parsers: DATETIME → Date, DATE → text). */
@@ -171,7 +171,7 @@ type Pool = {
  * "b.user_id = ?", one parameter). Child rows come through a join to bows,
  * so one scope serves both reads. The first takes the asking account thrice first.
  */
-function statements(scope: string): Array<{ key: keyof RawRows; sql: string }> {
+function statements(scope: string): { key: keyof RawRows; sql: string }[] {
   return [
     {
       key: 'bows',
@@ -265,7 +265,9 @@ async function readRows(which: keyof typeof reads, scope: number, askerId: numbe
   try {
     const list = reads[which];
     const begun = connection.query('START TRANSACTION WITH CONSISTENT SNAPSHOT, READ ONLY');
-    const answers = list.map((statement, index) => connection.query(statement.sql, index === 0 ? [askerId, askerId, askerId, scope] : [scope]));
+    const answers = list.map((statement, index) =>
+      connection.query(statement.sql, index === 0 ? [askerId, askerId, askerId, scope] : [scope]),
+    );
     const ended = connection.query('COMMIT'); // sent after the reads; runs whether or not one of them failed
     const settled = await Promise.allSettled([begun, ...answers, ended]);
     const failed = settled.find((result): result is PromiseRejectedResult => result.status === 'rejected');
@@ -278,7 +280,8 @@ async function readRows(which: keyof typeof reads, scope: number, askerId: numbe
     const checks = new Map<number, Row>();
     for (const row of rows.checks) {
       if (!checks.has(row.id as number)) checks.set(row.id as number, row);
-      if (row.stepId !== null && row.stepId !== undefined) rows.steps.push({ id: row.stepId, checkId: row.id, step: row.step, result: row.result });
+      if (row.stepId !== null && row.stepId !== undefined)
+        rows.steps.push({ id: row.stepId, checkId: row.id, step: row.step, result: row.result });
     }
     rows.checks = [...checks.values()];
     return rows;
@@ -341,7 +344,8 @@ function toFacts(row: Row, child: (key: Exclude<keyof RawRows, 'bows'>) => Row[]
   const pins = typeof row.pinDistances === 'string' ? JSON.parse(row.pinDistances) : row.pinDistances;
   const checks = child('checks');
   const performers = new Map<number, string>();
-  for (const check of checks) if (typeof check.userId === 'number' && typeof check.performerName === 'string') performers.set(check.userId, check.performerName);
+  for (const check of checks)
+    if (typeof check.userId === 'number' && typeof check.performerName === 'string') performers.set(check.userId, check.performerName);
   return {
     bow: {
       id: bowId,
@@ -419,9 +423,17 @@ function toFacts(row: Row, child: (key: Exclude<keyof RawRows, 'bows'>) => Row[]
       startedAt: sqlDate(c.startedAt as string | Date),
       completedAt: sqlDate(c.completedAt as string | Date | null),
     })),
-    steps: child('steps').map((step) => ({ id: step.id as number, checkId: step.checkId as number, step: step.step as string, result: step.result as string })),
+    steps: child('steps').map((step) => ({
+      id: step.id as number,
+      checkId: step.checkId as number,
+      step: step.step as string,
+      result: step.result as string,
+    })),
     performers: [...performers].map(([id, name]) => ({ id, name })),
-    confirmations: child('confirmations').map((c) => ({ sightInId: c.sightInId as number, confirmedAt: sqlDate(c.confirmedAt as string | Date) })),
+    confirmations: child('confirmations').map((c) => ({
+      sightInId: c.sightInId as number,
+      confirmedAt: sqlDate(c.confirmedAt as string | Date),
+    })),
   };
 }
 

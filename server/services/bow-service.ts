@@ -118,11 +118,14 @@ export async function getBow(user: User, id: number): Promise<BowDetail> {
   if (!facts || !facts.canRead) throw ApiError.notFound('That bow');
   const readiness = await readinessFrom([facts]);
   const names = new Map<number, string>();
-  for (const row of [...facts.builds, ...facts.sightIns]) if (row.addedById !== null && row.addedByName !== null) names.set(row.addedById, row.addedByName);
+  for (const row of [...facts.builds, ...facts.sightIns])
+    if (row.addedById !== null && row.addedByName !== null) names.set(row.addedById, row.addedByName);
   const sightInsPerBuild = new Map<number, number>();
   for (const sightIn of facts.sightIns) sightInsPerBuild.set(sightIn.buildId, (sightInsPerBuild.get(sightIn.buildId) ?? 0) + 1);
   const known = {
-    stats: new Map(facts.sightIns.map((s) => [s.id, { markCount: s.markCount, longestDistance: s.longestDistance, longestUnit: s.longestUnit }])),
+    stats: new Map(
+      facts.sightIns.map((s) => [s.id, { markCount: s.markCount, longestDistance: s.longestDistance, longestUnit: s.longestUnit }]),
+    ),
     names,
     warningCounts: new Map(facts.sightIns.map((s) => [s.id, s.warningCount])),
   };
@@ -156,7 +159,8 @@ export async function updateBow(user: User, id: number, update: BowUpdate): Prom
     bow.set(merged.data);
     await bow.save({ transaction });
     // An edit of the peep height or sight radius moves the point of impact: logged as a change (shared/staleness.ts).
-    for (const change of moved) await BowChange.create({ bowId: bow.id, userId: user.id, changedAt: new Date(), ...change }, { transaction });
+    for (const change of moved)
+      await BowChange.create({ bowId: bow.id, userId: user.id, changedAt: new Date(), ...change }, { transaction });
     return bowOut(bow);
   });
 }
@@ -167,14 +171,20 @@ export async function updateBow(user: User, id: number, update: BowUpdate): Prom
  * Example: impactEdits({ peepHeightMm: 110, sightRadiusMm: 840 }, { peepHeightMm: 113, sightRadiusMm: 840 })
  *   → [{ kind: 'peep', note: 'Peep height edited on the bow: 110 → 113 mm' }]
  */
-export function impactEdits(before: Pick<BowInput, 'peepHeightMm' | 'sightRadiusMm'>, after: Pick<BowInput, 'peepHeightMm' | 'sightRadiusMm'>) {
-  const edits: Array<{ kind: 'peep' | 'sight-radius'; note: string }> = [];
+export function impactEdits(
+  before: Pick<BowInput, 'peepHeightMm' | 'sightRadiusMm'>,
+  after: Pick<BowInput, 'peepHeightMm' | 'sightRadiusMm'>,
+) {
+  const edits: { kind: 'peep' | 'sight-radius'; note: string }[] = [];
   const mm = (value: number) => Number(value.toFixed(1));
   if (Math.abs(before.peepHeightMm - after.peepHeightMm) > 0.05) {
     edits.push({ kind: 'peep', note: `Peep height edited on the bow: ${mm(before.peepHeightMm)} → ${mm(after.peepHeightMm)} mm` });
   }
   if (Math.abs(before.sightRadiusMm - after.sightRadiusMm) > 0.05) {
-    edits.push({ kind: 'sight-radius', note: `Sight radius edited on the bow: ${mm(before.sightRadiusMm)} → ${mm(after.sightRadiusMm)} mm` });
+    edits.push({
+      kind: 'sight-radius',
+      note: `Sight radius edited on the bow: ${mm(before.sightRadiusMm)} → ${mm(after.sightRadiusMm)} mm`,
+    });
   }
   return edits;
 }

@@ -64,7 +64,7 @@ export async function sightInCounts(buildIds: number[], transaction?: Transactio
     group: ['buildId'],
     raw: true,
     transaction,
-  })) as unknown as Array<{ buildId: number; count: number | string }>;
+  })) as unknown as { buildId: number; count: number | string }[];
   for (const row of rows) counts.set(Number(row.buildId), Number(row.count));
   return counts;
 }
@@ -125,7 +125,9 @@ export async function deleteBuild(user: User, id: number): Promise<void> {
     const count = (await sightInCounts([build.id], transaction)).get(build.id) ?? 0;
     if (count > 0) {
       const sightIns = count === 1 ? '1 sight-in uses' : `${count} sight-ins use`;
-      throw ApiError.conflict(`${sightIns} this arrow build. Delete ${count === 1 ? 'that sight-in' : 'those sight-ins'} first, or keep the build.`);
+      throw ApiError.conflict(
+        `${sightIns} this arrow build. Delete ${count === 1 ? 'that sight-in' : 'those sight-ins'} first, or keep the build.`,
+      );
     }
     await build.destroy({ transaction });
   });

@@ -30,16 +30,38 @@ type Layout = { columns: Partial<Record<Column, number>>; headerUnit: Unit | nul
 const toMetres = distanceToMetres;
 
 const unitWords: Record<string, Unit> = {
-  yd: 'yd', yds: 'yd', yard: 'yd', yards: 'yd',
-  m: 'm', metre: 'm', metres: 'm', meter: 'm', meters: 'm',
+  yd: 'yd',
+  yds: 'yd',
+  yard: 'yd',
+  yards: 'yd',
+  m: 'm',
+  metre: 'm',
+  metres: 'm',
+  meter: 'm',
+  meters: 'm',
 };
 
 const headerNames: Record<string, Column> = {
-  distance: 'distance', dist: 'distance', range: 'distance',
-  reading: 'reading', readingmm: 'reading', scale: 'reading', scalemm: 'reading', scalereading: 'reading', mark: 'reading', sightmark: 'reading',
-  arrows: 'arrows', arrowsshot: 'arrows', shots: 'arrows',
-  note: 'note', notes: 'note', marknote: 'note', comment: 'note',
-  unit: 'unit', units: 'unit', distanceunit: 'unit',
+  distance: 'distance',
+  dist: 'distance',
+  range: 'distance',
+  reading: 'reading',
+  readingmm: 'reading',
+  scale: 'reading',
+  scalemm: 'reading',
+  scalereading: 'reading',
+  mark: 'reading',
+  sightmark: 'reading',
+  arrows: 'arrows',
+  arrowsshot: 'arrows',
+  shots: 'arrows',
+  note: 'note',
+  notes: 'note',
+  marknote: 'note',
+  comment: 'note',
+  unit: 'unit',
+  units: 'unit',
+  distanceunit: 'unit',
 };
 
 const numberPattern = /^([+-]?\d+(?:[.,]\d+)?|[+-]?[.,]\d+)\s*([a-zA-Z]*)$/;
@@ -58,7 +80,8 @@ function headerColumn(cell: string): { column: Column | null; unit: Unit | null 
   if (headerNames[key]) return { column: headerNames[key], unit };
   // distance_yd, distance_m
   for (const suffix of ['yd', 'm']) {
-    if (key.endsWith(suffix) && headerNames[key.slice(0, -suffix.length)] === 'distance') return { column: 'distance', unit: suffix as Unit };
+    if (key.endsWith(suffix) && headerNames[key.slice(0, -suffix.length)] === 'distance')
+      return { column: 'distance', unit: suffix as Unit };
   }
   if (unitWords[key]) return { column: 'distance', unit: unitWords[key] }; // a column headed "yards"
   return { column: null, unit };
@@ -92,7 +115,9 @@ function readRow(record: CsvRecord, layout: Layout, defaultUnit: Unit): { mark: 
     return index === undefined ? '' : (record.fields[index] ?? '').trim();
   };
   if (!layout.hasHeader && record.fields.length > 4) {
-    problems.push(`This row has ${record.fields.length} fields; without a header row the columns are distance, reading, arrows, note (a note with commas needs quotes)`);
+    problems.push(
+      `This row has ${record.fields.length} fields; without a header row the columns are distance, reading, arrows, note (a note with commas needs quotes)`,
+    );
   }
 
   let distance: number | null = null;
@@ -145,7 +170,11 @@ function readRow(record: CsvRecord, layout: Layout, defaultUnit: Unit): { mark: 
 }
 
 function sizeError(bytes: number): ApiError {
-  return new ApiError(413, 'file_too_large', `The file is ${Math.ceil(bytes / 1024)} KB; at most ${importMaxBytes / 1024} KB can be imported at once. Split it into smaller files.`);
+  return new ApiError(
+    413,
+    'file_too_large',
+    `The file is ${Math.ceil(bytes / 1024)} KB; at most ${importMaxBytes / 1024} KB can be imported at once. Split it into smaller files.`,
+  );
 }
 
 /**
@@ -171,7 +200,9 @@ export async function importMarks(user: User, sightInId: number, input: MarkImpo
     const fields: Record<string, string> = {};
     if (outcome.fileProblem) fields.file = outcome.fileProblem;
     for (const row of outcome.rows) if (row.status === 'error') fields[`rows.${row.line}`] = row.problems.join('; ');
-    const message = outcome.fileProblem ?? `${outcome.errorCount} of ${outcome.rows.length} rows have problems; nothing was imported. Correct them and try again.`;
+    const message =
+      outcome.fileProblem ??
+      `${outcome.errorCount} of ${outcome.rows.length} rows have problems; nothing was imported. Correct them and try again.`;
     throw ApiError.badRequest(message, fields);
   };
 
@@ -190,7 +221,11 @@ export async function importMarks(user: User, sightInId: number, input: MarkImpo
     return dryRun ? outcome : refuse(outcome);
   }
   if (dataRows.length > importMaxRows) {
-    throw new ApiError(413, 'too_many_rows', `The file has ${dataRows.length} rows of marks; at most ${importMaxRows} can be imported at once.`);
+    throw new ApiError(
+      413,
+      'too_many_rows',
+      `The file has ${dataRows.length} rows of marks; at most ${importMaxRows} can be imported at once.`,
+    );
   }
   const missing = (['distance', 'reading'] as const).filter((column) => layout.columns[column] === undefined);
   if (missing.length > 0) {
@@ -208,7 +243,8 @@ export async function importMarks(user: User, sightInId: number, input: MarkImpo
     if (mark) {
       const metres = toMetres(mark.distance, mark.unit);
       const clash = taken.find((other) => Math.abs(other.metres - metres) < 0.001);
-      if (clash) return { line: record.line, status: 'error', mark: null, problems: [`A mark at ${mark.distance} ${mark.unit} is ${clash.where}`] };
+      if (clash)
+        return { line: record.line, status: 'error', mark: null, problems: [`A mark at ${mark.distance} ${mark.unit} is ${clash.where}`] };
       taken.push({ metres, where: `on line ${record.line} of the file` });
       return { line: record.line, status: 'ok', mark, problems: [] };
     }

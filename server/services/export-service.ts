@@ -45,10 +45,22 @@ async function recordsOf(user: User, bowId: number) {
   const { bow } = await bowFor(user, bowId, 'read');
   const [builds, sightIns] = await Promise.all([
     ArrowBuild.findAll({ where: { bowId }, order: [['id', 'ASC']] }),
-    SightIn.findAll({ where: { bowId }, order: [['date', 'ASC'], ['id', 'ASC']] }),
+    SightIn.findAll({
+      where: { bowId },
+      order: [
+        ['date', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
   ]);
   const marks = sightIns.length
-    ? await SightInMark.findAll({ where: { sightInId: { [Op.in]: sightIns.map((s) => s.id) } }, order: [['sightInId', 'ASC'], ['position', 'ASC']] })
+    ? await SightInMark.findAll({
+        where: { sightInId: { [Op.in]: sightIns.map((s) => s.id) } },
+        order: [
+          ['sightInId', 'ASC'],
+          ['position', 'ASC'],
+        ],
+      })
     : [];
   const counts = await sightInCounts(builds.map((b) => b.id));
   return { bow, builds, sightIns, marks, counts };
@@ -64,10 +76,19 @@ export async function exportBowJson(user: User, bowId: number, now = new Date())
     note: 'Lengths in millimetres, masses in grains, speeds in feet per second; distances in the unit given with each mark.',
     bow: bowOut(bow),
     builds: builds.map((build) => buildOut(build, counts.get(build.id) ?? 0)),
-    sightIns: sightIns.map((sightIn) => sightInOut(sightIn, marks.filter((mark) => mark.sightInId === sightIn.id))),
+    sightIns: sightIns.map((sightIn) =>
+      sightInOut(
+        sightIn,
+        marks.filter((mark) => mark.sightInId === sightIn.id),
+      ),
+    ),
     ...(await tuningRecords(user, bowId, builds)),
   };
-  return { body: `${JSON.stringify(document, null, 2)}\n`, contentType: 'application/json; charset=utf-8', fileName: `${slug(bow.nickname)}-export.json` };
+  return {
+    body: `${JSON.stringify(document, null, 2)}\n`,
+    contentType: 'application/json; charset=utf-8',
+    fileName: `${slug(bow.nickname)}-export.json`,
+  };
 }
 
 /** The bow's tuning records for the JSON export: set-up entries, paper-tune runs, arrow sets, range confirmations. */
@@ -82,7 +103,12 @@ async function tuningRecords(user: User, bowId: number, builds: ArrowBuild[]) {
     setupEntries: setup.entries,
     paperTuneRuns: paperTunes,
     arrowSets: arrowSetsByBuild.flat(),
-    rangeConfirmations: confirmations.map((c) => ({ sightInId: c.sightInId, confirmedAt: c.confirmedAt.toISOString(), note: c.note, confirmedBy: personJson(c.confirmedBy) })),
+    rangeConfirmations: confirmations.map((c) => ({
+      sightInId: c.sightInId,
+      confirmedAt: c.confirmedAt.toISOString(),
+      note: c.note,
+      confirmedBy: personJson(c.confirmedBy),
+    })),
   };
 }
 
@@ -98,32 +124,125 @@ export async function exportTuningCsv(user: User, bowId: number): Promise<Export
   const records = await tuningRecords(user, bowId, builds);
   const rows: CsvCell[][] = [tuningCsvHeader];
   for (const entry of [...records.setupEntries].reverse()) {
-    rows.push([bow.nickname, 'setup', entry.id, entry.measuredOn, entry.measure, entry.valueMm, entry.choice, null, entry.note, entry.addedBy.name]);
+    rows.push([
+      bow.nickname,
+      'setup',
+      entry.id,
+      entry.measuredOn,
+      entry.measure,
+      entry.valueMm,
+      entry.choice,
+      null,
+      entry.note,
+      entry.addedBy.name,
+    ]);
   }
   for (const run of [...records.paperTuneRuns].reverse()) {
     for (const shot of run.shots) {
-      const detail = [`${run.distance} ${run.unit}`, shot.changedBefore !== 'none' ? `changed before: ${shot.changedBefore} ${shot.changeNote}`.trim() : '', shot.note].filter(Boolean).join('; ');
-      rows.push([bow.nickname, 'paper-tune-shot', run.id, shot.createdAt.slice(0, 10), `shot ${shot.position + 1}: ${shot.tear}`, shot.lengthMm, null, null, detail, shot.addedBy.name]);
+      const detail = [
+        `${run.distance} ${run.unit}`,
+        shot.changedBefore !== 'none' ? `changed before: ${shot.changedBefore} ${shot.changeNote}`.trim() : '',
+        shot.note,
+      ]
+        .filter(Boolean)
+        .join('; ');
+      rows.push([
+        bow.nickname,
+        'paper-tune-shot',
+        run.id,
+        shot.createdAt.slice(0, 10),
+        `shot ${shot.position + 1}: ${shot.tear}`,
+        shot.lengthMm,
+        null,
+        null,
+        detail,
+        shot.addedBy.name,
+      ]);
     }
-    if (run.outcome !== 'open') rows.push([bow.nickname, 'paper-tune-end', run.id, run.endedAt?.slice(0, 10) ?? null, run.outcome, null, null, null, run.endNote, run.addedBy.name]);
+    if (run.outcome !== 'open')
+      rows.push([
+        bow.nickname,
+        'paper-tune-end',
+        run.id,
+        run.endedAt?.slice(0, 10) ?? null,
+        run.outcome,
+        null,
+        null,
+        null,
+        run.endNote,
+        run.addedBy.name,
+      ]);
   }
   for (const set of records.arrowSets) {
     for (const arrow of set.arrows) {
-      const spin = arrow.spinKind === 'thou' ? `runout ${arrow.runout} thou` : arrow.spinKind === 'mm' ? `runout ${arrow.runout} mm` : arrow.spinKind;
-      const detail = [`set ${set.name} (±${set.toleranceGr} gr)`, `spin ${spin}`, arrow.status, arrow.note, arrow.fliers.length ? `flew out at ${arrow.fliers.length} sight-in(s)` : ''].filter(Boolean).join('; ');
-      rows.push([bow.nickname, 'arrow', arrow.id, set.createdAt.slice(0, 10), `arrow ${arrow.number}`, null, null, arrow.weightGr, detail, set.addedBy.name]);
+      const spin =
+        arrow.spinKind === 'thou' ? `runout ${arrow.runout} thou` : arrow.spinKind === 'mm' ? `runout ${arrow.runout} mm` : arrow.spinKind;
+      const detail = [
+        `set ${set.name} (±${set.toleranceGr} gr)`,
+        `spin ${spin}`,
+        arrow.status,
+        arrow.note,
+        arrow.fliers.length ? `flew out at ${arrow.fliers.length} sight-in(s)` : '',
+      ]
+        .filter(Boolean)
+        .join('; ');
+      rows.push([
+        bow.nickname,
+        'arrow',
+        arrow.id,
+        set.createdAt.slice(0, 10),
+        `arrow ${arrow.number}`,
+        null,
+        null,
+        arrow.weightGr,
+        detail,
+        set.addedBy.name,
+      ]);
     }
   }
   for (const c of records.rangeConfirmations) {
-    rows.push([bow.nickname, 'range-confirmation', c.sightInId, c.confirmedAt.slice(0, 10), 'marks confirmed at the range', null, null, null, c.note, c.confirmedBy.name]);
+    rows.push([
+      bow.nickname,
+      'range-confirmation',
+      c.sightInId,
+      c.confirmedAt.slice(0, 10),
+      'marks confirmed at the range',
+      null,
+      null,
+      null,
+      c.note,
+      c.confirmedBy.name,
+    ]);
   }
   return { body: toCsv(rows), contentType: 'text/csv; charset=utf-8', fileName: `${slug(bow.nickname)}-tuning.csv` };
 }
 
 const csvHeader = [
-  'bow', 'build_id', 'build', 'shaft', 'spine', 'grains_per_inch', 'cut_length_mm', 'point_gr', 'total_gr', 'foc_pct', 'build_speed_fps',
-  'sight_in_id', 'sight_in_date', 'place', 'altitude_m', 'temperature_c', 'sight_in_notes', 'fit_speed_fps', 'fit_rms_mm',
-  'mark_position', 'distance', 'unit', 'reading_mm', 'arrows', 'mark_note',
+  'bow',
+  'build_id',
+  'build',
+  'shaft',
+  'spine',
+  'grains_per_inch',
+  'cut_length_mm',
+  'point_gr',
+  'total_gr',
+  'foc_pct',
+  'build_speed_fps',
+  'sight_in_id',
+  'sight_in_date',
+  'place',
+  'altitude_m',
+  'temperature_c',
+  'sight_in_notes',
+  'fit_speed_fps',
+  'fit_rms_mm',
+  'mark_position',
+  'distance',
+  'unit',
+  'reading_mm',
+  'arrows',
+  'mark_note',
 ];
 
 /** GET /api/bows/:id/export.csv — text cells neutralised against formula injection (server/csv/write.ts). */
@@ -132,17 +251,47 @@ export async function exportBowCsv(user: User, bowId: number): Promise<ExportFil
   const rows: CsvCell[][] = [csvHeader];
   const buildCells = (build: ArrowBuild | undefined): CsvCell[] =>
     build
-      ? [build.id, build.name, build.shaftLabel, build.spine, build.grainsPerInch, build.cutLengthMm, build.pointGr, build.totalGr, build.focPct, build.speedFps]
+      ? [
+          build.id,
+          build.name,
+          build.shaftLabel,
+          build.spine,
+          build.grainsPerInch,
+          build.cutLengthMm,
+          build.pointGr,
+          build.totalGr,
+          build.focPct,
+          build.speedFps,
+        ]
       : Array(10).fill(null);
   for (const build of builds) {
     const ofBuild = sightIns.filter((sightIn) => sightIn.buildId === build.id);
     if (ofBuild.length === 0) rows.push([bow.nickname, ...buildCells(build), ...Array(14).fill(null)]);
     for (const sightIn of ofBuild) {
-      const sightInCells: CsvCell[] = [sightIn.id, sightIn.date, sightIn.placeLabel, sightIn.altitudeM, sightIn.temperatureC, sightIn.notes, sightIn.fitSpeedFps, sightIn.fitRmsMm];
+      const sightInCells: CsvCell[] = [
+        sightIn.id,
+        sightIn.date,
+        sightIn.placeLabel,
+        sightIn.altitudeM,
+        sightIn.temperatureC,
+        sightIn.notes,
+        sightIn.fitSpeedFps,
+        sightIn.fitRmsMm,
+      ];
       const ofSightIn = marks.filter((mark) => mark.sightInId === sightIn.id);
       if (ofSightIn.length === 0) rows.push([bow.nickname, ...buildCells(build), ...sightInCells, ...Array(6).fill(null)]);
       for (const mark of ofSightIn) {
-        rows.push([bow.nickname, ...buildCells(build), ...sightInCells, mark.position + 1, mark.distance, mark.unit, mark.scaleMm, mark.arrowsShot, mark.note]);
+        rows.push([
+          bow.nickname,
+          ...buildCells(build),
+          ...sightInCells,
+          mark.position + 1,
+          mark.distance,
+          mark.unit,
+          mark.scaleMm,
+          mark.arrowsShot,
+          mark.note,
+        ]);
       }
     }
   }

@@ -69,7 +69,12 @@ export async function fieldCardDownload(user: User, sightInId: number, query: Fi
 export async function cardPdf(svg: string): Promise<Buffer> {
   const widthPt = FIELD_CARD_SIZE_MM.widthMm * POINTS_PER_MM;
   const heightPt = FIELD_CARD_SIZE_MM.heightMm * POINTS_PER_MM;
-  const doc = new PDFDocument({ size: [widthPt, heightPt], margin: 0, compress: true, info: { Title: 'Field card', Creator: 'Pinwright' } });
+  const doc = new PDFDocument({
+    size: [widthPt, heightPt],
+    margin: 0,
+    compress: true,
+    info: { Title: 'Field card', Creator: 'Pinwright' },
+  });
   const chunks: Buffer[] = [];
   doc.on('data', (chunk: Buffer) => chunks.push(chunk));
   const finished = new Promise<void>((resolve, reject) => {

@@ -80,7 +80,8 @@ export function fitSightIn(
   build: Pick<ArrowBuild, 'totalGr' | 'diameterMm' | 'dragCoefficient' | 'speedFps'>,
   sightIn: FitSightIn,
 ): StoredFit {
-  if (sightIn.marks.length === 1 && build.speedFps === null) throw ApiError.badRequest(ONE_MARK_SIGHT_IN_MESSAGE, { marks: ONE_MARK_SIGHT_IN_MESSAGE });
+  if (sightIn.marks.length === 1 && build.speedFps === null)
+    throw ApiError.badRequest(ONE_MARK_SIGHT_IN_MESSAGE, { marks: ONE_MARK_SIGHT_IN_MESSAGE });
   const input = sightInFitInput(bow, build, sightIn);
   const fit = refusingInputErrors(() => fitSight(input), SIGHT_IN_FIELDS);
   return storedFitOf(fit, bow.scaleDirection);
@@ -116,7 +117,12 @@ function sheetOptionsOf(layout: TapeLayout, labels: SheetLabelsIn) {
   const clip = (text: string | undefined) => (text ? text.slice(0, 60) : undefined);
   return {
     paper: layout.paper,
-    labels: { bow: clip(labels.bow), build: clip(labels.build), date: clip(labels.date), note: labels.note ? labels.note.slice(0, 300) : undefined },
+    labels: {
+      bow: clip(labels.bow),
+      build: clip(labels.build),
+      date: clip(labels.date),
+      note: labels.note ? labels.note.slice(0, 300) : undefined,
+    },
     variants: true,
     tape: tapeOptionsOf(layout),
   };
@@ -124,7 +130,10 @@ function sheetOptionsOf(layout: TapeLayout, labels: SheetLabelsIn) {
 
 /** The print sheet SVG (tape at 100 % and its ±0.5/1/2 % variants, calibration bars, labels, caution). */
 export function sheetSvgFor(fit: StoredFit, layout: TapeLayout, labels: SheetLabelsIn): string {
-  return refusingInputErrors(() => printSheetSvg({ model: fit.model, residuals: fit.residuals, rmsMm: fit.rmsMm }, sheetOptionsOf(layout, labels)), SHEET_FIELDS);
+  return refusingInputErrors(
+    () => printSheetSvg({ model: fit.model, residuals: fit.residuals, rmsMm: fit.rmsMm }, sheetOptionsOf(layout, labels)),
+    SHEET_FIELDS,
+  );
 }
 
 /** The print sheet as a PDF of the paper's size. */
@@ -162,7 +171,17 @@ export async function trySheetPdf(input: SheetInput): Promise<Buffer> {
 export function arrowQuantities(
   build: Pick<
     BuildInput,
-    'grainsPerInch' | 'cutLengthMm' | 'pointGr' | 'insertGr' | 'collarGr' | 'nockGr' | 'vaneCount' | 'vaneWeightGr' | 'wrapGr' | 'balancePointMm' | 'speedFps'
+    | 'grainsPerInch'
+    | 'cutLengthMm'
+    | 'pointGr'
+    | 'insertGr'
+    | 'collarGr'
+    | 'nockGr'
+    | 'vaneCount'
+    | 'vaneWeightGr'
+    | 'wrapGr'
+    | 'balancePointMm'
+    | 'speedFps'
   >,
 ): BuildDerived {
   const totalGr = totalArrowGrains({

@@ -14,13 +14,7 @@ import { ApiError, found } from '@/server/errors';
 import { BowChange, LevelCheck, LevelStep, Photo, User } from '@/server/models';
 import { bowChangeFor, bowFor, levelCheckFor } from '@/server/services/bow-access';
 import { photoStorage } from '@/server/storage';
-import {
-  defaultLevelMaxAgeDays,
-  levelStatus,
-  levelStepKeys,
-  levelStepNames,
-  type LevelCheckFacts,
-} from '@/shared/level-status';
+import { defaultLevelMaxAgeDays, levelStatus, levelStepKeys, levelStepNames, type LevelCheckFacts } from '@/shared/level-status';
 import type {
   BowChange as BowChangeJson,
   BowChangeInput,
@@ -104,10 +98,18 @@ const changeIncludes = [{ model: User, as: 'loggedBy', attributes: ['id', 'name'
  * the people who did the checks, the changes (oldest first) with who logged them.
  */
 export type LevelFacts = {
-  checks: Array<Pick<LevelCheck, 'id' | 'bowId' | 'userId' | 'place' | 'status' | 'startedAt' | 'completedAt'>>;
-  steps: Array<{ checkId: number; step: string; result: string }>;
-  performers: Array<{ id: number; name: string }>;
-  changes: Array<{ id: number; bowId: number; kind: string; changedAt: Date; note: string; createdAt: Date; loggedBy: { id: number; name: string } | null }>;
+  checks: Pick<LevelCheck, 'id' | 'bowId' | 'userId' | 'place' | 'status' | 'startedAt' | 'completedAt'>[];
+  steps: { checkId: number; step: string; result: string }[];
+  performers: { id: number; name: string }[];
+  changes: {
+    id: number;
+    bowId: number;
+    kind: string;
+    changedAt: Date;
+    note: string;
+    createdAt: Date;
+    loggedBy: { id: number; name: string } | null;
+  }[];
 };
 
 /**
@@ -115,18 +117,28 @@ export type LevelFacts = {
  * may read). Three queries whatever the number of bows, none when `facts` are given.
  * Example: (await levelSummaryForBows([3, 4])).get(3)?.state → 'verified'
  */
-export async function levelSummaryForBows(bowIds: readonly number[], now = new Date(), facts?: LevelFacts): Promise<Map<number, LevelSummary>> {
+export async function levelSummaryForBows(
+  bowIds: readonly number[],
+  now = new Date(),
+  facts?: LevelFacts,
+): Promise<Map<number, LevelSummary>> {
   const ids = [...new Set(bowIds)];
   const summaries = new Map<number, LevelSummary>();
   if (ids.length === 0) return summaries;
   const maxAgeDays = levelMaxAgeDays();
 
-  const checks = (facts?.checks as LevelCheck[] | undefined) ?? await LevelCheck.findAll({
-    where: { bowId: { [Op.in]: ids } },
-    attributes: ['id', 'bowId', 'userId', 'place', 'status', 'startedAt', 'completedAt'],
-    // The same order as levelStatus's "last completed" rule: latest completion, then start, then id.
-    order: [['completedAt', 'DESC'], ['startedAt', 'DESC'], ['id', 'DESC']],
-  });
+  const checks =
+    (facts?.checks as LevelCheck[] | undefined) ??
+    (await LevelCheck.findAll({
+      where: { bowId: { [Op.in]: ids } },
+      attributes: ['id', 'bowId', 'userId', 'place', 'status', 'startedAt', 'completedAt'],
+      // The same order as levelStatus's "last completed" rule: latest completion, then start, then id.
+      order: [
+        ['completedAt', 'DESC'],
+        ['startedAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
+    }));
   const lastByBow = new Map<number, LevelCheck>();
   const openByBow = new Map<number, number>();
   for (const check of checks) {
@@ -137,13 +149,20 @@ export async function levelSummaryForBows(bowIds: readonly number[], now = new D
   const [steps, performers, changes] = facts
     ? [facts.steps as LevelStep[], facts.performers as User[], facts.changes as unknown as BowChange[]]
     : await Promise.all([
-    lastIds.length ? LevelStep.findAll({ where: { checkId: { [Op.in]: lastIds } }, attributes: ['checkId', 'step', 'result'] }) : [],
-    User.findAll({
-      where: { id: { [Op.in]: [...lastByBow.values()].map((c) => c.userId).filter((id): id is number => id !== null) } },
-      attributes: ['id', 'name'],
-    }),
-    BowChange.findAll({ where: { bowId: { [Op.in]: ids } }, include: changeIncludes, order: [['changedAt', 'ASC'], ['id', 'ASC']] }),
-  ]);
+        lastIds.length ? LevelStep.findAll({ where: { checkId: { [Op.in]: lastIds } }, attributes: ['checkId', 'step', 'result'] }) : [],
+        User.findAll({
+          where: { id: { [Op.in]: [...lastByBow.values()].map((c) => c.userId).filter((id): id is number => id !== null) } },
+          attributes: ['id', 'name'],
+        }),
+        BowChange.findAll({
+          where: { bowId: { [Op.in]: ids } },
+          include: changeIncludes,
+          order: [
+            ['changedAt', 'ASC'],
+            ['id', 'ASC'],
+          ],
+        }),
+      ]);
 
   for (const bowId of ids) {
     const last = lastByBow.get(bowId);
@@ -210,7 +229,14 @@ async function workableCheck(user: User, id: number): Promise<LevelCheck> {
 /** GET /api/bows/:bowId/checks: newest first, open ones included. */
 export async function listChecks(user: User, bowId: number): Promise<LevelCheckJson[]> {
   await bowFor(user, bowId, 'read');
-  const checks = await LevelCheck.findAll({ where: { bowId }, include: checkIncludes, order: [['startedAt', 'DESC'], ['id', 'DESC']] });
+  const checks = await LevelCheck.findAll({
+    where: { bowId },
+    include: checkIncludes,
+    order: [
+      ['startedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
   return checks.map(checkJson);
 }
 
@@ -221,7 +247,11 @@ export async function listChecks(user: User, bowId: number): Promise<LevelCheckJ
 export async function startCheck(user: User, bowId: number, place: LevelPlace, now = new Date()): Promise<LevelCheckJson> {
   await bowFor(user, bowId, 'add');
   const id = await sequelize.transaction(async (transaction) => {
-    const open = await LevelCheck.findOne({ where: { bowId, userId: user.id, status: 'open' }, transaction, lock: transaction.LOCK.UPDATE });
+    const open = await LevelCheck.findOne({
+      where: { bowId, userId: user.id, status: 'open' },
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (open) {
       throw ApiError.conflict(`You have a check of this bow in progress (check ${open.id}); resume it or discard it first.`, {
         openCheckId: String(open.id),
@@ -251,7 +281,12 @@ export async function updateCheck(user: User, id: number, update: CheckUpdate, n
   await sequelize.transaction(async (transaction) => {
     for (const step of update.steps ?? []) {
       await LevelStep.update(
-        { result: step.result, reading: step.reading, readingUnit: step.reading === null ? null : step.readingUnit, adjustment: step.adjustment },
+        {
+          result: step.result,
+          reading: step.reading,
+          readingUnit: step.reading === null ? null : step.readingUnit,
+          adjustment: step.adjustment,
+        },
         { where: { checkId: check.id, step: step.step }, transaction },
       );
     }
@@ -261,7 +296,9 @@ export async function updateCheck(user: User, id: number, update: CheckUpdate, n
       const steps = await LevelStep.findAll({ where: { checkId: check.id }, transaction });
       const missing = levelStepKeys.filter((key) => !steps.find((s) => s.step === key)?.result);
       if (missing.length > 0) {
-        const fields = Object.fromEntries(missing.map((key) => [`steps.${key}`, `Choose a result for the ${levelStepNames[key]} (or skip it)`]));
+        const fields = Object.fromEntries(
+          missing.map((key) => [`steps.${key}`, `Choose a result for the ${levelStepNames[key]} (or skip it)`]),
+        );
         throw ApiError.badRequest(
           `Give every step a result before completing: the ${missing.map((key) => levelStepNames[key]).join(', ')} ${missing.length === 1 ? 'has' : 'have'} none.`,
           fields,
@@ -299,7 +336,14 @@ export async function workableStep(user: User, checkId: number, step: string): P
 /** GET /api/bows/:bowId/changes: newest first. */
 export async function listChanges(user: User, bowId: number): Promise<BowChangeJson[]> {
   await bowFor(user, bowId, 'read');
-  const changes = await BowChange.findAll({ where: { bowId }, include: changeIncludes, order: [['changedAt', 'DESC'], ['id', 'DESC']] });
+  const changes = await BowChange.findAll({
+    where: { bowId },
+    include: changeIncludes,
+    order: [
+      ['changedAt', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
   return changes.map(changeJson);
 }
 

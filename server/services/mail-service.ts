@@ -13,7 +13,7 @@ export type OutgoingMail = {
   subject: string;
   text: string;
   html: string;
-  attachments?: Array<{ filename: string; content: Buffer; contentType: string }>;
+  attachments?: { filename: string; content: Buffer; contentType: string }[];
 };
 
 let transport: Transporter | null = null;

@@ -30,7 +30,11 @@ const accepted: Record<string, PhotoType> = {
 };
 
 const notAnImage = () =>
-  new ApiError(415, 'unsupported_type', 'The photo must be a JPEG, PNG or WebP image; this file is not one (or is damaged), whatever its name says.');
+  new ApiError(
+    415,
+    'unsupported_type',
+    'The photo must be a JPEG, PNG or WebP image; this file is not one (or is damaged), whatever its name says.',
+  );
 
 /**
  * The photo decoded, turned upright and re-encoded in its own format with no
@@ -51,7 +55,11 @@ export async function cleanPhoto(bytes: Buffer): Promise<{ type: PhotoType; byte
     // failOn 'truncated': a cut-off file is refused rather than stored half grey.
     const image = sharp(bytes, { failOn: 'truncated', limitInputPixels: maxPhotoPixels }).rotate();
     const encoded =
-      type.extension === 'jpg' ? image.jpeg({ quality: 90, mozjpeg: false }) : type.extension === 'png' ? image.png() : image.webp({ quality: 90 });
+      type.extension === 'jpg'
+        ? image.jpeg({ quality: 90, mozjpeg: false })
+        : type.extension === 'png'
+          ? image.png()
+          : image.webp({ quality: 90 });
     return { type, bytes: await encoded.toBuffer() };
   } catch {
     throw notAnImage();
@@ -59,7 +67,12 @@ export async function cleanPhoto(bytes: Buffer): Promise<{ type: PhotoType; byte
 }
 
 /** POST /api/checks/:id/steps/:step/photo: the step's photo (replacing an earlier one). */
-export async function attachStepPhoto(user: User, checkId: number, stepKey: string, file: { buffer: Buffer; size: number } | undefined): Promise<PhotoJson> {
+export async function attachStepPhoto(
+  user: User,
+  checkId: number,
+  stepKey: string,
+  file: { buffer: Buffer; size: number } | undefined,
+): Promise<PhotoJson> {
   const { check, step } = await workableStep(user, checkId, stepKey);
   if (!file || file.size === 0) throw ApiError.badRequest('Choose a photo to upload.', { photo: 'Choose a photo to upload' });
   if (file.size > maxPhotoBytes) throw new ApiError(413, 'too_large', 'The photo is larger than 5 MB; send a smaller one.');

@@ -76,7 +76,11 @@ export async function predict(user: User, bowId: number, request: PredictRequest
 }
 
 /** The prediction as the API sends it, and the predicted sight model (null without a sight-in) for drawing. */
-async function runPrediction(user: User, bowId: number, request: PredictRequest): Promise<{ response: PredictResponse; sightModel: SightModel | null }> {
+async function runPrediction(
+  user: User,
+  bowId: number,
+  request: PredictRequest,
+): Promise<{ response: PredictResponse; sightModel: SightModel | null }> {
   const { bow } = await bowFor(user, bowId, 'read');
   const target = await targetOf(bow, request);
   const others = await ArrowBuild.findAll({ where: { bowId: bow.id }, order: [['id', 'ASC']] });
@@ -88,7 +92,12 @@ async function runPrediction(user: User, bowId: number, request: PredictRequest)
 
   const prediction = refusingMathInput(() =>
     predictBuild({
-      arrow: { massGr: target.totalGr, diameterMm: target.diameterMm, dragCoefficient: target.dragCoefficient, speedFps: target.chronographedSpeedFps },
+      arrow: {
+        massGr: target.totalGr,
+        diameterMm: target.diameterMm,
+        dragCoefficient: target.dragCoefficient,
+        speedFps: target.chronographedSpeedFps,
+      },
       chronographed,
       sight,
       scaleSign: bow.scaleDirection === 'up' ? -1 : 1,
@@ -123,7 +132,17 @@ async function runPrediction(user: User, bowId: number, request: PredictRequest)
 /** The query's build: a saved build's id, or its components checked as a new build would be. */
 function requestOfQuery(query: PredictTapeQuery): PredictRequest {
   if (query.buildId !== undefined) return { buildId: query.buildId, sightInId: query.sightInId };
-  const { buildId: _id, sightInId, from: _from, to: _to, step: _step, width: _width, orientation: _orientation, mirror: _mirror, ...components } = query;
+  const {
+    buildId: _id,
+    sightInId,
+    from: _from,
+    to: _to,
+    step: _step,
+    width: _width,
+    orientation: _orientation,
+    mirror: _mirror,
+    ...components
+  } = query;
   const parsed = buildInputSchema.safeParse({ name: 'New build', ...components });
   if (!parsed.success) throw validationError(parsed.error, 'query');
   return { build: parsed.data, sightInId };
@@ -182,7 +201,13 @@ async function predictedDrawing(user: User, bowId: number, query: PredictTapeQue
   let sightIn: string | undefined;
   if (result.sightIn) {
     const siblings = await SightIn.findAll({ where: { bowId: bow.id }, attributes: ['id', 'date', 'placeLabel', 'buildId', 'createdAt'] });
-    const nameable = siblings.map((s) => ({ id: s.id, date: s.date, placeLabel: s.placeLabel, buildId: s.buildId, createdAt: s.createdAt.toISOString() }));
+    const nameable = siblings.map((s) => ({
+      id: s.id,
+      date: s.date,
+      placeLabel: s.placeLabel,
+      buildId: s.buildId,
+      createdAt: s.createdAt.toISOString(),
+    }));
     const own = nameable.find((s) => s.id === result.sightIn!.id);
     if (own) sightIn = sightInName(own, { buildName: result.sightIn.buildName, siblings: nameable, timeZone: 'UTC' });
   }

@@ -42,7 +42,7 @@ function fitWarnings(fit: unknown, span: { from: number; to: number } | null): s
   const unit = stored.distanceUnit === 'm' ? 'm' : 'yd';
   const confirm: number[] = [];
   const others: string[] = [];
-  for (const item of stored.warnings as Array<StoredWarning | string>) {
+  for (const item of stored.warnings as (StoredWarning | string)[]) {
     if (typeof item === 'string') {
       others.push(item);
       continue;
@@ -74,7 +74,13 @@ async function buildPart(
   tapes: Tape[],
 ): Promise<TripBuild> {
   // Model instances keep their values behind getters: copy the fields the name needs.
-  const nameable = (s: SightInRow) => ({ id: s.id, date: s.date, placeLabel: s.placeLabel, buildId: s.buildId, createdAt: s.createdAt.toISOString() });
+  const nameable = (s: SightInRow) => ({
+    id: s.id,
+    date: s.date,
+    placeLabel: s.placeLabel,
+    buildId: s.buildId,
+    createdAt: s.createdAt.toISOString(),
+  });
   const siblings = allSightIns.map(nameable);
   const nameOf = (sightIn: SightInRow) => sightInName(nameable(sightIn), { buildName: build.name, siblings, timeZone: 'UTC' });
   const latest = sightIns[0] ?? null;
@@ -101,15 +107,18 @@ async function buildPart(
       const ofTape = staleness?.bySightIn.get(tapeSightIn.id);
       if (ofTape?.state === 'confirm') warnings.push(`Saved tape (${dayWords(tapeSightIn.date)}): ${ofTape.reason}`);
     }
-    const span = tapeRow && tapeRow.sightInId === latest.id && tapeRow.unit === ((latest.fit as { distanceUnit?: string })?.distanceUnit ?? 'yd')
-      ? { from: tapeRow.fromDistance, to: tapeRow.toDistance }
-      : null;
+    const span =
+      tapeRow && tapeRow.sightInId === latest.id && tapeRow.unit === ((latest.fit as { distanceUnit?: string })?.distanceUnit ?? 'yd')
+        ? { from: tapeRow.fromDistance, to: tapeRow.toDistance }
+        : null;
     warnings.push(...fitWarnings(latest.fit, span));
     if (!tapeRow) warnings.push('No tape saved for this build yet.');
   }
   if (tapeRow && latest) {
     if (tapeRow.sightInId !== latest.id) {
-      warnings.push(`The saved tape was printed from an older sight-in (${nameOf(tapeSightIn!)}); print one from the latest marks (${nameOf(latest)}).`);
+      warnings.push(
+        `The saved tape was printed from an older sight-in (${nameOf(tapeSightIn!)}); print one from the latest marks (${nameOf(latest)}).`,
+      );
     }
     if (longest && inMetres(tapeRow.toDistance, tapeRow.unit) > inMetres(longest.distance, longest.unit) + 1e-6) {
       warnings.push(
@@ -161,12 +170,21 @@ export async function tripReadiness(user: User, bowId: number, now = new Date())
     SightIn.findAll({
       where: { bowId },
       attributes: ['id', 'date', 'placeLabel', 'buildId', 'fit', 'createdAt'],
-      order: [['date', 'DESC'], ['id', 'DESC']],
+      order: [
+        ['date', 'DESC'],
+        ['id', 'DESC'],
+      ],
     }),
     ArrowBuild.findAll({ where: { bowId }, attributes: ['id', 'name'], order: [['id', 'ASC']] }),
   ]);
   const tapes = sightIns.length
-    ? await Tape.findAll({ where: { sightInId: { [Op.in]: sightIns.map((s) => s.id) } }, order: [['createdAt', 'DESC'], ['id', 'DESC']] })
+    ? await Tape.findAll({
+        where: { sightInId: { [Op.in]: sightIns.map((s) => s.id) } },
+        order: [
+          ['createdAt', 'DESC'],
+          ['id', 'DESC'],
+        ],
+      })
     : [];
   // Builds with sight-ins in the order of their latest sight-in, then the others.
   const order = (build: ArrowBuild) => {
@@ -175,12 +193,21 @@ export async function tripReadiness(user: User, bowId: number, now = new Date())
   };
   const sorted = [...builds].sort((a, b) => order(a) - order(b));
   const parts = await Promise.all(
-    sorted.map((build) => buildPart(bowId, { id: build.id, name: build.name }, sightIns.filter((s) => s.buildId === build.id), sightIns, tapes)),
+    sorted.map((build) =>
+      buildPart(
+        bowId,
+        { id: build.id, name: build.name },
+        sightIns.filter((s) => s.buildId === build.id),
+        sightIns,
+        tapes,
+      ),
+    ),
   );
 
   const bowWarnings: string[] = [];
   if (level.state !== 'verified') bowWarnings.push(`Level: ${level.reason}`);
-  else if (!level.rangeConfirmed) bowWarnings.push('The level was verified on the bench only; confirm with a long shot and a steep shot at the range.');
+  else if (!level.rangeConfirmed)
+    bowWarnings.push('The level was verified on the bench only; confirm with a long shot and a steep shot at the range.');
   if (sightIns.length === 0) bowWarnings.push('No sight-in yet: there are no confirmed marks for this bow.');
 
   // The older single-build fields: the build of the latest sight-in.
@@ -207,15 +234,15 @@ export async function tripReadiness(user: User, bowId: number, now = new Date())
       : null,
     tape: main?.tape
       ? {
-      id: main.tape.id,
-      sightInId: main.tape.sightInId,
-      sightInDate: main.tape.sightInDate,
-      fromDistance: main.tape.fromDistance,
-      toDistance: main.tape.toDistance,
-      unit: main.tape.unit,
-      label: main.tape.label,
-      savedAt: main.tape.savedAt,
-      fromLatestSightIn: main.tape.fromLatestSightIn,
+          id: main.tape.id,
+          sightInId: main.tape.sightInId,
+          sightInDate: main.tape.sightInDate,
+          fromDistance: main.tape.fromDistance,
+          toDistance: main.tape.toDistance,
+          unit: main.tape.unit,
+          label: main.tape.label,
+          savedAt: main.tape.savedAt,
+          fromLatestSightIn: main.tape.fromLatestSightIn,
         }
       : null,
     warnings,

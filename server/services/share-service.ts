@@ -74,7 +74,9 @@ async function reload(id: number): Promise<ShareJson> {
 export async function inviteTech(archer: User, bowId: number, email: string, now = new Date()): Promise<ShareJson> {
   const { bow } = await bowFor(archer, bowId, 'change');
   if (email === archer.email) {
-    throw ApiError.badRequest('That is your own address. Enter the technician’s e-mail address.', { email: 'Enter the technician’s address, not your own' });
+    throw ApiError.badRequest('That is your own address. Enter the technician’s e-mail address.', {
+      email: 'Enter the technician’s address, not your own',
+    });
   }
   const { shareId, raw } = await sequelize.transaction(async (transaction) => {
     let share = await Share.findOne({
@@ -88,11 +90,21 @@ export async function inviteTech(archer: User, bowId: number, email: string, now
     if (share) {
       await retireTokens({ purpose: 'share-invite', shareId: share.id }, now, transaction);
     } else {
-      share = await Share.create({ bowId, archerId: archer.id, techId: null, invitedEmail: email, acceptedAt: null, revokedAt: null }, { transaction });
+      share = await Share.create(
+        { bowId, archerId: archer.id, techId: null, invitedEmail: email, acceptedAt: null, revokedAt: null },
+        { transaction },
+      );
     }
     const issued = await issueToken({ purpose: 'share-invite', shareId: share.id, validMs: inviteValidMs, now }, transaction);
     await recordAudit(
-      { actorId: archer.id, action: 'invited', bowId, recordType: 'share', recordId: share.id, summary: `Invited ${email} to see and add to this bow` },
+      {
+        actorId: archer.id,
+        action: 'invited',
+        bowId,
+        recordType: 'share',
+        recordId: share.id,
+        summary: `Invited ${email} to see and add to this bow`,
+      },
       transaction,
     );
     return { shareId: share.id, raw: issued.raw };
@@ -100,7 +112,12 @@ export async function inviteTech(archer: User, bowId: number, email: string, now
   try {
     await sendMail({
       to: email,
-      ...inviteMessage({ archerName: archer.name, bowNickname: bow.nickname, link: inviteLink(raw), expiresAt: new Date(now.getTime() + inviteValidMs) }),
+      ...inviteMessage({
+        archerName: archer.name,
+        bowNickname: bow.nickname,
+        link: inviteLink(raw),
+        expiresAt: new Date(now.getTime() + inviteValidMs),
+      }),
     });
   } catch (err) {
     console.error(`Invitation e-mail to ${email} could not be sent: ${err instanceof Error ? err.message : err}`);
@@ -129,7 +146,12 @@ export async function listMyShares(archer: User): Promise<ShareJson[]> {
 /** POST /api/shares/:id/revoke: ends the share at once (an open invitation link then reads as withdrawn). */
 export async function revokeShare(archer: User, shareId: number, now = new Date()): Promise<ShareJson> {
   await sequelize.transaction(async (transaction) => {
-    const share = await Share.findOne({ where: { id: shareId, archerId: archer.id }, include: shareIncludes, transaction, lock: transaction.LOCK.UPDATE });
+    const share = await Share.findOne({
+      where: { id: shareId, archerId: archer.id },
+      include: shareIncludes,
+      transaction,
+      lock: transaction.LOCK.UPDATE,
+    });
     if (!share) throw ApiError.notFound('That share');
     if (share.state === 'revoked') return;
     share.state = 'revoked';
@@ -138,7 +160,14 @@ export async function revokeShare(archer: User, shareId: number, now = new Date(
     await share.save({ transaction });
     const who = share.tech ? `${share.tech.name} <${share.tech.email}>` : share.invitedEmail;
     await recordAudit(
-      { actorId: archer.id, action: 'revoked', bowId: share.bowId, recordType: 'share', recordId: share.id, summary: `Ended the share with ${who}` },
+      {
+        actorId: archer.id,
+        action: 'revoked',
+        bowId: share.bowId,
+        recordType: 'share',
+        recordId: share.id,
+        summary: `Ended the share with ${who}`,
+      },
       transaction,
     );
   });
@@ -164,13 +193,20 @@ async function invitedShare(raw: string, now: Date) {
 /** GET /api/invites/:token: what the accept page shows (no sign-in needed). */
 export async function previewInvite(raw: string, now = new Date()): Promise<InvitePreview> {
   const { token, share } = await invitedShare(raw, now);
-  return { archerName: share.archer!.name, bowNickname: share.bow!.nickname, invitedEmail: share.invitedEmail, expiresAt: token.expiresAt.toISOString() };
+  return {
+    archerName: share.archer!.name,
+    bowNickname: share.bow!.nickname,
+    invitedEmail: share.invitedEmail,
+    expiresAt: token.expiresAt.toISOString(),
+  };
 }
 
 /** POST /api/invites/accept: the signed-in technician accepts; the share becomes active. */
 export async function acceptInvite(user: User, raw: string, now = new Date()): Promise<ShareJson> {
   if (user.role !== 'tech') {
-    throw ApiError.forbidden('Invitations are accepted with a technician account. Sign out, then sign in with your technician account or create one from the invitation link.');
+    throw ApiError.forbidden(
+      'Invitations are accepted with a technician account. Sign out, then sign in with your technician account or create one from the invitation link.',
+    );
   }
   const shareId = await sequelize.transaction(async (transaction) => {
     const { token, problem } = await checkToken('share-invite', raw, now, transaction);
@@ -178,7 +214,9 @@ export async function acceptInvite(user: User, raw: string, now = new Date()): P
     const share = await Share.findByPk(token.shareId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!share || share.state !== 'invited') throw new ApiError(410, 'link_withdrawn', 'The archer has withdrawn this invitation.');
     if (share.invitedEmail !== user.email) {
-      throw ApiError.forbidden(`This invitation was sent to ${share.invitedEmail}. Sign in with the account for that address to accept it.`);
+      throw ApiError.forbidden(
+        `This invitation was sent to ${share.invitedEmail}. Sign in with the account for that address to accept it.`,
+      );
     }
     if (!(await consumeToken(token, now, transaction))) throw tokenError('used', linkWords);
     share.state = 'active';
@@ -186,7 +224,14 @@ export async function acceptInvite(user: User, raw: string, now = new Date()): P
     share.acceptedAt = now;
     await share.save({ transaction });
     await recordAudit(
-      { actorId: user.id, action: 'accepted', bowId: share.bowId, recordType: 'share', recordId: share.id, summary: `${user.name} accepted the invitation` },
+      {
+        actorId: user.id,
+        action: 'accepted',
+        bowId: share.bowId,
+        recordType: 'share',
+        recordId: share.id,
+        summary: `${user.name} accepted the invitation`,
+      },
       transaction,
     );
     return share.id;
@@ -217,7 +262,10 @@ export async function listClients(tech: User): Promise<Client[]> {
       { model: Bow, as: 'bow', attributes: ['id', 'nickname', 'sightKind'] },
       { model: User, as: 'archer', attributes: ['id', 'name', 'email'] },
     ],
-    order: [['archerId', 'ASC'], ['bowId', 'ASC']],
+    order: [
+      ['archerId', 'ASC'],
+      ['bowId', 'ASC'],
+    ],
   });
   const clients = new Map<number, Client>();
   for (const share of shares) {

@@ -30,7 +30,9 @@ import { addedByNames, addedByOf } from './added-by';
  */
 function checkAppendOnly(update: SightInUpdate, stored: SightInMark[]): void {
   const refused = ApiError.forbidden('A technician can add marks to the archer’s sight-in but cannot change or remove what is there.');
-  const keys = Object.entries(update).filter(([, value]) => value !== undefined).map(([key]) => key);
+  const keys = Object.entries(update)
+    .filter(([, value]) => value !== undefined)
+    .map(([key]) => key);
   if (keys.some((key) => key !== 'marks')) throw refused;
   const marks = update.marks ?? [];
   if (marks.length < stored.length) throw refused;
@@ -171,7 +173,12 @@ async function buildOnBow(bow: Bow, buildId: number, transaction: Transaction): 
  * given back as it was stored keeps who added it (`stored`); the others are
  * the current user's (server/models/added-by.ts).
  */
-async function replaceMarks(sightInId: number, marks: MarkInput[], transaction: Transaction, stored: SightInMark[] = []): Promise<SightInMark[]> {
+async function replaceMarks(
+  sightInId: number,
+  marks: MarkInput[],
+  transaction: Transaction,
+  stored: SightInMark[] = [],
+): Promise<SightInMark[]> {
   const unclaimed = [...stored];
   const addedByOf = (mark: MarkInput) => {
     const index = unclaimed.findIndex((old) => sameMark(markInputOf(old), mark));
@@ -187,7 +194,13 @@ async function replaceMarks(sightInId: number, marks: MarkInput[], transaction: 
 
 export async function listSightIns(user: User, bowId: number): Promise<SightInListItem[]> {
   const { bow } = await bowFor(user, bowId, 'read');
-  const sightIns = await SightIn.findAll({ where: { bowId: bow.id }, order: [['date', 'DESC'], ['id', 'DESC']] });
+  const sightIns = await SightIn.findAll({
+    where: { bowId: bow.id },
+    order: [
+      ['date', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
   return sightInListItems(sightIns);
 }
 

@@ -34,24 +34,40 @@ export interface BowStaleness {
  * newest first, changes, builds, range confirmations, tapes newest first.
  */
 export type StalenessFacts = {
-  sightIns: Array<{ id: number; bowId: number; buildId: number; date: string; createdAt: Date }>;
-  changes: Array<{ id: number; bowId: number; kind: string; changedAt: Date; note: string }>;
-  builds: Array<{ id: number; bowId: number; createdAt: Date; updatedAt: Date }>;
-  confirmations: Array<{ sightInId: number; confirmedAt: Date }>;
-  tapes: Array<{ id: number; sightInId: number; createdAt: Date }>;
+  sightIns: { id: number; bowId: number; buildId: number; date: string; createdAt: Date }[];
+  changes: { id: number; bowId: number; kind: string; changedAt: Date; note: string }[];
+  builds: { id: number; bowId: number; createdAt: Date; updatedAt: Date }[];
+  confirmations: { sightInId: number; confirmedAt: Date }[];
+  tapes: { id: number; sightInId: number; createdAt: Date }[];
 };
 
 async function stalenessFacts(ids: number[]): Promise<StalenessFacts> {
   const [sightIns, changes, builds] = await Promise.all([
-    SightIn.findAll({ where: { bowId: { [Op.in]: ids } }, attributes: ['id', 'bowId', 'buildId', 'date', 'createdAt'], order: [['date', 'DESC'], ['id', 'DESC']] }),
+    SightIn.findAll({
+      where: { bowId: { [Op.in]: ids } },
+      attributes: ['id', 'bowId', 'buildId', 'date', 'createdAt'],
+      order: [
+        ['date', 'DESC'],
+        ['id', 'DESC'],
+      ],
+    }),
     BowChange.findAll({ where: { bowId: { [Op.in]: ids } }, attributes: ['id', 'bowId', 'kind', 'changedAt', 'note'] }),
     ArrowBuild.findAll({ where: { bowId: { [Op.in]: ids } }, attributes: ['id', 'bowId', 'createdAt', 'updatedAt'] }),
   ]);
   const sightInIds = sightIns.map((s) => s.id);
   const [confirmations, tapes] = await Promise.all([
-    sightInIds.length ? RangeConfirmation.findAll({ where: { sightInId: { [Op.in]: sightInIds } }, attributes: ['sightInId', 'confirmedAt'] }) : [],
     sightInIds.length
-      ? Tape.findAll({ where: { sightInId: { [Op.in]: sightInIds } }, attributes: ['id', 'sightInId', 'createdAt'], order: [['createdAt', 'DESC'], ['id', 'DESC']] })
+      ? RangeConfirmation.findAll({ where: { sightInId: { [Op.in]: sightInIds } }, attributes: ['sightInId', 'confirmedAt'] })
+      : [],
+    sightInIds.length
+      ? Tape.findAll({
+          where: { sightInId: { [Op.in]: sightInIds } },
+          attributes: ['id', 'sightInId', 'createdAt'],
+          order: [
+            ['createdAt', 'DESC'],
+            ['id', 'DESC'],
+          ],
+        })
       : [],
   ]);
   return { sightIns, changes, builds, confirmations, tapes } as StalenessFacts;
@@ -110,6 +126,11 @@ export async function sightInStaleness(user: User, sightInId: number): Promise<S
     sightInId,
     ...staleness,
     canConfirm: access.owner || access.shareId !== null,
-    confirmations: confirmations.map((c) => ({ id: c.id, confirmedAt: c.confirmedAt.toISOString(), note: c.note, confirmedBy: personJson(c.confirmedBy) })),
+    confirmations: confirmations.map((c) => ({
+      id: c.id,
+      confirmedAt: c.confirmedAt.toISOString(),
+      note: c.note,
+      confirmedBy: personJson(c.confirmedBy),
+    })),
   };
 }

@@ -155,7 +155,15 @@ export async function sheetDownload(user: User, sightInId: number, query: TapeQu
   const labels = await sheetLabels(sightIn, layout);
   const fit = sightIn.fit as StoredFit;
   if (format === 'svg') {
-    return { body: sheetSvgFor(fit, layout, labels), contentType: 'image/svg+xml; charset=utf-8', fileName: `${fileStem(sightIn.bow, sightIn)}-sheet.svg` };
+    return {
+      body: sheetSvgFor(fit, layout, labels),
+      contentType: 'image/svg+xml; charset=utf-8',
+      fileName: `${fileStem(sightIn.bow, sightIn)}-sheet.svg`,
+    };
   }
-  return { body: await sheetPdfFor(fit, layout, labels), contentType: 'application/pdf', fileName: `${fileStem(sightIn.bow, sightIn)}-sheet.pdf` };
+  return {
+    body: await sheetPdfFor(fit, layout, labels),
+    contentType: 'application/pdf',
+    fileName: `${fileStem(sightIn.bow, sightIn)}-sheet.pdf`,
+  };
 }

@@ -20,7 +20,13 @@ export function hashToken(raw: string): string {
 
 /** Creates a token and returns its text (the only copy; put it in the e-mail). */
 export async function issueToken(
-  { purpose, userId = null, shareId = null, validMs, now = new Date() }: { purpose: TokenPurpose; userId?: number | null; shareId?: number | null; validMs: number; now?: Date },
+  {
+    purpose,
+    userId = null,
+    shareId = null,
+    validMs,
+    now = new Date(),
+  }: { purpose: TokenPurpose; userId?: number | null; shareId?: number | null; validMs: number; now?: Date },
   transaction?: Transaction,
 ): Promise<{ raw: string; token: Token }> {
   const raw = crypto.randomBytes(32).toString('base64url');
@@ -34,8 +40,17 @@ export async function issueToken(
 export type TokenProblem = 'unknown' | 'used' | 'expired';
 
 /** Looks a token up: the row, and why it cannot be used (null when it can). */
-export async function checkToken(purpose: TokenPurpose, raw: string, now = new Date(), transaction?: Transaction): Promise<{ token: Token | null; problem: TokenProblem | null }> {
-  const token = await Token.findOne({ where: { purpose, tokenHash: hashToken(raw) }, transaction, lock: transaction ? transaction.LOCK.UPDATE : undefined });
+export async function checkToken(
+  purpose: TokenPurpose,
+  raw: string,
+  now = new Date(),
+  transaction?: Transaction,
+): Promise<{ token: Token | null; problem: TokenProblem | null }> {
+  const token = await Token.findOne({
+    where: { purpose, tokenHash: hashToken(raw) },
+    transaction,
+    lock: transaction ? transaction.LOCK.UPDATE : undefined,
+  });
   if (!token) return { token: null, problem: 'unknown' };
   if (token.usedAt) return { token, problem: 'used' };
   if (token.expiresAt.getTime() <= now.getTime()) return { token, problem: 'expired' };
@@ -62,7 +77,11 @@ export async function consumeToken(token: Token, now = new Date(), transaction?:
  * was sent, a reset was done) by expiring it now: its holder is told the link
  * has expired and to ask for a new one.
  */
-export async function retireTokens(where: { purpose: TokenPurpose; userId?: number; shareId?: number }, now = new Date(), transaction?: Transaction): Promise<number> {
+export async function retireTokens(
+  where: { purpose: TokenPurpose; userId?: number; shareId?: number },
+  now = new Date(),
+  transaction?: Transaction,
+): Promise<number> {
   const [count] = await Token.update(
     { expiresAt: now },
     { where: { ...where, usedAt: { [Op.is]: null }, expiresAt: { [Op.gt]: now } }, transaction },

@@ -37,7 +37,8 @@ import { tearNames } from '@/shared/paper-tune-rules';
 /** How much a date may lie ahead of the server clock (devices' clocks and zones differ). */
 const aheadMs = 14 * 60 * 60 * 1000;
 
-export const personJson = (user: User | null | undefined) => (user ? { id: user.id, name: user.name } : { id: 0, name: 'A former account' });
+export const personJson = (user: User | null | undefined) =>
+  user ? { id: user.id, name: user.name } : { id: 0, name: 'A former account' };
 // Fresh include objects each time: Sequelize annotates the ones it is given.
 const byIncludes = () => [{ model: User, as: 'addedBy', attributes: ['id', 'name'] }];
 
@@ -78,7 +79,14 @@ function entryJson(entry: SetupEntry, ownerId: number): SetupEntryJson {
 /** GET /api/bows/:bowId/setup: every entry, newest first, and the latest of each measure. */
 export async function listSetup(user: User, bowId: number): Promise<SetupList> {
   const { bow } = await bowFor(user, bowId, 'read');
-  const entries = await SetupEntry.findAll({ where: { bowId }, include: byIncludes(), order: [['measuredOn', 'DESC'], ['id', 'DESC']] });
+  const entries = await SetupEntry.findAll({
+    where: { bowId },
+    include: byIncludes(),
+    order: [
+      ['measuredOn', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
   const latest: SetupList['latest'] = {};
   for (const entry of entries) if (!latest[entry.measure]) latest[entry.measure] = entryJson(entry, bow.userId);
   return { entries: entries.map((e) => entryJson(e, bow.userId)), latest };
@@ -89,14 +97,22 @@ export async function listSetup(user: User, bowId: number): Promise<SetupList> {
  * When it is the newest of its measure and differs from the one before, it
  * logs a change of the kind the measure stands for.
  */
-export async function addSetupEntry(user: User, bowId: number, input: SetupEntryInput, now = new Date()): Promise<{ entry: SetupEntryJson }> {
+export async function addSetupEntry(
+  user: User,
+  bowId: number,
+  input: SetupEntryInput,
+  now = new Date(),
+): Promise<{ entry: SetupEntryJson }> {
   const { bow } = await bowFor(user, bowId, 'add');
   checkNotFuture(input.measuredOn, now, 'measuredOn');
   const spec = setupMeasures[input.measure];
   const id = await sequelize.transaction(async (transaction) => {
     const previous = await SetupEntry.findOne({
       where: { bowId, measure: input.measure },
-      order: [['measuredOn', 'DESC'], ['id', 'DESC']],
+      order: [
+        ['measuredOn', 'DESC'],
+        ['id', 'DESC'],
+      ],
       transaction,
       lock: transaction.LOCK.UPDATE,
     });
@@ -108,7 +124,10 @@ export async function addSetupEntry(user: User, bowId: number, input: SetupEntry
           userId: user.id,
           kind: spec.changeKind,
           changedAt: changeMoment(input.measuredOn, now),
-          note: `${spec.name}: ${setupValueWords(previous, 'mm')} → ${setupValueWords(input, 'mm')} (set-up entry)${input.note ? `; ${input.note}` : ''}`.slice(0, 500),
+          note: `${spec.name}: ${setupValueWords(previous, 'mm')} → ${setupValueWords(input, 'mm')} (set-up entry)${input.note ? `; ${input.note}` : ''}`.slice(
+            0,
+            500,
+          ),
         },
         { transaction },
       );
@@ -122,7 +141,14 @@ export async function addSetupEntry(user: User, bowId: number, input: SetupEntry
 
 /** The latest rest kind and cam system of each bow (for the paper-tune advice and exports). */
 export async function latestSetupOf(bowId: number, transaction?: Transaction) {
-  const entries = await SetupEntry.findAll({ where: { bowId }, order: [['measuredOn', 'DESC'], ['id', 'DESC']], transaction });
+  const entries = await SetupEntry.findAll({
+    where: { bowId },
+    order: [
+      ['measuredOn', 'DESC'],
+      ['id', 'DESC'],
+    ],
+    transaction,
+  });
   const latest = new Map<string, SetupEntry>();
   for (const entry of entries) if (!latest.has(entry.measure)) latest.set(entry.measure, entry);
   return latest;
@@ -175,14 +201,22 @@ const runIncludes = () => [...byIncludes(), { model: PaperTuneShot, as: 'shots',
 /** GET /api/bows/:bowId/paper-tunes: newest first. */
 export async function listRuns(user: User, bowId: number): Promise<PaperTuneRunJson[]> {
   const { bow } = await bowFor(user, bowId, 'read');
-  const runs = await PaperTuneRun.findAll({ where: { bowId }, include: runIncludes(), order: [['startedOn', 'DESC'], ['id', 'DESC']] });
+  const runs = await PaperTuneRun.findAll({
+    where: { bowId },
+    include: runIncludes(),
+    order: [
+      ['startedOn', 'DESC'],
+      ['id', 'DESC'],
+    ],
+  });
   return runs.map((run) => runJson(run, bow.userId));
 }
 
 /** A run the user may add to: theirs (who started it works it, as with level checks) and still open. */
 async function workableRun(user: User, id: number) {
   const loaded = await paperTuneRunFor(user, id, 'add', { include: runIncludes() });
-  if (loaded.run.userId !== user.id) throw ApiError.forbidden('Only the person who started this paper-tune run can add to it; start a run of your own.');
+  if (loaded.run.userId !== user.id)
+    throw ApiError.forbidden('Only the person who started this paper-tune run can add to it; start a run of your own.');
   if (loaded.run.outcome !== 'open') throw ApiError.conflict('This run has ended; start a new run to shoot more paper.');
   return loaded;
 }
@@ -218,7 +252,10 @@ export async function addShot(user: User, runId: number, input: PaperTuneShotInp
           userId: user.id,
           kind: adjustmentChangeKinds[input.changedBefore],
           changedAt: now,
-          note: `Paper tune, before shot ${count + 1}: ${tuneAdjustmentNames[input.changedBefore]}${input.changeNote ? ` — ${input.changeNote}` : ''}`.slice(0, 500),
+          note: `Paper tune, before shot ${count + 1}: ${tuneAdjustmentNames[input.changedBefore]}${input.changeNote ? ` — ${input.changeNote}` : ''}`.slice(
+            0,
+            500,
+          ),
         },
         { transaction },
       );
@@ -264,6 +301,9 @@ export async function confirmationsOf(sightInIds: number[]) {
   return RangeConfirmation.findAll({
     where: { sightInId: { [Op.in]: sightInIds } },
     include: [{ model: User, as: 'confirmedBy', attributes: ['id', 'name'] }],
-    order: [['confirmedAt', 'ASC'], ['id', 'ASC']],
+    order: [
+      ['confirmedAt', 'ASC'],
+      ['id', 'ASC'],
+    ],
   });
 }

@@ -23,14 +23,20 @@ async function main() {
   const { seedDemo, demoAccounts } = await import('@/server/seed/demo');
   await seedDemo();
   // A local fake SMTP service keeps every e-mail (read them at /dev-mail).
-  const smtp = config.smtp.fake ? await (await import('@/server/mail/fake-smtp')).startFakeSmtp({ port: config.smtp.port, dir: config.mailDir }) : null;
+  const smtp = config.smtp.fake
+    ? await (await import('@/server/mail/fake-smtp')).startFakeSmtp({ port: config.smtp.port, dir: config.mailDir })
+    : null;
   const { createApp } = await import('@/server/app');
 
-  const metro = spawn(process.execPath, [path.join(root, 'node_modules/expo/bin/cli'), 'start', '--web', '--localhost', '--port', String(METRO_PORT)], {
-    cwd: root,
-    stdio: 'inherit',
-    env: { ...process.env, EXPO_NO_TELEMETRY: '1', EXPO_OFFLINE: '1', EXPO_UNSTABLE_HEADLESS: '1', BROWSER: 'none' },
-  });
+  const metro = spawn(
+    process.execPath,
+    [path.join(root, 'node_modules/expo/bin/cli'), 'start', '--web', '--localhost', '--port', String(METRO_PORT)],
+    {
+      cwd: root,
+      stdio: 'inherit',
+      env: { ...process.env, EXPO_NO_TELEMETRY: '1', EXPO_OFFLINE: '1', EXPO_UNSTABLE_HEADLESS: '1', BROWSER: 'none' },
+    },
+  );
 
   const outer = express();
   const api = createApp({ webDir: path.join(root, '.no-web-export') });
@@ -56,7 +62,11 @@ async function main() {
   // Hot reload runs over a web socket: pass upgrades straight through.
   server.on('upgrade', (req, socket, head) => {
     const upstream = net.connect(METRO_PORT, '127.0.0.1', () => {
-      upstream.write(`${req.method} ${req.url} HTTP/1.1\r\n${Object.entries(req.headers).map(([k, v]) => `${k}: ${v}`).join('\r\n')}\r\n\r\n`);
+      upstream.write(
+        `${req.method} ${req.url} HTTP/1.1\r\n${Object.entries(req.headers)
+          .map(([k, v]) => `${k}: ${v}`)
+          .join('\r\n')}\r\n\r\n`,
+      );
       upstream.write(head);
       socket.pipe(upstream).pipe(socket);
     });

@@ -26,7 +26,9 @@ async function main() {
     const { seedDemo, demoAccounts } = await import('@/server/seed/demo');
     await seedDemo();
     // Development: a local fake SMTP service keeps every e-mail (read them at /dev-mail).
-    const smtp = config.smtp.fake ? await (await import('@/server/mail/fake-smtp')).startFakeSmtp({ port: config.smtp.port, dir: config.mailDir }) : null;
+    const smtp = config.smtp.fake
+      ? await (await import('@/server/mail/fake-smtp')).startFakeSmtp({ port: config.smtp.port, dir: config.mailDir })
+      : null;
     await exportWebIfStale(root);
     const { startServer } = await import('@/server/index');
     const { close } = await startServer();

@@ -8,7 +8,18 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { finishWebExport, readPalette } from './web-pwa';
 
-const SOURCES = ['app', 'components', 'shared', 'math', 'assets', 'app.json', 'babel.config.js', 'package-lock.json', 'metro.config.js', 'server/tools/web-pwa.ts'];
+const SOURCES = [
+  'app',
+  'components',
+  'shared',
+  'math',
+  'assets',
+  'app.json',
+  'babel.config.js',
+  'package-lock.json',
+  'metro.config.js',
+  'server/tools/web-pwa.ts',
+];
 
 function newestMtime(target: string): number {
   if (!fs.existsSync(target)) return 0;
@@ -31,11 +42,15 @@ export async function exportWeb(root: string, log: (line: string) => void = cons
   const started = Date.now();
   const stampStart = new Date();
   await new Promise<void>((resolve, reject) => {
-    const child = spawn(process.execPath, [path.join(root, 'node_modules/expo/bin/cli'), 'export', '--platform', 'web', '--output-dir', 'dist'], {
-      cwd: root,
-      env: { ...process.env, EXPO_NO_TELEMETRY: '1', EXPO_OFFLINE: '1', EXPO_UNSTABLE_HEADLESS: '1', CI: '1' },
-      stdio: ['ignore', 'pipe', 'pipe'],
-    });
+    const child = spawn(
+      process.execPath,
+      [path.join(root, 'node_modules/expo/bin/cli'), 'export', '--platform', 'web', '--output-dir', 'dist'],
+      {
+        cwd: root,
+        env: { ...process.env, EXPO_NO_TELEMETRY: '1', EXPO_OFFLINE: '1', EXPO_UNSTABLE_HEADLESS: '1', CI: '1' },
+        stdio: ['ignore', 'pipe', 'pipe'],
+      },
+    );
     let output = '';
     const keep = (chunk: Buffer) => {
       output += chunk.toString();
@@ -69,7 +84,8 @@ const SHELL_ID = 'pw-first-paint';
 export function addFirstPaintShell(indexHtml: string, colors: Record<string, string>): void {
   const html = fs.readFileSync(indexHtml, 'utf8');
   if (html.includes(`id="${SHELL_ID}"`)) return;
-  for (const name of ['paper', 'ink', 'inkSoft']) if (!colors[name]) throw new Error(`components/theme.ts: colour "${name}" not found for the first-paint shell`);
+  for (const name of ['paper', 'ink', 'inkSoft'])
+    if (!colors[name]) throw new Error(`components/theme.ts: colour "${name}" not found for the first-paint shell`);
   const shell =
     `<div id="${SHELL_ID}" style="position:fixed;inset:0;z-index:10;box-sizing:border-box;padding:40px 24px;display:flex;flex-direction:column;` +
     `align-items:center;justify-content:center;gap:12px;background:${colors.paper};color:${colors.ink};` +

@@ -11,7 +11,16 @@ const app = testApp();
 jest.setTimeout(60_000);
 afterAll(closeDb);
 
-type Entry = { id: number; action: string; recordType: string; summary: string; bowId: number | null; bow: { id: number; nickname: string; ownerName: string } | null; account: { id: number; name: string } | null; actor: { id: number; name: string } | null };
+type Entry = {
+  id: number;
+  action: string;
+  recordType: string;
+  summary: string;
+  bowId: number | null;
+  bow: { id: number; nickname: string; ownerName: string } | null;
+  account: { id: number; name: string } | null;
+  actor: { id: number; name: string } | null;
+};
 
 describe('the administrator’s audit log', () => {
   it('names bows and accounts, and filters by bow, account and kind', async () => {
@@ -21,9 +30,30 @@ describe('the administrator’s audit log', () => {
     const tech = await signedInAgent(app, { name: 'Osric Pell' });
     const fen = (await bowWithBuild(archer.agent, { nickname: 'Threlkeld fen' })).bow;
     const moor = (await bowWithBuild(archer.agent, { nickname: 'Threlkeld moor' })).bow;
-    await recordAudit({ actorId: archer.user.id, action: 'invited', bowId: fen.id, recordType: 'share', recordId: null, summary: 'Invited a technician to Threlkeld fen' });
-    await recordAudit({ actorId: tech.user.id, action: 'created', bowId: fen.id, recordType: 'sight-in-mark', recordId: null, summary: 'Added a mark: 40 yd at 22 mm' });
-    await recordAudit({ actorId: tech.user.id, action: 'created', bowId: moor.id, recordType: 'level-check', recordId: null, summary: 'Added a level check' });
+    await recordAudit({
+      actorId: archer.user.id,
+      action: 'invited',
+      bowId: fen.id,
+      recordType: 'share',
+      recordId: null,
+      summary: 'Invited a technician to Threlkeld fen',
+    });
+    await recordAudit({
+      actorId: tech.user.id,
+      action: 'created',
+      bowId: fen.id,
+      recordType: 'sight-in-mark',
+      recordId: null,
+      summary: 'Added a mark: 40 yd at 22 mm',
+    });
+    await recordAudit({
+      actorId: tech.user.id,
+      action: 'created',
+      bowId: moor.id,
+      recordType: 'level-check',
+      recordId: null,
+      summary: 'Added a level check',
+    });
     const role = await admin.agent.patch(`/api/admin/accounts/${tech.user.id}`).set(CSRF).send({ role: 'tech' });
     expect(role.status).toBe(200);
 
@@ -38,7 +68,10 @@ describe('the administrator’s audit log', () => {
     expect(roleEntry.bow).toBeNull();
 
     const byBow = await admin.agent.get(`/api/admin/audit?bowId=${fen.id}`);
-    expect((byBow.body.entries as Entry[]).map((entry) => entry.summary).sort()).toEqual(['Added a mark: 40 yd at 22 mm', 'Invited a technician to Threlkeld fen']);
+    expect((byBow.body.entries as Entry[]).map((entry) => entry.summary).sort()).toEqual([
+      'Added a mark: 40 yd at 22 mm',
+      'Invited a technician to Threlkeld fen',
+    ]);
     expect(byBow.body.filters).toEqual({ bow: { id: fen.id, nickname: 'Threlkeld fen' }, account: null });
 
     // An account: what it did and what was done to it.
@@ -74,7 +107,14 @@ describe('the administrator’s audit log', () => {
   it('shows the archer’s own bow log with the bow named too', async () => {
     const archer = await signedInAgent(app, { name: 'Peregrine Aske' });
     const bow = (await bowWithBuild(archer.agent, { nickname: 'Aske hollow' })).bow;
-    await recordAudit({ actorId: null, action: 'created', bowId: bow.id, recordType: 'sight-in-mark', recordId: null, summary: 'Added a mark' });
+    await recordAudit({
+      actorId: null,
+      action: 'created',
+      bowId: bow.id,
+      recordType: 'sight-in-mark',
+      recordId: null,
+      summary: 'Added a mark',
+    });
     const log = await archer.agent.get(`/api/bows/${bow.id}/audit`);
     expect(log.status).toBe(200);
     expect(log.body.entries[0]).toMatchObject({ actor: null, bow: { nickname: 'Aske hollow', ownerName: 'Peregrine Aske' } });

@@ -29,7 +29,9 @@ async function secondSignIn(email: string, password: string) {
 }
 
 async function pngBytes() {
-  return sharp({ create: { width: 6, height: 4, channels: 3, background: '#808080' } }).png().toBuffer();
+  return sharp({ create: { width: 6, height: 4, channels: 3, background: '#808080' } })
+    .png()
+    .toBuffer();
 }
 
 /** A level check with a photo on one of its steps; returns the photo's id. */
@@ -50,7 +52,10 @@ describe('change of password', () => {
     const other = await secondSignIn(owner.email, owner.password);
     expect((await other.get('/api/me')).status).toBe(200);
 
-    const wrong = await owner.agent.post('/api/me/password').set(CSRF).send({ currentPassword: 'not the password', newPassword: 'a brand new sentence' });
+    const wrong = await owner.agent
+      .post('/api/me/password')
+      .set(CSRF)
+      .send({ currentPassword: 'not the password', newPassword: 'a brand new sentence' });
     expect(wrong.status).toBe(400);
     expect(wrong.body.error.fields.currentPassword).toBe('That password is not right');
     const short = await owner.agent.post('/api/me/password').set(CSRF).send({ currentPassword: owner.password, newPassword: 'short' });
@@ -59,7 +64,10 @@ describe('change of password', () => {
     // Nothing changed by the refused attempts: the other sign-in still works.
     expect((await other.get('/api/me')).status).toBe(200);
 
-    const changed = await owner.agent.post('/api/me/password').set(CSRF).send({ currentPassword: owner.password, newPassword: 'a brand new sentence' });
+    const changed = await owner.agent
+      .post('/api/me/password')
+      .set(CSRF)
+      .send({ currentPassword: owner.password, newPassword: 'a brand new sentence' });
     expect(changed.status).toBe(200);
     expect(changed.body).toEqual({ endedSessions: 1, message: 'Password changed. Your 1 other sign-in was ended; this one stays.' });
     expect((await owner.agent.get('/api/me')).status).toBe(200);
@@ -71,9 +79,13 @@ describe('change of password', () => {
   });
 
   it('needs a sign-in and the CSRF header', async () => {
-    expect((await request(app).post('/api/me/password').set(CSRF).send({ currentPassword: 'x', newPassword: 'yyyyyyyyyyyy' })).status).toBe(401);
+    expect((await request(app).post('/api/me/password').set(CSRF).send({ currentPassword: 'x', newPassword: 'yyyyyyyyyyyy' })).status).toBe(
+      401,
+    );
     const owner = await signedInAgent(app);
-    expect((await owner.agent.post('/api/me/password').send({ currentPassword: owner.password, newPassword: 'yyyyyyyyyyyy' })).status).toBe(403);
+    expect((await owner.agent.post('/api/me/password').send({ currentPassword: owner.password, newPassword: 'yyyyyyyyyyyy' })).status).toBe(
+      403,
+    );
   });
 });
 
@@ -83,7 +95,10 @@ describe('download everything', () => {
     const first = await bowWithSightIn(owner.agent, [20, 40, 60], {}, { nickname: 'Fen slider' });
     const second = await bowWithSightIn(owner.agent, [20, 50], {}, { nickname: 'Moor pins' });
     await checkWithPhoto(owner.agent, first.bow.id);
-    const change = await owner.agent.post(`/api/bows/${second.bow.id}/changes`).set(CSRF).send({ kind: 'rest', changedAt: new Date().toISOString(), note: 'new rest' });
+    const change = await owner.agent
+      .post(`/api/bows/${second.bow.id}/changes`)
+      .set(CSRF)
+      .send({ kind: 'rest', changedAt: new Date().toISOString(), note: 'new rest' });
     expect(change.status).toBe(201);
     const stranger = await signedInAgent(app);
     await bowWithSightIn(stranger.agent, [20, 40], {}, { nickname: 'Not hers' });
@@ -93,7 +108,11 @@ describe('download everything', () => {
     expect(res.headers['content-type']).toMatch(/^application\/json/);
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?pinwright-rhoswen-alder-everything\.json"?$/);
     const document = JSON.parse(res.text);
-    expect(document).toMatchObject({ format: 'pinwright-account-export', version: 1, account: { id: owner.user.id, name: 'Rhoswen Alder', email: owner.email } });
+    expect(document).toMatchObject({
+      format: 'pinwright-account-export',
+      version: 1,
+      account: { id: owner.user.id, name: 'Rhoswen Alder', email: owner.email },
+    });
     expect(document.bows.map((entry: { bow: { nickname: string } }) => entry.bow.nickname)).toEqual(['Fen slider', 'Moor pins']);
     const [fen, moor] = document.bows;
     // The same records as each bow's own export.
@@ -144,15 +163,41 @@ describe('deleting the account', () => {
 
     const friend = await signedInAgent(app, { name: 'Ebba Lindqvist' });
     const friends = await bowWithSightIn(friend.agent, [20, 40], {}, { nickname: 'Lindqvist hunter' });
-    await Share.create({ bowId: friends.bow.id, archerId: friend.user.id, techId: leaving.user.id, invitedEmail: leaving.email, state: 'active', acceptedAt: new Date(), revokedAt: null });
+    await Share.create({
+      bowId: friends.bow.id,
+      archerId: friend.user.id,
+      techId: leaving.user.id,
+      invitedEmail: leaving.email,
+      state: 'active',
+      acceptedAt: new Date(),
+      revokedAt: null,
+    });
     // An open invite to the leaving address, on another bow of the friend.
     const spare = await bowWithSightIn(friend.agent, [20, 40], {}, { nickname: 'Lindqvist spare' });
-    await Share.create({ bowId: spare.bow.id, archerId: friend.user.id, techId: null, invitedEmail: leaving.email, state: 'invited', acceptedAt: null, revokedAt: null });
+    await Share.create({
+      bowId: spare.bow.id,
+      archerId: friend.user.id,
+      techId: null,
+      invitedEmail: leaving.email,
+      state: 'invited',
+      acceptedAt: null,
+      revokedAt: null,
+    });
     const theirCheck = await leaving.agent.post(`/api/bows/${friends.bow.id}/checks`).set(CSRF).send({ place: 'bench' });
     expect(theirCheck.status).toBe(201);
-    const theirChange = await leaving.agent.post(`/api/bows/${friends.bow.id}/changes`).set(CSRF).send({ kind: 'string', changedAt: new Date().toISOString(), note: 'new string' });
+    const theirChange = await leaving.agent
+      .post(`/api/bows/${friends.bow.id}/changes`)
+      .set(CSRF)
+      .send({ kind: 'string', changedAt: new Date().toISOString(), note: 'new string' });
     expect(theirChange.status).toBe(201);
-    await recordAudit({ actorId: friend.user.id, action: 'invited', bowId: friends.bow.id, recordType: 'share', recordId: null, summary: `Invited ${leaving.email} to work on the bow` });
+    await recordAudit({
+      actorId: friend.user.id,
+      action: 'invited',
+      bowId: friends.bow.id,
+      recordType: 'share',
+      recordId: null,
+      summary: `Invited ${leaving.email} to work on the bow`,
+    });
     const second = await secondSignIn(leaving.email, leaving.password);
 
     const res = await leaving.agent.post('/api/me/delete').set(CSRF).send({ password: leaving.password });
@@ -160,7 +205,9 @@ describe('deleting the account', () => {
     expect(res.body.message).toBe('Your account and everything in it were deleted.');
     expect((await leaving.agent.get('/api/me')).status).toBe(401);
     expect((await second.get('/api/me')).status).toBe(401);
-    expect((await request(app).post('/api/auth/sign-in').set(CSRF).send({ email: leaving.email, password: leaving.password })).status).toBe(401);
+    expect((await request(app).post('/api/auth/sign-in').set(CSRF).send({ email: leaving.email, password: leaving.password })).status).toBe(
+      401,
+    );
 
     // The upload folder: its photo's file is gone.
     expect(fs.existsSync(path.join(config.uploadDir, storageKey))).toBe(false);
@@ -173,7 +220,10 @@ describe('deleting the account', () => {
     );
     expect(foreignKeys.length).toBeGreaterThan(5);
     for (const { table, column } of foreignKeys) {
-      const [{ n }] = await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${table}\` WHERE \`${column}\` = ?`, { replacements: [leaving.user.id], type: QueryTypes.SELECT });
+      const [{ n }] = await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${table}\` WHERE \`${column}\` = ?`, {
+        replacements: [leaving.user.id],
+        type: QueryTypes.SELECT,
+      });
       expect({ table, column, rows: Number(n) }).toEqual({ table, column, rows: 0 });
     }
     expect(await User.findByPk(leaving.user.id)).toBeNull();
@@ -184,7 +234,12 @@ describe('deleting the account', () => {
     for (const { table } of tables) {
       const rows = await sequelize.query(`SELECT * FROM \`${table}\``, { type: QueryTypes.SELECT });
       const text = JSON.stringify(rows);
-      expect({ table, email: text.includes(leaving.email), name: text.includes('Quillon Varga'), bow: text.includes('Varga ridge') }).toEqual({ table, email: false, name: false, bow: false });
+      expect({
+        table,
+        email: text.includes(leaving.email),
+        name: text.includes('Quillon Varga'),
+        bow: text.includes('Varga ridge'),
+      }).toEqual({ table, email: false, name: false, bow: false });
     }
 
     // The friend's bow keeps the check and the change, their author now unknown, shown as "a former account".

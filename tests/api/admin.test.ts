@@ -71,7 +71,9 @@ describe('changing roles and disabling', () => {
 
     const log = await admin.agent.get('/api/admin/audit');
     expect(log.status).toBe(200);
-    const entry = log.body.entries.find((e: { recordId: number; action: string }) => e.recordId === person.user.id && e.action === 'role-changed');
+    const entry = log.body.entries.find(
+      (e: { recordId: number; action: string }) => e.recordId === person.user.id && e.action === 'role-changed',
+    );
     expect(entry).toMatchObject({
       actor: { id: admin.user.id, name: 'Rowan Admin', role: 'admin' },
       recordType: 'account',
@@ -93,7 +95,9 @@ describe('changing roles and disabling', () => {
 
     const enabled = await admin.agent.patch(`/api/admin/accounts/${person.user.id}`).set(CSRF).send({ disabled: false });
     expect(enabled.body.account.disabled).toBe(false);
-    expect((await request(app).post('/api/auth/sign-in').set(CSRF).send({ email: person.email, password: person.password })).status).toBe(200);
+    expect((await request(app).post('/api/auth/sign-in').set(CSRF).send({ email: person.email, password: person.password })).status).toBe(
+      200,
+    );
 
     const log = await admin.agent.get('/api/admin/audit');
     // Entries about this account (a record of another type may share its id number).

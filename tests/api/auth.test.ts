@@ -8,7 +8,10 @@ afterAll(closeDb);
 describe('sign-up', () => {
   it('lists each field problem in plain words and writes nothing', async () => {
     const email = uniqueEmail('bad');
-    const res = await request(app).post('/api/auth/sign-up').set(CSRF).send({ name: '', email: email.replace('@', ''), password: 'short' });
+    const res = await request(app)
+      .post('/api/auth/sign-up')
+      .set(CSRF)
+      .send({ name: '', email: email.replace('@', ''), password: 'short' });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('validation_failed');
     expect(res.body.error.fields).toEqual({
@@ -32,7 +35,10 @@ describe('sign-up', () => {
 
   it('refuses a duplicate e-mail, in any letter case', async () => {
     const { email } = await signedInAgent(app);
-    const res = await request(app).post('/api/auth/sign-up').set(CSRF).send({ name: 'Again', email: email.toUpperCase(), password: 'another long one' });
+    const res = await request(app)
+      .post('/api/auth/sign-up')
+      .set(CSRF)
+      .send({ name: 'Again', email: email.toUpperCase(), password: 'another long one' });
     expect(res.status).toBe(409);
     expect(res.body.error.fields.email).toMatch(/already exists/);
     expect(await User.count({ where: { email } })).toBe(1);
@@ -45,7 +51,10 @@ describe('sign-in and sign-out', () => {
     const res = await request(app).post('/api/auth/sign-in').set(CSRF).send({ email, password: 'not the password' });
     expect(res.status).toBe(401);
     expect(res.body).toEqual({ error: { code: 'unauthorized', message: 'E-mail or password is wrong.' } });
-    const unknown = await request(app).post('/api/auth/sign-in').set(CSRF).send({ email: uniqueEmail('nobody'), password: 'whatever123' });
+    const unknown = await request(app)
+      .post('/api/auth/sign-in')
+      .set(CSRF)
+      .send({ email: uniqueEmail('nobody'), password: 'whatever123' });
     expect(unknown.status).toBe(401);
     expect(unknown.body).toEqual(res.body);
   });
@@ -54,7 +63,10 @@ describe('sign-in and sign-out', () => {
     const { email, password } = await signedInAgent(app);
     const agent = request.agent(app);
     expect((await agent.get('/api/me')).status).toBe(401);
-    const res = await agent.post('/api/auth/sign-in').set(CSRF).send({ email: ` ${email.toUpperCase()} `, password });
+    const res = await agent
+      .post('/api/auth/sign-in')
+      .set(CSRF)
+      .send({ email: ` ${email.toUpperCase()} `, password });
     expect(res.status).toBe(200);
     expect(res.headers['set-cookie'][0]).toMatch(/pinwright\.sid=.*HttpOnly.*SameSite=Lax/i);
     expect((await agent.get('/api/me')).status).toBe(200);
@@ -69,7 +81,10 @@ describe('sign-in and sign-out', () => {
     const { email } = await signedInAgent(limited);
     const statuses: number[] = [];
     for (let i = 0; i < 11; i += 1) {
-      const res = await request(limited).post('/api/auth/sign-in').set(CSRF).send({ email, password: `wrong guess ${i}` });
+      const res = await request(limited)
+        .post('/api/auth/sign-in')
+        .set(CSRF)
+        .send({ email, password: `wrong guess ${i}` });
       statuses.push(res.status);
     }
     expect(statuses.slice(0, 10).every((s) => s === 401)).toBe(true);

@@ -84,7 +84,12 @@ export async function bowWithBuild(agent: Agent, bow: Record<string, unknown> = 
 }
 
 /** A bow, a build and a sight-in with marks at `distances`, through the API. */
-export async function bowWithSightIn(agent: Agent, distances = [20, 40, 60], sightIn: Record<string, unknown> = {}, bow: Record<string, unknown> = {}) {
+export async function bowWithSightIn(
+  agent: Agent,
+  distances = [20, 40, 60],
+  sightIn: Record<string, unknown> = {},
+  bow: Record<string, unknown> = {},
+) {
   const made = await bowWithBuild(agent, bow);
   const res = await agent
     .post(`/api/bows/${made.bow.id}/sight-ins`)

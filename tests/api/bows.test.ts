@@ -33,10 +33,16 @@ describe('POST /api/bows', () => {
 
   it('asks a fixed multi-pin sight for its pin distances, each once', async () => {
     const { agent } = await signedInAgent(app);
-    const none = await agent.post('/api/bows').set(CSRF).send(bowBody({ sightKind: 'fixed-multi-pin', pinDistances: [] }));
+    const none = await agent
+      .post('/api/bows')
+      .set(CSRF)
+      .send(bowBody({ sightKind: 'fixed-multi-pin', pinDistances: [] }));
     expect(none.status).toBe(400);
     expect(none.body.error.fields).toEqual({ pinDistances: 'List the distance of each fixed pin' });
-    const twice = await agent.post('/api/bows').set(CSRF).send(bowBody({ sightKind: 'fixed-multi-pin', pinDistances: [20, 30, 30] }));
+    const twice = await agent
+      .post('/api/bows')
+      .set(CSRF)
+      .send(bowBody({ sightKind: 'fixed-multi-pin', pinDistances: [20, 30, 30] }));
     expect(twice.body.error.fields).toEqual({ 'pinDistances.2': 'Pin distance 30 is listed twice' });
   });
 
@@ -45,7 +51,16 @@ describe('POST /api/bows', () => {
     const res = await agent
       .post('/api/bows')
       .set(CSRF)
-      .send({ nickname: 'Fern gap', hand: 'left', drawWeightLb: 55, drawLengthMm: 698.5, sightKind: 'fixed-multi-pin', sightRadiusMm: 790, peepHeightMm: 104, pinDistances: [20, 30, 40, 50, 60] });
+      .send({
+        nickname: 'Fern gap',
+        hand: 'left',
+        drawWeightLb: 55,
+        drawLengthMm: 698.5,
+        sightKind: 'fixed-multi-pin',
+        sightRadiusMm: 790,
+        peepHeightMm: 104,
+        pinDistances: [20, 30, 40, 50, 60],
+      });
     expect(res.status).toBe(201);
     expect(res.body.bow).toMatchObject({
       nickname: 'Fern gap',
@@ -73,30 +88,52 @@ describe('POST /api/bows', () => {
 describe('GET /api/bows (the Bench)', () => {
   it('lists only the account’s bows, each with its readiness', async () => {
     const { agent } = await signedInAgent(app);
-    const empty = await agent.post('/api/bows').set(CSRF).send(bowBody({ nickname: 'Bare bow' }));
+    const empty = await agent
+      .post('/api/bows')
+      .set(CSRF)
+      .send(bowBody({ nickname: 'Bare bow' }));
     const { bow, sightIn } = await bowWithSightIn(agent, [20, 35, 50]);
-    const tapeRes = await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, label: 'Bench tape' });
+    const tapeRes = await agent
+      .post(`/api/sight-ins/${sightIn.id}/tapes`)
+      .set(CSRF)
+      .send({ fromDistance: 20, toDistance: 60, label: 'Bench tape' });
     expect(tapeRes.status).toBe(201);
     // A newer sight-in with two marks becomes the latest.
     const newer = await agent
       .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
-      .send({ buildId: sightIn.buildId, date: '2026-11-20', marks: sightIn.marks.slice(0, 2).map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })) });
+      .send({
+        buildId: sightIn.buildId,
+        date: '2026-11-20',
+        marks: sightIn.marks.slice(0, 2).map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })),
+      });
     expect(newer.status).toBe(201);
 
     const other = await signedInAgent(app);
-    await other.agent.post('/api/bows').set(CSRF).send(bowBody({ nickname: 'Not yours' }));
+    await other.agent
+      .post('/api/bows')
+      .set(CSRF)
+      .send(bowBody({ nickname: 'Not yours' }));
 
     const res = await agent.get('/api/bows');
     expect(res.status).toBe(200);
     const parsed = bowListResponseSchema.parse(res.body);
     expect(parsed.bows.map((b) => b.nickname)).toEqual(['Bare bow', 'Test slider']);
-    expect(parsed.bows[0]).toMatchObject({ id: empty.body.bow.id, readiness: { latestSightIn: null, buildCount: 0, sightInCount: 0, hasTape: false } });
+    expect(parsed.bows[0]).toMatchObject({
+      id: empty.body.bow.id,
+      readiness: { latestSightIn: null, buildCount: 0, sightInCount: 0, hasTape: false },
+    });
     // `level` is filled in by the level-check feature; the Bench reads it from here.
     expect(parsed.bows[0].readiness).toHaveProperty('level');
     const readiness = parsed.bows[1].readiness;
     expect(readiness).toMatchObject({ buildCount: 1, sightInCount: 2, hasTape: true });
-    expect(readiness.latestSightIn).toMatchObject({ id: newer.body.sightIn.id, date: '2026-11-20', markCount: 2, longestDistance: 35, longestUnit: 'yd' });
+    expect(readiness.latestSightIn).toMatchObject({
+      id: newer.body.sightIn.id,
+      date: '2026-11-20',
+      markCount: 2,
+      longestDistance: 35,
+      longestUnit: 'yd',
+    });
     expect(readiness.latestSightIn!.rmsMm).toBeCloseTo(newer.body.sightIn.fit.rmsMm, 9);
   });
 });
@@ -108,7 +145,11 @@ describe('GET /api/bows/:id', () => {
     const older = await agent
       .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
-      .send({ buildId: build.id, date: '2026-08-01', marks: sightIn.marks.map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })) });
+      .send({
+        buildId: build.id,
+        date: '2026-08-01',
+        marks: sightIn.marks.map(({ distance, unit, scaleMm }: never) => ({ distance, unit, scaleMm })),
+      });
     await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 70, label: 'Detail tape' });
 
     const res = await agent.get(`/api/bows/${bow.id}`);
@@ -118,7 +159,9 @@ describe('GET /api/bows/:id', () => {
     expect(detail.sightIns.map((s) => s.id)).toEqual([sightIn.id, older.body.sightIn.id]);
     expect(detail.sightIns[0].summary).toMatchObject({ markCount: 3, longestDistance: 60, longestUnit: 'yd' });
     expect(detail.sightIns[0].summary.speedFps).toBeCloseTo(sightIn.fit.speedFps, 9);
-    expect(detail.tapes).toEqual([expect.objectContaining({ sightInId: sightIn.id, bowId: bow.id, label: 'Detail tape', fromDistance: 20, toDistance: 70 })]);
+    expect(detail.tapes).toEqual([
+      expect.objectContaining({ sightInId: sightIn.id, bowId: bow.id, label: 'Detail tape', fromDistance: 20, toDistance: 70 }),
+    ]);
   });
 });
 
@@ -163,7 +206,10 @@ describe('DELETE /api/bows/:id', () => {
 describe('ownership', () => {
   it('gives another account a 404 on every bow route, and changes nothing', async () => {
     const owner = await signedInAgent(app);
-    const made = await owner.agent.post('/api/bows').set(CSRF).send(bowBody({ nickname: 'Private bow' }));
+    const made = await owner.agent
+      .post('/api/bows')
+      .set(CSRF)
+      .send(bowBody({ nickname: 'Private bow' }));
     const id = made.body.bow.id;
     const stranger = await signedInAgent(app);
     const responses = [
@@ -224,7 +270,10 @@ describe('demo scenario (server/seed/bows.ts)', () => {
     const archer = (await User.findByPk(user.id))!;
     await seedBows(archer);
     const bows = await Bow.findAll({ where: { userId: archer.id } });
-    const sightIns = await SightIn.findAll({ where: { bowId: { [Op.in]: bows.map((bow) => bow.id) } }, include: [{ model: SightInMark, as: 'marks' }] });
+    const sightIns = await SightIn.findAll({
+      where: { bowId: { [Op.in]: bows.map((bow) => bow.id) } },
+      include: [{ model: SightInMark, as: 'marks' }],
+    });
     expect(new Set(sightIns.map((sightIn) => sightIn.marks!.length))).toEqual(new Set([2, 3, 5]));
     for (const sightIn of sightIns) {
       const fit = sightIn.fit as { rmsMm: number; speedFps: number };

@@ -14,7 +14,15 @@ export const BOW_VIRTUAL_MASS_GR = 300;
 export const trueSpeedFps = (massGr: number) => mpsToFps(Math.sqrt((2 * BOW_ENERGY_J) / grainsToKg(massGr + BOW_VIRTUAL_MASS_GR)));
 
 /** A lighter build than buildBody's (≈ 375 gr against ≈ 501 gr), 6.0 mm shaft. */
-export const lightBuildFields = { name: 'Test light', grainsPerInch: 8.2, pointGr: 100, insertGr: 16, vaneWeightGr: 6, wrapGr: 0, diameterMm: 6.0 };
+export const lightBuildFields = {
+  name: 'Test light',
+  grainsPerInch: 8.2,
+  pointGr: 100,
+  insertGr: 16,
+  vaneWeightGr: 6,
+  wrapGr: 0,
+  diameterMm: 6.0,
+};
 
 type Made = { id: number; name: string; derived: { totalGr: number }; diameterMm: number };
 
@@ -31,11 +39,22 @@ export async function addBuild(agent: Agent, bowId: number, fields: Record<strin
 
 /** The sight the marks of `build` come from: knownSight's geometry carrying that arrow at its true speed. */
 export function sightFor(build: Made, air: { altitudeM?: number; temperatureC?: number } = {}) {
-  return { ...knownSight, arrowMassGr: build.derived.totalGr, arrowDiameterMm: build.diameterMm, speedFps: trueSpeedFps(build.derived.totalGr), ...air };
+  return {
+    ...knownSight,
+    arrowMassGr: build.derived.totalGr,
+    arrowDiameterMm: build.diameterMm,
+    speedFps: trueSpeedFps(build.derived.totalGr),
+    ...air,
+  };
 }
 
 /** Posts a sight-in of `build` with marks at `distances` drawn from sightFor(build). */
-export async function addSightIn(agent: Agent, bowId: number, build: Made, options: { distances?: number[]; date?: string; altitudeM?: number; temperatureC?: number } = {}) {
+export async function addSightIn(
+  agent: Agent,
+  bowId: number,
+  build: Made,
+  options: { distances?: number[]; date?: string; altitudeM?: number; temperatureC?: number } = {},
+) {
   const distances = options.distances ?? [20, 40, 60];
   const air: { altitudeM?: number; temperatureC?: number } = {};
   if (options.altitudeM !== undefined) air.altitudeM = options.altitudeM;

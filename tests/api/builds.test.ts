@@ -31,7 +31,10 @@ describe('POST /api/bows/:bowId/builds', () => {
       vaneCount: 'Number of vanes must be a whole number',
       speedFps: 'Chronographed speed must be at most 450 fps',
     });
-    const balance = await agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ balancePointMm: 800, cutLengthMm: 700 }));
+    const balance = await agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ balancePointMm: 800, cutLengthMm: 700 }));
     expect(balance.status).toBe(400);
     expect(balance.body.error.fields).toEqual({ balancePointMm: 'Balance point must be shorter than the cut length' });
     expect(await ArrowBuild.count({ where: { bowId: bow.id } })).toBe(0);
@@ -47,7 +50,17 @@ describe('POST /api/bows/:bowId/builds', () => {
     const stored = (await ArrowBuild.findByPk(build.id))!;
 
     const cutLengthIn = body.cutLengthMm / 25.4; // 1 in = 25.4 mm exactly (international yard and pound, 1959)
-    const totalGr = totalArrowGrains({ shaftGpi: 9.3, cutLengthIn, pointGr: 150, insertGr: 50, nockGr: 9, vaneCount: 3, vaneGr: 7, wrapGr: 8, collarGr: 0 });
+    const totalGr = totalArrowGrains({
+      shaftGpi: 9.3,
+      cutLengthIn,
+      pointGr: 150,
+      insertGr: 50,
+      nockGr: 9,
+      vaneCount: 3,
+      vaneGr: 7,
+      wrapGr: 8,
+      collarGr: 0,
+    });
     const energy = kineticEnergy({ massGr: totalGr, speedFps: 276 });
     const impulse = momentum({ massGr: totalGr, speedFps: 276 });
     expect(stored.totalGr).toBeCloseTo(totalGr, 9);
@@ -72,7 +85,10 @@ describe('POST /api/bows/:bowId/builds', () => {
   it('leaves energy and momentum empty without a speed, and FOC without a balance point', async () => {
     const { agent } = await signedInAgent(app);
     const bow = await newBow(agent);
-    const res = await agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ speedFps: null, balancePointMm: null }));
+    const res = await agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ speedFps: null, balancePointMm: null }));
     expect(res.status).toBe(201);
     expect(res.body.build.derived).toEqual({
       totalGr: expect.any(Number),
@@ -89,7 +105,10 @@ describe('PATCH /api/builds/:id', () => {
   it('recomputes the derived quantities on every save', async () => {
     const { agent } = await signedInAgent(app);
     const bow = await newBow(agent);
-    const made = await agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ speedFps: 280 }));
+    const made = await agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ speedFps: 280 }));
     const res = await agent.patch(`/api/builds/${made.body.build.id}`).set(CSRF).send({ pointGr: 125 });
     expect(res.status).toBe(200);
     // 25 gr lighter point: 500.725 − 25 (arithmetic).
@@ -108,7 +127,10 @@ describe('GET /api/bows/:bowId/builds and /api/builds/:id', () => {
   it('lists the bow’s builds with how many sight-ins use each', async () => {
     const { agent } = await signedInAgent(app);
     const { bow, build } = await bowWithSightIn(agent, [20, 60]);
-    await agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Spare' }));
+    await agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ name: 'Spare' }));
     const list = await agent.get(`/api/bows/${bow.id}/builds`);
     expect(list.status).toBe(200);
     expect(list.body.builds.map((b: { name: string; sightInCount: number }) => [b.name, b.sightInCount])).toEqual([

@@ -63,7 +63,8 @@ describe('GET /api/bows/:bowId/compare', () => {
     // ISO 2533 troposphere at 2700 m (geopotential ≈ 2698.9 m) with 5 °C is about 0.912 kg/m³ (standard p ≈ 72.8 kPa / (287.053 J/(kg·K) · 278.15 K)).
     expect(high.comparison.commonAirDensityKgM3).toBeGreaterThan(0.9);
     expect(high.comparison.commonAirDensityKgM3).toBeLessThan(0.95);
-    const at = (body: typeof high, distance: number) => body.comparison.rows.find((row: { distance: number }) => row.distance === distance).marks[0].markMm;
+    const at = (body: typeof high, distance: number) =>
+      body.comparison.rows.find((row: { distance: number }) => row.distance === distance).marks[0].markMm;
     expect(at(high, 80)).toBeLessThan(at(sighted, 80));
     expect(high.comparison.builds[0].drop.dropMm).toBeLessThan(sighted.comparison.builds[0].drop.dropMm);
   });
@@ -74,7 +75,9 @@ describe('GET /api/bows/:bowId/compare', () => {
     const fresh = await addBuild(agent, bowId, { ...lightBuildFields, name: 'Unshot broadhead build' }, false);
     const res = await agent.get(`/api/bows/${bowId}/compare?builds=${heavy.id},${fresh.id}`);
     expect(res.status).toBe(409);
-    expect(res.body.error.message).toBe('“Unshot broadhead build” has no fitted sight-in yet: sight it in (two marks are enough) before comparing.');
+    expect(res.body.error.message).toBe(
+      '“Unshot broadhead build” has no fitted sight-in yet: sight it in (two marks are enough) before comparing.',
+    );
     expect(res.body.error.fields.builds).toBe(res.body.error.message);
   });
 
@@ -89,7 +92,10 @@ describe('GET /api/bows/:bowId/compare', () => {
       [`builds=${heavy.id},${heavy.id}`, { 'query.builds.1': `Build ${heavy.id} is listed twice` }],
       [`builds=${heavy.id},${light.id}&at=500`, { 'query.at': 'Forgiveness distance must be at most 100' }],
       [`builds=${heavy.id},${light.id}&windowMm=2`, { 'query.windowMm': 'Window must be at least 10 mm' }],
-      [`builds=${heavy.id},${light.id}&temperatureC=5`, { 'query.altitudeM': 'Enter the altitude for a common air (the temperature alone is not enough)' }],
+      [
+        `builds=${heavy.id},${light.id}&temperatureC=5`,
+        { 'query.altitudeM': 'Enter the altitude for a common air (the temperature alone is not enough)' },
+      ],
     ];
     for (const [query, fields] of cases) {
       const res = await agent.get(`/api/bows/${bowId}/compare?${query}`);

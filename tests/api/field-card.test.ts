@@ -15,7 +15,11 @@ const asBuffer = (res: NodeJS.ReadableStream, done: (err: Error | null, body: Bu
   res.on('data', (chunk: Buffer) => chunks.push(chunk));
   res.on('end', () => done(null, Buffer.concat(chunks)));
 };
-const download = (agent: Agent, url: string) => agent.get(url).buffer(true).parse(asBuffer as never);
+const download = (agent: Agent, url: string) =>
+  agent
+    .get(url)
+    .buffer(true)
+    .parse(asBuffer as never);
 
 /** 72 PostScript points per inch and 25.4 mm per inch (exact, international yard and pound, 1959). */
 const POINTS_PER_MM = 72 / 25.4;
@@ -51,7 +55,9 @@ describe('GET /api/sight-ins/:id/field-card', () => {
   it('shifts the marks for altitude and temperature: up the scale in thin air, none in the sight-in’s own air', async () => {
     const { agent } = await signedInAgent(app);
     const { sightIn } = await bowWithSightIn(agent, [20, 40, 60], { altitudeM: 600, temperatureC: 12 });
-    const high = fieldCardResponseSchema.parse((await agent.get(`/api/sight-ins/${sightIn.id}/field-card?altitudeM=2700&temperatureC=5&angles=-30,0&distances=20,40,60`)).body).card;
+    const high = fieldCardResponseSchema.parse(
+      (await agent.get(`/api/sight-ins/${sightIn.id}/field-card?altitudeM=2700&temperatureC=5&angles=-30,0&distances=20,40,60`)).body,
+    ).card;
     expect(high.sameAirAsSightIn).toBe(false);
     expect(high.air).toMatchObject({ altitudeM: 2700, temperatureC: 5 });
     expect(high.sightIn).toMatchObject({ altitudeM: 600, temperatureC: 12 });
@@ -63,7 +69,9 @@ describe('GET /api/sight-ins/:id/field-card', () => {
     expect(level40.aimAsIf!).toBeLessThan(40);
     expect(level40.markMm!).toBeCloseTo(high.shift[1].markMm!, 9);
 
-    const same = fieldCardResponseSchema.parse((await agent.get(`/api/sight-ins/${sightIn.id}/field-card?altitudeM=600&temperatureC=12`)).body).card;
+    const same = fieldCardResponseSchema.parse(
+      (await agent.get(`/api/sight-ins/${sightIn.id}/field-card?altitudeM=600&temperatureC=12`)).body,
+    ).card;
     same.shift.forEach((row) => expect(Math.abs(row.shiftMm!)).toBeLessThan(1e-9));
   });
 
@@ -92,7 +100,11 @@ describe('GET /api/sight-ins/:id/field-card', () => {
     const { agent: stranger } = await signedInAgent(app);
     for (const suffix of ['field-card', 'field-card.svg', 'field-card.pdf']) {
       const res = await stranger.get(`/api/sight-ins/${sightIn.id}/${suffix}`);
-      expect({ suffix, status: res.status, message: res.body.error?.message }).toEqual({ suffix, status: 404, message: 'That sight-in was not found.' });
+      expect({ suffix, status: res.status, message: res.body.error?.message }).toEqual({
+        suffix,
+        status: 404,
+        message: 'That sight-in was not found.',
+      });
     }
   });
 });
@@ -108,7 +120,11 @@ describe('the printed field card', () => {
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?field-card-test-slider-2026-11-02\.svg"?$/);
     const text = res.body.toString('utf8');
     const errors: string[] = [];
-    const doc = new DOMParser({ onError: (level, message) => { if (level !== 'warning') errors.push(message); } }).parseFromString(text, 'image/svg+xml');
+    const doc = new DOMParser({
+      onError: (level, message) => {
+        if (level !== 'warning') errors.push(message);
+      },
+    }).parseFromString(text, 'image/svg+xml');
     expect(errors).toEqual([]);
     const svg = doc.documentElement!;
     expect(svg.getAttribute('width')).toBe('100mm');
@@ -117,21 +133,33 @@ describe('the printed field card', () => {
     expect(doc.getElementsByTagName('text').length).toBe(0);
     expect(text).not.toMatch(/<text[\s>]/);
     const json = fieldCardResponseSchema.parse((await agent.get(`/api/sight-ins/${sightIn.id}/field-card?${query}`)).body).card;
-    const cells = Array.from(doc.getElementsByTagName('g') as unknown as ArrayLike<Element>).filter((g) => g.getAttribute('class') === 'cell');
+    const cells = Array.from(doc.getElementsByTagName('g') as unknown as ArrayLike<Element>).filter(
+      (g) => g.getAttribute('class') === 'cell',
+    );
     expect(cells).toHaveLength(9);
     for (const cell of cells) {
-      const row = json.rows.find((candidate) => candidate.angleDeg === Number(cell.getAttribute('data-angle')) && candidate.distance === Number(cell.getAttribute('data-distance')))!;
+      const row = json.rows.find(
+        (candidate) =>
+          candidate.angleDeg === Number(cell.getAttribute('data-angle')) &&
+          candidate.distance === Number(cell.getAttribute('data-distance')),
+      )!;
       expect(Number(cell.getAttribute('data-mark-mm'))).toBeCloseTo(row.markMm!, 9);
     }
-    const labels = Array.from(doc.getElementsByTagName('path') as unknown as ArrayLike<Element>).map((path) => path.getAttribute('aria-label'));
+    const labels = Array.from(doc.getElementsByTagName('path') as unknown as ArrayLike<Element>).map((path) =>
+      path.getAttribute('aria-label'),
+    );
     expect(labels).toContain('Marks for 2700 m, standard temperature');
     expect(labels).toContain('Slope and altitude corrections are estimates; confirm on real terrain.');
     // The crosswind table: 5, 10, 15 mph at each distance, the JSON's holds, and the wind caution.
     expect(json.wind.rows.map((row) => row.speed)).toEqual([5, 10, 15]);
-    const wind = Array.from(doc.getElementsByTagName('g') as unknown as ArrayLike<Element>).filter((g) => (g.getAttribute('data-wind') ?? '') !== '');
+    const wind = Array.from(doc.getElementsByTagName('g') as unknown as ArrayLike<Element>).filter(
+      (g) => (g.getAttribute('data-wind') ?? '') !== '',
+    );
     expect(wind).toHaveLength(9);
     for (const box of wind) {
-      const cell = json.wind.rows.find((row) => row.speed === Number(box.getAttribute('data-wind')))!.cells.find((c) => c.distance === Number(box.getAttribute('data-distance')))!;
+      const cell = json.wind.rows
+        .find((row) => row.speed === Number(box.getAttribute('data-wind')))!
+        .cells.find((c) => c.distance === Number(box.getAttribute('data-distance')))!;
       expect(Number(box.getAttribute('data-hold-mm'))).toBeCloseTo(cell.holdMm!, 9);
     }
     expect(labels.join(' ')).toMatch(/only practice in wind confirms them/);
@@ -148,7 +176,9 @@ describe('the printed field card', () => {
     expect(res.headers['content-disposition']).toMatch(/field-card-test-slider-2026-11-02\.pdf/);
     const pdf = res.body as Buffer;
     expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
-    const boxes = [...pdf.toString('latin1').matchAll(/\/MediaBox\s*\[\s*([\d.\s-]+)\]/g)].map((match) => match[1].trim().split(/\s+/).map(Number));
+    const boxes = [...pdf.toString('latin1').matchAll(/\/MediaBox\s*\[\s*([\d.\s-]+)\]/g)].map((match) =>
+      match[1].trim().split(/\s+/).map(Number),
+    );
     expect(boxes).toHaveLength(1);
     const [x0, y0, x1, y1] = boxes[0];
     expect(Math.abs(x1 - x0 - 100 * POINTS_PER_MM)).toBeLessThan(0.01);

@@ -50,14 +50,24 @@ describe('bodies the JSON parser cannot read', () => {
 
   it('refuses Content-Encoding: compress with 415 on any /api path', async () => {
     for (const path of ['/api/auth/sign-up', '/api/bows', `/api/bows/${bowId}/shares`, '/api/no/such/path']) {
-      const res = await agent.post(path).set(CSRF).set('Content-Type', 'application/json').set('Content-Encoding', 'compress').send(Buffer.from('{}'));
+      const res = await agent
+        .post(path)
+        .set(CSRF)
+        .set('Content-Type', 'application/json')
+        .set('Content-Encoding', 'compress')
+        .send(Buffer.from('{}'));
       expectShape(res, 415);
       expect(res.body.error.code).toBe('unsupported_encoding');
     }
   });
 
   it('refuses a "gzip" body that is not gzip with 400, and reads a real gzip body', async () => {
-    const res = await request(app).post('/api/auth/sign-in').set(CSRF).set('Content-Type', 'application/json').set('Content-Encoding', 'gzip').send(Buffer.from('{"email":"x"}'));
+    const res = await request(app)
+      .post('/api/auth/sign-in')
+      .set(CSRF)
+      .set('Content-Type', 'application/json')
+      .set('Content-Encoding', 'gzip')
+      .send(Buffer.from('{"email":"x"}'));
     expectShape(res, 400);
     // supertest re-encodes a Buffer sent with Content-Encoding, so the real gzip body goes over plain http.
     const body = zlib.gzipSync(Buffer.from(JSON.stringify({ email: 'nobody@example.test', password: 'a password here' })));
@@ -85,7 +95,14 @@ describe('bodies the JSON parser cannot read', () => {
   });
 
   it('still refuses a body over 1 MB with 413 and broken JSON with 400', async () => {
-    expectShape(await request(app).post('/api/auth/sign-in').set(CSRF).set('Content-Type', 'application/json').send(`{"x":"${'a'.repeat(1_100_000)}"}`), 413);
+    expectShape(
+      await request(app)
+        .post('/api/auth/sign-in')
+        .set(CSRF)
+        .set('Content-Type', 'application/json')
+        .send(`{"x":"${'a'.repeat(1_100_000)}"}`),
+      413,
+    );
     expectShape(await request(app).post('/api/auth/sign-in').set(CSRF).set('Content-Type', 'application/json').send('{"x":'), 400);
   });
 });
@@ -135,7 +152,10 @@ describe('malformed photo uploads', () => {
   });
 
   it('refuses a truncated part', async () => {
-    const res = await multipart('XyZ', '--XyZ\r\nContent-Disposition: form-data; name="photo"; filename="a.png"\r\nContent-Type: image/png\r\n\r\n\x89PNG\r\n');
+    const res = await multipart(
+      'XyZ',
+      '--XyZ\r\nContent-Disposition: form-data; name="photo"; filename="a.png"\r\nContent-Type: image/png\r\n\r\n\x89PNG\r\n',
+    );
     expectShape(res, 400);
   });
 
@@ -146,7 +166,10 @@ describe('malformed photo uploads', () => {
   });
 
   it('answers a NUL in the file name with a 4xx, never a 500', async () => {
-    const res = await multipart('XyZ', '--XyZ\r\nContent-Disposition: form-data; name="photo"; filename="a\u0000b.png"\r\nContent-Type: image/png\r\n\r\n\x89PNG\r\n\x1a\n\r\n--XyZ--\r\n');
+    const res = await multipart(
+      'XyZ',
+      '--XyZ\r\nContent-Disposition: form-data; name="photo"; filename="a\u0000b.png"\r\nContent-Type: image/png\r\n\r\n\x89PNG\r\n\x1a\n\r\n--XyZ--\r\n',
+    );
     expect(res.status).toBeGreaterThanOrEqual(400);
     expect(res.status).toBeLessThan(500);
     expect(res.body.error).toMatchObject({ code: expect.any(String), message: expect.any(String) });

@@ -54,7 +54,11 @@ describe('Idempotency-Key', () => {
     const body = { buildId: build.id, date: '2026-11-30', marks: knownMarks([20, 60]) };
     await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', key).send(body);
     await settled(user.id, key);
-    const changed = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', key).send({ ...body, date: '2026-11-29' });
+    const changed = await agent
+      .post(`/api/bows/${bow.id}/sight-ins`)
+      .set(CSRF)
+      .set('Idempotency-Key', key)
+      .send({ ...body, date: '2026-11-29' });
     expect(changed.status).toBe(422);
     expect(changed.body.error.code).toBe('idempotency_mismatch');
     const bad = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).set('Idempotency-Key', 'x y').send(body);

@@ -87,8 +87,20 @@ describe('level checks: start, work, resume, complete', () => {
     const res = await owner.agent.post(`/api/bows/${bowId}/checks`).set(CSRF).send({ place: 'bench' });
     expect(res.status).toBe(201);
     checkId = res.body.check.id;
-    expect(res.body.check).toMatchObject({ bowId, place: 'bench', status: 'open', completedAt: null, performedBy: { id: owner.user.id, name: 'Level Owner' } });
-    expect(res.body.check.steps.map((s: { step: string }) => s.step)).toEqual(['setup', 'first-axis', 'second-axis', 'third-axis', 'range']);
+    expect(res.body.check).toMatchObject({
+      bowId,
+      place: 'bench',
+      status: 'open',
+      completedAt: null,
+      performedBy: { id: owner.user.id, name: 'Level Owner' },
+    });
+    expect(res.body.check.steps.map((s: { step: string }) => s.step)).toEqual([
+      'setup',
+      'first-axis',
+      'second-axis',
+      'third-axis',
+      'range',
+    ]);
     expect(res.body.check.steps.every((s: { result: unknown }) => s.result === null)).toBe(true);
   });
 
@@ -107,7 +119,9 @@ describe('level checks: start, work, resume, complete', () => {
     const second = await owner.agent
       .patch(`/api/checks/${checkId}`)
       .set(CSRF)
-      .send({ steps: [{ step: 'first-axis', result: 'adjusted', reading: 1.5, readingUnit: 'deg', adjustment: ' Turned the mount a little ' }] });
+      .send({
+        steps: [{ step: 'first-axis', result: 'adjusted', reading: 1.5, readingUnit: 'deg', adjustment: ' Turned the mount a little ' }],
+      });
     expect(second.status).toBe(200);
 
     // Resume: the open check is found from the bow, and reads back as saved.
@@ -157,7 +171,10 @@ describe('level checks: start, work, resume, complete', () => {
   });
 
   it('keeps a completed check as a record', async () => {
-    const res = await owner.agent.patch(`/api/checks/${checkId}`).set(CSRF).send({ steps: [{ step: 'setup', result: 'fail' }] });
+    const res = await owner.agent
+      .patch(`/api/checks/${checkId}`)
+      .set(CSRF)
+      .send({ steps: [{ step: 'setup', result: 'fail' }] });
     expect(res.status).toBe(409);
     const discard = await owner.agent.delete(`/api/checks/${checkId}`).set(CSRF);
     expect(discard.status).toBe(409);
@@ -184,10 +201,7 @@ describe('level checks: start, work, resume, complete', () => {
   });
 
   it('does not count a change logged before the check', async () => {
-    const res = await owner.agent
-      .post(`/api/bows/${bowId}/changes`)
-      .set(CSRF)
-      .send({ kind: 'peep', changedAt: '2020-01-02T10:00:00Z' });
+    const res = await owner.agent.post(`/api/bows/${bowId}/changes`).set(CSRF).send({ kind: 'peep', changedAt: '2020-01-02T10:00:00Z' });
     expect(res.status).toBe(201);
     expect(res.body.level.state).toBe('verified');
   });
@@ -221,7 +235,11 @@ describe('level checks: validation', () => {
     checkId = res.body.check.id;
   });
 
-  const patch = (body: unknown) => owner.agent.patch(`/api/checks/${checkId}`).set(CSRF).send(body as object);
+  const patch = (body: unknown) =>
+    owner.agent
+      .patch(`/api/checks/${checkId}`)
+      .set(CSRF)
+      .send(body as object);
 
   it('refuses an unknown place and a bad bow id', async () => {
     const place = await owner.agent.post(`/api/bows/${bowId}/checks`).set(CSRF).send({ place: 'garage' });
@@ -256,7 +274,12 @@ describe('level checks: validation', () => {
   });
 
   it('refuses a step listed twice, an empty update and complete: false', async () => {
-    const twice = await patch({ steps: [{ step: 'setup', result: 'pass' }, { step: 'setup', result: 'fail' }] });
+    const twice = await patch({
+      steps: [
+        { step: 'setup', result: 'pass' },
+        { step: 'setup', result: 'fail' },
+      ],
+    });
     expect(twice.body.error.fields['steps.1.step']).toBe('The set-up is listed twice');
     const empty = await patch({});
     expect(empty.status).toBe(400);
@@ -266,7 +289,10 @@ describe('level checks: validation', () => {
   });
 
   it('refuses a change without a valid kind or time, or in the future', async () => {
-    const kind = await owner.agent.post(`/api/bows/${bowId}/changes`).set(CSRF).send({ kind: 'paint', changedAt: new Date().toISOString() });
+    const kind = await owner.agent
+      .post(`/api/bows/${bowId}/changes`)
+      .set(CSRF)
+      .send({ kind: 'paint', changedAt: new Date().toISOString() });
     expect(kind.status).toBe(400);
     expect(kind.body.error.fields.kind).toMatch(/^Choose what changed/);
     const when = await owner.agent.post(`/api/bows/${bowId}/changes`).set(CSRF).send({ kind: 'rest', changedAt: 'last Tuesday' });
@@ -311,15 +337,20 @@ describe('photos', () => {
     const check = await owner.agent.get(`/api/checks/${checkId}`);
     expect(check.body.check.steps[2].photo.id).toBe(photoId);
 
-    const served = await owner.agent.get(`/api/photos/${photoId}`).buffer(true).parse((r, done) => {
-      const parts: Buffer[] = [];
-      r.on('data', (part: Buffer) => parts.push(part));
-      r.on('end', () => done(null, Buffer.concat(parts)));
-    });
+    const served = await owner.agent
+      .get(`/api/photos/${photoId}`)
+      .buffer(true)
+      .parse((r, done) => {
+        const parts: Buffer[] = [];
+        r.on('data', (part: Buffer) => parts.push(part));
+        r.on('end', () => done(null, Buffer.concat(parts)));
+      });
     expect(served.status).toBe(200);
     expect(served.headers['content-type']).toBe('image/png');
     expect((served.body as Buffer).length).toBe(res.body.photo.sizeBytes);
-    const decoded = await sharp(served.body as Buffer).raw().toBuffer({ resolveWithObject: true });
+    const decoded = await sharp(served.body as Buffer)
+      .raw()
+      .toBuffer({ resolveWithObject: true });
     expect(decoded.info).toMatchObject({ width: 4, height: 3, format: 'raw' });
     expect([...decoded.data].every((value) => value === 0x80)).toBe(true); // the same grey pixels
   });
@@ -426,7 +457,8 @@ describe('another account sees nothing (404 everywhere)', () => {
     let res;
     if (method === 'GET') res = await agent.get(url);
     else if (method === 'DELETE') res = await agent.delete(url).set(CSRF);
-    else if (url.endsWith('/photo')) res = await agent.post(url).set(CSRF).attach('photo', png(), { filename: 'x.png', contentType: 'image/png' });
+    else if (url.endsWith('/photo'))
+      res = await agent.post(url).set(CSRF).attach('photo', png(), { filename: 'x.png', contentType: 'image/png' });
     else res = await (method === 'POST' ? agent.post(url) : agent.patch(url)).set(CSRF).send(body[method]);
     expect(res.status).toBe(404);
     expect(res.body.error.code).toBe('not_found');
@@ -469,7 +501,10 @@ describe('demo seed and the bows list', () => {
     const list = await seeded.agent.get('/api/bows');
     expect(list.status).toBe(200);
     const byName = Object.fromEntries(
-      list.body.bows.map((bow: { nickname: string; readiness: { level: { state: string; reason: string } } }) => [bow.nickname, bow.readiness.level]),
+      list.body.bows.map((bow: { nickname: string; readiness: { level: { state: string; reason: string } } }) => [
+        bow.nickname,
+        bow.readiness.level,
+      ]),
     );
     expect(byName['Timberline slider']).toMatchObject({ state: 'verified', reason: 'Verified 9 days ago, on the bench and at the range.' });
     expect(byName['Cedar five-pin']).toMatchObject({ state: 'due', reason: 'New string 12 days after the last check.' });
@@ -496,7 +531,9 @@ describe('demo seed and the bows list', () => {
     expect(res.body.warnings).toHaveLength(2);
     expect(res.body.warnings[0]).toBe('Level: New string 12 days after the last check.');
     // The staleness rule's words (shared/staleness.ts): the change, its date, and what to do.
-    expect(res.body.warnings[1]).toMatch(/^Latest sight-in \(24 Oct 2026\): New string on \d{1,2} \w{3} \d{4}, after this sight-in: confirm the marks at the range\.$/);
+    expect(res.body.warnings[1]).toMatch(
+      /^Latest sight-in \(24 Oct 2026\): New string on \d{1,2} \w{3} \d{4}, after this sight-in: confirm the marks at the range\.$/,
+    );
     // The fit's "confirm at" distances all lie off this tape's span (20–60 yd), so none is listed.
     expect(res.body.tape).toMatchObject({ fromDistance: 20, toDistance: 60, unit: 'yd', fromLatestSightIn: true });
 
@@ -536,7 +573,10 @@ describe('a technician the bow is shared with', () => {
       revokedAt: null,
     });
 
-    const archerChange = await archer.agent.post(`/api/bows/${sharedBow}/changes`).set(CSRF).send({ kind: 'rest', changedAt: '2022-02-02T10:00:00Z' });
+    const archerChange = await archer.agent
+      .post(`/api/bows/${sharedBow}/changes`)
+      .set(CSRF)
+      .send({ kind: 'rest', changedAt: '2022-02-02T10:00:00Z' });
     const archerCheck = await archer.agent.post(`/api/bows/${sharedBow}/checks`).set(CSRF).send({ place: 'bench' });
     const photo = await archer.agent
       .post(`/api/checks/${archerCheck.body.check.id}/steps/setup/photo`)
@@ -547,13 +587,19 @@ describe('a technician the bow is shared with', () => {
     expect((await tech.agent.get(`/api/photos/${photo.body.photo.id}`)).status).toBe(200);
     // The archer's open check reads back, but only its performer works on it.
     expect((await tech.agent.get(`/api/checks/${archerCheck.body.check.id}`)).status).toBe(200);
-    const notTheirs = await tech.agent.patch(`/api/checks/${archerCheck.body.check.id}`).set(CSRF).send({ steps: [{ step: 'setup', result: 'pass' }] });
+    const notTheirs = await tech.agent
+      .patch(`/api/checks/${archerCheck.body.check.id}`)
+      .set(CSRF)
+      .send({ steps: [{ step: 'setup', result: 'pass' }] });
     expect(notTheirs.status).toBe(403);
 
     const techCheck = await tech.agent.post(`/api/bows/${sharedBow}/checks`).set(CSRF).send({ place: 'range' });
     expect(techCheck.status).toBe(201);
     expect(techCheck.body.check.performedBy).toEqual({ id: tech.user.id, name: 'Shop Tech' });
-    const techChange = await tech.agent.post(`/api/bows/${sharedBow}/changes`).set(CSRF).send({ kind: 'peep', changedAt: '2022-03-03T10:00:00Z' });
+    const techChange = await tech.agent
+      .post(`/api/bows/${sharedBow}/changes`)
+      .set(CSRF)
+      .send({ kind: 'peep', changedAt: '2022-03-03T10:00:00Z' });
     expect(techChange.status).toBe(201);
     expect((await tech.agent.delete(`/api/changes/${archerChange.body.change.id}`).set(CSRF)).status).toBe(403);
     expect((await tech.agent.delete(`/api/changes/${techChange.body.change.id}`).set(CSRF)).status).toBe(204);

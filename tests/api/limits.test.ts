@@ -23,12 +23,18 @@ describe('sign-in', () => {
     const app = testApp();
     const statuses: number[] = [];
     for (let i = 0; i <= limits.signInFailuresPerAddress; i += 1) {
-      const res = await request(app).post('/api/auth/sign-in').set(CSRF).send({ email: uniqueEmail(`spray${i}`), password: 'Autumn2026!' });
+      const res = await request(app)
+        .post('/api/auth/sign-in')
+        .set(CSRF)
+        .send({ email: uniqueEmail(`spray${i}`), password: 'Autumn2026!' });
       statuses.push(res.status);
     }
     expect(statuses.slice(0, limits.signInFailuresPerAddress).every((status) => status === 401)).toBe(true);
     expect(statuses[limits.signInFailuresPerAddress]).toBe(429);
-    const next = await request(app).post('/api/auth/sign-in').set(CSRF).send({ email: uniqueEmail('spray-next'), password: 'Winter2026!' });
+    const next = await request(app)
+      .post('/api/auth/sign-in')
+      .set(CSRF)
+      .send({ email: uniqueEmail('spray-next'), password: 'Winter2026!' });
     expect(next.status).toBe(429);
     expect(next.body.error).toEqual({ code: 'rate_limited', message: 'Too many sign-in attempts. Wait 15 minutes and try again.' });
   });
@@ -42,7 +48,10 @@ describe('sign-in', () => {
       if (i >= limits.signInPerAddressAndEmail - 1) break; // the per-address-and-e-mail limit counts every attempt
     }
     // Failures from the same address still have their full allowance.
-    const failure = await request(app).post('/api/auth/sign-in').set(CSRF).send({ email: uniqueEmail('other'), password: 'wrong password' });
+    const failure = await request(app)
+      .post('/api/auth/sign-in')
+      .set(CSRF)
+      .send({ email: uniqueEmail('other'), password: 'wrong password' });
     expect(failure.status).toBe(401);
   });
 
@@ -52,13 +61,21 @@ describe('sign-in', () => {
     const { email, password } = await signedInAgent(app);
     const statuses: number[] = [];
     for (let i = 0; i <= limits.signInFailuresPerEmail; i += 1) {
-      const res = await request(app).post('/api/auth/sign-in').set(CSRF).set('X-Forwarded-For', `198.51.100.${i + 1}`).send({ email, password: `guess ${i}` });
+      const res = await request(app)
+        .post('/api/auth/sign-in')
+        .set(CSRF)
+        .set('X-Forwarded-For', `198.51.100.${i + 1}`)
+        .send({ email, password: `guess ${i}` });
       statuses.push(res.status);
     }
     expect(statuses.slice(0, limits.signInFailuresPerEmail).every((status) => status === 401)).toBe(true);
     expect(statuses[limits.signInFailuresPerEmail]).toBe(429);
     // Another e-mail from a fresh address is not affected.
-    const other = await request(app).post('/api/auth/sign-in').set(CSRF).set('X-Forwarded-For', '203.0.113.9').send({ email: uniqueEmail('x'), password: 'whatever it is' });
+    const other = await request(app)
+      .post('/api/auth/sign-in')
+      .set(CSRF)
+      .set('X-Forwarded-For', '203.0.113.9')
+      .send({ email: uniqueEmail('x'), password: 'whatever it is' });
     expect(other.status).toBe(401);
     expect(password).toBeTruthy();
   });
@@ -77,10 +94,19 @@ describe('sign-up', () => {
       const res = await request(app).post('/api/invites/accept-new').set(CSRF).send({ token: 'x', name: '', email: 'nope', password: 'x' });
       expect(res.status).toBe(400);
     }
-    const overSignUp = await request(app).post('/api/auth/sign-up').set(CSRF).send({ name: 'Ada Fenn', email: uniqueEmail('late'), password: 'a long password here' });
+    const overSignUp = await request(app)
+      .post('/api/auth/sign-up')
+      .set(CSRF)
+      .send({ name: 'Ada Fenn', email: uniqueEmail('late'), password: 'a long password here' });
     expect(overSignUp.status).toBe(429);
-    expect(overSignUp.body.error).toEqual({ code: 'rate_limited', message: 'Too many new accounts from this address. Try again in an hour.' });
-    const overInvite = await request(app).post('/api/invites/accept-new').set(CSRF).send({ token: 'x', name: 'Ada Fenn', email: uniqueEmail('late'), password: 'a long password here' });
+    expect(overSignUp.body.error).toEqual({
+      code: 'rate_limited',
+      message: 'Too many new accounts from this address. Try again in an hour.',
+    });
+    const overInvite = await request(app)
+      .post('/api/invites/accept-new')
+      .set(CSRF)
+      .send({ token: 'x', name: 'Ada Fenn', email: uniqueEmail('late'), password: 'a long password here' });
     expect(overInvite.status).toBe(429);
   });
 });
@@ -94,15 +120,24 @@ describe('invitations', () => {
     const busyBow = await bowOf(busy.agent);
     const quietBow = await bowOf(quiet.agent);
     for (let i = 0; i < limits.invitesPerAccount; i += 1) {
-      const res = await busy.agent.post(`/api/bows/${busyBow}/shares`).set(CSRF).send({ email: uniqueEmail(`tech${i}`) });
+      const res = await busy.agent
+        .post(`/api/bows/${busyBow}/shares`)
+        .set(CSRF)
+        .send({ email: uniqueEmail(`tech${i}`) });
       expect(res.status).toBe(201);
     }
-    const over = await busy.agent.post(`/api/bows/${busyBow}/shares`).set(CSRF).send({ email: uniqueEmail('tech-over') });
+    const over = await busy.agent
+      .post(`/api/bows/${busyBow}/shares`)
+      .set(CSRF)
+      .send({ email: uniqueEmail('tech-over') });
     expect(over.status).toBe(429);
     expect(over.body.error.code).toBe('rate_limited');
     expect(over.body.error.message).toMatch(new RegExp(`${limits.invitesPerAccount} invitations in the last hour`));
     // Another account on the same address sends its first invitation.
-    const first = await quiet.agent.post(`/api/bows/${quietBow}/shares`).set(CSRF).send({ email: uniqueEmail('tech-first') });
+    const first = await quiet.agent
+      .post(`/api/bows/${quietBow}/shares`)
+      .set(CSRF)
+      .send({ email: uniqueEmail('tech-first') });
     expect(first.status).toBe(201);
   });
 });

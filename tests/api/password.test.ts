@@ -121,7 +121,9 @@ describe('choosing a new password from the link', () => {
     const first = await resetLinkFor(email);
     const second = await resetLinkFor(email);
     expect(second.token).not.toBe(first.token);
-    expect((await request(app).post('/api/password/reset').set(CSRF).send({ token: second.token, password: 'the second link wins' })).status).toBe(200);
+    expect(
+      (await request(app).post('/api/password/reset').set(CSRF).send({ token: second.token, password: 'the second link wins' })).status,
+    ).toBe(200);
     const stale = await request(app).post('/api/password/reset').set(CSRF).send({ token: first.token, password: 'the first link is dead' });
     expect(stale.status).toBe(410);
   });
@@ -149,9 +151,13 @@ describe('the development mail reader', () => {
     const { mail, token } = await resetLinkFor(email);
     const list = await agent.get('/api/dev/mail').query({ to: email.toUpperCase() });
     expect(list.status).toBe(200);
-    expect(list.body.messages).toEqual([expect.objectContaining({ id: mail.id, to: [email], subject: 'Reset your Pinwright password', attachmentCount: 0 })]);
+    expect(list.body.messages).toEqual([
+      expect.objectContaining({ id: mail.id, to: [email], subject: 'Reset your Pinwright password', attachmentCount: 0 }),
+    ]);
     const one = await agent.get(`/api/dev/mail/${mail.id}`);
-    expect(one.body.message.links).toEqual([{ href: `${config.publicUrl}/reset-password?token=${token}`, appPath: `/reset-password?token=${token}` }]);
+    expect(one.body.message.links).toEqual([
+      { href: `${config.publicUrl}/reset-password?token=${token}`, appPath: `/reset-password?token=${token}` },
+    ]);
     expect((await agent.get('/api/dev/mail/..%2F..%2Fetc%2Fpasswd')).status).toBe(400);
   });
 

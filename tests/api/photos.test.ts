@@ -46,7 +46,9 @@ async function phonePhoto(): Promise<Buffer> {
       IFD0: { Make: 'Invented Phone Co', Model: 'Model Nine' },
       IFD3: { GPSLatitudeRef: 'N', GPSLatitude: '46/1 52/1 3230/100', GPSLongitudeRef: 'W', GPSLongitude: '113/1 59/1 4366/100' },
     })
-    .withXmp('<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description xmlns:dc="http://purl.org/dc/elements/1.1/" dc:title="Elk camp, north ridge"/></rdf:RDF></x:xmpmeta>')
+    .withXmp(
+      '<x:xmpmeta xmlns:x="adobe:ns:meta/"><rdf:RDF xmlns:rdf="http://www.w3.org/1999/02/22-rdf-syntax-ns#"><rdf:Description xmlns:dc="http://purl.org/dc/elements/1.1/" dc:title="Elk camp, north ridge"/></rdf:RDF></x:xmpmeta>',
+    )
     .toBuffer();
   return withJpegComment(jpeg, 'Shot at the north ridge camp');
 }
@@ -85,11 +87,14 @@ it('stores a phone photo upright with none of its metadata', async () => {
   expect(meta.exif).toBeUndefined();
 
   // What is served is what was stored.
-  const served = await agent.get(`/api/photos/${row.id}`).buffer(true).parse((r, done) => {
-    const parts: Buffer[] = [];
-    r.on('data', (part: Buffer) => parts.push(part));
-    r.on('end', () => done(null, Buffer.concat(parts)));
-  });
+  const served = await agent
+    .get(`/api/photos/${row.id}`)
+    .buffer(true)
+    .parse((r, done) => {
+      const parts: Buffer[] = [];
+      r.on('data', (part: Buffer) => parts.push(part));
+      r.on('end', () => done(null, Buffer.concat(parts)));
+    });
   expect(Buffer.compare(served.body as Buffer, stored)).toBe(0);
 });
 
@@ -127,7 +132,9 @@ it('refuses a JPEG header followed by HTML with a plain 415, and stores nothing'
 it('refuses the PNG signature alone and a JPEG cut in half', async () => {
   const signature = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
   expect((await upload(signature, 'cut.png', 'image/png')).status).toBe(415);
-  const whole = await sharp({ create: { width: 64, height: 64, channels: 3, background: '#888' } }).jpeg().toBuffer();
+  const whole = await sharp({ create: { width: 64, height: 64, channels: 3, background: '#888' } })
+    .jpeg()
+    .toBuffer();
   const half = whole.subarray(0, Math.floor(whole.length / 2));
   const res = await upload(half, 'half.jpg', 'image/jpeg');
   expect(res.status).toBe(415);
@@ -135,6 +142,8 @@ it('refuses the PNG signature alone and a JPEG cut in half', async () => {
 });
 
 it('refuses a GIF (decodes, but is not one of the three kinds)', async () => {
-  const gif = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#000' } }).gif().toBuffer();
+  const gif = await sharp({ create: { width: 4, height: 4, channels: 3, background: '#000' } })
+    .gif()
+    .toBuffer();
   expect((await upload(gif, 'a.gif', 'image/gif')).status).toBe(415);
 });

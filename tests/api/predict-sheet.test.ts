@@ -12,14 +12,22 @@ const asBuffer = (res: NodeJS.ReadableStream, done: (err: Error | null, body: Bu
   res.on('data', (chunk: Buffer) => chunks.push(chunk));
   res.on('end', () => done(null, Buffer.concat(chunks)));
 };
-const download = (agent: Agent, url: string) => agent.get(url).buffer(true).parse(asBuffer as never);
-const query = 'name=Elk%20brass&grainsPerInch=9.3&cutLengthMm=717.55&diameterMm=6.2&pointGr=150&insertGr=75&nockGr=9&vaneCount=3&vaneWeightGr=7&wrapGr=8';
+const download = (agent: Agent, url: string) =>
+  agent
+    .get(url)
+    .buffer(true)
+    .parse(asBuffer as never);
+const query =
+  'name=Elk%20brass&grainsPerInch=9.3&cutLengthMm=717.55&diameterMm=6.2&pointGr=150&insertGr=75&nockGr=9&vaneCount=3&vaneWeightGr=7&wrapGr=8';
 
 describe('GET /api/bows/:bowId/predict/sheet.svg|pdf', () => {
   it('prints the predicted tape on a page headed PREDICTED — NOT SIGHTED, naming the sight-in it is carried on', async () => {
     const { agent } = await signedInAgent(app);
     const { bowId, lightSightIn } = await bowWithTwoBuilds(agent);
-    const res = await download(agent, `/api/bows/${bowId}/predict/sheet.svg?${query}&sightInId=${lightSightIn.id}&from=20&to=60&paper=letter`);
+    const res = await download(
+      agent,
+      `/api/bows/${bowId}/predict/sheet.svg?${query}&sightInId=${lightSightIn.id}&from=20&to=60&paper=letter`,
+    );
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(res.headers['content-disposition']).toMatch(/predicted-sheet-elk-brass\.svg/);
@@ -28,7 +36,9 @@ describe('GET /api/bows/:bowId/predict/sheet.svg|pdf', () => {
     // US Letter: 8.5 × 11 in = 215.9 × 279.4 mm (1 in = 25.4 mm exactly).
     expect(Number(svg.getAttribute('width')!.replace('mm', ''))).toBeCloseTo(215.9, 6);
     expect(svg.getAttribute('data-predicted')).toBe('true');
-    const words = Array.from(doc.getElementsByTagName('path') as unknown as ArrayLike<Element>).map((path) => path.getAttribute('aria-label') ?? '').filter(Boolean);
+    const words = Array.from(doc.getElementsByTagName('path') as unknown as ArrayLike<Element>)
+      .map((path) => path.getAttribute('aria-label') ?? '')
+      .filter(Boolean);
     expect(words[0]).toBe('PREDICTED — NOT SIGHTED');
     expect(words).toContain('PREDICTED · NOT SIGHTED');
     expect(words.join(' ')).toMatch(/Carried on the sight of the sight-in of .*Test light/);

@@ -18,7 +18,11 @@ const asBuffer = (res: NodeJS.ReadableStream, done: (err: Error | null, body: Bu
   res.on('data', (chunk: Buffer) => chunks.push(chunk));
   res.on('end', () => done(null, Buffer.concat(chunks)));
 };
-const download = (agent: Agent, url: string) => agent.get(url).buffer(true).parse(asBuffer as never);
+const download = (agent: Agent, url: string) =>
+  agent
+    .get(url)
+    .buffer(true)
+    .parse(asBuffer as never);
 
 describe('POST /api/bows/:bowId/predict', () => {
   it('predicts a new build’s speed within 1 fps from two chronographed builds, and its marks on the bow’s fitted sight', async () => {
@@ -82,7 +86,9 @@ describe('POST /api/bows/:bowId/predict', () => {
     expect(res.status).toBe(200);
     expect(res.body.prediction.marks).toBeNull();
     expect(res.body.marksMissing).toMatch(/^Sight in any build on this bow to predict marks/);
-    const tape = await agent.get(`/api/bows/${bowId}/predict/tape.svg?insertGr=75&grainsPerInch=9.3&cutLengthMm=717.55&diameterMm=6.2&pointGr=150`);
+    const tape = await agent.get(
+      `/api/bows/${bowId}/predict/tape.svg?insertGr=75&grainsPerInch=9.3&cutLengthMm=717.55&diameterMm=6.2&pointGr=150`,
+    );
     expect(tape.status).toBe(409);
   });
 
@@ -98,7 +104,10 @@ describe('POST /api/bows/:bowId/predict', () => {
       [{ buildId: heavy.id, colour: 'red' }, { _: 'Send a buildId or a build, and optionally a sightInId' }],
     ];
     for (const [body, fields] of cases) {
-      const res = await agent.post(`/api/bows/${bowId}/predict`).set(CSRF).send(body as object);
+      const res = await agent
+        .post(`/api/bows/${bowId}/predict`)
+        .set(CSRF)
+        .send(body as object);
       expect({ body, status: res.status, fields: res.body.error?.fields }).toEqual({ body, status: 400, fields });
     }
     const foreign = await agent.post(`/api/bows/${bowId}/predict`).set(CSRF).send({ buildId: other.light.id });
@@ -123,7 +132,8 @@ describe('GET /api/bows/:bowId/predict/tape.svg', () => {
   it('draws the predicted tape true to the predicted marks, marked PREDICTED — not sighted, outlines only', async () => {
     const { agent } = await signedInAgent(app);
     const { bowId, lightSightIn } = await bowWithTwoBuilds(agent);
-    const query = 'name=Elk%20brass&grainsPerInch=9.3&cutLengthMm=717.55&diameterMm=6.2&pointGr=150&insertGr=75&nockGr=9&vaneCount=3&vaneWeightGr=7&wrapGr=8';
+    const query =
+      'name=Elk%20brass&grainsPerInch=9.3&cutLengthMm=717.55&diameterMm=6.2&pointGr=150&insertGr=75&nockGr=9&vaneCount=3&vaneWeightGr=7&wrapGr=8';
     const res = await download(agent, `/api/bows/${bowId}/predict/tape.svg?${query}&sightInId=${lightSightIn.id}&from=20&to=60`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^image\/svg\+xml/);
@@ -134,7 +144,9 @@ describe('GET /api/bows/:bowId/predict/tape.svg', () => {
     expect(svg.getAttribute('width')).toMatch(/mm$/);
     expect(svg.getAttribute('data-predicted')).toBe('true');
     expect(doc.getElementsByTagName('text').length).toBe(0);
-    const labels = Array.from(doc.getElementsByTagName('path') as unknown as ArrayLike<Element>).map((path) => path.getAttribute('aria-label') ?? '');
+    const labels = Array.from(doc.getElementsByTagName('path') as unknown as ArrayLike<Element>).map(
+      (path) => path.getAttribute('aria-label') ?? '',
+    );
     expect(labels.join(' ')).toContain('PREDICTED — not sighted.');
     expect(labels).toContain('PREDICTED · NOT SIGHTED');
 
@@ -145,7 +157,8 @@ describe('GET /api/bows/:bowId/predict/tape.svg', () => {
         .set(CSRF)
         .send({ build: { ...newBuild, insertGr: 75, nockGr: 9, vaneCount: 3, vaneWeightGr: 7, wrapGr: 8 }, sightInId: lightSightIn.id })
     ).body;
-    const mark = (distance: number) => body.prediction.marks.find((candidate: { distance: number }) => candidate.distance === distance).markMm;
+    const mark = (distance: number) =>
+      body.prediction.marks.find((candidate: { distance: number }) => candidate.distance === distance).markMm;
     const ticks = new Map<number, number>();
     const lines = doc.getElementsByTagName('line');
     for (let i = 0; i < lines.length; i++) {
@@ -153,7 +166,8 @@ describe('GET /api/bows/:bowId/predict/tape.svg', () => {
       if (distance !== null) ticks.set(Number(distance), Number(lines[i].getAttribute('y1')));
     }
     expect(ticks.size).toBe(41);
-    for (const distance of [30, 40, 50, 60]) expect(Math.abs(ticks.get(distance)! - ticks.get(20)! - (mark(distance) - mark(20)))).toBeLessThan(0.001);
+    for (const distance of [30, 40, 50, 60])
+      expect(Math.abs(ticks.get(distance)! - ticks.get(20)! - (mark(distance) - mark(20)))).toBeLessThan(0.001);
   });
 
   it('checks the query, and refuses a build without what it needs', async () => {

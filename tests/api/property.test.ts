@@ -52,7 +52,8 @@ function routesOf(stack: Layer[], prefix = '', out: Route[] = []): Route[] {
   for (const layer of stack) {
     const raw = typeof layer.rawPath === 'string' ? layer.rawPath : '';
     if (layer.route) {
-      for (const method of Object.keys(layer.route.methods)) out.push({ method: method.toUpperCase(), path: (prefix + raw).replace(/\/+$/, '') || '/' });
+      for (const method of Object.keys(layer.route.methods))
+        out.push({ method: method.toUpperCase(), path: (prefix + raw).replace(/\/+$/, '') || '/' });
     } else if (layer.handle?.stack) routesOf(layer.handle.stack, prefix + (raw === '/' ? '' : raw), out);
   }
   return out;
@@ -104,8 +105,19 @@ async function mintCookie(userId: number): Promise<string> {
   const store = app.locals.sessionStore as { set: (sid: string, data: unknown, done: (err?: unknown) => void) => void };
   const maxAge = 24 * 3600 * 1000;
   await new Promise<void>((resolve, reject) =>
-    store.set(sid, { cookie: { originalMaxAge: maxAge, expires: new Date(Date.now() + maxAge).toISOString(), httpOnly: true, path: '/', sameSite: 'lax' }, userId }, (err) =>
-      err ? reject(err) : resolve(),
+    store.set(
+      sid,
+      {
+        cookie: {
+          originalMaxAge: maxAge,
+          expires: new Date(Date.now() + maxAge).toISOString(),
+          httpOnly: true,
+          path: '/',
+          sameSite: 'lax',
+        },
+        userId,
+      },
+      (err) => (err ? reject(err) : resolve()),
     ),
   );
   return `pinwright.sid=${encodeURIComponent(`s:${signCookie(sid, config.session.secret)}`)}`;
@@ -126,13 +138,35 @@ async function makeRecords(archerCookie: string): Promise<Record<string, number[
   const post = (path: string) => request(`http://127.0.0.1:${port}`).post(path).set(CSRF).set('Cookie', archerCookie);
   const bow = ok(await post('/api/bows').send(bowBody({ nickname: 'Property slider' })), 'bow').bow;
   const build = ok(await post(`/api/bows/${bow.id}/builds`).send(buildBody()), 'build').build;
-  const sightIn = ok(await post(`/api/bows/${bow.id}/sight-ins`).send({ buildId: build.id, date: '2026-11-02', placeLabel: 'Property range', marks: knownMarks([20, 40, 60]) }), 'sightIn').sightIn;
+  const sightIn = ok(
+    await post(`/api/bows/${bow.id}/sight-ins`).send({
+      buildId: build.id,
+      date: '2026-11-02',
+      placeLabel: 'Property range',
+      marks: knownMarks([20, 40, 60]),
+    }),
+    'sightIn',
+  ).sightIn;
   const tape = ok(await post(`/api/sight-ins/${sightIn.id}/tapes`).send({ fromDistance: 20, toDistance: 60 }), 'tape').tape;
   const check = ok(await post(`/api/bows/${bow.id}/checks`).send({ place: 'bench' }), 'check').check;
-  const photo = ok(await post(`/api/checks/${check.id}/steps/setup/photo`).attach('photo', png(), { filename: 'vise.png', contentType: 'image/png' }), 'photo').photo;
-  const change = ok(await post(`/api/bows/${bow.id}/changes`).send({ kind: 'string', changedAt: '2026-11-20T10:00:00Z', note: 'New string' }), 'change').change;
+  const photo = ok(
+    await post(`/api/checks/${check.id}/steps/setup/photo`).attach('photo', png(), { filename: 'vise.png', contentType: 'image/png' }),
+    'photo',
+  ).photo;
+  const change = ok(
+    await post(`/api/bows/${bow.id}/changes`).send({ kind: 'string', changedAt: '2026-11-20T10:00:00Z', note: 'New string' }),
+    'change',
+  ).change;
   // Shared with the technician as an accepted invitation leaves it (the invitation flow has its own tests).
-  const share = await Share.create({ bowId: bow.id, archerId: accounts.archer.id, techId: accounts.tech.id, invitedEmail: accounts.tech.email, state: 'active', acceptedAt: new Date(), revokedAt: null });
+  const share = await Share.create({
+    bowId: bow.id,
+    archerId: accounts.archer.id,
+    techId: accounts.tech.id,
+    invitedEmail: accounts.tech.email,
+    state: 'active',
+    acceptedAt: new Date(),
+    revokedAt: null,
+  });
   return {
     bows: [bow.id],
     builds: [build.id],
@@ -156,7 +190,8 @@ async function makeFixtures(): Promise<Fixtures> {
   return { ids: stringIds(ids), cookies, userIds: [archer.user.id, tech.user.id], password };
 }
 
-const stringIds = (ids: Record<string, unknown[]>): Ids => Object.fromEntries(Object.entries(ids).map(([kind, list]) => [kind, list.map(String)]));
+const stringIds = (ids: Record<string, unknown[]>): Ids =>
+  Object.fromEntries(Object.entries(ids).map(([kind, list]) => [kind, list.map(String)]));
 
 /**
  * After a batch: new session cookies when a sign-out or password change ended
@@ -166,10 +201,15 @@ const stringIds = (ids: Record<string, unknown[]>): Ids => Object.fromEntries(Ob
 async function keepFixtures(batch: Case[], answers: Answer[]): Promise<void> {
   for (const who of ['archer', 'tech'] as const) {
     // A 401, or anything that may have ended the sign-in session (sign-out, a password change), gets a new one.
-    const ended = batch.some((c, i) => c.who === who && (answers[i].status === 401 || (c.method !== 'GET' && answers[i].status < 300 && /^\/api\/(auth|me)\b/.test(c.path))));
+    const ended = batch.some(
+      (c, i) =>
+        c.who === who &&
+        (answers[i].status === 401 || (c.method !== 'GET' && answers[i].status < 300 && /^\/api\/(auth|me)\b/.test(c.path))),
+    );
     if (ended) fixtures.cookies[who] = await mintCookie(accounts[who].id);
   }
-  if (batch.some((c, i) => answers[i].status < 300 && (c.method === 'DELETE' || /\/(revoke|delete)$/.test(c.path.split('?')[0])))) recordsTouched = true;
+  if (batch.some((c, i) => answers[i].status < 300 && (c.method === 'DELETE' || /\/(revoke|delete)$/.test(c.path.split('?')[0]))))
+    recordsTouched = true;
   batchesSinceCheck += 1;
   if (!recordsTouched || batchesSinceCheck < 8) return; // looked at every eighth batch at most
   batchesSinceCheck = 0;
@@ -194,15 +234,38 @@ async function keepFixtures(batch: Case[], answers: Answer[]): Promise<void> {
 // ---- What is sent ----
 
 const junkParam = fc.oneof(
-  fc.constantFrom('0', '-1', '1.5', '1e21', '4e17', '2147483648', '99999999999999999999', 'abc', '%E0%A4%A', '%', '%00', '..%2F..%2Fetc%2Fpasswd', '%ZZ', 'null', 'undefined', 'NaN', 'Infinity', '%F0%9F%8F%B9'),
+  fc.constantFrom(
+    '0',
+    '-1',
+    '1.5',
+    '1e21',
+    '4e17',
+    '2147483648',
+    '99999999999999999999',
+    'abc',
+    '%E0%A4%A',
+    '%',
+    '%00',
+    '..%2F..%2Fetc%2Fpasswd',
+    '%ZZ',
+    'null',
+    'undefined',
+    'NaN',
+    'Infinity',
+    '%F0%9F%8F%B9',
+  ),
   fc.integer().map(String),
-  fc.string({ maxLength: 24 }).filter((s) => s.length > 0).map((s) => encodeURIComponent(s)),
+  fc
+    .string({ maxLength: 24 })
+    .filter((s) => s.length > 0)
+    .map((s) => encodeURIComponent(s)),
 );
 
 /** A value for `:name` after the path segment `segment`: a real id of the kind most of the time, or junk. */
 function paramArb(name: string, segment: string): fc.Arbitrary<string> {
   if (name === 'step') return fc.oneof(fc.constantFrom(...levelStepKeys), junkParam);
-  const kind = name === 'bowId' ? 'bows' : name === 'sightInId' ? 'sightIns' : name === 'token' ? 'invites' : name === 'index' ? '' : segment;
+  const kind =
+    name === 'bowId' ? 'bows' : name === 'sightInId' ? 'sightIns' : name === 'token' ? 'invites' : name === 'index' ? '' : segment;
   const real = fixtures.ids[kind] ?? [];
   const anyReal = Object.values(fixtures.ids).flat();
   if (name === 'index') return fc.oneof(fc.constantFrom('0', '1', '7'), junkParam);
@@ -214,7 +277,30 @@ function paramArb(name: string, segment: string): fc.Arbitrary<string> {
 }
 
 const weird = fc.oneof(
-  fc.constantFrom(null, true, false, 0, -1, 1e308, -1e308, 1e21, 4e17, 0.1, '', ' ', '1g.0', '2026-02-30', '2026-12-02', 'yd', 'm', 'x'.repeat(3000), [], {}, [null], { a: 1 }),
+  fc.constantFrom(
+    null,
+    true,
+    false,
+    0,
+    -1,
+    1e308,
+    -1e308,
+    1e21,
+    4e17,
+    0.1,
+    '',
+    ' ',
+    '1g.0',
+    '2026-02-30',
+    '2026-12-02',
+    'yd',
+    'm',
+    'x'.repeat(3000),
+    [],
+    {},
+    [null],
+    { a: 1 },
+  ),
   fc.double({ noNaN: true }),
   fc.integer(),
   fc.string({ maxLength: 40 }),
@@ -222,7 +308,7 @@ const weird = fc.oneof(
 );
 
 /** Bodies the routes take, to be broken in a field or two (so requests get past the first check). */
-function templates(): Array<Record<string, unknown>> {
+function templates(): Record<string, unknown>[] {
   const buildId = Number(fixtures.ids.builds[0] ?? 1);
   const sightInId = Number(fixtures.ids.sightIns[0] ?? 1);
   return [
@@ -241,7 +327,15 @@ function templates(): Array<Record<string, unknown>> {
     { currentPassword: 'wrong password here', newPassword: 'another long password' },
     { password: 'wrong password here' },
     { role: 'tech', disabled: false },
-    { distanceUnit: 'yd', sight: { radiusMm: 820, peepHeightMm: 110 }, arrow: { massGr: 420, diameterMm: 6.5 }, marks: [{ distance: 20, markMm: 14.9 }, { distance: 60, markMm: 32.6 }] },
+    {
+      distanceUnit: 'yd',
+      sight: { radiusMm: 820, peepHeightMm: 110 },
+      arrow: { massGr: 420, diameterMm: 6.5 },
+      marks: [
+        { distance: 20, markMm: 14.9 },
+        { distance: 60, markMm: 32.6 },
+      ],
+    },
     { buildId, sightInId, speedFps: 280 },
     { sightInId, note: 'Confirmed' },
     { csv: 'distance,unit,scaleMm\n20,yd,10.5\n' },
@@ -253,7 +347,11 @@ const jsonBody: fc.Arbitrary<unknown> = fc.oneof(
   {
     weight: 6,
     arbitrary: fc
-      .tuple(fc.nat(), fc.array(fc.tuple(fc.nat(), weird), { maxLength: 3 }), fc.array(fc.tuple(fc.string({ maxLength: 12 }), weird), { maxLength: 2 }))
+      .tuple(
+        fc.nat(),
+        fc.array(fc.tuple(fc.nat(), weird), { maxLength: 3 }),
+        fc.array(fc.tuple(fc.string({ maxLength: 12 }), weird), { maxLength: 2 }),
+      )
       .map(([pick, changes, extra]) => {
         const all = templates();
         const body: Record<string, unknown> = structuredClone(all[pick % all.length]);
@@ -310,7 +408,9 @@ const multipartBody: fc.Arbitrary<Sent> = fc
     fc.array(
       fc.record({
         name: fc.constantFrom('photo', 'photo', 'note', 'file', ''),
-        filename: fc.option(fc.constantFrom('a.png', 'IMG_0001.jpg', 'a\u0000b.png', '../../etc/passwd', '"quoted".png', 'ünï.png', ''), { nil: undefined }),
+        filename: fc.option(fc.constantFrom('a.png', 'IMG_0001.jpg', 'a\u0000b.png', '../../etc/passwd', '"quoted".png', 'ünï.png', ''), {
+          nil: undefined,
+        }),
         type: fc.constantFrom('image/png', 'image/jpeg', 'text/html', 'application/octet-stream'),
         content: fc.constantFrom('png', 'signature', 'jpeg-html', 'text', 'random'),
         random: fc.uint8Array({ maxLength: 200 }),
@@ -330,7 +430,10 @@ const multipartBody: fc.Arbitrary<Sent> = fc
           : part.content === 'signature'
             ? Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])
             : part.content === 'jpeg-html'
-              ? Buffer.concat([Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0, 0x10, 0x4a, 0x46, 0x49, 0x46, 0]), Buffer.from('<html><script>x</script></html>')])
+              ? Buffer.concat([
+                  Buffer.from([0xff, 0xd8, 0xff, 0xe0, 0, 0x10, 0x4a, 0x46, 0x49, 0x46, 0]),
+                  Buffer.from('<html><script>x</script></html>'),
+                ])
               : part.content === 'text'
                 ? Buffer.from('just words')
                 : Buffer.from(part.random);
@@ -341,32 +444,95 @@ const multipartBody: fc.Arbitrary<Sent> = fc
     if (damage !== 'no-end') chunks.push(Buffer.from(`--${boundary}--\r\n`));
     let body = Buffer.concat(chunks);
     if (damage === 'truncate' && body.length > 1) body = body.subarray(0, cut % body.length);
-    return { body, headers: { 'Content-Type': damage === 'no-boundary' ? 'multipart/form-data' : `multipart/form-data; boundary=${boundary}` } };
+    return {
+      body,
+      headers: { 'Content-Type': damage === 'no-boundary' ? 'multipart/form-data' : `multipart/form-data; boundary=${boundary}` },
+    };
   });
 
-const queryKeys = ['page', 'q', 'role', 'builds', 'at', 'from', 'to', 'step', 'unit', 'tape', 'angles', 'distances', 'altitudeM', 'temperatureC', 'windowMm', 'dryRun', 'width', 'paper', 'label', 'buildId', 'sightInId', 'mirror', 'orientation', 'speedFps'];
+const queryKeys = [
+  'page',
+  'q',
+  'role',
+  'builds',
+  'at',
+  'from',
+  'to',
+  'step',
+  'unit',
+  'tape',
+  'angles',
+  'distances',
+  'altitudeM',
+  'temperatureC',
+  'windowMm',
+  'dryRun',
+  'width',
+  'paper',
+  'label',
+  'buildId',
+  'sightInId',
+  'mirror',
+  'orientation',
+  'speedFps',
+];
 const queryValue = fc.oneof(
-  fc.constantFrom('1', '2', '0', '-1', '4e17', '1e21', '100001', '20,40,60', '-30,0,30', 'yd', 'm', 'true', '1', 'a4', 'tech', '', 'NaN', '%E0%A4%A', '%'),
+  fc.constantFrom(
+    '1',
+    '2',
+    '0',
+    '-1',
+    '4e17',
+    '1e21',
+    '100001',
+    '20,40,60',
+    '-30,0,30',
+    'yd',
+    'm',
+    'true',
+    '1',
+    'a4',
+    'tech',
+    '',
+    'NaN',
+    '%E0%A4%A',
+    '%',
+  ),
   fc.integer().map(String),
   fc.double({ noNaN: true }).map(String),
   fc.string({ maxLength: 12 }).map(encodeURIComponent),
 );
 const queryString = fc
-  .array(fc.tuple(fc.oneof({ weight: 5, arbitrary: fc.constantFrom(...queryKeys) }, { weight: 1, arbitrary: fc.string({ maxLength: 8 }).map(encodeURIComponent) }), queryValue), { maxLength: 4 })
+  .array(
+    fc.tuple(
+      fc.oneof(
+        { weight: 5, arbitrary: fc.constantFrom(...queryKeys) },
+        { weight: 1, arbitrary: fc.string({ maxLength: 8 }).map(encodeURIComponent) },
+      ),
+      queryValue,
+    ),
+    { maxLength: 4 },
+  )
   .map((pairs) => (pairs.length ? `?${pairs.map(([k, v]) => `${k}=${v}`).join('&')}` : ''));
 
 function caseArb(routes: Route[]): fc.Arbitrary<Case> {
   return fc.constantFrom(...routes).chain((route) => {
     const segments = route.path.split('/');
-    const params = segments.map((segment, i) => (segment.startsWith(':') ? paramArb(segment.slice(1), segments[i - 1] ?? '') : fc.constant(segment)));
+    const params = segments.map((segment, i) =>
+      segment.startsWith(':') ? paramArb(segment.slice(1), segments[i - 1] ?? '') : fc.constant(segment),
+    );
     const isUpload = route.path.endsWith('/photo');
-    const body = route.method === 'GET' || route.method === 'DELETE'
-      ? fc.oneof({ weight: 4, arbitrary: fc.constant<Sent>({ body: undefined, headers: {} }) }, { weight: 1, arbitrary: encodedBody })
-      : isUpload
-        ? fc.oneof({ weight: 3, arbitrary: multipartBody }, { weight: 1, arbitrary: encodedBody })
-        : fc.oneof({ weight: 6, arbitrary: encodedBody }, { weight: 1, arbitrary: multipartBody });
+    const body =
+      route.method === 'GET' || route.method === 'DELETE'
+        ? fc.oneof({ weight: 4, arbitrary: fc.constant<Sent>({ body: undefined, headers: {} }) }, { weight: 1, arbitrary: encodedBody })
+        : isUpload
+          ? fc.oneof({ weight: 3, arbitrary: multipartBody }, { weight: 1, arbitrary: encodedBody })
+          : fc.oneof({ weight: 6, arbitrary: encodedBody }, { weight: 1, arbitrary: multipartBody });
     return fc.record({
-      method: fc.oneof({ weight: 19, arbitrary: fc.constant(route.method) }, { weight: 1, arbitrary: fc.constantFrom('GET', 'POST', 'PUT', 'PATCH', 'DELETE', 'OPTIONS', 'HEAD') }),
+      method: fc.oneof(
+        { weight: 19, arbitrary: fc.constant(route.method) },
+        { weight: 1, arbitrary: fc.constantFrom('GET', 'POST', 'PUT', 'PATCH', 'DELETE', 'OPTIONS', 'HEAD') },
+      ),
       path: fc.tuple(fc.tuple(...params), queryString).map(([parts, query]) => parts.join('/') + query),
       who: fc.constantFrom<Case['who']>('archer', 'archer', 'archer', 'tech', 'nobody'),
       csrf: fc.oneof({ weight: 9, arbitrary: fc.constant(true) }, { weight: 1, arbitrary: fc.constant(false) }),
@@ -382,12 +548,21 @@ function send(c: Case): Promise<Answer> {
     if (c.csrf) headers['X-Pinwright-Csrf'] = '1';
     if (c.who !== 'nobody') headers.Cookie = fixtures.cookies[c.who];
     if (c.sent.body) headers['Content-Length'] = c.sent.body.length;
-    const req = http.request({ host: '127.0.0.1', port, method: c.method, path: c.path, headers, agent: agentPool, timeout: 30_000 }, (res) => {
-      const parts: Buffer[] = [];
-      res.on('data', (part: Buffer) => parts.push(part));
-      res.on('end', () => resolve({ status: res.statusCode ?? 0, body: Buffer.concat(parts).toString('utf8'), contentType: String(res.headers['content-type'] ?? '') }));
-      res.on('error', reject);
-    });
+    const req = http.request(
+      { host: '127.0.0.1', port, method: c.method, path: c.path, headers, agent: agentPool, timeout: 30_000 },
+      (res) => {
+        const parts: Buffer[] = [];
+        res.on('data', (part: Buffer) => parts.push(part));
+        res.on('end', () =>
+          resolve({
+            status: res.statusCode ?? 0,
+            body: Buffer.concat(parts).toString('utf8'),
+            contentType: String(res.headers['content-type'] ?? ''),
+          }),
+        );
+        res.on('error', reject);
+      },
+    );
     req.on('timeout', () => req.destroy(new Error(`no answer within 30 s: ${c.method} ${c.path}`)));
     req.on('error', reject);
     req.end(c.sent.body);
@@ -440,44 +615,64 @@ it(`answers ${RUNS * BATCH} generated requests over every route with no 5xx and 
   const seen = new Set<string>();
   const routeMs = new Map<string, number>();
   console.log(`property run: seed ${SEED} (PROPERTY_SEED=${SEED} repeats it), ${RUNS} batches of ${BATCH} over ${routes.length} routes`);
-  await fc.assert(
-    fc.asyncProperty(fc.array(caseArb(routes), { minLength: BATCH, maxLength: BATCH }), async (batch) => {
-      const answers = await Promise.all(
-        batch.map(async (c) => {
-          const t0 = Date.now();
-          const answer = await send(c).catch((error: Error): Answer => ({ status: 599, body: `no answer: ${error.message}`, contentType: '' }));
-          routeMs.set(c.route, (routeMs.get(c.route) ?? 0) + Date.now() - t0);
-          return answer;
-        }),
+  await fc
+    .assert(
+      fc.asyncProperty(fc.array(caseArb(routes), { minLength: BATCH, maxLength: BATCH }), async (batch) => {
+        const answers = await Promise.all(
+          batch.map(async (c) => {
+            const t0 = Date.now();
+            const answer = await send(c).catch(
+              (error: Error): Answer => ({ status: 599, body: `no answer: ${error.message}`, contentType: '' }),
+            );
+            routeMs.set(c.route, (routeMs.get(c.route) ?? 0) + Date.now() - t0);
+            return answer;
+          }),
+        );
+        cases += batch.length;
+        const problems: string[] = [];
+        batch.forEach((c, i) => {
+          seen.add(c.route);
+          statuses.set(answers[i].status, (statuses.get(answers[i].status) ?? 0) + 1);
+          const problem = problemWith(c, answers[i]);
+          if (problem) problems.push(`${describeCase(c)} → ${problem}`);
+        });
+        if (problems.length) failures.push(...problems);
+        await keepFixtures(batch, answers).catch((error: Error) => {
+          failures.push(`keeping the fixtures failed: ${error.stack ?? error.message}`);
+          throw error;
+        });
+        return problems.length === 0;
+      }),
+      { seed: SEED, numRuns: RUNS, endOnFailure: true, verbose: 0 },
+    )
+    .catch((error) => {
+      throw new Error(
+        `${failures.slice(0, 8).join('\n')}\n(seed ${SEED}; PROPERTY_SEED=${SEED} repeats the run)\n${String(error).slice(0, 600)}\n…\n${String(error).slice(-1500)}`,
       );
-      cases += batch.length;
-      const problems: string[] = [];
-      batch.forEach((c, i) => {
-        seen.add(c.route);
-        statuses.set(answers[i].status, (statuses.get(answers[i].status) ?? 0) + 1);
-        const problem = problemWith(c, answers[i]);
-        if (problem) problems.push(`${describeCase(c)} → ${problem}`);
-      });
-      if (problems.length) failures.push(...problems);
-      await keepFixtures(batch, answers).catch((error: Error) => {
-        failures.push(`keeping the fixtures failed: ${error.stack ?? error.message}`);
-        throw error;
-      });
-      return problems.length === 0;
-    }),
-    { seed: SEED, numRuns: RUNS, endOnFailure: true, verbose: 0 },
-  ).catch((error) => {
-    throw new Error(`${failures.slice(0, 8).join('\n')}\n(seed ${SEED}; PROPERTY_SEED=${SEED} repeats the run)\n${String(error).slice(0, 600)}\n…\n${String(error).slice(-1500)}`);
-  });
+    });
   const seconds = (Date.now() - started) / 1000;
-  const byStatus = [...statuses].sort(([a], [b]) => a - b).map(([status, count]) => `${status}×${count}`).join(' ');
-  console.log(`property run: ${cases} cases in ${seconds.toFixed(1)} s, seed ${SEED}, ${seen.size}/${routes.length} routes hit; answers ${byStatus}`);
+  const byStatus = [...statuses]
+    .sort(([a], [b]) => a - b)
+    .map(([status, count]) => `${status}×${count}`)
+    .join(' ');
+  console.log(
+    `property run: ${cases} cases in ${seconds.toFixed(1)} s, seed ${SEED}, ${seen.size}/${routes.length} routes hit; answers ${byStatus}`,
+  );
   if (process.env.PROPERTY_TIMES) console.log(`records made again ${refreshes.count} times, ${refreshes.ms} ms`);
-  if (process.env.PROPERTY_TIMES) console.log([...routeMs].sort((a, b) => b[1] - a[1]).slice(0, 15).map(([r, ms]) => `${r} ${ms} ms`).join('\n'));
+  if (process.env.PROPERTY_TIMES)
+    console.log(
+      [...routeMs]
+        .sort((a, b) => b[1] - a[1])
+        .slice(0, 15)
+        .map(([r, ms]) => `${r} ${ms} ms`)
+        .join('\n'),
+    );
   expect(cases).toBeGreaterThanOrEqual(10_000);
   expect(seen.size).toBe(routes.length);
   // Authorised paths were exercised, not only refusals.
-  expect([...statuses].filter(([status]) => status >= 200 && status < 300).reduce((sum, [, count]) => sum + count, 0)).toBeGreaterThan(cases / 20);
+  expect([...statuses].filter(([status]) => status >= 200 && status < 300).reduce((sum, [, count]) => sum + count, 0)).toBeGreaterThan(
+    cases / 20,
+  );
 
   // Nothing half-written by the run's two accounts (and whatever they created).
   const users = fixtures.userIds.join(',');
@@ -492,7 +687,9 @@ it(`answers ${RUNS * BATCH} generated requests over every route with no 5xx and 
     { type: QueryTypes.SELECT },
   );
   expect(checksMissingSteps).toEqual([]);
-  const keys = new Set((await sequelize.query<{ key: string }>('SELECT storage_key AS `key` FROM photos', { type: QueryTypes.SELECT })).map((row) => row.key));
+  const keys = new Set(
+    (await sequelize.query<{ key: string }>('SELECT storage_key AS `key` FROM photos', { type: QueryTypes.SELECT })).map((row) => row.key),
+  );
   const orphans = fs.existsSync(propertyUploadDir) ? fs.readdirSync(propertyUploadDir).filter((name) => !keys.has(name)) : [];
   expect(orphans).toEqual([]);
 });

@@ -75,7 +75,11 @@ describe('the invitation', () => {
 
     const preview = await request(app).get(`/api/invites/${token}`);
     expect(preview.status).toBe(200);
-    expect(preview.body.invite).toMatchObject({ archerName: 'Ilse Brannock', bowNickname: 'Cedar Hollow slider', invitedEmail: tech.email });
+    expect(preview.body.invite).toMatchObject({
+      archerName: 'Ilse Brannock',
+      bowNickname: 'Cedar Hollow slider',
+      invitedEmail: tech.email,
+    });
 
     const accepted = await tech.agent.post('/api/invites/accept').set(CSRF).send({ token });
     expect(accepted.status).toBe(200);
@@ -99,7 +103,9 @@ describe('the invitation', () => {
     expect((await tech.agent.get(`/api/sight-ins/${made.sightIn.id}/sheet.svg`)).status).toBe(200);
 
     const shares = await archer.agent.get(`/api/bows/${made.bow.id}/shares`);
-    expect(shares.body.shares).toEqual([expect.objectContaining({ id: share.id, state: 'active', tech: { id: tech.user.id, name: 'Joss Harrow', email: tech.email } })]);
+    expect(shares.body.shares).toEqual([
+      expect.objectContaining({ id: share.id, state: 'active', tech: { id: tech.user.id, name: 'Joss Harrow', email: tech.email } }),
+    ]);
 
     const log = await archer.agent.get(`/api/bows/${made.bow.id}/audit`);
     expect(log.body.entries.map((e: { action: string }) => e.action)).toEqual(['accepted', 'invited']);
@@ -145,14 +151,20 @@ describe('the invitation', () => {
     expect(wrongAddress.body.error.fields.email).toBe(`Use the invited address, ${email}`);
 
     const agent = request.agent(app);
-    const res = await agent.post('/api/invites/accept-new').set(CSRF).send({ token, name: 'Tobin Ashgrove', email, password: 'a long enough password' });
+    const res = await agent
+      .post('/api/invites/accept-new')
+      .set(CSRF)
+      .send({ token, name: 'Tobin Ashgrove', email, password: 'a long enough password' });
     expect(res.status).toBe(201);
     expect(res.body.user).toMatchObject({ email, role: 'tech', name: 'Tobin Ashgrove' });
     expect(res.body.share.state).toBe('active');
     expect((await agent.get('/api/me')).body.user.role).toBe('tech');
     expect((await agent.get(`/api/bows/${made.bow.id}`)).status).toBe(200);
 
-    const again = await request(app).post('/api/invites/accept-new').set(CSRF).send({ token, name: 'Tobin Again', email, password: 'a long enough password' });
+    const again = await request(app)
+      .post('/api/invites/accept-new')
+      .set(CSRF)
+      .send({ token, name: 'Tobin Again', email, password: 'a long enough password' });
     expect(again.status).toBe(410);
   });
 
@@ -187,7 +199,10 @@ describe('the invitation', () => {
     expect(twice.status).toBe(409);
 
     const stranger = await signedInAgent(app);
-    const notTheirs = await stranger.agent.post(`/api/bows/${bow.id}/shares`).set(CSRF).send({ email: uniqueEmail('x') });
+    const notTheirs = await stranger.agent
+      .post(`/api/bows/${bow.id}/shares`)
+      .set(CSRF)
+      .send({ email: uniqueEmail('x') });
     expect(notTheirs.status).toBe(404);
     expect((await stranger.agent.get(`/api/bows/${bow.id}/shares`)).status).toBe(404);
   });
@@ -207,7 +222,10 @@ describe('what a technician may do on a shared bow', () => {
       ({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note }),
     );
     const [extra] = knownMarks([50]);
-    const appended = await tech.agent.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ marks: [...stored, { ...extra, note: 'shop check' }] });
+    const appended = await tech.agent
+      .patch(`/api/sight-ins/${sightIn.id}`)
+      .set(CSRF)
+      .send({ marks: [...stored, { ...extra, note: 'shop check' }] });
     expect(appended.status).toBe(200);
     expect(appended.body.sightIn.marks).toHaveLength(4);
 
@@ -242,7 +260,11 @@ describe('what a technician may do on a shared bow', () => {
     // A refit alone is not logged as a change of the technician's.
     expect(byTech.filter((e: { action: string; recordType: string }) => e.action === 'updated' && e.recordType === 'sight-in')).toEqual([]);
     const checkEntry = byTech.find((e: { recordType: string }) => e.recordType === 'level-check');
-    expect(checkEntry).toMatchObject({ recordId: check.body.check?.id ?? expect.any(Number), bowId: bow.id, actor: { name: 'Desmond Audit', role: 'tech' } });
+    expect(checkEntry).toMatchObject({
+      recordId: check.body.check?.id ?? expect.any(Number),
+      bowId: bow.id,
+      actor: { name: 'Desmond Audit', role: 'tech' },
+    });
     const changeEntry = byTech.find((e: { recordType: string }) => e.recordType === 'bow-change');
     expect(changeEntry.summary).toContain('New string and cables');
     expect(byTech.every((e: { at: string }) => !Number.isNaN(Date.parse(e.at)))).toBe(true);
@@ -256,7 +278,10 @@ describe('what a technician may do on a shared bow', () => {
 
   it('is refused every delete and every change to the archer’s records, and nothing changes', async () => {
     const { archer, tech, bow, build, sightIn } = await sharedBow();
-    const change = await archer.agent.post(`/api/bows/${bow.id}/changes`).set(CSRF).send({ kind: 'rest', changedAt: new Date().toISOString(), note: '' });
+    const change = await archer.agent
+      .post(`/api/bows/${bow.id}/changes`)
+      .set(CSRF)
+      .send({ kind: 'rest', changedAt: new Date().toISOString(), note: '' });
     const tape = await archer.agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 });
     expect(tape.status).toBe(201);
     const marks = (await archer.agent.get(`/api/sight-ins/${sightIn.id}`)).body.sightIn.marks;
@@ -267,13 +292,29 @@ describe('what a technician may do on a shared bow', () => {
       () => tech.agent.patch(`/api/bows/${bow.id}`).set(CSRF).send({ nickname: 'Mine now' }),
       () => tech.agent.delete(`/api/sight-ins/${sightIn.id}`).set(CSRF),
       () => tech.agent.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ placeLabel: 'Elsewhere' }),
-      () => tech.agent.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ marks: marks.slice(1).map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note })) }),
+      () =>
+        tech.agent
+          .patch(`/api/sight-ins/${sightIn.id}`)
+          .set(CSRF)
+          .send({
+            marks: marks.slice(1).map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({
+              distance,
+              unit,
+              scaleMm,
+              arrowsShot,
+              note,
+            })),
+          }),
       () => tech.agent.delete(`/api/builds/${build.id}`).set(CSRF),
       () => tech.agent.patch(`/api/builds/${build.id}`).set(CSRF).send({ name: 'Renamed' }),
       // Adding a build is allowed since issue 15 (tests/api/technician-builds.test.ts); changing one is not.
       () => tech.agent.delete(`/api/tapes/${tape.body.tape.id}`).set(CSRF),
       () => tech.agent.delete(`/api/changes/${change.body.change.id}`).set(CSRF),
-      () => tech.agent.post(`/api/bows/${bow.id}/shares`).set(CSRF).send({ email: uniqueEmail('friend') }),
+      () =>
+        tech.agent
+          .post(`/api/bows/${bow.id}/shares`)
+          .set(CSRF)
+          .send({ email: uniqueEmail('friend') }),
       () => tech.agent.get(`/api/bows/${bow.id}/shares`),
     ];
     for (const [index, send] of refused.entries()) {
@@ -281,7 +322,9 @@ describe('what a technician may do on a shared bow', () => {
       expect({ index, status: res.status }).toEqual({ index, status: 403 });
     }
     // Revoking someone's share is answered as if there were no such share.
-    expect((await tech.agent.post(`/api/shares/${(await Share.findOne({ where: { bowId: bow.id } }))!.id}/revoke`).set(CSRF)).status).toBe(404);
+    expect((await tech.agent.post(`/api/shares/${(await Share.findOne({ where: { bowId: bow.id } }))!.id}/revoke`).set(CSRF)).status).toBe(
+      404,
+    );
 
     expect(await Bow.findByPk(bow.id)).not.toBeNull();
     expect((await Bow.findByPk(bow.id))!.nickname).toBe(bow.nickname);
@@ -293,7 +336,13 @@ describe('what a technician may do on a shared bow', () => {
   it('sees nothing of the archer’s other bows or of another technician’s clients', async () => {
     const { archer, tech } = await sharedBow();
     const unshared = await bowWithSightIn(archer.agent, [20, 40], {}, { nickname: 'Not shared' });
-    for (const path of [`/api/bows/${unshared.bow.id}`, `/api/bows/${unshared.bow.id}/sight-ins`, `/api/sight-ins/${unshared.sightIn.id}`, `/api/builds/${unshared.build.id}`, `/api/bows/${unshared.bow.id}/checks`]) {
+    for (const path of [
+      `/api/bows/${unshared.bow.id}`,
+      `/api/bows/${unshared.bow.id}/sight-ins`,
+      `/api/sight-ins/${unshared.sightIn.id}`,
+      `/api/builds/${unshared.build.id}`,
+      `/api/bows/${unshared.bow.id}/checks`,
+    ]) {
       expect({ path, status: (await tech.agent.get(path)).status }).toEqual({ path, status: 404 });
     }
     const write = await tech.agent.post(`/api/bows/${unshared.bow.id}/checks`).set(CSRF).send({ place: 'bench' });
@@ -303,7 +352,7 @@ describe('what a technician may do on a shared bow', () => {
     expect((await tech.agent.get(`/api/bows/${elsewhere.bow.id}`)).status).toBe(404);
     expect((await tech.agent.get(`/api/sight-ins/${elsewhere.sightIn.id}`)).status).toBe(404);
     const clients = (await tech.agent.get('/api/clients')).body.clients;
-    expect(clients.flatMap((c: { bows: Array<{ id: number }> }) => c.bows.map((b) => b.id))).not.toContain(elsewhere.bow.id);
+    expect(clients.flatMap((c: { bows: { id: number }[] }) => c.bows.map((b) => b.id))).not.toContain(elsewhere.bow.id);
 
     // Clients is for technicians only.
     expect((await archer.agent.get('/api/clients')).status).toBe(403);
@@ -324,7 +373,12 @@ describe('revoking', () => {
     expect((await tech.agent.get('/api/clients')).body.clients).toEqual([]);
 
     const log = await archer.agent.get(`/api/bows/${bow.id}/audit`);
-    expect(log.body.entries[0]).toMatchObject({ action: 'revoked', recordType: 'share', actor: { id: archer.user.id }, summary: expect.stringContaining('Desmond Revoke') });
+    expect(log.body.entries[0]).toMatchObject({
+      action: 'revoked',
+      recordType: 'share',
+      actor: { id: archer.user.id },
+      summary: expect.stringContaining('Desmond Revoke'),
+    });
     expect((await archer.agent.get('/api/shares')).body.shares.map((s: { id: number }) => s.id)).not.toContain(share.id);
   });
 });

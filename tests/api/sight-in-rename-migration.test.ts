@@ -32,7 +32,9 @@ const rows = <T extends object = Record<string, unknown>>(sql: string): Promise<
 it('renames the sight-in tables, columns and audit kinds and keeps every row', async () => {
   await migrator(db).up({ to: '0075-sight-sessions-warning-count' });
   const now = "'2026-11-02 10:00:00'";
-  await db.query(`INSERT INTO users (id, email, password_hash, name, created_at, updated_at) VALUES (1, 'a@example.test', 'x', 'Ada Test', ${now}, ${now})`);
+  await db.query(
+    `INSERT INTO users (id, email, password_hash, name, created_at, updated_at) VALUES (1, 'a@example.test', 'x', 'Ada Test', ${now}, ${now})`,
+  );
   await db.query(
     `INSERT INTO bows (id, user_id, nickname, hand, draw_weight_lb, draw_length_mm, sight_kind, sight_radius_mm, peep_height_mm, tape_width_mm, pin_distances, notes, created_at, updated_at)
      VALUES (1, 1, 'Test bow', 'right', 60, 720, 'single-pin-slider', 820, 110, 12, '[]', '', ${now}, ${now})`,
@@ -46,24 +48,37 @@ it('renames the sight-in tables, columns and audit kinds and keeps every row', a
     `INSERT INTO session_marks (session_id, position, distance, unit, scale_mm, created_at, updated_at)
      VALUES (7, 0, 20, 'yd', 12.5, ${now}, ${now}), (7, 1, 40, 'yd', 25.5, ${now}, ${now})`,
   );
-  await db.query(`INSERT INTO audit_entries (action, record_type, record_id, summary, at) VALUES ('created', 'sight-session', 7, 'x', ${now}), ('created', 'session-mark', 1, 'y', ${now})`);
+  await db.query(
+    `INSERT INTO audit_entries (action, record_type, record_id, summary, at) VALUES ('created', 'sight-session', 7, 'x', ${now}), ('created', 'session-mark', 1, 'y', ${now})`,
+  );
 
   const applied = await migrator(db).up();
-  expect(applied.map((step) => step.name)).toEqual(expect.arrayContaining(['0080-rename-sight-sessions-table', '0086-rename-audit-record-kinds']));
+  expect(applied.map((step) => step.name)).toEqual(
+    expect.arrayContaining(['0080-rename-sight-sessions-table', '0086-rename-audit-record-kinds']),
+  );
 
-  const tables = (await rows<{ name: string }>('SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE()')).map((t) => t.name);
+  const tables = (
+    await rows<{ name: string }>('SELECT table_name AS name FROM information_schema.tables WHERE table_schema = DATABASE()')
+  ).map((t) => t.name);
   expect(tables).toEqual(expect.arrayContaining(['sight_ins', 'sight_in_marks']));
   expect(tables).not.toContain('sight_sessions');
   expect(tables).not.toContain('session_marks');
-  const oldColumns = await rows<{ t: string }>("SELECT table_name AS t FROM information_schema.columns WHERE table_schema = DATABASE() AND column_name = 'session_id'");
+  const oldColumns = await rows<{ t: string }>(
+    "SELECT table_name AS t FROM information_schema.columns WHERE table_schema = DATABASE() AND column_name = 'session_id'",
+  );
   expect(oldColumns).toEqual([]);
 
-  expect(await rows('SELECT id, bow_id AS bowId, fit_warning_count AS warnings FROM sight_ins')).toEqual([{ id: 7, bowId: 1, warnings: 1 }]);
+  expect(await rows('SELECT id, bow_id AS bowId, fit_warning_count AS warnings FROM sight_ins')).toEqual([
+    { id: 7, bowId: 1, warnings: 1 },
+  ]);
   expect(await rows('SELECT sight_in_id AS sightInId, distance FROM sight_in_marks ORDER BY position')).toEqual([
     { sightInId: 7, distance: 20 },
     { sightInId: 7, distance: 40 },
   ]);
-  expect((await rows<{ kind: string }>('SELECT record_type AS kind FROM audit_entries ORDER BY id')).map((r) => r.kind)).toEqual(['sight-in', 'sight-in-mark']);
+  expect((await rows<{ kind: string }>('SELECT record_type AS kind FROM audit_entries ORDER BY id')).map((r) => r.kind)).toEqual([
+    'sight-in',
+    'sight-in-mark',
+  ]);
 
   // The foreign keys came along: deleting the sight-in still deletes its marks.
   await db.query('DELETE FROM sight_ins WHERE id = 7');

@@ -10,7 +10,11 @@ jest.setTimeout(30_000);
 afterEach(() => jest.restoreAllMocks());
 
 const marksOf = async (sightInId: number) =>
-  (await SightInMark.findAll({ where: { sightInId }, order: [['position', 'ASC']] })).map((mark) => [mark.distance, mark.unit, mark.scaleMm]);
+  (await SightInMark.findAll({ where: { sightInId }, order: [['position', 'ASC']] })).map((mark) => [
+    mark.distance,
+    mark.unit,
+    mark.scaleMm,
+  ]);
 
 describe('POST /api/bows/:bowId/sight-ins', () => {
   it('names each field problem, marks included, and writes nothing', async () => {
@@ -37,11 +41,18 @@ describe('POST /api/bows/:bowId/sight-ins', () => {
       'marks.2.unit': 'Choose yards (yd) or metres (m)',
       'marks.2.scaleMm': 'Scale reading must be at most 200 mm',
     });
-    const few = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20]) });
+    const few = await agent
+      .post(`/api/bows/${bow.id}/sight-ins`)
+      .set(CSRF)
+      .send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20]) });
     // One mark needs a chronographed speed on the build (this build has none).
-    expect(few.body.error.fields).toEqual({ marks: 'Enter at least 2 marks to fit, or one mark with a chronographed speed on the arrow build' });
+    expect(few.body.error.fields).toEqual({
+      marks: 'Enter at least 2 marks to fit, or one mark with a chronographed speed on the arrow build',
+    });
     const none = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: [] });
-    expect(none.body.error.fields).toEqual({ marks: 'Enter at least 2 marks to fit (or one, with a chronographed speed on the arrow build)' });
+    expect(none.body.error.fields).toEqual({
+      marks: 'Enter at least 2 marks to fit (or one, with a chronographed speed on the arrow build)',
+    });
     const twice = await agent
       .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
@@ -54,7 +65,10 @@ describe('POST /api/bows/:bowId/sight-ins', () => {
     const { agent } = await signedInAgent(app);
     const first = await bowWithBuild(agent);
     const second = await bowWithBuild(agent, { nickname: 'Other bow' });
-    const res = await agent.post(`/api/bows/${first.bow.id}/sight-ins`).set(CSRF).send({ buildId: second.build.id, date: '2026-10-01', marks: knownMarks([20, 60]) });
+    const res = await agent
+      .post(`/api/bows/${first.bow.id}/sight-ins`)
+      .set(CSRF)
+      .send({ buildId: second.build.id, date: '2026-10-01', marks: knownMarks([20, 60]) });
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({ buildId: 'Choose one of this bow’s arrow builds' });
     expect(await SightIn.count({ where: { bowId: first.bow.id } })).toBe(0);
@@ -63,7 +77,10 @@ describe('POST /api/bows/:bowId/sight-ins', () => {
   it('saves one mark when the build has a chronographed speed: an estimate, and its tape says so', async () => {
     const { agent } = await signedInAgent(app);
     const { bow, build } = await bowWithBuild(agent, {}, { speedFps: knownSight.speedFps });
-    const res = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20]) });
+    const res = await agent
+      .post(`/api/bows/${bow.id}/sight-ins`)
+      .set(CSRF)
+      .send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20]) });
     expect(res.status).toBe(201);
     const fit = sightInSchema.parse(res.body.sightIn).fit;
     expect(fit.method).toBe('one-mark');
@@ -93,7 +110,9 @@ describe('POST /api/bows/:bowId/sight-ins', () => {
     expect(res.status).toBe(201);
     const sightIn = sightInSchema.parse(res.body.sightIn);
     expect(sightIn).toMatchObject({ bowId: bow.id, buildId: build.id, date: '2026-10-01', placeLabel: 'Alder flat', altitudeM: null });
-    expect(sightIn.marks.map((mark) => [mark.position, mark.distance, mark.scaleMm])).toEqual(marks.map((mark, i) => [i, mark.distance, mark.scaleMm]));
+    expect(sightIn.marks.map((mark) => [mark.position, mark.distance, mark.scaleMm])).toEqual(
+      marks.map((mark, i) => [i, mark.distance, mark.scaleMm]),
+    );
     expect(await marksOf(sightIn.id)).toEqual(marks.map((mark) => [mark.distance, 'yd', mark.scaleMm]));
 
     // The marks came from a known sight (280 fps, Cd 2.0, 112 mm peep, 838 mm radius); the fit finds it again.
@@ -122,7 +141,14 @@ describe('POST /api/bows/:bowId/sight-ins', () => {
     const res = await agent
       .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
-      .send({ buildId: build.id, date: '2026-10-01', marks: [{ distance: 20, scaleMm: 18.5 }, { distance: 60, scaleMm: 18.7 }] });
+      .send({
+        buildId: build.id,
+        date: '2026-10-01',
+        marks: [
+          { distance: 20, scaleMm: 18.5 },
+          { distance: 60, scaleMm: 18.7 },
+        ],
+      });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('validation_failed');
     expect(Object.keys(res.body.error.fields)).toEqual(['marks']);
@@ -148,7 +174,10 @@ describe('POST /api/bows/:bowId/sight-ins', () => {
   it('predicts the marks of a fixed multi-pin sight’s own pin distances too', async () => {
     const { agent } = await signedInAgent(app);
     const { bow, build } = await bowWithBuild(agent, { sightKind: 'fixed-multi-pin', pinDistances: [20, 33, 47] });
-    const res = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20, 60]) });
+    const res = await agent
+      .post(`/api/bows/${bow.id}/sight-ins`)
+      .set(CSRF)
+      .send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20, 60]) });
     expect(res.status).toBe(201);
     const distances = res.body.sightIn.fit.marks.map((mark: { distance: number }) => mark.distance);
     expect(distances).toEqual(expect.arrayContaining([20, 33, 47]));
@@ -163,7 +192,10 @@ describe('POST /api/bows/:bowId/sight-ins', () => {
     // The same pin positions on a scale numbered upward from 100 mm.
     const upMarks = marks.map((mark) => ({ ...mark, scaleMm: Math.round((100 - mark.scaleMm) * 10) / 10 }));
     const a = await agent.post(`/api/bows/${down.bow.id}/sight-ins`).set(CSRF).send({ buildId: down.build.id, date: '2026-10-01', marks });
-    const b = await agent.post(`/api/bows/${up.bow.id}/sight-ins`).set(CSRF).send({ buildId: up.build.id, date: '2026-10-01', marks: upMarks });
+    const b = await agent
+      .post(`/api/bows/${up.bow.id}/sight-ins`)
+      .set(CSRF)
+      .send({ buildId: up.build.id, date: '2026-10-01', marks: upMarks });
     expect(b.status).toBe(201);
     const fit = sightInSchema.parse(b.body.sightIn).fit;
     expect(fit.scaleDirection).toBe('up');
@@ -221,7 +253,10 @@ describe('PATCH /api/sight-ins/:id', () => {
     // The real database, with the mark insert made to fail after the sight-in row was updated and the old marks deleted.
     jest.spyOn(SightInMark, 'bulkCreate').mockRejectedValueOnce(new Error('disk full'));
     jest.spyOn(console, 'error').mockImplementation(() => {}); // the error handler logs the injected failure
-    const res = await agent.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ placeLabel: 'Changed', marks: knownMarks([20, 30, 50]) });
+    const res = await agent
+      .patch(`/api/sight-ins/${sightIn.id}`)
+      .set(CSRF)
+      .send({ placeLabel: 'Changed', marks: knownMarks([20, 30, 50]) });
     expect(res.status).toBe(500);
     expect(res.body.error.message).toBe('Something went wrong on our side. Nothing was saved.');
     expect(await marksOf(sightIn.id)).toEqual(before);
@@ -235,7 +270,10 @@ describe('PATCH /api/sight-ins/:id', () => {
     const { bow, build } = await bowWithBuild(agent);
     jest.spyOn(SightInMark, 'bulkCreate').mockRejectedValueOnce(new Error('disk full'));
     jest.spyOn(console, 'error').mockImplementation(() => {});
-    const res = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20, 60]) });
+    const res = await agent
+      .post(`/api/bows/${bow.id}/sight-ins`)
+      .set(CSRF)
+      .send({ buildId: build.id, date: '2026-10-01', marks: knownMarks([20, 60]) });
     expect(res.status).toBe(500);
     expect(await SightIn.count({ where: { bowId: bow.id } })).toBe(0);
   }, 20000);
@@ -245,7 +283,10 @@ describe('GET and DELETE', () => {
   it('lists the bow’s sight-ins newest first and reads one with its marks', async () => {
     const { agent } = await signedInAgent(app);
     const { bow, build, sightIn } = await bowWithSightIn(agent, [20, 40, 60]);
-    const newer = await agent.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).send({ buildId: build.id, date: '2026-12-01', marks: knownMarks([30, 50]) });
+    const newer = await agent
+      .post(`/api/bows/${bow.id}/sight-ins`)
+      .set(CSRF)
+      .send({ buildId: build.id, date: '2026-12-01', marks: knownMarks([30, 50]) });
     const list = await agent.get(`/api/bows/${bow.id}/sight-ins`);
     expect(list.status).toBe(200);
     expect(list.body.sightIns.map((s: { id: number }) => s.id)).toEqual([newer.body.sightIn.id, sightIn.id]);
@@ -276,7 +317,13 @@ describe('ownership', () => {
       [await stranger.get(`/api/bows/${bow.id}/sight-ins`), 'That bow was not found.'],
       [await stranger.post(`/api/bows/${bow.id}/sight-ins`).set(CSRF).send(body), 'That bow was not found.'],
       [await stranger.get(`/api/sight-ins/${sightIn.id}`), 'That sight-in was not found.'],
-      [await stranger.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ marks: knownMarks([30, 50]) }), 'That sight-in was not found.'],
+      [
+        await stranger
+          .patch(`/api/sight-ins/${sightIn.id}`)
+          .set(CSRF)
+          .send({ marks: knownMarks([30, 50]) }),
+        'That sight-in was not found.',
+      ],
       [await stranger.delete(`/api/sight-ins/${sightIn.id}`).set(CSRF), 'That sight-in was not found.'],
     ] as const;
     for (const [res, message] of responses) {

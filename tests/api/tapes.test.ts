@@ -19,7 +19,10 @@ const asBuffer = (res: NodeJS.ReadableStream & { setEncoding?: unknown }, done: 
 };
 
 async function download(agent: Agent, url: string) {
-  return agent.get(url).buffer(true).parse(asBuffer as never);
+  return agent
+    .get(url)
+    .buffer(true)
+    .parse(asBuffer as never);
 }
 
 function parseSvg(body: Buffer) {
@@ -68,7 +71,10 @@ describe('saved tapes', () => {
   it('checks the layout with field messages and saves nothing bad', async () => {
     const { agent } = await signedInAgent(app);
     const { sightIn } = await bowWithSightIn(agent);
-    const res = await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, step: 3, widthMm: 2, paper: 'a3' });
+    const res = await agent
+      .post(`/api/sight-ins/${sightIn.id}/tapes`)
+      .set(CSRF)
+      .send({ fromDistance: 20, toDistance: 60, step: 3, widthMm: 2, paper: 'a3' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({
       step: 'Tick step must be 0.5, 1, 2.5 or 5',
@@ -83,10 +89,25 @@ describe('saved tapes', () => {
   it('creates, lists, reads, changes and deletes a tape', async () => {
     const { agent } = await signedInAgent(app);
     const { bow, sightIn } = await bowWithSightIn(agent);
-    const made = await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 15, toDistance: 80, label: 'Hunt tape' });
+    const made = await agent
+      .post(`/api/sight-ins/${sightIn.id}/tapes`)
+      .set(CSRF)
+      .send({ fromDistance: 15, toDistance: 80, label: 'Hunt tape' });
     expect(made.status).toBe(201);
     const tape = tapeSchema.parse(made.body.tape);
-    expect(tape).toMatchObject({ sightInId: sightIn.id, bowId: bow.id, fromDistance: 15, toDistance: 80, step: 1, unit: 'yd', orientation: 'down', widthMm: 12, mirror: false, paper: 'letter', label: 'Hunt tape' });
+    expect(tape).toMatchObject({
+      sightInId: sightIn.id,
+      bowId: bow.id,
+      fromDistance: 15,
+      toDistance: 80,
+      step: 1,
+      unit: 'yd',
+      orientation: 'down',
+      widthMm: 12,
+      mirror: false,
+      paper: 'letter',
+      label: 'Hunt tape',
+    });
     expect((await agent.get(`/api/sight-ins/${sightIn.id}/tapes`)).body.tapes.map((t: { id: number }) => t.id)).toEqual([tape.id]);
     expect((await agent.get(`/api/tapes/${tape.id}`)).body.tape.label).toBe('Hunt tape');
     const changed = await agent.patch(`/api/tapes/${tape.id}`).set(CSRF).send({ orientation: 'up', mirror: true });
@@ -119,7 +140,10 @@ describe('GET /api/sight-ins/:id/tape.svg', () => {
   it('draws a saved tape’s layout with ?tape=, numbers running up', async () => {
     const { agent } = await signedInAgent(app);
     const { sightIn } = await bowWithSightIn(agent, [20, 40, 60]);
-    const made = await agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, step: 5, orientation: 'up', widthMm: 10 });
+    const made = await agent
+      .post(`/api/sight-ins/${sightIn.id}/tapes`)
+      .set(CSRF)
+      .send({ fromDistance: 20, toDistance: 60, step: 5, orientation: 'up', widthMm: 10 });
     const res = await download(agent, `/api/sight-ins/${sightIn.id}/tape.svg?tape=${made.body.tape.id}`);
     expect(res.status).toBe(200);
     const svg = parseSvg(res.body);
@@ -135,7 +159,10 @@ describe('GET /api/sight-ins/:id/tape.svg', () => {
     const second = await bowWithSightIn(agent);
     const bad = await agent.get(`/api/sight-ins/${first.sightIn.id}/tape.svg?from=abc&step=3`);
     expect(bad.status).toBe(400);
-    expect(bad.body.error.fields).toEqual({ 'query.from': 'From distance must be a number', 'query.step': 'Tick step must be 0.5, 1, 2.5 or 5' });
+    expect(bad.body.error.fields).toEqual({
+      'query.from': 'From distance must be a number',
+      'query.step': 'Tick step must be 0.5, 1, 2.5 or 5',
+    });
     const made = await agent.post(`/api/sight-ins/${second.sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 });
     const wrong = await agent.get(`/api/sight-ins/${first.sightIn.id}/tape.svg?tape=${made.body.tape.id}`);
     expect(wrong.status).toBe(404);
@@ -205,12 +232,18 @@ describe('ownership', () => {
   it('gives another account a 404 on every tape route and download, and changes nothing', async () => {
     const owner = await signedInAgent(app);
     const { sightIn } = await bowWithSightIn(owner.agent);
-    const made = await owner.agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, label: 'Owner tape' });
+    const made = await owner.agent
+      .post(`/api/sight-ins/${sightIn.id}/tapes`)
+      .set(CSRF)
+      .send({ fromDistance: 20, toDistance: 60, label: 'Owner tape' });
     const tapeId = made.body.tape.id;
     const stranger = (await signedInAgent(app)).agent;
     const responses = [
       [await stranger.get(`/api/sight-ins/${sightIn.id}/tapes`), 'That sight-in was not found.'],
-      [await stranger.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 }), 'That sight-in was not found.'],
+      [
+        await stranger.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60 }),
+        'That sight-in was not found.',
+      ],
       [await stranger.get(`/api/tapes/${tapeId}`), 'That tape was not found.'],
       [await stranger.patch(`/api/tapes/${tapeId}`).set(CSRF).send({ label: 'Taken' }), 'That tape was not found.'],
       [await stranger.delete(`/api/tapes/${tapeId}`).set(CSRF), 'That tape was not found.'],

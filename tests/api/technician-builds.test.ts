@@ -27,9 +27,16 @@ async function sharedBow() {
 describe('a technician adds an arrow build to a shared bow', () => {
   it('adds it as a new entry, attributed, that the archer sees and the audit log records', async () => {
     const { archer, tech, bow, build } = await sharedBow();
-    const added = await tech.agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Shop test 480', pointGr: 100 }));
+    const added = await tech.agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ name: 'Shop test 480', pointGr: 100 }));
     expect(added.status).toBe(201);
-    expect(added.body.build).toMatchObject({ bowId: bow.id, name: 'Shop test 480', addedBy: { id: tech.user.id, name: 'Oren Hallowfield' } });
+    expect(added.body.build).toMatchObject({
+      bowId: bow.id,
+      name: 'Shop test 480',
+      addedBy: { id: tech.user.id, name: 'Oren Hallowfield' },
+    });
 
     // The archer sees it on the bow, beside their own build, each naming who added it.
     const detail = await archer.agent.get(`/api/bows/${bow.id}`);
@@ -51,7 +58,10 @@ describe('a technician adds an arrow build to a shared bow', () => {
     const { tech, build, bow } = await sharedBow();
     expect((await tech.agent.patch(`/api/builds/${build.id}`).set(CSRF).send({ name: 'Renamed' })).status).toBe(403);
     expect((await tech.agent.delete(`/api/builds/${build.id}`).set(CSRF)).status).toBe(403);
-    const own = await tech.agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Mine' }));
+    const own = await tech.agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ name: 'Mine' }));
     expect(own.status).toBe(201);
     expect((await tech.agent.patch(`/api/builds/${own.body.build.id}`).set(CSRF).send({ name: 'Renamed' })).status).toBe(403);
     expect((await tech.agent.delete(`/api/builds/${own.body.build.id}`).set(CSRF)).status).toBe(403);
@@ -61,12 +71,21 @@ describe('a technician adds an arrow build to a shared bow', () => {
     const { archer, tech, bow, share } = await sharedBow();
     const revoked = await archer.agent.post(`/api/shares/${share.id}/revoke`).set(CSRF);
     expect(revoked.status).toBe(200);
-    const after = await tech.agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Too late' }));
+    const after = await tech.agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ name: 'Too late' }));
     expect(after.status).toBe(404);
 
     const other = await signedInAgent(app, { name: 'Unshared Archer' });
-    const unshared = await other.agent.post('/api/bows').set(CSRF).send(bowBody({ nickname: 'Not shared' }));
-    const refused = await tech.agent.post(`/api/bows/${unshared.body.bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Sneaky' }));
+    const unshared = await other.agent
+      .post('/api/bows')
+      .set(CSRF)
+      .send(bowBody({ nickname: 'Not shared' }));
+    const refused = await tech.agent
+      .post(`/api/bows/${unshared.body.bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ name: 'Sneaky' }));
     expect(refused.status).toBe(404);
 
     const names = (await archer.agent.get(`/api/bows/${bow.id}/builds`)).body.builds.map((b: { name: string }) => b.name);
@@ -76,7 +95,10 @@ describe('a technician adds an arrow build to a shared bow', () => {
 
   it('still checks the build like the archer’s own (a field error names the field)', async () => {
     const { tech, bow } = await sharedBow();
-    const bad = await tech.agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Bad', grainsPerInch: -3 }));
+    const bad = await tech.agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ name: 'Bad', grainsPerInch: -3 }));
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toContain('grainsPerInch');
   });
@@ -88,9 +110,18 @@ describe('who added each mark and sight-in', () => {
     expect(sightIn.addedBy).toEqual({ id: archer.user.id, name: 'Ilse Brackenridge' });
     expect(sightIn.marks.every((mark: { addedBy: unknown }) => (mark.addedBy as { id: number }).id === archer.user.id)).toBe(true);
 
-    const stored = sightIn.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note }));
+    const stored = sightIn.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({
+      distance,
+      unit,
+      scaleMm,
+      arrowsShot,
+      note,
+    }));
     const extra = knownMarks([50])[0];
-    const appended = await tech.agent.patch(`/api/sight-ins/${sightIn.id}`).set(CSRF).send({ marks: [...stored, extra] });
+    const appended = await tech.agent
+      .patch(`/api/sight-ins/${sightIn.id}`)
+      .set(CSRF)
+      .send({ marks: [...stored, extra] });
     expect(appended.status).toBe(200);
     const techMark = appended.body.sightIn.marks.find((mark: { distance: number }) => mark.distance === 50);
     expect(techMark.addedBy).toEqual({ id: tech.user.id, name: 'Oren Hallowfield' });
@@ -99,9 +130,20 @@ describe('who added each mark and sight-in', () => {
     const again = await archer.agent
       .patch(`/api/sight-ins/${sightIn.id}`)
       .set(CSRF)
-      .send({ notes: 'Windy', marks: appended.body.sightIn.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({ distance, unit, scaleMm, arrowsShot, note })) });
+      .send({
+        notes: 'Windy',
+        marks: appended.body.sightIn.marks.map(({ distance, unit, scaleMm, arrowsShot, note }: Record<string, unknown>) => ({
+          distance,
+          unit,
+          scaleMm,
+          arrowsShot,
+          note,
+        })),
+      });
     expect(again.status).toBe(200);
-    const byDistance = Object.fromEntries(again.body.sightIn.marks.map((mark: { distance: number; addedBy: { name: string } }) => [mark.distance, mark.addedBy.name]));
+    const byDistance = Object.fromEntries(
+      again.body.sightIn.marks.map((mark: { distance: number; addedBy: { name: string } }) => [mark.distance, mark.addedBy.name]),
+    );
     expect(byDistance).toEqual({ 20: 'Ilse Brackenridge', 40: 'Ilse Brackenridge', 60: 'Ilse Brackenridge', 50: 'Oren Hallowfield' });
 
     // A sight-in the technician adds is theirs in the bow's list.
@@ -129,14 +171,20 @@ describe('set-up changes a technician records (engineer E’s set-up measures)',
     expect(entry).toMatchObject({ measure: 'peep-height', addedBy: { id: tech.user.id, name: 'Oren Hallowfield' }, byTechnician: true });
 
     await archer.agent.post(`/api/shares/${share.id}/revoke`).set(CSRF);
-    const refused = await tech.agent.post(`/api/bows/${bow.id}/setup`).set(CSRF).send({ measure: 'peep-height', valueMm: 114, measuredOn: '2026-12-01', note: '' });
+    const refused = await tech.agent
+      .post(`/api/bows/${bow.id}/setup`)
+      .set(CSRF)
+      .send({ measure: 'peep-height', valueMm: 114, measuredOn: '2026-12-01', note: '' });
     expect(refused.status).toBe(404);
   });
 
   it('records a new sight radius as the technician’s own entry; the archer’s bow is not edited, and a typo is refused', async () => {
     const { archer, tech, bow } = await sharedBow();
     const before = (await archer.agent.get(`/api/bows/${bow.id}`)).body.bow.sightRadiusMm;
-    const typo = await tech.agent.post(`/api/bows/${bow.id}/setup`).set(CSRF).send({ measure: 'sight-radius', valueMm: 8400, measuredOn: '2026-12-01', note: '' });
+    const typo = await tech.agent
+      .post(`/api/bows/${bow.id}/setup`)
+      .set(CSRF)
+      .send({ measure: 'sight-radius', valueMm: 8400, measuredOn: '2026-12-01', note: '' });
     expect(typo.status).toBe(400);
     expect(typo.body.error.fields.valueMm).toBe('Sight radius must be between 400 and 1200 mm');
     const added = await tech.agent
@@ -145,7 +193,11 @@ describe('set-up changes a technician records (engineer E’s set-up measures)',
       .send({ measure: 'sight-radius', valueMm: 860, measuredOn: '2026-12-01', note: 'Longer sight bar fitted' });
     expect(added.status).toBe(201);
     const read = await archer.agent.get(`/api/bows/${bow.id}/setup`);
-    expect(read.body.latest['sight-radius']).toMatchObject({ valueMm: 860, addedBy: { id: tech.user.id, name: 'Oren Hallowfield' }, byTechnician: true });
+    expect(read.body.latest['sight-radius']).toMatchObject({
+      valueMm: 860,
+      addedBy: { id: tech.user.id, name: 'Oren Hallowfield' },
+      byTechnician: true,
+    });
     // The archer's own set-up (what the fit uses) is unchanged: the technician adds, never edits.
     expect((await archer.agent.get(`/api/bows/${bow.id}`)).body.bow.sightRadiusMm).toBe(before);
   });

@@ -7,7 +7,10 @@ const app = testApp();
 afterAll(closeDb);
 
 async function sightIn(agent: Agent, bowId: number, buildId: number, date: string, distances: number[], placeLabel = 'Larch Hollow range') {
-  const res = await agent.post(`/api/bows/${bowId}/sight-ins`).set(CSRF).send({ buildId, date, placeLabel, marks: knownMarks(distances) });
+  const res = await agent
+    .post(`/api/bows/${bowId}/sight-ins`)
+    .set(CSRF)
+    .send({ buildId, date, placeLabel, marks: knownMarks(distances) });
   if (res.status !== 201) throw new Error(`sight-in: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body.sightIn as { id: number };
 }
@@ -22,7 +25,12 @@ describe('Before a trip, build by build', () => {
   it('checks each build’s latest tape against its own sight-ins only, and names two sight-ins of one day apart', async () => {
     const { agent } = await signedInAgent(app, { name: 'Trip Two Builds' });
     const { bow, build: heavy } = await bowWithBuild(agent, { nickname: 'Two-build slider' }, { name: 'Elk heavy' });
-    const light = (await agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Practice light', pointGr: 85 }))).body.build;
+    const light = (
+      await agent
+        .post(`/api/bows/${bow.id}/builds`)
+        .set(CSRF)
+        .send(buildBody({ name: 'Practice light', pointGr: 85 }))
+    ).body.build;
 
     // Heavy: an older sight-in with a tape, then a newer one without.
     const heavyOld = await sightIn(agent, bow.id, heavy.id, '2026-11-01', [20, 40, 60]);
@@ -66,7 +74,10 @@ describe('Before a trip, build by build', () => {
   it('lists a build never sighted in without inventing a tape for it', async () => {
     const { agent } = await signedInAgent(app, { name: 'Trip Unsighted' });
     const { bow, build } = await bowWithBuild(agent, { nickname: 'One sighted' }, { name: 'Sighted' });
-    await agent.post(`/api/bows/${bow.id}/builds`).set(CSRF).send(buildBody({ name: 'Never shot' }));
+    await agent
+      .post(`/api/bows/${bow.id}/builds`)
+      .set(CSRF)
+      .send(buildBody({ name: 'Never shot' }));
     const only = await sightIn(agent, bow.id, build.id, '2026-11-10', [20, 40]);
     const trip = tripByBuildSchema.parse((await agent.get(`/api/bows/${bow.id}/readiness`)).body);
     expect(trip.builds).toHaveLength(2);

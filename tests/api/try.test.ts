@@ -48,7 +48,13 @@ describe('POST /api/try/fit (no account)', () => {
     const gap = await request(app)
       .post('/api/try/fit')
       .set(CSRF)
-      .send({ ...fitInput(), marks: [{ distance: 20, markMm: 18.5 }, { distance: 60, markMm: 18.6 }] });
+      .send({
+        ...fitInput(),
+        marks: [
+          { distance: 20, markMm: 18.5 },
+          { distance: 60, markMm: 18.6 },
+        ],
+      });
     expect(gap.status).toBe(400);
     expect(Object.keys(gap.body.error.fields)).toEqual(['marks']);
   });

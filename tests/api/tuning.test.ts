@@ -13,13 +13,24 @@ afterAll(closeDb);
 async function shareWith(archer: { user: { id: number } }, bowId: number) {
   const tech = await signedInAgent(app, { name: 'Desmond Tuning' });
   await User.update({ role: 'tech' }, { where: { id: tech.user.id } });
-  await Share.create({ bowId, archerId: archer.user.id, techId: tech.user.id, invitedEmail: tech.email, state: 'active', acceptedAt: new Date(), revokedAt: null });
+  await Share.create({
+    bowId,
+    archerId: archer.user.id,
+    techId: tech.user.id,
+    invitedEmail: tech.email,
+    state: 'active',
+    acceptedAt: new Date(),
+    revokedAt: null,
+  });
   return tech;
 }
 
 const today = () => new Date().toISOString().slice(0, 10);
 const entry = (agent: Agent, bowId: number, body: Record<string, unknown>) =>
-  agent.post(`/api/bows/${bowId}/setup`).set(CSRF).send({ measuredOn: today(), ...body });
+  agent
+    .post(`/api/bows/${bowId}/setup`)
+    .set(CSRF)
+    .send({ measuredOn: today(), ...body });
 
 describe('set-up entries', () => {
   test('the archer records centre shot and D-loop; the latest shows; a first entry is not a change, a different one is', async () => {
@@ -84,12 +95,18 @@ describe('set-up entries', () => {
     expect(audit.map((a) => a.action)).toContain('created');
 
     // An arrow set the archer added: the technician may not change its arrows.
-    const set = await archer.agent.post(`/api/builds/${build.id}/arrow-sets`).set(CSRF).send({ name: 'Hunting', arrows: [{ number: 1, weightGr: 500 }] });
+    const set = await archer.agent
+      .post(`/api/builds/${build.id}/arrow-sets`)
+      .set(CSRF)
+      .send({ name: 'Hunting', arrows: [{ number: 1, weightGr: 500 }] });
     expect(set.status).toBe(201);
     const patch = await tech.agent.patch(`/api/arrows/${set.body.set.arrows[0].id}`).set(CSRF).send({ status: 'retired' });
     expect(patch.status).toBe(403);
     // But the technician may add a set of their own and change it.
-    const own = await tech.agent.post(`/api/builds/${build.id}/arrow-sets`).set(CSRF).send({ name: 'Shop weighed', arrows: [{ number: 1, weightGr: 501 }] });
+    const own = await tech.agent
+      .post(`/api/builds/${build.id}/arrow-sets`)
+      .set(CSRF)
+      .send({ name: 'Shop weighed', arrows: [{ number: 1, weightGr: 501 }] });
     expect(own.status).toBe(201);
     expect(own.body.set).toMatchObject({ byTechnician: true, addedBy: { name: 'Desmond Tuning' } });
     expect((await tech.agent.patch(`/api/arrows/${own.body.set.arrows[0].id}`).set(CSRF).send({ status: 'practice' })).status).toBe(200);
@@ -100,12 +117,18 @@ describe('change → readiness (the staleness rule on the bow and the Bench)', (
   test('a rest change after the sight-in with a tape asks to confirm at the range; a new sight-in clears it', async () => {
     const archer = await signedInAgent(app);
     const { bow, build, sightIn } = await bowWithSightIn(archer.agent, [20, 40, 60], { date: '2026-11-02' });
-    const tape = await archer.agent.post(`/api/sight-ins/${sightIn.id}/tapes`).set(CSRF).send({ fromDistance: 20, toDistance: 60, step: 5, unit: 'yd', widthMm: 12 });
+    const tape = await archer.agent
+      .post(`/api/sight-ins/${sightIn.id}/tapes`)
+      .set(CSRF)
+      .send({ fromDistance: 20, toDistance: 60, step: 5, unit: 'yd', widthMm: 12 });
     expect(tape.status).toBe(201);
     let bench = await archer.agent.get('/api/bows');
     expect(bench.body.bows.find((b: { id: number }) => b.id === bow.id).readiness.confirm).toBeNull();
 
-    const change = await archer.agent.post(`/api/bows/${bow.id}/changes`).set(CSRF).send({ kind: 'rest', changedAt: new Date().toISOString(), note: 'new drop-away' });
+    const change = await archer.agent
+      .post(`/api/bows/${bow.id}/changes`)
+      .set(CSRF)
+      .send({ kind: 'rest', changedAt: new Date().toISOString(), note: 'new drop-away' });
     expect(change.status).toBe(201);
     bench = await archer.agent.get('/api/bows');
     const confirm = bench.body.bows.find((b: { id: number }) => b.id === bow.id).readiness.confirm;
@@ -121,7 +144,18 @@ describe('change → readiness (the staleness rule on the bow and the Bench)', (
     const newer = await archer.agent
       .post(`/api/bows/${bow.id}/sight-ins`)
       .set(CSRF)
-      .send({ buildId: build.id, date: today(), placeLabel: 'Test range', marks: sightIn.marks.map((m: Record<string, unknown>) => ({ distance: m.distance, unit: m.unit, scaleMm: m.scaleMm, arrowsShot: 3, note: '' })) });
+      .send({
+        buildId: build.id,
+        date: today(),
+        placeLabel: 'Test range',
+        marks: sightIn.marks.map((m: Record<string, unknown>) => ({
+          distance: m.distance,
+          unit: m.unit,
+          scaleMm: m.scaleMm,
+          arrowsShot: 3,
+          note: '',
+        })),
+      });
     expect(newer.status).toBe(201);
     bench = await archer.agent.get('/api/bows');
     expect(bench.body.bows.find((b: { id: number }) => b.id === bow.id).readiness.confirm).toBeNull();
@@ -157,7 +191,9 @@ describe('change → readiness (the staleness rule on the bow and the Bench)', (
     const archer = await signedInAgent(app);
     const { bow, sightIn } = await bowWithSightIn(archer.agent, [20, 40, 60], { date: '2026-11-02' });
     const tech = await shareWith(archer, bow.id);
-    expect((await tech.agent.post(`/api/bows/${bow.id}/changes`).set(CSRF).send({ kind: 'string', changedAt: new Date().toISOString() })).status).toBe(201);
+    expect(
+      (await tech.agent.post(`/api/bows/${bow.id}/changes`).set(CSRF).send({ kind: 'string', changedAt: new Date().toISOString() })).status,
+    ).toBe(201);
     const stale = await archer.agent.get(`/api/sight-ins/${sightIn.id}/staleness`);
     expect(stale.body.reason).toMatch(/^New string on /);
   });
@@ -167,7 +203,10 @@ describe('paper tuning', () => {
   test('a run of four shots ends clean; changes before a shot are logged; only a clean last shot ends clean', async () => {
     const archer = await signedInAgent(app);
     const { bow } = await bowWithBuild(archer.agent);
-    const start = await archer.agent.post(`/api/bows/${bow.id}/paper-tunes`).set(CSRF).send({ distance: 5, unit: 'yd', startedOn: today() });
+    const start = await archer.agent
+      .post(`/api/bows/${bow.id}/paper-tunes`)
+      .set(CSRF)
+      .send({ distance: 5, unit: 'yd', startedOn: today() });
     expect(start.status).toBe(201);
     const runId = start.body.run.id;
     const shot = (body: Record<string, unknown>) => archer.agent.post(`/api/paper-tunes/${runId}/shots`).set(CSRF).send(body);
@@ -213,11 +252,22 @@ describe('arrow sets', () => {
   test('a set of six with one heavy arrow; a flier counted per arrow; validation names the arrow', async () => {
     const archer = await signedInAgent(app);
     const { bow, build, sightIn } = await bowWithSightIn(archer.agent, [20, 40, 60]);
-    const arrows = [500.2, 499.8, 500.5, 506.0, 499.9, 500.1].map((weightGr, index) => ({ number: index + 1, weightGr, spinKind: 'thou', runout: 2 }));
-    const dup = await archer.agent.post(`/api/builds/${build.id}/arrow-sets`).set(CSRF).send({ name: 'Hunting six', arrows: [...arrows, { number: 2, weightGr: 500 }] });
+    const arrows = [500.2, 499.8, 500.5, 506.0, 499.9, 500.1].map((weightGr, index) => ({
+      number: index + 1,
+      weightGr,
+      spinKind: 'thou',
+      runout: 2,
+    }));
+    const dup = await archer.agent
+      .post(`/api/builds/${build.id}/arrow-sets`)
+      .set(CSRF)
+      .send({ name: 'Hunting six', arrows: [...arrows, { number: 2, weightGr: 500 }] });
     expect(dup.status).toBe(400);
     expect(dup.body.error.fields['arrows.6.number']).toBe('Arrow 2 is numbered twice');
-    const badRunout = await archer.agent.post(`/api/builds/${build.id}/arrow-sets`).set(CSRF).send({ name: 'x', arrows: [{ number: 1, weightGr: 500, spinKind: 'mm' }] });
+    const badRunout = await archer.agent
+      .post(`/api/builds/${build.id}/arrow-sets`)
+      .set(CSRF)
+      .send({ name: 'x', arrows: [{ number: 1, weightGr: 500, spinKind: 'mm' }] });
     expect(badRunout.body.error.fields['arrows.0.runout']).toBe('Enter the runout in mm');
     const made = await archer.agent.post(`/api/builds/${build.id}/arrow-sets`).set(CSRF).send({ name: 'Hunting six', arrows });
     expect(made.status).toBe(201);

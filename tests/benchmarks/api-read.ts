@@ -98,7 +98,9 @@ export async function measureApiReads({ seconds = Number(process.env.BENCH_API_S
     const base = `http://127.0.0.1:${started.port}`;
     const cookie = await signIn(base);
     const headers = { cookie };
-    const bows = (await (await fetch(`${base}/api/bows`, { headers })).json()) as { bows: Array<{ id: number; readiness: { sightInCount: number } }> };
+    const bows = (await (await fetch(`${base}/api/bows`, { headers })).json()) as {
+      bows: { id: number; readiness: { sightInCount: number } }[];
+    };
     if (!bows.bows?.length) throw new Error('the demo archer has no bows to read');
     const busiest = [...bows.bows].sort((a, b) => b.readiness.sightInCount - a.readiness.sightInCount)[0];
     const targets = [
@@ -113,7 +115,8 @@ export async function measureApiReads({ seconds = Number(process.env.BENCH_API_S
     for (let round = 0; round < ROUNDS; round += 1) {
       for (const [index, target] of targets.entries()) {
         const result = await autocannon({ url: `${base}${target.path}`, connections: CONNECTIONS, duration: seconds, headers });
-        if (result.non2xx || result.errors) throw new Error(`${target.name}: ${result.non2xx} non-2xx answers, ${result.errors} errors under load`);
+        if (result.non2xx || result.errors)
+          throw new Error(`${target.name}: ${result.non2xx} non-2xx answers, ${result.errors} errors under load`);
         samples[index].perSecond.push(result.requests.average);
         samples[index].p99Ms.push(result.latency.p99);
       }
@@ -141,7 +144,10 @@ export async function apiReadSection(): Promise<void> {
   const rates = await measureApiReads();
   const width = Math.max(...rates.map((rate) => rate.name.length));
   console.log(`\nAPI reads, req/s (${CONNECTIONS} connections, loopback, autocannon; median of ${ROUNDS} interleaved rounds)`);
-  for (const rate of rates) console.log(`  ${rate.name.padEnd(width)}  ${rate.perSecond.toFixed(0).padStart(7)} req/s   p99 ${rate.p99Ms.toFixed(0).padStart(4)} ms`);
+  for (const rate of rates)
+    console.log(
+      `  ${rate.name.padEnd(width)}  ${rate.perSecond.toFixed(0).padStart(7)} req/s   p99 ${rate.p99Ms.toFixed(0).padStart(4)} ms`,
+    );
   const [, list, one] = rates;
   const ratios = [list.ratio, one.ratio];
   console.log(`  ratio to /api/me: list ${ratios[0].toFixed(2)}, bow ${ratios[1].toFixed(2)}`);

@@ -12,8 +12,16 @@ import { apiReadSection } from './api-read';
 import { runWebBench } from './web';
 
 const truth: SightModel = {
-  distanceUnit: 'yd', speedFps: 290, dragCoefficient: 2.3, airDensityKgM3: 1.225, arrowMassGr: 420, arrowDiameterMm: 6.5,
-  peepHeightMm: 113, sightRadiusMm: 820, scaleZeroMm: 2, gravityMps2: 9.80665,
+  distanceUnit: 'yd',
+  speedFps: 290,
+  dragCoefficient: 2.3,
+  airDensityKgM3: 1.225,
+  arrowMassGr: 420,
+  arrowDiameterMm: 6.5,
+  peepHeightMm: 113,
+  sightRadiusMm: 820,
+  scaleZeroMm: 2,
+  gravityMps2: 9.80665,
 };
 let seed = 12345;
 const noise = () => {

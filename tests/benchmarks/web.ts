@@ -54,7 +54,15 @@ async function coldLoad(baseUrl: string): Promise<ColdLoad> {
   const browser = await chromium.launch({
     executablePath: CHROME,
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   try {
     const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
@@ -66,7 +74,9 @@ async function coldLoad(baseUrl: string): Promise<ColdLoad> {
     const types = new Map<string, string>();
     const finished: { type: string; bytes: number; at: number }[] = [];
     cdp.on('Network.responseReceived', (e) => types.set(e.requestId, e.type));
-    cdp.on('Network.loadingFinished', (e) => finished.push({ type: types.get(e.requestId) ?? 'Other', bytes: e.encodedDataLength, at: Date.now() }));
+    cdp.on('Network.loadingFinished', (e) =>
+      finished.push({ type: types.get(e.requestId) ?? 'Other', bytes: e.encodedDataLength, at: Date.now() }),
+    );
 
     // The service worker (if any) fetches in its own target: count what it moves, on the same emulated network.
     let workerBytes = 0;
@@ -112,7 +122,11 @@ function lighthouse(url: string, cookie?: string): Promise<LighthouseScores> {
   ];
   if (cookie) args.push(`--extra-headers=${JSON.stringify({ Cookie: cookie })}`);
   return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, args, { cwd: root, env: { ...process.env, CHROME_PATH: CHROME }, stdio: ['ignore', 'ignore', 'pipe'] });
+    const child = spawn(process.execPath, args, {
+      cwd: root,
+      env: { ...process.env, CHROME_PATH: CHROME },
+      stdio: ['ignore', 'ignore', 'pipe'],
+    });
     let err = '';
     child.stderr.on('data', (c) => (err += c.toString()));
     child.on('exit', (code) => {
@@ -122,7 +136,10 @@ function lighthouse(url: string, cookie?: string): Promise<LighthouseScores> {
       const keep = process.env.PINWRIGHT_LH_KEEP;
       if (keep) fs.copyFileSync(out, path.join(keep, `lighthouse-${cookie ? 'bench' : 'sign-in'}.json`));
       fs.rmSync(out, { force: true });
-      const audits = report.audits as Record<string, { score: number | null; numericValue?: number; scoreDisplayMode: string; title: string }>;
+      const audits = report.audits as Record<
+        string,
+        { score: number | null; numericValue?: number; scoreDisplayMode: string; title: string }
+      >;
       const a11yRefs = report.categories.accessibility.auditRefs as { id: string; weight: number }[];
       resolve({
         performance: Math.round(report.categories.performance.score * 100),
@@ -224,9 +241,15 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
 
     const cold = await coldLoad(baseUrl);
     console.log('\nweb: cold load at 390×844, emulated slow 4G (150 ms, 1.6/0.75 Mbit/s)');
-    console.log(`  sign-in form visible        ${(cold.signInVisibleMs / 1000).toFixed(1).padStart(8)} s   goal ≤ 3.5 s — ${verdict(cold.signInVisibleMs <= 3500)}`);
-    console.log(`  bytes moved by the page     ${kb(cold.pageBytes).padStart(10)}   goal ≤ 500 KB — ${verdict(cold.pageBytes <= 500 * 1024)} (${cold.requests} responses)`);
-    console.log(`  compressed JS before sign-in${kb(cold.jsBytesBeforeSignIn).padStart(10)}   goal ≤ 250 KB — ${verdict(cold.jsBytesBeforeSignIn <= 250 * 1024)}`);
+    console.log(
+      `  sign-in form visible        ${(cold.signInVisibleMs / 1000).toFixed(1).padStart(8)} s   goal ≤ 3.5 s — ${verdict(cold.signInVisibleMs <= 3500)}`,
+    );
+    console.log(
+      `  bytes moved by the page     ${kb(cold.pageBytes).padStart(10)}   goal ≤ 500 KB — ${verdict(cold.pageBytes <= 500 * 1024)} (${cold.requests} responses)`,
+    );
+    console.log(
+      `  compressed JS before sign-in${kb(cold.jsBytesBeforeSignIn).padStart(10)}   goal ≤ 250 KB — ${verdict(cold.jsBytesBeforeSignIn <= 250 * 1024)}`,
+    );
     console.log(`  then, in the background, the service worker's precache: ${kb(cold.workerBytes)} in ${cold.workerRequests} requests`);
 
     console.log('\nweb: the entry script served 5 s each (autocannon, 4 connections, Accept-Encoding: br, gzip)');
@@ -246,7 +269,10 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
       const cookie = (res.headers.get('set-cookie') ?? '').split(';')[0];
       if (!res.ok || !cookie) throw new Error(`demo sign-in failed: ${res.status}`);
       console.log('\nweb: Lighthouse 12.2.3, mobile preset (simulated slow 4G, 4× CPU)');
-      for (const [name, url, c] of [['sign-in page', `${baseUrl}/sign-in`, undefined], ['Bench, signed in', `${baseUrl}/`, cookie]] as const) {
+      for (const [name, url, c] of [
+        ['sign-in page', `${baseUrl}/sign-in`, undefined],
+        ['Bench, signed in', `${baseUrl}/`, cookie],
+      ] as const) {
         const s = await lighthouse(url, c);
         console.log(
           `  ${name.padEnd(18)} performance ${String(s.performance).padStart(3)} (goal ≥ 90 — ${verdict(s.performance >= 90)}), ` +

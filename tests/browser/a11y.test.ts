@@ -20,7 +20,11 @@ async function seriousViolations(page: Page): Promise<string[]> {
   const results = await new AxeBuilder({ page: page as never }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
   return results.violations
     .filter((violation) => violation.impact === 'serious' || violation.impact === 'critical')
-    .flatMap((violation) => violation.nodes.map((node) => `${violation.id}: ${node.target.join(' ')} (${node.failureSummary?.split('\n')[1]?.trim() ?? violation.help})`));
+    .flatMap((violation) =>
+      violation.nodes.map(
+        (node) => `${violation.id}: ${node.target.join(' ')} (${node.failureSummary?.split('\n')[1]?.trim() ?? violation.help})`,
+      ),
+    );
 }
 
 it('finds no serious or critical axe-core violation on the main screens at 390×844', async () => {
@@ -38,14 +42,22 @@ it('finds no serious or critical axe-core violation on the main screens at 390×
   const detail = (await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow as { sightIns: { id: number }[] };
   const sightInId = detail.sightIns[0].id;
 
-  const screens: Array<[string, string, (page: Page) => Promise<unknown>]> = [
+  const screens: [string, string, (page: Page) => Promise<unknown>][] = [
     ['bench', '/', (p) => p.getByTestId(`bow-card-${bowId}`).waitFor()],
     ['bow', `/bows/${bowId}`, (p) => p.getByTestId('open-compare').waitFor()],
     ['sight-in', `/sight-ins/${sightInId}`, (p) => p.getByTestId('fit-chart-marks').waitFor()],
     ['tape', `/sight-ins/${sightInId}/tape`, (p) => p.getByTestId('tape-preview').waitFor()],
     ['field-card', `/sight-ins/${sightInId}/field-card`, (p) => p.getByTestId('field-card-table').waitFor()],
     ['compare', `/bows/${bowId}/compare`, (p) => p.getByTestId('compare-chart-img').waitFor()],
-    ['level', `/bows/${bowId}/level`, (p) => p.getByText(/Last check/).first().waitFor()],
+    [
+      'level',
+      `/bows/${bowId}/level`,
+      (p) =>
+        p
+          .getByText(/Last check/)
+          .first()
+          .waitFor(),
+    ],
     ['account', '/account', (p) => p.getByText(email).waitFor()],
   ];
   for (const [name, path, ready] of screens) {

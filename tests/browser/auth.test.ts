@@ -32,10 +32,16 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByLabel('Password').fill(password);
     await page.getByRole('button', { name: /create account/i }).click();
 
-    await page.getByText(/add your first bow/i).first().waitFor({ timeout: 15_000 });
+    await page
+      .getByText(/add your first bow/i)
+      .first()
+      .waitFor({ timeout: 15_000 });
     await screenshot(page, 'bench-empty');
 
-    await page.getByRole('link', { name: /account/i }).first().click();
+    await page
+      .getByRole('link', { name: /account/i })
+      .first()
+      .click();
     await page.getByText(email).waitFor();
     await screenshot(page, 'account');
     // Units are saved as soon as they are picked, and survive a reload.
@@ -56,7 +62,10 @@ for (const size of [PHONE, DESKTOP]) {
 
     await page.getByLabel('Password').fill(password);
     await page.getByRole('button', { name: 'Sign in' }).click();
-    await page.getByText(/add your first bow/i).first().waitFor({ timeout: 15_000 });
+    await page
+      .getByText(/add your first bow/i)
+      .first()
+      .waitFor({ timeout: 15_000 });
 
     expect(pageErrors(page)).toEqual([]);
     await context.close();

@@ -8,7 +8,16 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
-import { DESKTOP, PHONE, fullScreenshot, newPage, pageErrors, screenshot as viewportShot, signUpInContext, stackForFile } from '../helpers/browser';
+import {
+  DESKTOP,
+  PHONE,
+  fullScreenshot,
+  newPage,
+  pageErrors,
+  screenshot as viewportShot,
+  signUpInContext,
+  stackForFile,
+} from '../helpers/browser';
 
 const stack = stackForFile();
 
@@ -22,7 +31,9 @@ async function archerWithDemoBows(context: BrowserContext): Promise<{ bowId: num
   await seedBows(user!);
   const bows = (await (await context.request.get(`${stack.baseUrl}/api/bows`)).json()).bows as { id: number; nickname: string }[];
   const bowId = bows.find((bow) => bow.nickname === 'Timberline slider')!.id;
-  const detail = (await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow as { sightIns: { id: number; placeLabel: string }[] };
+  const detail = (await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow as {
+    sightIns: { id: number; placeLabel: string }[];
+  };
   return { bowId, basinSightInId: detail.sightIns.find((sightIn) => sightIn.placeLabel.startsWith('Greywether'))!.id };
 }
 
@@ -103,7 +114,9 @@ for (const size of [PHONE, DESKTOP]) {
     // (Each page load starts the count again.)
     expect(await page.evaluate(() => (window as unknown as { printCalls: number }).printCalls)).toBe(1);
     // The print-only card is exactly 100 × 150 mm (CSS mm: 96 px per 25.4 mm).
-    const printed = await page.locator('.pw-card-print img').evaluate((img) => (img as HTMLImageElement).style.width + ' ' + (img as HTMLImageElement).style.height);
+    const printed = await page
+      .locator('.pw-card-print img')
+      .evaluate((img) => (img as HTMLImageElement).style.width + ' ' + (img as HTMLImageElement).style.height);
     expect(printed).toBe('100mm 150mm');
     await page.emulateMedia({ media: 'print' });
     expect(await page.locator('.pw-card-print img').isVisible()).toBe(true);

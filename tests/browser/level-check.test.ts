@@ -10,7 +10,16 @@ import { CSRF } from '../helpers/api';
 import { User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
 import { seedLevel } from '@/server/seed/level';
-import { DESKTOP, PHONE, fullScreenshot, newPage, pageErrors, screenshot as viewportShot, signUpInContext, stackForFile } from '../helpers/browser';
+import {
+  DESKTOP,
+  PHONE,
+  fullScreenshot,
+  newPage,
+  pageErrors,
+  screenshot as viewportShot,
+  signUpInContext,
+  stackForFile,
+} from '../helpers/browser';
 
 const stack = stackForFile();
 
@@ -31,7 +40,12 @@ function png(width = 40, height = 30): Buffer {
   header[9] = 2;
   const row = Buffer.concat([Buffer.from([0]), ...Array.from({ length: width }, () => Buffer.from([0x24, 0x60, 0x3a]))]);
   const pixels = zlib.deflateSync(Buffer.concat(Array.from({ length: height }, () => row)));
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk('IHDR', header), chunk('IDAT', pixels), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk('IHDR', header),
+    chunk('IDAT', pixels),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
 
 async function makeBow(context: BrowserContext, nickname: string): Promise<number> {
@@ -168,7 +182,10 @@ it('walks a check on a phone, resumes it midway, logs a string change and sees t
   await page.getByTestId('open-level').waitFor();
 
   await page.goto(`/bows/${bowId}/readiness`);
-  await page.getByTestId('readiness-warnings').getByText(/Level: New string/).waitFor();
+  await page
+    .getByTestId('readiness-warnings')
+    .getByText(/Level: New string/)
+    .waitFor();
   await screenshot(page, 'readiness');
 
   expect(pageErrors(page)).toEqual([]);

@@ -15,7 +15,8 @@ import { DESKTOP, PHONE, fullScreenshot, newPage, pageErrors, stackForFile } fro
 const stack = stackForFile();
 
 /** The page at its viewport size and, when the app's scroll container holds more, its whole length (fullScreenshot). */
-const screenshot = (page: Page, name: string) => fullScreenshot(page, name, { maxHeightPx: 12000, settleMs: 250, restoreMs: 150, parts: { heightPx: 1400, whenTallerThanPx: 1600 } });
+const screenshot = (page: Page, name: string) =>
+  fullScreenshot(page, name, { maxHeightPx: 12000, settleMs: 250, restoreMs: 150, parts: { heightPx: 1400, whenTallerThanPx: 1600 } });
 
 /** Parses "413.7" out of a figure's text. */
 const numberIn = (text: string | null) => Number((text ?? '').replace(/[^\d.-]/g, ''));
@@ -43,7 +44,10 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByLabel('E-mail').fill(uniqueEmail('workflow'));
     await page.getByLabel('Password').fill('a long enough password');
     await page.getByRole('button', { name: /create account/i }).click();
-    await page.getByText(/add your first bow/i).first().waitFor({ timeout: 15_000 });
+    await page
+      .getByText(/add your first bow/i)
+      .first()
+      .waitFor({ timeout: 15_000 });
     // Yards at sign-up brings inches for lengths; this archer measures in millimetres (account page).
     await page.goto('/account');
     await page.getByTestId('unit-lengthUnit').getByRole('radio', { name: 'Millimetres' }).click();
@@ -51,10 +55,16 @@ for (const size of [PHONE, DESKTOP]) {
     // The device cache is written at most every 500 ms (components/offline/query-persistence.ts); reloading sooner would restore the old units.
     await page.waitForTimeout(1200);
     await page.goto('/');
-    await page.getByText(/add your first bow/i).first().waitFor({ timeout: 15_000 });
+    await page
+      .getByText(/add your first bow/i)
+      .first()
+      .waitFor({ timeout: 15_000 });
 
     // Add a bow: bad input first (nothing saved), then its sight radius and peep height.
-    await page.getByText(/add your first bow/i).first().click();
+    await page
+      .getByText(/add your first bow/i)
+      .first()
+      .click();
     await page.getByLabel('Nickname').waitFor();
     await screenshot(page, 'bow-new');
     await page.getByTestId('bow-save').click();
@@ -86,7 +96,10 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByLabel('Balance point').fill('419.1');
     await page.getByLabel('Chronographed speed').fill('285');
     // 9.5 gpi × 28.5 in (723.9 mm / 25.4) + 100 + 16 + 9 + 3 × 6 = 413.75 gr (arithmetic of the parts).
-    await page.getByTestId('total-grains').getByText(/^413\.[78]$/).waitFor();
+    await page
+      .getByTestId('total-grains')
+      .getByText(/^413\.[78]$/)
+      .waitFor();
     expect(Math.abs(numberIn(await page.getByTestId('total-grains').textContent()) - 413.75)).toBeLessThan(0.06);
     // FOC = 100 × (419.1 − 723.9/2) / 723.9 = 7.89 % (common practice formula, no published source).
     expect(Math.abs(numberIn(await page.getByTestId('foc').textContent()) - 7.89)).toBeLessThan(0.06);
@@ -125,7 +138,10 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByTestId('open-tape').click();
     await page.waitForURL(new RegExp(`/sight-ins/${sightInId}/tape`));
     await page.getByTestId('tape-preview').waitFor();
-    await page.getByTestId('tape-caution').getByText(/Print at actual size \(100 %, no fit-to-page\)/).waitFor();
+    await page
+      .getByTestId('tape-caution')
+      .getByText(/Print at actual size \(100 %, no fit-to-page\)/)
+      .waitFor();
     await screenshot(page, 'tape');
     await page.getByTestId('tape-save').click();
     await page.getByText('Layout saved.').waitFor();
@@ -166,7 +182,12 @@ for (const size of [PHONE, DESKTOP]) {
     expect(widthMatch).not.toBeNull();
     const previewWidthMm = widthMatch![2] === 'mm' ? Number(widthMatch![1]) : (Number(widthMatch![1]) * 25.4) / 96;
     expect([210, 215.9].some((paperMm) => Math.abs(paperMm - previewWidthMm) < 0.1)).toBe(true);
-    const pageRule = await page.evaluate(() => Array.from(document.querySelectorAll('style')).map((style) => style.textContent ?? '').find((css) => css.includes('@page')) ?? '');
+    const pageRule = await page.evaluate(
+      () =>
+        Array.from(document.querySelectorAll('style'))
+          .map((style) => style.textContent ?? '')
+          .find((css) => css.includes('@page')) ?? '',
+    );
     expect(pageRule).toMatch(/@page \{ size: (A4|letter); margin: 0; \}/);
     expect(pageRule).toMatch(/\.pw-sheet \{[^}]*width: (210|215\.9)mm !important; height: (297|279\.4)mm !important/);
     await screenshot(page, 'print-sheet');
@@ -179,7 +200,9 @@ for (const size of [PHONE, DESKTOP]) {
     await screenshot(page, 'bench');
     await card.click();
     await page.waitForURL(new RegExp(`/bows/${bowId}$`));
-    await page.getByTestId(`tape-row-${(await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow.tapes[0].id}`).waitFor();
+    await page
+      .getByTestId(`tape-row-${(await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow.tapes[0].id}`)
+      .waitFor();
     await screenshot(page, 'bow-complete');
 
     // Edit the set-up: a peep moved up a little; only that field changes.
@@ -200,7 +223,10 @@ for (const size of [PHONE, DESKTOP]) {
     await confirm.getByRole('button', { name: 'Keep it' }).click();
     await page.getByRole('button', { name: 'Delete this bow' }).click();
     await page.getByTestId('bow-delete-confirm').getByRole('button', { name: 'Delete for good' }).click();
-    await page.getByText(/add your first bow/i).first().waitFor();
+    await page
+      .getByText(/add your first bow/i)
+      .first()
+      .waitFor();
     expect((await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).status()).toBe(404);
 
     expect(pageErrors(page)).toEqual([]);
@@ -234,7 +260,9 @@ it('gives a visitor a tape from two marks, with a prompt to sign up', async () =
     await page.waitForURL(/\/print\/sheet\?source=try/);
     const sheet = page.getByTestId('print-sheet');
     await sheet.waitFor();
-    await page.waitForFunction(() => ((document.querySelector('[data-testid="print-sheet"]') as HTMLImageElement | null)?.naturalWidth ?? 0) > 0);
+    await page.waitForFunction(
+      () => ((document.querySelector('[data-testid="print-sheet"]') as HTMLImageElement | null)?.naturalWidth ?? 0) > 0,
+    );
     expect(await sheet.getAttribute('data-paper')).toBe('letter');
     await screenshot(page, 'try-print-sheet');
     expect(pageErrors(page)).toEqual([]);
@@ -266,7 +294,16 @@ it('shows a fixed multi-pin sight the gap of each pin beside its tape', async ()
     pinDistances: [20, 30, 40, 50, 60],
     pinDistanceUnit: 'yd',
   });
-  const { build } = await post(`/api/bows/${bow.id}/builds`, { name: 'Birch 414', grainsPerInch: 9.5, cutLengthMm: 723.9, diameterMm: 6.5, pointGr: 100, insertGr: 16, nockGr: 9, vaneWeightGr: 6 });
+  const { build } = await post(`/api/bows/${bow.id}/builds`, {
+    name: 'Birch 414',
+    grainsPerInch: 9.5,
+    cutLengthMm: 723.9,
+    diameterMm: 6.5,
+    pointGr: 100,
+    insertGr: 16,
+    nockGr: 9,
+    vaneWeightGr: 6,
+  });
   const { sightIn } = await post(`/api/bows/${bow.id}/sight-ins`, {
     buildId: build.id,
     date: '2026-11-28',
@@ -283,7 +320,11 @@ it('shows a fixed multi-pin sight the gap of each pin beside its tape', async ()
   // 32.6 − 14.9 = 17.70 mm below the 20 yd pin (arithmetic of the stored readings).
   await page.getByTestId('pin-20').getByText('0.00 mm').waitFor();
   await page.getByTestId('pin-60').getByText('17.70 mm').waitFor();
-  const gaps = await Promise.all([30, 40, 50, 60].map(async (distance) => numberIn(await page.getByTestId(`pin-${distance}`).locator('[role="cell"]').nth(3).textContent())));
+  const gaps = await Promise.all(
+    [30, 40, 50, 60].map(async (distance) =>
+      numberIn(await page.getByTestId(`pin-${distance}`).locator('[role="cell"]').nth(3).textContent()),
+    ),
+  );
   // The gaps add up to the spread of the pins.
   expect(Math.abs(gaps.reduce((sum, gap) => sum + gap, 0) - 17.7)).toBeLessThan(0.03);
   // Each pin's gap is larger than the one above it (the arrow drops faster with range).
@@ -301,7 +342,10 @@ it('takes lengths in inches from an archer who prefers them, and stores millimet
     data: { name: 'Wren Alder', email: uniqueEmail('inches'), password: 'a long enough password' },
   });
   expect(signUp.status()).toBe(201);
-  const units = await context.request.patch(`${stack.baseUrl}/api/me`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { lengthUnit: 'in' } });
+  const units = await context.request.patch(`${stack.baseUrl}/api/me`, {
+    headers: { 'X-Pinwright-Csrf': '1' },
+    data: { lengthUnit: 'in' },
+  });
   expect(units.status()).toBe(200);
 
   await page.goto('/bows/new');

@@ -17,7 +17,9 @@ const shot = (page: Page, name: string) => fullScreenshot(page, name, { maxHeigh
 
 async function bowWithBuild(context: BrowserContext): Promise<number> {
   const headers = { 'X-Pinwright-Csrf': '1' };
-  const bow = await (await context.request.post(`${stack.baseUrl}/api/bows`, { headers, data: bowBody({ nickname: 'Quillback slider' }) })).json();
+  const bow = await (
+    await context.request.post(`${stack.baseUrl}/api/bows`, { headers, data: bowBody({ nickname: 'Quillback slider' }) })
+  ).json();
   await context.request.post(`${stack.baseUrl}/api/bows/${bow.bow.id}/builds`, { headers, data: buildBody({ name: 'Quillback heavy' }) });
   return bow.bow.id;
 }
@@ -88,8 +90,15 @@ for (const size of [PHONE, DESKTOP]) {
     const problem = page.getByTestId('mark-row-2').getByTestId('mark-problem-2');
     await problem.getByText(/^Mark 3 \(40 yd\): 17 mm is less than the 30 yd mark’s 19 mm/).waitFor();
     expect(await page.getByTestId('mark-problem-1').count()).toBe(0);
-    await page.getByTestId('fit-advice-left-out').getByText(/The fit leaves out mark 3/).waitFor();
-    expect(await page.locator('[data-testid^="fit-advice-chronograph"], [data-testid^="fit-advice-drag"], [data-testid^="fit-advice-sight-radius"]').count()).toBe(0);
+    await page
+      .getByTestId('fit-advice-left-out')
+      .getByText(/The fit leaves out mark 3/)
+      .waitFor();
+    expect(
+      await page
+        .locator('[data-testid^="fit-advice-chronograph"], [data-testid^="fit-advice-drag"], [data-testid^="fit-advice-sight-radius"]')
+        .count(),
+    ).toBe(0);
     await page.getByTestId('sight-in-save').click();
     await page.getByTestId('falling-confirm').waitFor();
     await shot(page, 'marks-falling');

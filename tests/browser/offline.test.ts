@@ -34,7 +34,12 @@ async function bothSizes(page: Page, name: string, ready: () => Promise<unknown>
   await page.waitForTimeout(150);
 }
 
-async function api<T = Record<string, unknown>>(context: BrowserContext, method: 'GET' | 'POST' | 'DELETE', path: string, data?: unknown): Promise<{ status: number; body: T }> {
+async function api<T = Record<string, unknown>>(
+  context: BrowserContext,
+  method: 'GET' | 'POST' | 'DELETE',
+  path: string,
+  data?: unknown,
+): Promise<{ status: number; body: T }> {
   const res = await context.request.fetch(`${stack.baseUrl}${path}`, { method, headers: CSRF, data });
   const text = await res.text();
   return { status: res.status(), body: (text ? JSON.parse(text) : null) as T };
@@ -44,7 +49,12 @@ async function api<T = Record<string, unknown>>(context: BrowserContext, method:
 async function bowWithBuild(context: BrowserContext, nickname: string, withSightIn: boolean) {
   const bow = await api<{ bow: { id: number } }>(context, 'POST', '/api/bows', bowBody({ nickname }));
   if (bow.status !== 201) throw new Error(`bow ${bow.status}`);
-  const build = await api<{ build: { id: number } }>(context, 'POST', `/api/bows/${bow.body.bow.id}/builds`, buildBody({ name: `${nickname} arrows` }));
+  const build = await api<{ build: { id: number } }>(
+    context,
+    'POST',
+    `/api/bows/${bow.body.bow.id}/builds`,
+    buildBody({ name: `${nickname} arrows` }),
+  );
   if (build.status !== 201) throw new Error(`build ${build.status}`);
   let sightInId = 0;
   if (withSightIn) {
@@ -158,17 +168,31 @@ it('opens what the phone has seen with no signal, keeps a new sight-in on the ph
   const offlineMarks = knownMarks([20, 30, 50]);
   await typeMarks(page, offlineMarks);
   await page.getByTestId('predicted-marks').waitFor();
-  await page.getByTestId('fit-strip-figures').getByText(/\d+ fps · RMS \d+\.\d\d mm/).waitFor();
+  await page
+    .getByTestId('fit-strip-figures')
+    .getByText(/\d+ fps · RMS \d+\.\d\d mm/)
+    .waitFor();
   await page.getByTestId('sight-in-save').click();
   await page.getByTestId('sight-in-kept').getByText('On this phone, not sent yet').waitFor();
-  await page.getByTestId('outbox-item-0').getByText(/^On this phone, not sent yet/).waitFor();
+  await page
+    .getByTestId('outbox-item-0')
+    .getByText(/^On this phone, not sent yet/)
+    .waitFor();
   await page.getByTestId('predicted-marks').waitFor();
   await bothSizes(page, 'offline-waiting', () => page.getByTestId('outbox-item-0').waitFor());
 
   // It survives a reload (kept in IndexedDB), still waiting; nothing reached the server.
   await page.reload();
-  await page.getByTestId('outbox-item-0').getByText(/^On this phone, not sent yet/).waitFor({ timeout: 20_000 });
-  expect(await page.getByTestId('outbox-item-0').getByText(/New sight-in · .* · 3 marks/).count()).toBe(1);
+  await page
+    .getByTestId('outbox-item-0')
+    .getByText(/^On this phone, not sent yet/)
+    .waitFor({ timeout: 20_000 });
+  expect(
+    await page
+      .getByTestId('outbox-item-0')
+      .getByText(/New sight-in · .* · 3 marks/)
+      .count(),
+  ).toBe(1);
   const before = await api<{ bow: { sightIns: unknown[] } }>(context, 'GET', `/api/bows/${bowId}`);
   expect(before.body.bow.sightIns).toHaveLength(1);
 
@@ -179,7 +203,9 @@ it('opens what the phone has seen with no signal, keeps a new sight-in on the ph
   expect(after.body.bow.sightIns).toHaveLength(2);
   const sent = after.body.bow.sightIns.find((sightIn) => sightIn.id !== sightInId)!;
   const stored = await api<{ sightIn: { marks: { distance: number; scaleMm: number }[] } }>(context, 'GET', `/api/sight-ins/${sent.id}`);
-  expect(stored.body.sightIn.marks.map((mark) => [mark.distance, mark.scaleMm])).toEqual(offlineMarks.map((mark) => [mark.distance, mark.scaleMm]));
+  expect(stored.body.sightIn.marks.map((mark) => [mark.distance, mark.scaleMm])).toEqual(
+    offlineMarks.map((mark) => [mark.distance, mark.scaleMm]),
+  );
   expect(await page.getByTestId('offline-notice').count()).toBe(0);
   // A few more resend ticks change nothing: still exactly two sight-ins.
   await page.waitForTimeout(1500);
@@ -212,7 +238,10 @@ it('shows a waiting sight-in the server refuses (its bow deleted meanwhile) with
   await context.setOffline(false);
   const item = page.getByTestId('outbox-item-0');
   await item.getByText('Refused by the server', { exact: false }).waitFor({ timeout: 30_000 });
-  await page.getByTestId('outbox-reason-0').getByText(/^Why: .*not found/i).waitFor();
+  await page
+    .getByTestId('outbox-reason-0')
+    .getByText(/^Why: .*not found/i)
+    .waitFor();
   // Kept: what was typed can be shown (and copied), and stays after a reload.
   await page.getByTestId('outbox-show-0').click();
   expect(await page.getByTestId('outbox-body-0').textContent()).toContain('"scaleMm"');

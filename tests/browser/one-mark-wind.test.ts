@@ -25,7 +25,12 @@ async function oneMarkSightIn(context: BrowserContext): Promise<number> {
   };
   const { bow } = await post('/api/bows', bowBody({ nickname: 'Fenwick slider' }));
   const { build } = await post(`/api/bows/${bow.id}/builds`, buildBody({ name: 'Marsh 500', speedFps: knownSight.speedFps }));
-  const { sightIn } = await post(`/api/bows/${bow.id}/sight-ins`, { buildId: build.id, date: '2026-11-28', placeLabel: 'Reed flats', marks: knownMarks([20]) });
+  const { sightIn } = await post(`/api/bows/${bow.id}/sight-ins`, {
+    buildId: build.id,
+    date: '2026-11-28',
+    placeLabel: 'Reed flats',
+    marks: knownMarks([20]),
+  });
   return sightIn.id as number;
 }
 

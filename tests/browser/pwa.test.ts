@@ -63,7 +63,10 @@ function deployNewVersion(marker: string): void {
   const sw = fs.readFileSync(swFile, 'utf8');
   if (!sw.includes(md5(oldHtml))) throw new Error('sw.js does not carry index.html’s revision');
   const newSw = Buffer.from(sw.replace(md5(oldHtml), md5(newHtml)));
-  for (const [file, data] of [[indexFile, newHtml], [swFile, newSw]] as const) {
+  for (const [file, data] of [
+    [indexFile, newHtml],
+    [swFile, newSw],
+  ] as const) {
     fs.writeFileSync(file, data);
     fs.writeFileSync(`${file}.br`, zlib.brotliCompressSync(data));
     fs.writeFileSync(`${file}.gz`, zlib.gzipSync(data));
@@ -90,7 +93,10 @@ it('serves a valid web app manifest with icons that load at their stated sizes',
   expect(manifest.background_color).toBe(palette.paper);
   const wanted = ['192x192 any', '512x512 any', '192x192 maskable', '512x512 maskable'];
   expect(manifest.icons.map((i: { sizes: string; purpose: string }) => `${i.sizes} ${i.purpose}`).sort()).toEqual([...wanted].sort());
-  const icons = [...manifest.icons.map((i: { src: string; sizes: string }) => [i.src, Number(i.sizes.split('x')[0])]), ['/icons/apple-touch-icon.png', 180]];
+  const icons = [
+    ...manifest.icons.map((i: { src: string; sizes: string }) => [i.src, Number(i.sizes.split('x')[0])]),
+    ['/icons/apple-touch-icon.png', 180],
+  ];
   for (const [src, size] of icons as [string, number][]) {
     const icon = await fetch(`${base}${src}`);
     expect(icon.headers.get('content-type')).toBe('image/png');
@@ -118,7 +124,11 @@ it('sends brotli where accepted, else gzip, with the right types and cache heade
   const get = (url: string, encoding: string) => fetch(`${base}${url}`, { headers: { 'Accept-Encoding': encoding } });
   // Node's fetch decodes the body itself; the headers say what was on the wire.
   const br = await get(script, 'gzip, deflate, br');
-  expect([br.headers.get('content-encoding'), br.headers.get('vary'), br.headers.get('content-type')]).toEqual(['br', 'Accept-Encoding', 'text/javascript; charset=utf-8']);
+  expect([br.headers.get('content-encoding'), br.headers.get('vary'), br.headers.get('content-type')]).toEqual([
+    'br',
+    'Accept-Encoding',
+    'text/javascript; charset=utf-8',
+  ]);
   expect(Buffer.from(await br.arrayBuffer()).equals(plain)).toBe(true);
   expect(Number(br.headers.get('content-length'))).toBeLessThan(plain.length / 3);
   const gz = await get(script, 'gzip');
@@ -151,7 +161,10 @@ it('sends brotli where accepted, else gzip, with the right types and cache heade
       distanceUnit: 'yd',
       sight: { radiusMm: 820, peepHeightMm: 110 },
       arrow: { massGr: 420, diameterMm: 6.5 },
-      marks: [{ distance: 20, markMm: 14.9 }, { distance: 60, markMm: 32.6 }],
+      marks: [
+        { distance: 20, markMm: 14.9 },
+        { distance: 60, markMm: 32.6 },
+      ],
     }),
   });
   expect(sheet.status).toBe(200);
@@ -200,7 +213,9 @@ for (const size of [PHONE, DESKTOP]) {
     await screenshot(page, 'update-notice');
 
     await page.getByRole('button', { name: 'Reload for the new version' }).click();
-    await page.waitForFunction((m) => document.querySelector('meta[name="pinwright-deployment"]')?.getAttribute('content') === m, marker, { timeout: 20_000 });
+    await page.waitForFunction((m) => document.querySelector('meta[name="pinwright-deployment"]')?.getAttribute('content') === m, marker, {
+      timeout: 20_000,
+    });
     await page.getByLabel('E-mail').waitFor();
     expect(await page.getByTestId('update-notice').count()).toBe(0);
     await page.getByLabel('E-mail').fill('still-works@example.test');

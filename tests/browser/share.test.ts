@@ -31,7 +31,12 @@ async function makeBowWithSightIn(context: BrowserContext, nickname: string): Pr
   };
   const { bow } = await post('/api/bows', bowBody({ nickname }));
   const { build } = await post(`/api/bows/${bow.id}/builds`, buildBody());
-  const { sightIn } = await post(`/api/bows/${bow.id}/sight-ins`, { buildId: build.id, date: '2026-11-02', placeLabel: 'Alder Flats range', marks: knownMarks([20, 40, 60]) });
+  const { sightIn } = await post(`/api/bows/${bow.id}/sight-ins`, {
+    buildId: build.id,
+    date: '2026-11-02',
+    placeLabel: 'Alder Flats range',
+    marks: knownMarks([20, 40, 60]),
+  });
   return { bowId: bow.id, sightInId: sightIn.id };
 }
 
@@ -86,11 +91,16 @@ for (const size of [PHONE, DESKTOP]) {
     // account yet, so an administrator reads the invitation there, and the technician
     // opens its link in their own browser, as they would from their mail program.
     const mailbox = await newPage(stack, size);
-    await signUpInContext(mailbox.context, stack.baseUrl, `Mailbox Admin ${tag}`).then(({ email }) => User.update({ role: 'admin' }, { where: { email } }));
+    await signUpInContext(mailbox.context, stack.baseUrl, `Mailbox Admin ${tag}`).then(({ email }) =>
+      User.update({ role: 'admin' }, { where: { email } }),
+    );
     await mailbox.page.goto('/dev-mail');
     const subject = `${archerName} shared a bow with you on Pinwright`;
     await mailbox.page.getByText(subject).first().click();
-    await mailbox.page.getByTestId('mail-text').getByText(new RegExp(`"${nickname}"`)).waitFor();
+    await mailbox.page
+      .getByTestId('mail-text')
+      .getByText(new RegExp(`"${nickname}"`))
+      .waitFor();
     await screenshot(mailbox.page, 'share-mail');
     const inviteLink = await mailbox.page.getByTestId('mail-open-link').getAttribute('href');
     expect(inviteLink).toMatch(/^\/invite\?token=/);
@@ -122,7 +132,10 @@ for (const size of [PHONE, DESKTOP]) {
     await tech.page.getByTestId('shared-with-you').waitFor();
     // Whose bow it is, and none of the archer-only actions (the server would refuse them).
     await tech.page.getByTestId('shared-with-you').getByText(`Shared with you by ${archerName}.`).waitFor();
-    await tech.page.getByTestId('shared-with-you').getByText(`only ${archerName} can change or delete their records`, { exact: false }).waitFor();
+    await tech.page
+      .getByTestId('shared-with-you')
+      .getByText(`only ${archerName} can change or delete their records`, { exact: false })
+      .waitFor();
     await tech.page.getByTestId('bow-setup').waitFor();
     expect(await tech.page.getByTestId('bow-edit').count()).toBe(0);
     // A technician may add an arrow build (a new, attributed record), never edit the archer's.
@@ -151,7 +164,10 @@ for (const size of [PHONE, DESKTOP]) {
     await archer.page.getByRole('button', { name: 'End the share' }).click();
     await archer.page.getByText(`End the share with Bram Kettleby ${tag}?`).waitFor();
     await screenshot(archer.page, 'share-revoke-confirm');
-    await archer.page.getByTestId(/^confirm-revoke-/).getByRole('button', { name: 'End the share' }).click();
+    await archer.page
+      .getByTestId(/^confirm-revoke-/)
+      .getByRole('button', { name: 'End the share' })
+      .click();
     await archer.page.getByText('Nobody. This bow’s records are yours alone.').waitFor();
     await archer.page.getByText(/^Ended: Bram Kettleby/).waitFor();
 
@@ -209,7 +225,10 @@ for (const size of [PHONE, DESKTOP]) {
     await archer.page.getByLabel('E-mail').fill(email);
     await archer.page.getByLabel('Password').fill('a fresh long passphrase');
     await archer.page.getByRole('button', { name: 'Sign in' }).click();
-    await archer.page.getByText(/add your first bow/i).first().waitFor();
+    await archer.page
+      .getByText(/add your first bow/i)
+      .first()
+      .waitFor();
 
     // Marks from a CSV file: the preview names each row's problem; then all are added.
     const { sightInId } = await makeBowWithSightIn(archer.context, `Import slider ${tag}`);
@@ -217,12 +236,16 @@ for (const size of [PHONE, DESKTOP]) {
     await archer.page.getByTestId('import-marks').click();
     await archer.page.getByTestId('marks-import').waitFor();
     const good = knownMarks([30, 50]);
-    await archer.page.getByTestId('csv-paste').fill(`distance,reading,arrows,note\n30,${good[0].scaleMm},3,calm\nfifty,${good[1].scaleMm},,\n`);
+    await archer.page
+      .getByTestId('csv-paste')
+      .fill(`distance,reading,arrows,note\n30,${good[0].scaleMm},3,calm\nfifty,${good[1].scaleMm},,\n`);
     await archer.page.getByTestId('check-csv').click();
     await archer.page.getByText('The distance “fifty” is not a number').waitFor();
     await archer.page.getByTestId('import-rows').scrollIntoViewIfNeeded();
     await screenshot(archer.page, 'import-preview');
-    await archer.page.getByTestId('csv-paste').fill(`distance,reading,arrows,note\n30,${good[0].scaleMm},3,calm\n50,${good[1].scaleMm},,"gusty, left to right"\n`);
+    await archer.page
+      .getByTestId('csv-paste')
+      .fill(`distance,reading,arrows,note\n30,${good[0].scaleMm},3,calm\n50,${good[1].scaleMm},,"gusty, left to right"\n`);
     await archer.page.getByTestId('check-csv').click();
     await archer.page.getByText('All 2 rows are ready. Nothing is saved until you add them.').waitFor();
     await archer.page.getByTestId('save-csv').click();

@@ -30,14 +30,27 @@ for (const size of [PHONE, DESKTOP]) {
     const archerAccount = await signUpInContext(archer.context, stack.baseUrl, archerName);
     const { bow } = await post(archer.context, '/api/bows', bowBody({ nickname }));
     const { build } = await post(archer.context, `/api/bows/${bow.id}/builds`, buildBody({ name: 'Archer heavy' }));
-    await post(archer.context, `/api/bows/${bow.id}/sight-ins`, { buildId: build.id, date: '2026-11-20', placeLabel: 'Hollow Creek range', marks: knownMarks([20, 40, 60]) });
+    await post(archer.context, `/api/bows/${bow.id}/sight-ins`, {
+      buildId: build.id,
+      date: '2026-11-20',
+      placeLabel: 'Hollow Creek range',
+      marks: knownMarks([20, 40, 60]),
+    });
 
     const tech = await newPage(stack, size);
     const techAccount = await signUpInContext(tech.context, stack.baseUrl, techName);
     const techUser = (await User.findOne({ where: { email: techAccount.email } }))!;
     await techUser.update({ role: 'tech', lengthUnit: 'mm' });
     const archerUser = (await User.findOne({ where: { email: archerAccount.email } }))!;
-    await Share.create({ bowId: bow.id, archerId: archerUser.id, techId: techUser.id, invitedEmail: techAccount.email, state: 'active', acceptedAt: new Date(), revokedAt: null });
+    await Share.create({
+      bowId: bow.id,
+      archerId: archerUser.id,
+      techId: techUser.id,
+      invitedEmail: techAccount.email,
+      state: 'active',
+      acceptedAt: new Date(),
+      revokedAt: null,
+    });
 
     // Home: the clients and their bows, never "Add your first bow".
     await tech.page.goto('/');

@@ -24,7 +24,8 @@ for (const size of [PHONE, DESKTOP]) {
     await signUpInContext(context, stack.baseUrl, `Trip Archer ${size.width}`);
     const { bow } = await post(context, '/api/bows', bowBody({ nickname: 'Basin slider' }));
     const heavy = (await post(context, `/api/bows/${bow.id}/builds`, buildBody({ name: 'Elk heavy', speedFps: null }))).build;
-    const light = (await post(context, `/api/bows/${bow.id}/builds`, buildBody({ name: 'Practice light', pointGr: 85, speedFps: null }))).build;
+    const light = (await post(context, `/api/bows/${bow.id}/builds`, buildBody({ name: 'Practice light', pointGr: 85, speedFps: null })))
+      .build;
     const sightIn = async (buildId: number, date: string, placeLabel: string, distances: number[]) =>
       (await post(context, `/api/bows/${bow.id}/sight-ins`, { buildId, date, placeLabel, marks: knownMarks(distances) })).sightIn;
     const heavyOld = await sightIn(heavy.id, '2026-11-01', 'Larch Hollow range', [20, 40, 60]);
@@ -40,8 +41,12 @@ for (const size of [PHONE, DESKTOP]) {
     await heavyCard.waitFor();
     await lightCard.waitFor();
     // Each tape is named with its own build's sight-in; light's is its latest, heavy's is older.
-    expect(await page.getByTestId(`readiness-build-${light.id}-tape`).innerText()).toMatch(/28 Nov 2026, \d\d:\d\d UTC · Larch Hollow range · Practice light( \(\d of 2\))? \(this build’s latest\)/);
-    expect(await page.getByTestId(`readiness-build-${heavy.id}-tape`).innerText()).toMatch(/1 Nov 2026 · Larch Hollow range · Elk heavy\.$/);
+    expect(await page.getByTestId(`readiness-build-${light.id}-tape`).innerText()).toMatch(
+      /28 Nov 2026, \d\d:\d\d UTC · Larch Hollow range · Practice light( \(\d of 2\))? \(this build’s latest\)/,
+    );
+    expect(await page.getByTestId(`readiness-build-${heavy.id}-tape`).innerText()).toMatch(
+      /1 Nov 2026 · Larch Hollow range · Elk heavy\.$/,
+    );
     const heavyWarnings = await page.getByTestId(`readiness-build-${heavy.id}-warnings`).innerText();
     expect(heavyWarnings).toContain('print one from the latest marks (25 Nov 2026 · Quarry Bend · Elk heavy)');
     expect(heavyWarnings).not.toContain('Practice light');
@@ -58,7 +63,10 @@ for (const size of [PHONE, DESKTOP]) {
 
     // Predict cannot run without two chronographed builds: the button is disabled and says why.
     await page.goto(`/bows/${bow.id}/predict`);
-    await page.getByTestId('predict-missing').getByText(/Chronograph two builds/).waitFor();
+    await page
+      .getByTestId('predict-missing')
+      .getByText(/Chronograph two builds/)
+      .waitFor();
     expect(await page.getByTestId('predict-submit').getAttribute('aria-disabled')).toBe('true');
     await fullScreenshot(page, 'predict-missing', { maxHeightPx: 6000, settleMs: 300, restoreMs: 150 });
 

@@ -8,7 +8,8 @@
 import { uniqueEmail } from '../helpers/api';
 import { DESKTOP, PHONE, fullScreenshot, newPage, pageErrors, screenshot, stackForFile } from '../helpers/browser';
 
-const fullShot = (page: Parameters<typeof screenshot>[0], name: string) => fullScreenshot(page, name, { maxHeightPx: 9000, settleMs: 300, restoreMs: 150 });
+const fullShot = (page: Parameters<typeof screenshot>[0], name: string) =>
+  fullScreenshot(page, name, { maxHeightPx: 9000, settleMs: 300, restoreMs: 150 });
 
 const stack = stackForFile();
 
@@ -34,9 +35,9 @@ for (const size of [PHONE, DESKTOP]) {
     const result = page.getByTestId('try-result');
     const words = await result.innerText();
     expect(words).not.toMatch(/\b(10|90|100) yd\b/);
-    const rows = await page.locator('[data-testid^="predicted-"]').evaluateAll((els) =>
-      els.map((el) => el.getAttribute('data-testid')).filter((id) => /^predicted-\d+$/.test(id ?? '')),
-    );
+    const rows = await page
+      .locator('[data-testid^="predicted-"]')
+      .evaluateAll((els) => els.map((el) => el.getAttribute('data-testid')).filter((id) => /^predicted-\d+$/.test(id ?? '')));
     expect(rows.length).toBeGreaterThan(0);
     for (const id of rows) {
       const distance = Number(id!.replace('predicted-', ''));
@@ -56,9 +57,15 @@ for (const size of [PHONE, DESKTOP]) {
     await field('Name').fill(`Ysolde Brightwater ${size.width}`);
     await field('E-mail').fill(uniqueEmail('carry'));
     await field('Password').fill('correct horse battery');
-    await page.getByRole('button', { name: /create account/i }).filter({ visible: true }).click();
+    await page
+      .getByRole('button', { name: /create account/i })
+      .filter({ visible: true })
+      .click();
     await page.getByTestId('bench-keep-try').waitFor({ timeout: 15_000 });
-    await page.getByTestId('bench-keep-try').getByText(/20 yd at 14.9 mm, 60 yd at 32.6 mm/).waitFor();
+    await page
+      .getByTestId('bench-keep-try')
+      .getByText(/20 yd at 14.9 mm, 60 yd at 32.6 mm/)
+      .waitFor();
     await screenshot(page, 'bench-keep-try');
     await page.getByTestId('bench-keep-try-open').click();
     await page.getByTestId('keep-try-screen').waitFor();

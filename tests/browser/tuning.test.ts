@@ -8,7 +8,16 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { CSRF } from '../helpers/api';
 import { buildBody, knownMarks } from '../api/bow-fixtures';
-import { DESKTOP, PHONE, fullScreenshot, newPage, pageErrors, screenshot as viewportShot, signUpInContext, stackForFile } from '../helpers/browser';
+import {
+  DESKTOP,
+  PHONE,
+  fullScreenshot,
+  newPage,
+  pageErrors,
+  screenshot as viewportShot,
+  signUpInContext,
+  stackForFile,
+} from '../helpers/browser';
 
 const stack = stackForFile();
 
@@ -44,8 +53,19 @@ async function bowWithTape(context: BrowserContext) {
     sightDescription: 'Single-pin slider',
   });
   const { build } = await post(context, `/api/bows/${bow.id}/builds`, buildBody({ name: 'Elk 500' }));
-  const { sightIn } = await post(context, `/api/bows/${bow.id}/sight-ins`, { buildId: build.id, date: '2026-11-02', placeLabel: 'Gravel pit range', marks: knownMarks([20, 40, 60]) });
-  const { tape } = await post(context, `/api/sight-ins/${sightIn.id}/tapes`, { fromDistance: 20, toDistance: 60, step: 5, unit: 'yd', widthMm: 12 });
+  const { sightIn } = await post(context, `/api/bows/${bow.id}/sight-ins`, {
+    buildId: build.id,
+    date: '2026-11-02',
+    placeLabel: 'Gravel pit range',
+    marks: knownMarks([20, 40, 60]),
+  });
+  const { tape } = await post(context, `/api/sight-ins/${sightIn.id}/tapes`, {
+    fromDistance: 20,
+    toDistance: 60,
+    step: 5,
+    unit: 'yd',
+    widthMm: 12,
+  });
   return { bowId: bow.id as number, buildId: build.id as number, sightInId: sightIn.id as number, tapeId: tape.id as number };
 }
 
@@ -63,7 +83,11 @@ async function shoot(page: Page, shot: { tear: string; length?: string; changed?
   }
   await page.getByTestId(`tear-${shot.tear}`).click();
   if (shot.length) await page.getByTestId('tear-length').fill(shot.length);
-  const before = await page.getByTestId('tear-history').locator('text').count().catch(() => 0);
+  const before = await page
+    .getByTestId('tear-history')
+    .locator('text')
+    .count()
+    .catch(() => 0);
   await page.getByTestId('save-shot').click();
   await page.waitForFunction(
     (count) => (document.querySelector('[data-testid="tear-history"]')?.querySelectorAll('text').length ?? 0) > count,
@@ -154,17 +178,32 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     await page.getByText('Tear length must be more than 0 and at most 5.9 in').waitFor();
     await page.getByTestId('tear-length').fill('1');
     await page.getByTestId('save-shot').click();
-    await page.getByTestId('shot-1').getByText(/Tail high, 1\.00 in/).waitFor();
+    await page
+      .getByTestId('shot-1')
+      .getByText(/Tail high, 1\.00 in/)
+      .waitFor();
     await page.getByTestId('advice').getByText('After shot 1: Tail high: move the nock point down, or the rest up').waitFor();
     // Worded for hybrid cams and a drop-away rest.
-    await page.getByTestId('advice').getByText(/check the cam timing/).waitFor();
-    await page.getByTestId('advice').getByText(/drop-away rest/).waitFor();
+    await page
+      .getByTestId('advice')
+      .getByText(/check the cam timing/)
+      .waitFor();
+    await page
+      .getByTestId('advice')
+      .getByText(/drop-away rest/)
+      .waitFor();
     await screenshot(page, 'paper-tune-shot-1');
 
     // A length typed with its unit is read in that unit.
     await shoot(page, { tear: 'left', length: '15 mm', changed: 'nock-height', how: 'down 1/16 in' });
-    await page.getByTestId('shot-2').getByText(/0\.59 in/).waitFor();
-    await page.getByTestId('advice').getByText('After shot 2: Tail left: move the rest left, away from the riser (more centre shot)').waitFor();
+    await page
+      .getByTestId('shot-2')
+      .getByText(/0\.59 in/)
+      .waitFor();
+    await page
+      .getByTestId('advice')
+      .getByText('After shot 2: Tail left: move the rest left, away from the riser (more centre shot)')
+      .waitFor();
     await shoot(page, { tear: 'left', length: '0.25', changed: 'rest', how: 'left 1/32 in' });
     await shoot(page, { tear: 'clean', changed: 'rest', how: 'left 1/32 in' });
     await page.getByTestId('advice').getByText('After shot 4: Clean hole: the run can end here').waitFor();
@@ -181,7 +220,10 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     // A typo in one weight is named by its arrow.
     await page.getByTestId('arrow-weight-1').fill('5OO');
     await page.getByTestId('save-set').click();
-    await page.getByTestId('set-errors').getByText(/Arrow 1: Weight must be a number/).waitFor();
+    await page
+      .getByTestId('set-errors')
+      .getByText(/Arrow 1: Weight must be a number/)
+      .waitFor();
     for (const [index, weight] of weights.entries()) await page.getByTestId(`arrow-weight-${index + 1}`).fill(weight);
     await page.getByTestId('save-set').click();
     await page.getByTestId('new-arrow-set').waitFor({ state: 'detached' });
@@ -194,13 +236,19 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     // Median of the six by hand: (500.1 + 500.2) / 2 = 500.15 → "500.2 gr" to one place (from the weights above).
     expect(await page.getByTestId(`set-${setId}-median`).innerText()).toMatch(/^500\.[12] gr$/);
     await page.getByTestId(`flier-${setId}-4`).click();
-    await page.getByTestId(`arrow-${setId}-4`).getByText(/flew out 1×/).waitFor();
+    await page
+      .getByTestId(`arrow-${setId}-4`)
+      .getByText(/flew out 1×/)
+      .waitFor();
     await screenshot(page, 'arrow-set-six');
     // An archer who weighs in grams sees the same set in grams: 500.15 gr × 0.06479891 g/gr = 32.41 g
     // (1 gr = 64.79891 mg exactly, international yard and pound agreement, 1959).
     await post(context, '/api/me', { massUnit: 'g' }, 'patch');
     await page.reload();
-    await page.getByTestId(`set-${setId}-median`).getByText(/^32\.41 g$/).waitFor();
+    await page
+      .getByTestId(`set-${setId}-median`)
+      .getByText(/^32\.41 g$/)
+      .waitFor();
     await page.getByTestId('add-arrow-set').click();
     await page.getByText('Arrow 1 weight (g)').waitFor();
     await post(context, '/api/me', { massUnit: 'gr' }, 'patch');
@@ -229,7 +277,12 @@ it('records the set-up, paper-tunes to a clean hole, flags a heavy arrow, and ke
     await stale.context.close();
 
     // A new sight-in with the same build clears it.
-    await post(context, `/api/bows/${bowId}/sight-ins`, { buildId, date: new Date().toISOString().slice(0, 10), placeLabel: 'Gravel pit range', marks: knownMarks([20, 40, 60]) });
+    await post(context, `/api/bows/${bowId}/sight-ins`, {
+      buildId,
+      date: new Date().toISOString().slice(0, 10),
+      placeLabel: 'Gravel pit range',
+      marks: knownMarks([20, 40, 60]),
+    });
     const cleared = await freshBench(context, bowId);
     await cleared.page.waitForTimeout(300);
     expect(await cleared.page.getByTestId(`bow-card-${bowId}-confirm`).count()).toBe(0);

@@ -24,7 +24,12 @@ const near = (actual: number, expected: number, tolerance = 1e-6) => expect(Math
 
 /** A context in the US locale (month-first dates), with page errors collected. */
 async function usPage(size: { width: number; height: number }): Promise<{ context: BrowserContext; page: Page }> {
-  const context = await (stack as Stack).browser.newContext({ viewport: size, baseURL: stack.baseUrl, locale: 'en-US', acceptDownloads: true });
+  const context = await (stack as Stack).browser.newContext({
+    viewport: size,
+    baseURL: stack.baseUrl,
+    locale: 'en-US',
+    acceptDownloads: true,
+  });
   const page = await context.newPage();
   const problems: string[] = [];
   page.on('pageerror', (err) => problems.push(String(err)));
@@ -48,9 +53,19 @@ it('takes inches, feet and °F from a yards archer and stores mm, m and °C (390
   await page.getByTestId('sign-up-units').getByRole('radio', { name: 'Yards' }).waitFor();
   await shot(page, 'units-sign-up');
   await page.getByRole('button', { name: /create account/i }).click();
-  await page.getByText(/add your first bow/i).first().waitFor({ timeout: 15_000 });
+  await page
+    .getByText(/add your first bow/i)
+    .first()
+    .waitFor({ timeout: 15_000 });
   const { user } = await api(context, '/api/me');
-  expect(user).toMatchObject({ distanceUnit: 'yd', lengthUnit: 'in', altitudeUnit: 'ft', temperatureUnit: 'F', speedUnit: 'fps', massUnit: 'gr' });
+  expect(user).toMatchObject({
+    distanceUnit: 'yd',
+    lengthUnit: 'in',
+    altitudeUnit: 'ft',
+    temperatureUnit: 'F',
+    speedUnit: 'fps',
+    massUnit: 'gr',
+  });
 
   // The bow form: lengths in inches; a limit is stated in inches.
   await page.goto('/bows/new');
@@ -138,7 +153,10 @@ it('takes inches, feet and °F from a yards archer and stores mm, m and °C (390
   await page.goto(`/sight-ins/${sightInId}/field-card`);
   await page.getByTestId('field-card-altitude').waitFor();
   await page.getByText('Sight-in air: 9200 ft, 41 °F. Leave the altitude empty for that air.').waitFor();
-  const asked = page.waitForRequest((request) => /\/field-card\?/.test(request.url()) && /altitudeM=3048(&|$)/.test(request.url()) && /temperatureC=-10(&|$)/.test(request.url()));
+  const asked = page.waitForRequest(
+    (request) =>
+      /\/field-card\?/.test(request.url()) && /altitudeM=3048(&|$)/.test(request.url()) && /temperatureC=-10(&|$)/.test(request.url()),
+  );
   await page.getByTestId('field-card-altitude').fill('10000'); // 3048 m
   await page.getByTestId('field-card-temperature').fill('14'); // −10 °C
   await asked;
@@ -174,11 +192,18 @@ for (const size of [PHONE, DESKTOP]) {
     const { context, page } = await usPage(size);
     const email = uniqueEmail('account');
     const password = 'first password here';
-    const made = await context.request.post(`${stack.baseUrl}/api/auth/sign-up`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { name: 'Sigrun Dale', email, password, distanceUnit: 'm' } });
+    const made = await context.request.post(`${stack.baseUrl}/api/auth/sign-up`, {
+      headers: { 'X-Pinwright-Csrf': '1' },
+      data: { name: 'Sigrun Dale', email, password, distanceUnit: 'm' },
+    });
     expect(made.status()).toBe(201);
     // Another browser signed in to the same account.
     const other = await stack.browser.newContext({ baseURL: stack.baseUrl });
-    expect((await other.request.post(`${stack.baseUrl}/api/auth/sign-in`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { email, password } })).status()).toBe(200);
+    expect(
+      (
+        await other.request.post(`${stack.baseUrl}/api/auth/sign-in`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { email, password } })
+      ).status(),
+    ).toBe(200);
 
     await page.goto('/account');
     await page.getByTestId('password-change').waitFor();
@@ -212,7 +237,10 @@ for (const size of [PHONE, DESKTOP]) {
     await page.getByTestId('account-delete-password').fill('second password here');
     await page.getByTestId('account-delete-confirm-button').click();
     await page.waitForURL(/\/sign-in/);
-    const signIn = await context.request.post(`${stack.baseUrl}/api/auth/sign-in`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { email, password: 'second password here' } });
+    const signIn = await context.request.post(`${stack.baseUrl}/api/auth/sign-in`, {
+      headers: { 'X-Pinwright-Csrf': '1' },
+      data: { email, password: 'second password here' },
+    });
     expect(signIn.status()).toBe(401);
     expect(pageErrors(page)).toEqual([]);
     await context.close();
@@ -223,20 +251,41 @@ for (const size of [PHONE, DESKTOP]) {
   it(`asks before an admin changes a role, says it was saved, and narrows the audit log to a bow (${size.width}×${size.height})`, async () => {
     const { context, page } = await usPage(size);
     const adminEmail = uniqueEmail('admin');
-    const made = await context.request.post(`${stack.baseUrl}/api/auth/sign-up`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { name: 'Ottilie Admin', email: adminEmail, password: 'an admin password' } });
+    const made = await context.request.post(`${stack.baseUrl}/api/auth/sign-up`, {
+      headers: { 'X-Pinwright-Csrf': '1' },
+      data: { name: 'Ottilie Admin', email: adminEmail, password: 'an admin password' },
+    });
     await User.update({ role: 'admin' }, { where: { id: (await made.json()).user.id } });
     // An archer with a bow, and entries about it in the log.
     const tag = `Gorse${Date.now().toString(36)}${size.width}`;
     const archer = await stack.browser.newContext({ baseURL: stack.baseUrl });
-    const signed = await archer.request.post(`${stack.baseUrl}/api/auth/sign-up`, { headers: { 'X-Pinwright-Csrf': '1' }, data: { name: `Ysolde ${tag}`, email: uniqueEmail('archer'), password: 'an archer password' } });
+    const signed = await archer.request.post(`${stack.baseUrl}/api/auth/sign-up`, {
+      headers: { 'X-Pinwright-Csrf': '1' },
+      data: { name: `Ysolde ${tag}`, email: uniqueEmail('archer'), password: 'an archer password' },
+    });
     const archerId = (await signed.json()).user.id as number;
     const bowRes = await archer.request.post(`${stack.baseUrl}/api/bows`, {
       headers: { 'X-Pinwright-Csrf': '1' },
-      data: { nickname: `${tag} slider`, hand: 'right', drawWeightLb: 60, drawLengthMm: 720, sightKind: 'single-pin-slider', sightRadiusMm: 820, peepHeightMm: 110 },
+      data: {
+        nickname: `${tag} slider`,
+        hand: 'right',
+        drawWeightLb: 60,
+        drawLengthMm: 720,
+        sightKind: 'single-pin-slider',
+        sightRadiusMm: 820,
+        peepHeightMm: 110,
+      },
     });
     expect(bowRes.status()).toBe(201);
     const bowId = (await bowRes.json()).bow.id as number;
-    await recordAudit({ actorId: archerId, action: 'invited', bowId, recordType: 'share', recordId: null, summary: 'Invited a technician to work on the bow' });
+    await recordAudit({
+      actorId: archerId,
+      action: 'invited',
+      bowId,
+      recordType: 'share',
+      recordId: null,
+      summary: 'Invited a technician to work on the bow',
+    });
     await archer.close();
 
     await page.goto('/admin');
@@ -256,7 +305,10 @@ for (const size of [PHONE, DESKTOP]) {
     // The log names the bow and its archer; "Only …" narrows it to that bow.
     await page.goto('/admin/audit');
     await page.getByText(`on ${tag} slider (Ysolde ${tag}’s)`).first().waitFor();
-    await page.getByRole('button', { name: `Only ${tag} slider` }).first().click();
+    await page
+      .getByRole('button', { name: `Only ${tag} slider` })
+      .first()
+      .click();
     await page.getByTestId('audit-clear-bow').getByText(`Bow: ${tag} slider ✕`).waitFor();
     await page.getByTestId('audit-total').getByText('1 entry').waitFor();
     await shot(page, 'admin-audit-filtered');

@@ -71,7 +71,9 @@ describe('apiFetch', () => {
     const fetchMock = mockFetch();
     const schema = z.object({ user: userSchema });
     fetchMock.mockResolvedValueOnce(
-      jsonResponse(200, { user: { id: 1, name: 'Ned Arlow', email: 'ned@example.org', role: 'tech', distanceUnit: 'm', lengthUnit: 'in' } }),
+      jsonResponse(200, {
+        user: { id: 1, name: 'Ned Arlow', email: 'ned@example.org', role: 'tech', distanceUnit: 'm', lengthUnit: 'in' },
+      }),
     );
     await expect(apiFetch('/api/me', { schema })).resolves.toMatchObject({ user: { role: 'tech' } });
 

@@ -69,10 +69,35 @@ describe('BuildForm', () => {
     const fetchMock = mockFetch();
     const onSaved = jest.fn();
     const saved = {
-      id: 7, bowId: 3, name: 'Cedar light', shaftLabel: '', spine: null, grainsPerInch: 9.5, cutLengthMm: 723.9, diameterMm: 6.35,
-      pointGr: 100, insertGr: 0, collarGr: 0, nockGr: 0, vaneCount: 3, vaneWeightGr: 0, wrapGr: 0, balancePointMm: null,
-      speedFps: null, dragCoefficient: null, sightInCount: 0, createdAt: '2026-12-01T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
-      derived: { totalGr: 370.75, focPct: null, kineticEnergyFtLb: null, kineticEnergyJ: null, momentumSlugFtPerS: null, momentumKgMPerS: null },
+      id: 7,
+      bowId: 3,
+      name: 'Cedar light',
+      shaftLabel: '',
+      spine: null,
+      grainsPerInch: 9.5,
+      cutLengthMm: 723.9,
+      diameterMm: 6.35,
+      pointGr: 100,
+      insertGr: 0,
+      collarGr: 0,
+      nockGr: 0,
+      vaneCount: 3,
+      vaneWeightGr: 0,
+      wrapGr: 0,
+      balancePointMm: null,
+      speedFps: null,
+      dragCoefficient: null,
+      sightInCount: 0,
+      createdAt: '2026-12-01T10:00:00.000Z',
+      updatedAt: '2026-12-01T10:00:00.000Z',
+      derived: {
+        totalGr: 370.75,
+        focPct: null,
+        kineticEnergyFtLb: null,
+        kineticEnergyJ: null,
+        momentumSlugFtPerS: null,
+        momentumKgMPerS: null,
+      },
     };
     fetchMock.mockResolvedValue(jsonResponse(201, { build: saved }));
     renderWithClient(<BuildForm bowId={3} lengthUnit="in" onSaved={onSaved} onCancel={jest.fn()} />);

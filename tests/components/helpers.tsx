@@ -16,7 +16,9 @@ export function jsonResponse(status: number, body?: unknown) {
   return {
     ok: status >= 200 && status < 300,
     status,
-    headers: { get: (name: string) => (name.toLowerCase() === 'content-type' && body !== undefined ? 'application/json; charset=utf-8' : null) },
+    headers: {
+      get: (name: string) => (name.toLowerCase() === 'content-type' && body !== undefined ? 'application/json; charset=utf-8' : null),
+    },
     json: async () => body,
   };
 }

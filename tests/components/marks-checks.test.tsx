@@ -42,7 +42,9 @@ describe('marks checked as they are typed', () => {
     expect(problem.textContent).toMatch(/^Mark 3 \(40 yd\): 17 mm is less than the 30 yd mark’s 19 mm/);
     expect(within(screen.getByTestId('mark-row-1')).queryByTestId('mark-problem-1')).toBeNull();
     // The fit names what it left out and uses the two others (exact through both).
-    expect((await screen.findByTestId('fit-advice-left-out')).textContent).toMatch(/The fit leaves out mark 3 \(reading falls with distance\)/);
+    expect((await screen.findByTestId('fit-advice-left-out')).textContent).toMatch(
+      /The fit leaves out mark 3 \(reading falls with distance\)/,
+    );
     await screen.findByTestId('predicted-marks');
     expect(screen.getByText('exact (2 marks)')).toBeTruthy();
     // No equipment warnings meanwhile.
@@ -71,7 +73,9 @@ describe('marks checked as they are typed', () => {
     expect((await screen.findByTestId('mark-problem-0')).textContent).toBe('Mark 1: “1g.0” is not a number; enter the reading in mm');
     expect(screen.getByTestId('mark-problem-1').textContent).toBe('Mark 2: enter the distance');
     expect(screen.getByTestId('mark-problem-2').textContent).toBe('Mark 3: enter a distance between 5 and 150 yd (not -20)');
-    expect(screen.getByTestId('fit-advice-left-out').textContent).toMatch(/mark 1 \(not a number\), mark 2 \(not filled in\) and mark 3 \(out of range\)/);
+    expect(screen.getByTestId('fit-advice-left-out').textContent).toMatch(
+      /mark 1 \(not a number\), mark 2 \(not filled in\) and mark 3 \(out of range\)/,
+    );
     // Fixing the row clears its message.
     type('mark-reading-0', '14.9');
     await waitFor(() => expect(screen.queryByTestId('mark-problem-0')).toBeNull());
@@ -90,7 +94,9 @@ describe('marks checked as they are typed', () => {
     await screen.findByTestId('mark-problem-3');
     await screen.findByTestId('predicted-marks');
     expect(screen.queryByTestId(/^fit-advice-chronograph/)).toBeNull();
-    expect(screen.getByTestId('fit-advice-left-out').textContent).toMatch(/Checks of the chronograph, drag and sight radius wait until the marks are fixed/);
+    expect(screen.getByTestId('fit-advice-left-out').textContent).toMatch(
+      /Checks of the chronograph, drag and sight radius wait until the marks are fixed/,
+    );
     fireEvent.click(screen.getByTestId('mark-remove-3'));
     expect(await screen.findByTestId(/^fit-advice-chronograph/)).toBeTruthy();
     expect(screen.queryByTestId('fit-advice-left-out')).toBeNull();

@@ -67,7 +67,13 @@ describe('the marks table and its live fit', () => {
   it('saves all marks in one request, skips blank rows and puts a server message on its row', async () => {
     const fetchMock = mockFetch();
     fetchMock.mockResolvedValue(
-      jsonResponse(400, { error: { code: 'validation_failed', message: 'Scale reading must be at most 200 mm', fields: { 'marks.1.scaleMm': 'Scale reading must be at most 200 mm' } } }),
+      jsonResponse(400, {
+        error: {
+          code: 'validation_failed',
+          message: 'Scale reading must be at most 200 mm',
+          fields: { 'marks.1.scaleMm': 'Scale reading must be at most 200 mm' },
+        },
+      }),
     );
     renderWithClient(<SightInEditor bow={bow} distanceUnit="yd" />);
     type('mark-distance-0', '20');
@@ -98,7 +104,9 @@ describe('the marks table and its live fit', () => {
     type('mark-distance-1', '20');
     type('mark-reading-1', '15.0');
     fireEvent.click(screen.getByTestId('sight-in-save'));
-    expect(await within(screen.getByTestId('mark-row-1')).findByText('20 yd is entered twice; each distance once per sight-in')).toBeTruthy();
+    expect(
+      await within(screen.getByTestId('mark-row-1')).findByText('20 yd is entered twice; each distance once per sight-in'),
+    ).toBeTruthy();
     expect(fetchMock).not.toHaveBeenCalled();
   });
 });

@@ -68,9 +68,7 @@ describe('SignInForm', () => {
 
   it('shows a wrong-password answer in the error banner', async () => {
     const fetchMock = mockFetch();
-    fetchMock.mockResolvedValue(
-      jsonResponse(401, { error: { code: 'unauthorized', message: 'E-mail or password is wrong.' } }),
-    );
+    fetchMock.mockResolvedValue(jsonResponse(401, { error: { code: 'unauthorized', message: 'E-mail or password is wrong.' } }));
     renderWithClient(<SignInForm />);
     fill('E-mail', 'orla@example.org');
     fill('Password', 'not the password');

@@ -54,7 +54,16 @@ describe('SignOutButton (sign-out guard)', () => {
     fetchMock.mockResolvedValue(jsonResponse(204));
     const { queryClient } = renderSignedIn();
     await act(async () => {
-      await keepInOutbox({ userId: user.id, kind: 'marks', title: 'New marks on Ridge 60', method: 'POST', path: '/api/sight-ins/3/marks', body: { yards: 20 }, bowId: 3, recordId: 3 });
+      await keepInOutbox({
+        userId: user.id,
+        kind: 'marks',
+        title: 'New marks on Ridge 60',
+        method: 'POST',
+        path: '/api/sight-ins/3/marks',
+        body: { yards: 20 },
+        bowId: 3,
+        recordId: 3,
+      });
     });
     expect(mockStored.size).toBe(1);
 
@@ -85,10 +94,28 @@ describe('SignOutButton (sign-out guard)', () => {
     mockFetch().mockResolvedValue(jsonResponse(204));
     renderSignedIn();
     await act(async () => {
-      await keepInOutbox({ userId: user.id, kind: 'change', title: 'String changed', method: 'POST', path: '/api/bows/3/changes', body: {}, bowId: 3, recordId: null });
+      await keepInOutbox({
+        userId: user.id,
+        kind: 'change',
+        title: 'String changed',
+        method: 'POST',
+        path: '/api/bows/3/changes',
+        body: {},
+        bowId: 3,
+        recordId: null,
+      });
       const [first] = outboxItems();
       mockStored.set(first.id, { ...first, state: 'refused' });
-      await keepInOutbox({ userId: user.id, kind: 'change', title: 'Peep moved', method: 'POST', path: '/api/bows/3/changes', body: {}, bowId: 3, recordId: null });
+      await keepInOutbox({
+        userId: user.id,
+        kind: 'change',
+        title: 'Peep moved',
+        method: 'POST',
+        path: '/api/bows/3/changes',
+        body: {},
+        bowId: 3,
+        recordId: null,
+      });
     });
     // Reload from the "device" so the refused state is what the outbox holds.
     act(() => unloadOutbox());

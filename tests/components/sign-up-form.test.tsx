@@ -36,12 +36,21 @@ describe('SignUpForm', () => {
     const [path, init] = fetchMock.mock.calls[0];
     expect(path).toBe('/api/auth/sign-up');
     // The first unit choice goes with it (yards unless changed); the server sets the rest from it.
-    expect(JSON.parse(init.body)).toEqual({ name: 'Ada Corrie', email: 'ada@example.org', password: 'ten or more letters', distanceUnit: 'yd' });
+    expect(JSON.parse(init.body)).toEqual({
+      name: 'Ada Corrie',
+      email: 'ada@example.org',
+      password: 'ten or more letters',
+      distanceUnit: 'yd',
+    });
   });
 
   it('sends metres when the archer picks them', async () => {
     const fetchMock = mockFetch();
-    fetchMock.mockResolvedValue(jsonResponse(201, { user: { id: 9, name: 'Ada Corrie', email: 'ada@example.org', role: 'archer', distanceUnit: 'm', lengthUnit: 'mm' } }));
+    fetchMock.mockResolvedValue(
+      jsonResponse(201, {
+        user: { id: 9, name: 'Ada Corrie', email: 'ada@example.org', role: 'archer', distanceUnit: 'm', lengthUnit: 'mm' },
+      }),
+    );
     renderWithClient(<SignUpForm />);
     fill('Name', 'Ada Corrie');
     fill('E-mail', 'ada@example.org');
@@ -54,9 +63,7 @@ describe('SignUpForm', () => {
 
   it('shows a taken e-mail (409) under the e-mail field', async () => {
     const fetchMock = mockFetch();
-    fetchMock.mockResolvedValue(
-      jsonResponse(409, { error: { code: 'conflict', message: 'That e-mail already has an account' } }),
-    );
+    fetchMock.mockResolvedValue(jsonResponse(409, { error: { code: 'conflict', message: 'That e-mail already has an account' } }));
     renderWithClient(<SignUpForm />);
     fill('Name', 'Ada Corrie');
     fill('E-mail', 'ada@example.org');

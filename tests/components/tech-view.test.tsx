@@ -136,7 +136,8 @@ function writes(fetchMock: jest.Mock) {
     .map(([path, init]) => [init.method, path, JSON.parse(init.body ?? 'null')]);
 }
 
-const disabled = (testID: string) => (screen.getByTestId(testID) as HTMLInputElement).readOnly || (screen.getByTestId(testID) as HTMLInputElement).disabled;
+const disabled = (testID: string) =>
+  (screen.getByTestId(testID) as HTMLInputElement).readOnly || (screen.getByTestId(testID) as HTMLInputElement).disabled;
 
 describe('a technician on a shared bow', () => {
   it('sees whose bow it is and no Edit or Delete; can add a build and start a sight-in', async () => {
@@ -145,7 +146,9 @@ describe('a technician on a shared bow', () => {
     const banner = await screen.findByTestId('shared-with-you');
     expect(within(banner).getByText('Shared with you by Ilse Marrow.')).toBeTruthy();
     expect(
-      within(banner).getByText('You can add sight-ins, marks, level checks and notes; only Ilse Marrow can change or delete their records.'),
+      within(banner).getByText(
+        'You can add sight-ins, marks, level checks and notes; only Ilse Marrow can change or delete their records.',
+      ),
     ).toBeTruthy();
     expect(screen.getByTestId('bow-setup')).toBeTruthy();
     expect(screen.queryByTestId('bow-edit')).toBeNull();

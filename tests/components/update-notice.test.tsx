@@ -6,6 +6,8 @@
  */
 import { act, fireEvent, render, screen } from '@testing-library/react';
 
+import { UpdateNotice } from '@/components/shell/update-notice.web';
+
 type Listener = (event?: unknown) => void;
 const mockWorkboxes: MockWorkbox[] = [];
 class MockWorkbox {
@@ -24,8 +26,6 @@ class MockWorkbox {
   }
 }
 jest.mock('workbox-window', () => ({ Workbox: jest.fn((url: string) => new MockWorkbox(url)) }));
-
-import { UpdateNotice } from '@/components/shell/update-notice.web';
 
 const reload = jest.fn();
 beforeAll(() => {

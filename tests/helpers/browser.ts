@@ -54,7 +54,10 @@ export async function startStack(): Promise<Stack> {
 }
 
 /** A fresh browser context (own cookies) with a page at phone or desktop size. */
-export async function newPage(stack: Stack, size: { width: number; height: number } = PHONE): Promise<{ context: BrowserContext; page: Page }> {
+export async function newPage(
+  stack: Stack,
+  size: { width: number; height: number } = PHONE,
+): Promise<{ context: BrowserContext; page: Page }> {
   const context = await stack.browser.newContext({ viewport: size, baseURL: stack.baseUrl, acceptDownloads: true });
   const page = await context.newPage();
   const problems: string[] = [];
@@ -129,7 +132,8 @@ export async function fullScreenshot(page: Page, name: string, options: FullScre
     let most = 0;
     for (const el of Array.from(document.querySelectorAll('div'))) {
       const overflow = getComputedStyle(el).overflowY;
-      if ((overflow === 'auto' || overflow === 'scroll') && el.scrollHeight > el.clientHeight + 1) most = Math.max(most, el.scrollHeight - el.clientHeight);
+      if ((overflow === 'auto' || overflow === 'scroll') && el.scrollHeight > el.clientHeight + 1)
+        most = Math.max(most, el.scrollHeight - el.clientHeight);
     }
     return most;
   });

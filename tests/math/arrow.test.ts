@@ -4,7 +4,9 @@ import { focPercent, kineticEnergy, momentum, totalArrowGrains, tradeKineticEner
 
 describe('arrow quantities', () => {
   it('adds up total grains from the components', () => {
-    expect(totalArrowGrains({ shaftGpi: 9.5, cutLengthIn: 28.5, pointGr: 100, insertGr: 16, nockGr: 9, vaneCount: 3, vaneGr: 6 })).toBeCloseTo(413.75, 10);
+    expect(
+      totalArrowGrains({ shaftGpi: 9.5, cutLengthIn: 28.5, pointGr: 100, insertGr: 16, nockGr: 9, vaneCount: 3, vaneGr: 6 }),
+    ).toBeCloseTo(413.75, 10);
     expect(totalArrowGrains({ shaftGpi: 8, cutLengthIn: 29, wrapGr: 4, collarGr: 10 })).toBeCloseTo(246, 10);
     expect(totalArrowGrains({ shaftGpi: 0, cutLengthIn: 0 })).toBe(0);
     expect(() => totalArrowGrains({ shaftGpi: -1, cutLengthIn: 28 })).toThrow(RangeError);
@@ -27,7 +29,11 @@ describe('arrow quantities', () => {
   });
 
   it('agrees with the trade shortcut grains·fps²/450240 within 0.05 % (common practice, no published source)', () => {
-    for (const [massGr, speedFps] of [[300, 340], [420, 285], [650, 240]]) {
+    for (const [massGr, speedFps] of [
+      [300, 340],
+      [420, 285],
+      [650, 240],
+    ]) {
       const exact = kineticEnergy({ massGr, speedFps }).footPounds;
       const trade = tradeKineticEnergyFtLbf({ massGr, speedFps });
       const difference = Math.abs(trade - exact) / exact;

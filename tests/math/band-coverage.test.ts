@@ -71,7 +71,9 @@ describe('band coverage against an independent integrator (seeded simulation)', 
   ] as const)('%s: about 68 % inside one sigma and 95 % inside two', (name, markDistances, chronograph) => {
     const result = coverage([...markDistances], chronograph);
     // Printed so the figures in the comment above can be checked on any run.
-    console.log(`${name}: one sigma ${result.one.toFixed(1)} %, two sigma ${result.two.toFixed(1)} % (${TRIALS} bows, ${result.samples} marks)`);
+    console.log(
+      `${name}: one sigma ${result.one.toFixed(1)} %, two sigma ${result.two.toFixed(1)} % (${TRIALS} bows, ${result.samples} marks)`,
+    );
     expect(result.one).toBeGreaterThan(62);
     expect(result.one).toBeLessThan(74);
     expect(result.two).toBeGreaterThan(91.5);

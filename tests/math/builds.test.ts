@@ -8,7 +8,10 @@ const speedOf = (massGr: number) => mpsToFps(Math.sqrt((2 * energyJ) / grainsToK
 
 describe('virtual-mass speed prediction', () => {
   it('recovers E and the virtual mass exactly from two builds and predicts a third within 1 fps', () => {
-    const fit = fitVirtualMass([{ massGr: 350, speedFps: speedOf(350) }, { massGr: 460, speedFps: speedOf(460) }]);
+    const fit = fitVirtualMass([
+      { massGr: 350, speedFps: speedOf(350) },
+      { massGr: 460, speedFps: speedOf(460) },
+    ]);
     expect(fit.energyJ).toBeCloseTo(energyJ, 8);
     expect(fit.virtualMassGr).toBeCloseTo(virtualMassGr, 6);
     expect(fit.rmsFps).toBeLessThan(1e-9);
@@ -26,10 +29,23 @@ describe('virtual-mass speed prediction', () => {
 
   it('refuses one build, equal masses and speeds that rise with mass', () => {
     expect(() => fitVirtualMass([{ massGr: 400, speedFps: 280 }])).toThrow(FitInputError);
-    expect(() => fitVirtualMass([{ massGr: 400, speedFps: 280 }, { massGr: 400, speedFps: 282 }])).toThrow(/different arrow masses/);
-    expect(() => fitVirtualMass([{ massGr: 350, speedFps: 280 }, { massGr: 450, speedFps: 290 }])).toThrow(/heavier builds must be slower/);
+    expect(() =>
+      fitVirtualMass([
+        { massGr: 400, speedFps: 280 },
+        { massGr: 400, speedFps: 282 },
+      ]),
+    ).toThrow(/different arrow masses/);
+    expect(() =>
+      fitVirtualMass([
+        { massGr: 350, speedFps: 280 },
+        { massGr: 450, speedFps: 290 },
+      ]),
+    ).toThrow(/heavier builds must be slower/);
     try {
-      fitVirtualMass([{ massGr: 400, speedFps: 280 }, { massGr: -1, speedFps: 260 }]);
+      fitVirtualMass([
+        { massGr: 400, speedFps: 280 },
+        { massGr: -1, speedFps: 260 },
+      ]);
     } catch (error) {
       expect((error as FitInputError).field).toBe('builds[1].massGr');
     }

@@ -22,7 +22,11 @@ const fit = fitSight(inputWith(marksOf(TRUE_MODEL, [20, 40, 60])));
 const labels = { bow: 'Ridgeback test bow', build: 'Test heavy', date: '2026-11-14', place: 'Invented meadow' };
 
 /** A sight-in at 2280 m and −2 °C (the fit's air is the sight-in's). */
-const mountainSightIn = fitSight(inputWith(marksOf({ ...TRUE_MODEL, airDensityKgM3: airDensityKgM3({ altitudeM: 2280, temperatureC: -2 }) }, [20, 40, 60]), { air: { altitudeM: 2280, temperatureC: -2 } }));
+const mountainSightIn = fitSight(
+  inputWith(marksOf({ ...TRUE_MODEL, airDensityKgM3: airDensityKgM3({ altitudeM: 2280, temperatureC: -2 }) }, [20, 40, 60]), {
+    air: { altitudeM: 2280, temperatureC: -2 },
+  }),
+);
 
 describe('field card data', () => {
   it('in the sight-in air is the slope table of fieldCard, cell by cell, with no shift', () => {
@@ -46,7 +50,8 @@ describe('field card data', () => {
   it('for a sight-in at altitude: no shift in its own air, up the scale higher up, down it lower down, growing with altitude', () => {
     const model = mountainSightIn.model;
     const distances = [20, 40, 60, 80];
-    const at = (altitudeM: number, temperatureC?: number) => fieldCardData(model, { distances, anglesDeg: [0], air: { altitudeM, temperatureC }, sightIn: { altitudeM: 2280, temperatureC: -2 } });
+    const at = (altitudeM: number, temperatureC?: number) =>
+      fieldCardData(model, { distances, anglesDeg: [0], air: { altitudeM, temperatureC }, sightIn: { altitudeM: 2280, temperatureC: -2 } });
     at(2280, -2).shift.forEach((row) => expect(Math.abs(row.shiftMm!)).toBeLessThan(1e-9));
     at(2280, -2).rows.forEach((row) => expect(row.aimAsIf!).toBeCloseTo(row.distance, 3));
     const higher = at(2700, -2);
@@ -124,7 +129,10 @@ describe('field card SVG', () => {
     const cells = elements(doc, 'g').filter((g) => g.getAttribute('class') === 'cell');
     expect(cells).toHaveLength(54);
     for (const cell of cells) {
-      const row = busiest.rows.find((candidate) => candidate.angleDeg === numberAttribute(cell, 'data-angle') && candidate.distance === numberAttribute(cell, 'data-distance'))!;
+      const row = busiest.rows.find(
+        (candidate) =>
+          candidate.angleDeg === numberAttribute(cell, 'data-angle') && candidate.distance === numberAttribute(cell, 'data-distance'),
+      )!;
       expect(numberAttribute(cell, 'data-mark-mm')).toBeCloseTo(row.markMm!, 9);
       const words = elements(cell, 'path').map((path) => path.getAttribute('aria-label'));
       expect(words[0]).toBe(row.markMm!.toFixed(1));
@@ -175,8 +183,13 @@ describe('field card wind table', () => {
     const ten60 = cells.find((g) => g.getAttribute('data-wind') === '10' && g.getAttribute('data-distance') === '60')!;
     const cell = card.wind.rows[1].cells[4];
     expect(numberAttribute(ten60, 'data-hold-mm')).toBeCloseTo(cell.holdMm!, 9);
-    expect(elements(ten60, 'path').map((path) => path.getAttribute('aria-label'))).toEqual([`${cell.driftIn!.toFixed(1)}/${cell.driftCm! < 9.95 ? cell.driftCm!.toFixed(1) : cell.driftCm!.toFixed(0)}`, cell.holdMm!.toFixed(1)]);
-    const words = elements(doc, 'path').map((path) => path.getAttribute('aria-label') ?? '').join(' ');
+    expect(elements(ten60, 'path').map((path) => path.getAttribute('aria-label'))).toEqual([
+      `${cell.driftIn!.toFixed(1)}/${cell.driftCm! < 9.95 ? cell.driftCm!.toFixed(1) : cell.driftCm!.toFixed(0)}`,
+      cell.holdMm!.toFixed(1),
+    ]);
+    const words = elements(doc, 'path')
+      .map((path) => path.getAttribute('aria-label') ?? '')
+      .join(' ');
     expect(words).toContain('Wind varies along the path');
     expect(words).toContain('only practice in wind');
     expect(numberAttribute(doc.documentElement!, 'data-content-bottom-mm')).toBeLessThan(146);
@@ -185,12 +198,17 @@ describe('field card wind table', () => {
 
 describe('predicted tape SVG', () => {
   const model = withArrow(fit.model, { massGr: 520, diameterMm: 6.5, speedFps: 262 });
-  const svg = predictedTapeSvg(model, { from: 20, to: 80 }, { bow: 'Ridgeback test bow', build: 'Elk brass', speed: '262 fps (predicted)' });
+  const svg = predictedTapeSvg(
+    model,
+    { from: 20, to: 80 },
+    { bow: 'Ridgeback test bow', build: 'Elk brass', speed: '262 fps (predicted)' },
+  );
   const doc = parseSvg(svg);
 
   it('draws the same tape as a sighted one of that model, true to size', () => {
     const plain = parseSvg(tapeSvg({ model }, { from: 20, to: 80 }));
-    const offsets = (d: typeof doc) => elements(d, 'line').map((line) => [line.getAttribute('data-distance'), line.getAttribute('data-offset-mm')]);
+    const offsets = (d: typeof doc) =>
+      elements(d, 'line').map((line) => [line.getAttribute('data-distance'), line.getAttribute('data-offset-mm')]);
     expect(offsets(doc)).toEqual(offsets(plain));
     expect(doc.documentElement!.getAttribute('width')).toMatch(/^[\d.]+mm$/);
     expect(doc.documentElement!.getAttribute('data-predicted')).toBe('true');

@@ -11,7 +11,10 @@ const good = {
   sight: { radiusMm: 820, peepHeightMm: 110 },
   arrow: { massGr: 420, diameterMm: 6.5, dragCoefficient: 2.0, speedFps: 285 },
   air: { altitudeM: 0, temperatureC: 15 },
-  marks: [{ distance: 20, markMm: 14.9 }, { distance: 60, markMm: 32.6 }],
+  marks: [
+    { distance: 20, markMm: 14.9 },
+    { distance: 60, markMm: 32.6 },
+  ],
   predict: [10, 20, 30, 40, 50, 60, 70, 80, 90, 100],
   shots: [{ distance: 40, angleDeg: -30 }],
 };
@@ -30,14 +33,34 @@ describe('pinwright command line', () => {
     expect(fit.residuals.map((residual: { distance: number }) => residual.distance)).toEqual([20, 60]);
     expect(typeof fit.residuals[0].residualMm).toBe('number');
     expect(typeof fit.nextDistance).toBe('number');
-    expect(fit.shots[0]).toEqual(expect.objectContaining({ distance: 40, angleDeg: -30, markMm: expect.any(Number), aimAsIf: expect.any(Number), horizontal: expect.any(Number) }));
+    expect(fit.shots[0]).toEqual(
+      expect.objectContaining({
+        distance: 40,
+        angleDeg: -30,
+        markMm: expect.any(Number),
+        aimAsIf: expect.any(Number),
+        horizontal: expect.any(Number),
+      }),
+    );
     expect(Math.abs(fit.speedFps - 285)).toBeLessThan(2);
   });
 
   it.each([
-    ['one mark and no chronographed speed', { ...good, arrow: { massGr: 420, diameterMm: 6.5 }, marks: [good.marks[0]] }, 'marks: enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)'],
-    ['a duplicate distance', { ...good, marks: [good.marks[0], { distance: 20, markMm: 15 }] }, 'marks[1].distance: each distance may appear only once'],
-    ['an impossible gap', { ...good, marks: [good.marks[0], { distance: 60, markMm: 15.3 }] }, /^marks: the 60 yd mark is only 0\.4 mm below/],
+    [
+      'one mark and no chronographed speed',
+      { ...good, arrow: { massGr: 420, diameterMm: 6.5 }, marks: [good.marks[0]] },
+      'marks: enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)',
+    ],
+    [
+      'a duplicate distance',
+      { ...good, marks: [good.marks[0], { distance: 20, markMm: 15 }] },
+      'marks[1].distance: each distance may appear only once',
+    ],
+    [
+      'an impossible gap',
+      { ...good, marks: [good.marks[0], { distance: 60, markMm: 15.3 }] },
+      /^marks: the 60 yd mark is only 0\.4 mm below/,
+    ],
     ['a negative mass', { ...good, arrow: { massGr: -3, diameterMm: 6.5 } }, /^arrow\.massGr: /],
   ])('fit with %s: exit 2 and one plain line on stderr naming the field', (_, input, message) => {
     const result = run(['fit'], JSON.stringify(input));
@@ -59,7 +82,9 @@ describe('pinwright command line', () => {
     expect(fit.method).toBe('one-mark');
     expect(fit.model.oneMark).toEqual({ distance: 20, nextDistance: fit.nextDistance });
     expect(typeof fit.nextDistance).toBe('number');
-    expect(fit.warnings[0]).toEqual(expect.objectContaining({ code: 'one-mark', message: expect.stringMatching(/^Estimate from one mark .* Shoot \d+ yd next$/) }));
+    expect(fit.warnings[0]).toEqual(
+      expect.objectContaining({ code: 'one-mark', message: expect.stringMatching(/^Estimate from one mark .* Shoot \d+ yd next$/) }),
+    );
     // Every distance but the sighted one carries a band wider than the mark's own 0.2 mm beyond 40 yd.
     for (const mark of fit.marks.filter((m: { distance: number }) => m.distance >= 40)) expect(mark.sigmaMm).toBeGreaterThan(0.3);
     const tape = run(['tape'], JSON.stringify({ ...oneMark, tape: { from: 20, to: 80 } }));
@@ -83,7 +108,9 @@ describe('pinwright command line', () => {
   it('tape prints an SVG in mm; sheet prints the sheet SVG, and a PDF with --pdf', () => {
     const tape = run(['tape'], JSON.stringify({ ...good, tape: { from: 20, to: 100, step: 1, widthMm: 12, orientation: 'down' } }));
     expect(tape.status).toBe(0);
-    expect(tape.stdout.toString()).toMatch(/^<svg xmlns="http:\/\/www\.w3\.org\/2000\/svg" width="12mm" height="[\d.]+mm" viewBox="0 0 12 /);
+    expect(tape.stdout.toString()).toMatch(
+      /^<svg xmlns="http:\/\/www\.w3\.org\/2000\/svg" width="12mm" height="[\d.]+mm" viewBox="0 0 12 /,
+    );
     const sheet = run(['sheet'], JSON.stringify({ ...good, paper: 'letter', labels: { bow: 'Test bow' } }));
     expect(sheet.status).toBe(0);
     expect(sheet.stdout.toString()).toMatch(/width="215\.9mm" height="279\.4mm"/);

@@ -46,7 +46,10 @@ describe('local slope of the mark curve', () => {
 
 describe('compareBuilds', () => {
   it('tabulates each build’s marks, the difference from the first in mm, and in distance along the first build’s tape', () => {
-    const result = compareBuilds([{ label: 'Light', model: TRUE_MODEL, focPct: 11.2 }, { label: 'Heavy', model: heavier, focPct: null }]);
+    const result = compareBuilds([
+      { label: 'Light', model: TRUE_MODEL, focPct: 11.2 },
+      { label: 'Heavy', model: heavier, focPct: null },
+    ]);
     expect(result.rows.map((row) => row.distance)).toEqual([20, 30, 40, 50, 60, 70, 80]);
     for (const row of result.rows) {
       const [reference, other] = row.marks;
@@ -69,11 +72,18 @@ describe('compareBuilds', () => {
 
   it('turns a small difference into distance to first order: close to where the reference tape has that mark', () => {
     const close: SightModel = { ...TRUE_MODEL, speedFps: 281 };
-    const result = compareBuilds([{ label: 'A', model: TRUE_MODEL }, { label: 'B', model: close }], { distances: [30, 50, 70] });
+    const result = compareBuilds(
+      [
+        { label: 'A', model: TRUE_MODEL },
+        { label: 'B', model: close },
+      ],
+      { distances: [30, 50, 70] },
+    );
     for (const row of result.rows) {
       const wanted = predictMarkMm(close, row.distance);
       // Exactly: the reference distance whose mark is this build's mark.
-      const exact = brentRoot((distance) => predictMarkMm(TRUE_MODEL, distance) - wanted, row.distance, row.distance + 10, 1e-9) - row.distance;
+      const exact =
+        brentRoot((distance) => predictMarkMm(TRUE_MODEL, distance) - wanted, row.distance, row.distance + 10, 1e-9) - row.distance;
       expect(exact).toBeGreaterThan(0.2);
       expect(Math.abs(row.marks[1].differenceDistance! - exact)).toBeLessThan(0.02 * exact);
     }
@@ -81,14 +91,26 @@ describe('compareBuilds', () => {
 
   it('gives no distance figure near the turning point, where the reference curve is flat', () => {
     const turningYd = (285 * 0.3048 * Math.sqrt((2 * 0.11) / g)) / YARD_M;
-    const result = compareBuilds([{ label: 'A', model: TRUE_MODEL }, { label: 'B', model: heavier }], { distances: [turningYd] });
+    const result = compareBuilds(
+      [
+        { label: 'A', model: TRUE_MODEL },
+        { label: 'B', model: heavier },
+      ],
+      { distances: [turningYd] },
+    );
     expect(result.rows[0].marks[1].differenceMm!).toBeGreaterThan(0);
     expect(result.rows[0].marks[1].differenceDistance).toBeNull();
   });
 
   it('gives exact energy and momentum, drop and forgiveness per build, null where the arrow cannot reach', () => {
     const slow: SightModel = { ...TRUE_MODEL, speedFps: 125 };
-    const result = compareBuilds([{ label: 'A', model: TRUE_MODEL }, { label: 'Slow', model: slow }], { at: 60, near: 60, far: 150, windowMm: 50 });
+    const result = compareBuilds(
+      [
+        { label: 'A', model: TRUE_MODEL },
+        { label: 'Slow', model: slow },
+      ],
+      { at: 60, near: 60, far: 150, windowMm: 50 },
+    );
     const [fast, crawl] = result.builds;
     expect(fast.kineticEnergyJ).toBeCloseTo(kineticEnergy({ massGr: 420, speedFps: 285 }).joules, 12);
     expect(fast.momentumSlugFps).toBeCloseTo(momentum({ massGr: 420, speedFps: 285 }).slugFeetPerSecond, 12);
@@ -101,12 +123,24 @@ describe('compareBuilds', () => {
   it('evaluates every build in one air when asked, each in its own otherwise', () => {
     const highSightIn: SightModel = { ...heavier, airDensityKgM3: airDensityKgM3({ altitudeM: 2280, temperatureC: -2 }) };
     const at60 = (result: ReturnType<typeof compareBuilds>) => result.rows.find((row) => row.distance === 60)!.marks[1].markMm!;
-    const own = compareBuilds([{ label: 'A', model: TRUE_MODEL }, { label: 'B', model: highSightIn }], { distances: [60] });
+    const own = compareBuilds(
+      [
+        { label: 'A', model: TRUE_MODEL },
+        { label: 'B', model: highSightIn },
+      ],
+      { distances: [60] },
+    );
     expect(own.commonAirDensityKgM3).toBeNull();
     expect(own.builds.map((build) => build.airDensityKgM3)).toEqual([TRUE_MODEL.airDensityKgM3, highSightIn.airDensityKgM3]);
     expect(at60(own)).toBeCloseTo(predictMarkMm(highSightIn, 60), 6);
     const sea = airDensityKgM3({ altitudeM: 0 });
-    const common = compareBuilds([{ label: 'A', model: TRUE_MODEL }, { label: 'B', model: highSightIn }], { distances: [60], airDensityKgM3: sea });
+    const common = compareBuilds(
+      [
+        { label: 'A', model: TRUE_MODEL },
+        { label: 'B', model: highSightIn },
+      ],
+      { distances: [60], airDensityKgM3: sea },
+    );
     expect(common.commonAirDensityKgM3).toBe(sea);
     expect(common.builds[1].airDensityKgM3).toBe(sea);
     expect(at60(common)).toBeCloseTo(predictMarkMm({ ...highSightIn, airDensityKgM3: sea }, 60), 6);
@@ -116,20 +150,40 @@ describe('compareBuilds', () => {
 
   it('reads distances in the unit asked and marks as an upward-growing scale reads them', () => {
     // (40 is also the default forgiveness distance, so the table has that one row.)
-    const metres = compareBuilds([{ label: 'A', model: TRUE_MODEL }, { label: 'B', model: heavier }], { unit: 'm', distances: [40], scaleSign: -1 });
+    const metres = compareBuilds(
+      [
+        { label: 'A', model: TRUE_MODEL },
+        { label: 'B', model: heavier },
+      ],
+      { unit: 'm', distances: [40], scaleSign: -1 },
+    );
     expect(metres.rows).toHaveLength(1);
     expect(metres.unit).toBe('m');
     const [markA, markB] = [TRUE_MODEL, heavier].map((model) => predictMarksMm({ ...model, distanceUnit: 'm' }, [40])[0]);
     expect(metres.rows[0].marks[0].markMm!).toBeCloseTo(-markA, 9);
     expect(metres.rows[0].marks[1].differenceMm!).toBeCloseTo(-(markB - markA), 9);
     // The distance figure does not depend on which way the scale grows.
-    const down = compareBuilds([{ label: 'A', model: TRUE_MODEL }, { label: 'B', model: heavier }], { unit: 'm', distances: [40] });
+    const down = compareBuilds(
+      [
+        { label: 'A', model: TRUE_MODEL },
+        { label: 'B', model: heavier },
+      ],
+      { unit: 'm', distances: [40] },
+    );
     expect(metres.rows[0].marks[1].differenceDistance!).toBeCloseTo(down.rows[0].marks[1].differenceDistance!, 12);
   });
 
   it('refuses fewer than two builds, more than four, and distances out of range', () => {
     expect(() => compareBuilds([{ label: 'A', model: TRUE_MODEL }])).toThrow(FitInputError);
     expect(() => compareBuilds(Array.from({ length: 5 }, (_, i) => ({ label: String(i), model: TRUE_MODEL })))).toThrow(/at most four/);
-    expect(() => compareBuilds([{ label: 'A', model: TRUE_MODEL }, { label: 'B', model: heavier }], { distances: [200] })).toThrow(/between 5 and 150/);
+    expect(() =>
+      compareBuilds(
+        [
+          { label: 'A', model: TRUE_MODEL },
+          { label: 'B', model: heavier },
+        ],
+        { distances: [200] },
+      ),
+    ).toThrow(/between 5 and 150/);
   });
 });

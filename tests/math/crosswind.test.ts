@@ -36,7 +36,7 @@ describe('crosswind drift', () => {
     expect(crossComponentMps(10, 12)).toBe(0);
     expect(crossComponentMps(10, 6)).toBe(0);
     expect(crossComponentMps(10, 1)).toBeCloseTo(-5, 12); // sin 30° = 1/2
-    expect(crossComponentMps(10, 10)).toBeCloseTo(10 * Math.sqrt(3) / 2, 12); // sin 60°
+    expect(crossComponentMps(10, 10)).toBeCloseTo((10 * Math.sqrt(3)) / 2, 12); // sin 60°
   });
 
   it.each([

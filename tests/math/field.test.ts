@@ -1,14 +1,37 @@
 import {
-  fitSight, dropBetween, rangeForgiveness, fieldCard, airShift, slopeShot, predictMarkMm, missAtRange, shotParametersOf,
-  solveElevation, distanceToMetres, buildSummary, withArrow, fitVirtualMass, predictBuildSpeedFps, SLOPE_CAUTION, ENERGY_CAUTION,
-  FIELD_CARD_ANGLES_DEG, FIELD_CARD_DISTANCES, type SightModel,
+  fitSight,
+  dropBetween,
+  rangeForgiveness,
+  fieldCard,
+  airShift,
+  slopeShot,
+  predictMarkMm,
+  missAtRange,
+  shotParametersOf,
+  solveElevation,
+  distanceToMetres,
+  buildSummary,
+  withArrow,
+  fitVirtualMass,
+  predictBuildSpeedFps,
+  SLOPE_CAUTION,
+  ENERGY_CAUTION,
+  FIELD_CARD_ANGLES_DEG,
+  FIELD_CARD_DISTANCES,
+  type SightModel,
 } from '@/math';
 import { TRUE_MODEL, inputWith, marksOf } from './helpers';
 
 const g = 9.80665;
 const fit = fitSight(inputWith(marksOf(TRUE_MODEL, [20, 40, 60])));
 /** The same sight without drag and without peep height: the textbook projectile. */
-const dragFree = (model: SightModel, speedFps = model.speedFps): SightModel => ({ ...model, dragCoefficient: 0, peepHeightMm: 0, speedFps, covariance: undefined });
+const dragFree = (model: SightModel, speedFps = model.speedFps): SightModel => ({
+  ...model,
+  dragCoefficient: 0,
+  peepHeightMm: 0,
+  speedFps,
+  covariance: undefined,
+});
 
 describe('drop between 40 and 60 yd', () => {
   it('is how far below the line of sight the arrow passes at 60 when held for 40, and the mark gap', () => {
@@ -44,7 +67,8 @@ describe('range forgiveness', () => {
       expect(forgiveness.farEdge).toBeGreaterThan(distance);
       expect(forgiveness.span).toBeCloseTo(forgiveness.farEdge - forgiveness.nearEdge, 12);
       expect(Math.abs(height(forgiveness.farEdge) + 100)).toBeLessThan(0.5);
-      for (let d = forgiveness.nearEdge + 0.01; d < forgiveness.farEdge; d += (forgiveness.farEdge - forgiveness.nearEdge) / 20) expect(Math.abs(height(d))).toBeLessThanOrEqual(100.5);
+      for (let d = forgiveness.nearEdge + 0.01; d < forgiveness.farEdge; d += (forgiveness.farEdge - forgiveness.nearEdge) / 20)
+        expect(Math.abs(height(d))).toBeLessThanOrEqual(100.5);
       expect(height(forgiveness.farEdge + 0.5)).toBeLessThan(-100);
     }
     // Longer shots forgive less.
@@ -96,7 +120,8 @@ describe('slope in the drag-free limit', () => {
         // … the spread between them, relative to the distance, and …
         spread: (up.aimAsIf! - down.aimAsIf!) / up.horizontal,
         // … the imbalance between the two corrections (0 when symmetric).
-        imbalance: (up.aimAsIfMinusHorizontal! + down.aimAsIfMinusHorizontal!) / (up.aimAsIfMinusHorizontal! - down.aimAsIfMinusHorizontal!),
+        imbalance:
+          (up.aimAsIfMinusHorizontal! + down.aimAsIfMinusHorizontal!) / (up.aimAsIfMinusHorizontal! - down.aimAsIfMinusHorizontal!),
       };
     };
     const slow = asymmetry(250);
@@ -144,7 +169,10 @@ describe('altitude and temperature shift', () => {
 
 describe('build comparison', () => {
   it('puts a heavier, slower build on the same sight: more drop, less forgiveness, more momentum', () => {
-    const bow = fitVirtualMass([{ massGr: 420, speedFps: 285 }, { massGr: 350, speedFps: 309 }]);
+    const bow = fitVirtualMass([
+      { massGr: 420, speedFps: 285 },
+      { massGr: 350, speedFps: 309 },
+    ]);
     const heavy = withArrow(fit.model, { massGr: 520, diameterMm: 6.5, speedFps: predictBuildSpeedFps(bow, 520) });
     const light = buildSummary(fit.model);
     const heavier = buildSummary(heavy);

@@ -17,7 +17,9 @@ function refusal(input: unknown): FitInputError {
 describe('bad input is refused with a message naming the field', () => {
   it('one mark, or none', () => {
     // One mark needs a chronographed speed (none in `good`).
-    expect(refusal({ ...good, marks: [good.marks[0]] }).message).toBe('marks: enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)');
+    expect(refusal({ ...good, marks: [good.marks[0]] }).message).toBe(
+      'marks: enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)',
+    );
     expect(refusal({ ...good, marks: [] }).field).toBe('marks');
     const { marks: _marks, ...withoutMarks } = good;
     expect(refusal(withoutMarks).message).toBe('marks: enter at least two marks');
@@ -38,10 +40,46 @@ describe('bad input is refused with a message naming the field', () => {
     [{ arrow: { massGr: 420, diameterMm: 6.5, dragCoefficient: 0 } }, 'arrow.dragCoefficient', /drag coefficient/],
     [{ air: { altitudeM: 40000 } }, 'air.altitudeM', /altitude/],
     [{ air: { temperatureC: 90 } }, 'air.temperatureC', /temperature/],
-    [{ marks: [{ distance: -20, markMm: 14.9 }, { distance: 60, markMm: 32.6 }] }, 'marks[0].distance', /distance between 5 and 150/],
-    [{ marks: [{ distance: 20, markMm: 14.9 }, { distance: 6000, markMm: 32.6 }] }, 'marks[1].distance', /distance between 5 and 150/],
-    [{ marks: [{ distance: 20, markMm: 'x' }, { distance: 60, markMm: 32.6 }] }, 'marks[0].markMm', /scale reading as a number/],
-    [{ marks: [{ distance: 20, markMm: 14.9 }, { distance: 60, markMm: Number.NaN }] }, 'marks[1].markMm', /scale reading/],
+    [
+      {
+        marks: [
+          { distance: -20, markMm: 14.9 },
+          { distance: 60, markMm: 32.6 },
+        ],
+      },
+      'marks[0].distance',
+      /distance between 5 and 150/,
+    ],
+    [
+      {
+        marks: [
+          { distance: 20, markMm: 14.9 },
+          { distance: 6000, markMm: 32.6 },
+        ],
+      },
+      'marks[1].distance',
+      /distance between 5 and 150/,
+    ],
+    [
+      {
+        marks: [
+          { distance: 20, markMm: 'x' },
+          { distance: 60, markMm: 32.6 },
+        ],
+      },
+      'marks[0].markMm',
+      /scale reading as a number/,
+    ],
+    [
+      {
+        marks: [
+          { distance: 20, markMm: 14.9 },
+          { distance: 60, markMm: Number.NaN },
+        ],
+      },
+      'marks[1].markMm',
+      /scale reading/,
+    ],
     [{ distanceUnit: 'ft' }, 'distanceUnit', /yards|yd/],
     [{ shots: [{ distance: 40, angleDeg: 75 }] }, 'shots[0].angleDeg', /angle between -60 and 60/],
     [{ predict: [10, 400] }, 'predict[1]', /distance between 5 and 150/],
@@ -58,20 +96,38 @@ describe('bad input is refused with a message naming the field', () => {
   });
 
   it('a gap no arrow speed gives', () => {
-    const error = refusal({ ...good, marks: [{ distance: 20, markMm: 14.9 }, { distance: 60, markMm: 15.3 }] });
+    const error = refusal({
+      ...good,
+      marks: [
+        { distance: 20, markMm: 14.9 },
+        { distance: 60, markMm: 15.3 },
+      ],
+    });
     expect(error.field).toBe('marks');
     expect(error.message).toMatch(/^marks: the 60 yd mark is only 0\.4 mm below the 20 yd mark; no arrow speed gives so small a gap/);
     expect(error.message).toMatch(/500 fps/);
   });
 
   it('marks in the wrong order for the scale direction', () => {
-    const error = refusal({ ...good, marks: [{ distance: 20, markMm: 32.6 }, { distance: 60, markMm: 14.9 }] });
+    const error = refusal({
+      ...good,
+      marks: [
+        { distance: 20, markMm: 32.6 },
+        { distance: 60, markMm: 14.9 },
+      ],
+    });
     expect(error.field).toBe('marks');
     expect(error.message).toMatch(/60 yd mark \(14\.9 mm\) reads less than the 20 yd mark \(32\.6 mm\).*direction of your sight's scale/);
   });
 
   it('a gap so large only a very slow arrow gives it', () => {
-    const error = refusal({ ...good, marks: [{ distance: 20, markMm: 10 }, { distance: 60, markMm: 150 }] });
+    const error = refusal({
+      ...good,
+      marks: [
+        { distance: 20, markMm: 10 },
+        { distance: 60, markMm: 150 },
+      ],
+    });
     expect(error.message).toMatch(/so large a gap needs an arrow slower than 120 fps/);
   });
 

@@ -3,7 +3,10 @@ import { TRUE_MODEL, inputWith, marksOf, seededRandom } from './helpers';
 
 const everyYard = Array.from({ length: 91 }, (_, i) => 10 + i);
 const predictedAgainst = (fit: FitResult, truth: typeof TRUE_MODEL) => {
-  const expected = predictMarksMm(truth, fit.marks.map((mark) => mark.distance));
+  const expected = predictMarksMm(
+    truth,
+    fit.marks.map((mark) => mark.distance),
+  );
   return fit.marks.map((mark, i) => mark.markMm - expected[i]);
 };
 
@@ -59,7 +62,8 @@ describe('three or more marks', () => {
     // Entered: peep 110 mm (true 114), no drag coefficient (default 2.0; true 2.4).
     const fit = fitSight(inputWith(marksOf(truth, distances), { arrow: { massGr: 420, diameterMm: 6.5 } }));
     expect(fit.method).toBe('least-squares');
-    const sigma = (name: (typeof MODEL_PARAMETERS)[number]) => Math.sqrt(fit.model.covariance![MODEL_PARAMETERS.indexOf(name)][MODEL_PARAMETERS.indexOf(name)]);
+    const sigma = (name: (typeof MODEL_PARAMETERS)[number]) =>
+      Math.sqrt(fit.model.covariance![MODEL_PARAMETERS.indexOf(name)][MODEL_PARAMETERS.indexOf(name)]);
     expect(Math.abs(fit.speedFps - 290)).toBeLessThan(2 * sigma('speedFps'));
     expect(Math.abs(fit.dragCoefficient - 2.4)).toBeLessThan(2 * sigma('dragCoefficient'));
     expect(Math.abs(fit.peepHeightMm - 114)).toBeLessThan(2 * sigma('peepHeightMm'));
@@ -77,7 +81,12 @@ describe('three or more marks', () => {
   });
 
   it('recover the parameters exactly when the priors sit on them (the optimiser itself)', () => {
-    const fit = fitSight(inputWith(marksOf(truth, distances), { arrow: { massGr: 420, diameterMm: 6.5, dragCoefficient: 2.4 }, sight: { radiusMm: 820, peepHeightMm: 114 } }));
+    const fit = fitSight(
+      inputWith(marksOf(truth, distances), {
+        arrow: { massGr: 420, diameterMm: 6.5, dragCoefficient: 2.4 },
+        sight: { radiusMm: 820, peepHeightMm: 114 },
+      }),
+    );
     expect(fit.speedFps).toBeCloseTo(290, 4);
     expect(fit.dragCoefficient).toBeCloseTo(2.4, 5);
     expect(fit.peepHeightMm).toBeCloseTo(114, 4);
@@ -90,8 +99,17 @@ describe('three or more marks', () => {
     for (const dragFactor of [0.8, 1.2]) {
       for (const peepOffsetMm of [-4, 4]) {
         for (const radiusFactor of [0.985, 1.015]) {
-          const misfit = { ...TRUE_MODEL, dragCoefficient: 2 * dragFactor, peepHeightMm: 110 + peepOffsetMm, sightRadiusMm: 820 * radiusFactor };
-          for (const marked of [[20, 60], [20, 40, 60], [10, 30, 50, 70]]) {
+          const misfit = {
+            ...TRUE_MODEL,
+            dragCoefficient: 2 * dragFactor,
+            peepHeightMm: 110 + peepOffsetMm,
+            sightRadiusMm: 820 * radiusFactor,
+          };
+          for (const marked of [
+            [20, 60],
+            [20, 40, 60],
+            [10, 30, 50, 70],
+          ]) {
             const fit = fitSight(inputWith(marksOf(misfit, marked), { predict: everyYard }));
             const errors = predictedAgainst(fit, misfit);
             fit.marks.forEach((mark, i) => (worst = Math.max(worst, Math.abs(errors[i]) / mark.sigmaMm)));
@@ -111,7 +129,10 @@ describe('three or more marks', () => {
     expect(fit.rmsMm).toBeLessThan(0.2);
     expect(fit.residuals.some((residual) => residual.outlier)).toBe(false);
     expect(fit.warnings.some((warning) => warning.code === 'outlier')).toBe(false);
-    const truthMarks = predictMarksMm(TRUE_MODEL, fit.marks.map((mark) => mark.distance));
+    const truthMarks = predictMarksMm(
+      TRUE_MODEL,
+      fit.marks.map((mark) => mark.distance),
+    );
     fit.marks.forEach((mark, i) => expect(Math.abs(mark.markMm - truthMarks[i])).toBeLessThan(Math.max(0.25, 2.5 * mark.sigmaMm)));
 
     for (const index of [0, 2, 7, 11]) {
@@ -141,7 +162,10 @@ describe('bands and the next distance', () => {
       expect(mark.verify).toBe(mark.sigmaMm > 0.25);
       const warning = fit.warnings.find((w) => w.code === 'verify' && w.distance === mark.distance);
       expect(Boolean(warning)).toBe(mark.verify);
-      if (warning) expect(warning.message).toBe(`Confirm at ${mark.distance} yd: the predicted mark there is uncertain by ±${mark.sigmaMm.toFixed(1)} mm`);
+      if (warning)
+        expect(warning.message).toBe(
+          `Confirm at ${mark.distance} yd: the predicted mark there is uncertain by ±${mark.sigmaMm.toFixed(1)} mm`,
+        );
     }
     // Between the marks the band is tighter than beyond them.
     const at = (distance: number) => fit.marks.find((mark) => mark.distance === distance)!.sigmaMm;
@@ -158,7 +182,11 @@ describe('bands and the next distance', () => {
     expect(marked).not.toContain(fit.nextDistance);
     // Check by refitting: add an exact mark at each candidate and sum the variance over 10–100 yd.
     const summedVariance = (extra: number) => {
-      const refit = fitSight(inputWith(marksOf(TRUE_MODEL, [...marked, extra]), { predict: [10, 15, 20, 25, 30, 35, 40, 45, 50, 55, 60, 65, 70, 75, 80, 85, 90, 95, 100] }));
+      const refit = fitSight(
+        inputWith(marksOf(TRUE_MODEL, [...marked, extra]), {
+          predict: [10, 15, 20, 25, 30, 35, 40, 45, 50, 55, 60, 65, 70, 75, 80, 85, 90, 95, 100],
+        }),
+      );
       return refit.marks.reduce((sum, mark) => sum + mark.sigmaMm ** 2, 0);
     };
     const best = summedVariance(fit.nextDistance!);
@@ -180,7 +208,10 @@ describe('bands and the next distance', () => {
 describe('non-throwing variant', () => {
   it('returns the field and message instead of throwing', () => {
     const attempt = attemptSightFit(inputWith([{ distance: 20, markMm: 14.9 }]));
-    expect(attempt).toEqual({ ok: false, error: { field: 'marks', message: 'Enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)' } });
+    expect(attempt).toEqual({
+      ok: false,
+      error: { field: 'marks', message: 'Enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)' },
+    });
     const good = attemptSightFit(inputWith(marksOf(TRUE_MODEL, [20, 60])));
     expect(good.ok && good.fit.speedFps).toBeCloseTo(285, 5);
   });

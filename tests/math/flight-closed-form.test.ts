@@ -11,7 +11,11 @@ describe('flight, drag-free limit', () => {
     [87, 0.02, 91.44],
     [45, 0.6, 150],
   ])('matches y(x) of the closed-form trajectory (v0 %d m/s, a %f rad, x %d m)', (v0, angle, x) => {
-    const crossing = integrateToRange({ u: 0, w: 0, vu: v0 * Math.cos(angle), vw: v0 * Math.sin(angle) }, { dragPerM: 0, gravityMps2: g, losAngleRad: 0 }, x);
+    const crossing = integrateToRange(
+      { u: 0, w: 0, vu: v0 * Math.cos(angle), vw: v0 * Math.sin(angle) },
+      { dragPerM: 0, gravityMps2: g, losAngleRad: 0 },
+      x,
+    );
     const closed = x * Math.tan(angle) - (g * x * x) / (2 * v0 * v0 * Math.cos(angle) ** 2);
     expect(Math.abs(crossing.w - closed)).toBeLessThan(1e-9);
     expect(crossing.timeS).toBeCloseTo(x / (v0 * Math.cos(angle)), 10);
@@ -22,7 +26,11 @@ describe('flight, drag-free limit', () => {
     const v0 = 40;
     const angle = 0.5;
     const range = (v0 * v0 * Math.sin(2 * angle)) / g;
-    const crossing = integrateToRange({ u: 0, w: 0, vu: v0 * Math.cos(angle), vw: v0 * Math.sin(angle) }, { dragPerM: 0, gravityMps2: g, losAngleRad: 0 }, range);
+    const crossing = integrateToRange(
+      { u: 0, w: 0, vu: v0 * Math.cos(angle), vw: v0 * Math.sin(angle) },
+      { dragPerM: 0, gravityMps2: g, losAngleRad: 0 },
+      range,
+    );
     expect(Math.abs(crossing.w)).toBeLessThan(1e-9);
     expect(crossing.vw).toBeCloseTo(-v0 * Math.sin(angle), 8); // symmetric flight
   });

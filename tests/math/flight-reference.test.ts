@@ -22,17 +22,28 @@ function odexAt(state: number[], timeS: number): number[] {
 }
 
 function cashKarpAt(state: number[], timeS: number): number[] {
-  const integrator = ode45(state.slice(), (dydt: number[], y: number[], t: number) => {
-    const d = derivative(t, y);
-    for (let i = 0; i < 4; i++) dydt[i] = d[i];
-  }, 0, 1e-4, { tol: 1e-12, verbose: false });
+  const integrator = ode45(
+    state.slice(),
+    (dydt: number[], y: number[], t: number) => {
+      const d = derivative(t, y);
+      for (let i = 0; i < 4; i++) dydt[i] = d[i];
+    },
+    0,
+    1e-4,
+    { tol: 1e-12, verbose: false },
+  );
   integrator.steps(Infinity, timeS);
   return integrator.y;
 }
 
 /** The launch of a shot in both frames: LOS frame for our integrator, world frame for the references. */
 function launch(shot: ShotParameters, theta: number, gamma: number) {
-  const los = { u: shot.peepHeightM * Math.sin(gamma), w: -shot.peepHeightM * Math.cos(gamma), vu: shot.speedMps * Math.cos(gamma), vw: shot.speedMps * Math.sin(gamma) };
+  const los = {
+    u: shot.peepHeightM * Math.sin(gamma),
+    w: -shot.peepHeightM * Math.cos(gamma),
+    vu: shot.speedMps * Math.cos(gamma),
+    vw: shot.speedMps * Math.sin(gamma),
+  };
   const rotate = (a: number, b: number) => [a * Math.cos(theta) - b * Math.sin(theta), a * Math.sin(theta) + b * Math.cos(theta)];
   return { los, world: [...rotate(los.u, los.w), ...rotate(los.vu, los.vw)] };
 }
@@ -44,7 +55,8 @@ const toLos = (world: number[], theta: number) => ({
 
 const shot: ShotParameters = { speedMps: 86.868, dragPerM: k, peepHeightM: 0.11, gravityMps2: g };
 const cases: [number, number, number][] = [];
-for (const theta of [0, 0.52, -0.52, -0.78]) for (const range of [9.144, 54.864, 91.44, 137.16]) cases.push([theta, range, 0.02 + range * 0.0005]);
+for (const theta of [0, 0.52, -0.52, -0.78])
+  for (const range of [9.144, 54.864, 91.44, 137.16]) cases.push([theta, range, 0.02 + range * 0.0005]);
 
 describe('2-D flight against independent integrators', () => {
   it.each(cases)('θ %f rad, S %f m: position at our time of flight matches odex and ode45-cash-karp to 1e-6 m', (theta, range, gamma) => {

@@ -4,7 +4,8 @@ import { TRUE_MODEL, marksOf } from './helpers';
 
 // The sight-in screen's live fit (pure TypeScript, no React): one mark fits when the build has a chronographed speed.
 const bow = { sightRadiusMm: 820, peepHeightMm: 110, scaleDirection: 'down' as const };
-const buildWith = (speedFps: number | null) => ({ id: 7, diameterMm: 6.5, dragCoefficient: 2, speedFps, derived: { totalGr: 420 } }) as unknown as Build;
+const buildWith = (speedFps: number | null) =>
+  ({ id: 7, diameterMm: 6.5, dragCoefficient: 2, speedFps, derived: { totalGr: 420 } }) as unknown as Build;
 const [mark20] = marksOf(TRUE_MODEL, [20]);
 const text = (rows: { distance: number; markMm: number }[]): LiveFitText => ({
   buildId: '7',

@@ -26,7 +26,8 @@ const input = (speedFps: number, dragCoefficient: number): FitInput => ({
   marks: [{ distance: 20, markMm: mark20 }],
   predict: [10, 20, 30, 40, 50, 60, 70, 80, 90, 100],
 });
-const at60 = (speedFps: number, dragCoefficient: number) => fitSight(input(speedFps, dragCoefficient)).marks.find((mark) => mark.distance === 60)!;
+const at60 = (speedFps: number, dragCoefficient: number) =>
+  fitSight(input(speedFps, dragCoefficient)).marks.find((mark) => mark.distance === 60)!;
 
 describe('one mark and a chronographed speed', () => {
   it('the reference and our flight agree on the true marks (to 1e-4 mm)', () => {
@@ -84,14 +85,24 @@ describe('one mark and a chronographed speed', () => {
     const svg = tapeSvg(fit, { from: 20, to: 80 });
     expect(svg).toContain('data-estimate="one-mark"');
     // A two-mark tape carries no such strip.
-    const two = fitSight({ ...input(285, 2), marks: [{ distance: 20, markMm: mark20 }, { distance: 60, markMm: mark60 }] });
+    const two = fitSight({
+      ...input(285, 2),
+      marks: [
+        { distance: 20, markMm: mark20 },
+        { distance: 60, markMm: mark60 },
+      ],
+    });
     expect(two.model.oneMark).toBeUndefined();
     expect(tapeSvg(two, { from: 20, to: 80 })).not.toContain('data-estimate');
   });
 
   it('refuses one mark without a speed, naming the field; and a speed that cannot reach the mark', () => {
     const { speedFps: _speed, ...arrow } = input(285, 2).arrow;
-    expect(() => fitSight({ ...input(285, 2), arrow })).toThrow('marks: enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)');
-    expect(() => fitSight({ ...input(120, 3), marks: [{ distance: 150, markMm: 80 }] })).toThrow(/^marks\[0\]\.distance: at 120 fps the arrow cannot reach 150 yd/);
+    expect(() => fitSight({ ...input(285, 2), arrow })).toThrow(
+      'marks: enter at least two marks, or one mark and the chronographed speed (arrow.speedFps)',
+    );
+    expect(() => fitSight({ ...input(120, 3), marks: [{ distance: 150, markMm: 80 }] })).toThrow(
+      /^marks\[0\]\.distance: at 120 fps the arrow cannot reach 150 yd/,
+    );
   });
 });

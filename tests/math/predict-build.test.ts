@@ -21,7 +21,9 @@ const chronographed = [
 ];
 // The sight, fitted from exact marks of the 420 gr arrow at its own speed on this bow.
 const sightModel: SightModel = { ...TRUE_MODEL, speedFps: speedOf(420) };
-const sight = fitSight(inputWith(marksOf(sightModel, [20, 40, 60]), { arrow: { massGr: 420, diameterMm: 6.5, dragCoefficient: 2, speedFps: speedOf(420) } })).model;
+const sight = fitSight(
+  inputWith(marksOf(sightModel, [20, 40, 60]), { arrow: { massGr: 420, diameterMm: 6.5, dragCoefficient: 2, speedFps: speedOf(420) } }),
+).model;
 
 describe('predictBuild', () => {
   it('predicts a third build’s speed within 1 fps and its marks on the fitted sight', () => {
@@ -69,11 +71,16 @@ describe('predictBuild', () => {
     expect(own.speedSource).toBe('chronograph');
     expect(own.speedFps).toBe(266);
     expect(own.virtualMass).toBeNull();
-    expect(own.marks![4].markMm!).toBeCloseTo(predictMarksMm(withArrow(sight, { massGr: 500, diameterMm: 6.2, speedFps: 266 }), [30])[0], 9);
+    expect(own.marks![4].markMm!).toBeCloseTo(
+      predictMarksMm(withArrow(sight, { massGr: 500, diameterMm: 6.2, speedFps: 266 }), [30])[0],
+      9,
+    );
   });
 
   it('warns when the mass lies outside the chronographed builds', () => {
-    expect(predictBuild({ arrow: { massGr: 560, diameterMm: 6.5 }, chronographed, sight: null }).warnings[0]).toMatch(/heavier than every chronographed build \(380–470 gr\)/);
+    expect(predictBuild({ arrow: { massGr: 560, diameterMm: 6.5 }, chronographed, sight: null }).warnings[0]).toMatch(
+      /heavier than every chronographed build \(380–470 gr\)/,
+    );
     expect(predictBuild({ arrow: { massGr: 330, diameterMm: 6.5 }, chronographed, sight: null }).warnings[0]).toMatch(/lighter/);
   });
 

@@ -5,13 +5,20 @@ import { elements, parseSvg } from './svg-helpers';
 
 const fit = fitSight(inputWith(marksOf(TRUE_MODEL, [20, 40, 60])));
 const model = withArrow(fit.model, { massGr: 520, diameterMm: 6.5, speedFps: 262 });
-const labels = { bow: 'Ridgeback test bow', build: 'Elk brass, 520 gr', speed: '262 fps (predicted)', sightIn: '14 Nov 2026 · Invented meadow · Test heavy' };
+const labels = {
+  bow: 'Ridgeback test bow',
+  build: 'Elk brass, 520 gr',
+  speed: '262 fps (predicted)',
+  sightIn: '14 Nov 2026 · Invented meadow · Test heavy',
+};
 
 describe('predicted print sheet SVG', () => {
   const svg = predictedSheetSvg(model, { from: 20, to: 80 }, { paper: 'letter', labels });
   const doc = parseSvg(svg);
   const root = doc.documentElement!;
-  const words = elements(doc, 'path').map((path) => path.getAttribute('aria-label') ?? '').filter(Boolean);
+  const words = elements(doc, 'path')
+    .map((path) => path.getAttribute('aria-label') ?? '')
+    .filter(Boolean);
 
   it('is a whole page in mm (US Letter is 8.5 × 11 in, exactly 215.9 × 279.4 mm) marked predicted', () => {
     expect(Number(root.getAttribute('width')!.replace('mm', ''))).toBeCloseTo(8.5 * INCH_MM, 6);
@@ -45,5 +52,4 @@ describe('predicted print sheet SVG', () => {
     expect(offsets(doc)).toEqual(offsets(plain));
     expect(offsets(doc).length).toBeGreaterThan(10);
   });
-
 });

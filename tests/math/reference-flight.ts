@@ -63,8 +63,19 @@ function advance(integrator: ReferenceIntegrator, f: (y: number[]) => number[], 
 }
 
 /** State [x, y, z, vx, vy, vz] (m, m/s) where the arrow crosses x = rangeM, launched γ above the horizontal from the nock. */
-export function referenceCrossing(sight: ReferenceSight, gammaRad: number, rangeM: number, crossWindMps = 0, integrator: ReferenceIntegrator = 'odex'): number[] {
-  const k = dragFactorPerM({ airDensityKgM3: sight.airDensityKgM3, dragCoefficient: sight.dragCoefficient, diameterMm: sight.arrowDiameterMm, massGr: sight.arrowMassGr });
+export function referenceCrossing(
+  sight: ReferenceSight,
+  gammaRad: number,
+  rangeM: number,
+  crossWindMps = 0,
+  integrator: ReferenceIntegrator = 'odex',
+): number[] {
+  const k = dragFactorPerM({
+    airDensityKgM3: sight.airDensityKgM3,
+    dragCoefficient: sight.dragCoefficient,
+    diameterMm: sight.arrowDiameterMm,
+    massGr: sight.arrowMassGr,
+  });
   const v0 = sight.speedFps * 0.3048;
   const h = sight.peepHeightMm / 1000;
   const f = derivativeOf(k, crossWindMps);

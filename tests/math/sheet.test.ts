@@ -26,14 +26,17 @@ describe('print sheet SVG', () => {
     expect(numberAttribute(bar('50 mm'), 'width')).toBeCloseTo(50, 10);
     expect(numberAttribute(bar('2 in'), 'width')).toBeCloseTo(2 * 25.4, 10);
     // Not scaled by any enclosing transform.
-    for (const name of ['50 mm', '2 in']) expect((bar(name).parentNode as unknown as { getAttribute(name: string): string | null }).getAttribute('transform')).toBeNull();
+    for (const name of ['50 mm', '2 in'])
+      expect((bar(name).parentNode as unknown as { getAttribute(name: string): string | null }).getAttribute('transform')).toBeNull();
   });
 
   it('prints the tape at 100 % and the ±0.5, ±1, ±2 % variants, each labelled, scaled exactly', () => {
     const tapes = elements(root, 'g').filter((group) => group.getAttribute('class') === 'tape');
     expect(tapes.map((group) => Number(group.getAttribute('data-percent')))).toEqual([0, ...SHEET_VARIANT_PERCENTS]);
     const span = (group: (typeof tapes)[number]) => {
-      const offsets = elements(group, 'line').filter((line) => line.hasAttribute('data-distance')).map((line) => numberAttribute(line, 'data-offset-mm'));
+      const offsets = elements(group, 'line')
+        .filter((line) => line.hasAttribute('data-distance'))
+        .map((line) => numberAttribute(line, 'data-offset-mm'));
       return offsets[offsets.length - 1] - offsets[0];
     };
     const trueSpan = span(tapes[0]);
@@ -66,7 +69,9 @@ describe('print sheet SVG', () => {
   it('leaves the variants out on request and refuses a tape too long for the page', () => {
     const single = parseSvg(printSheetSvg(fit, { variants: false })).documentElement!;
     expect(elements(single, 'g').filter((group) => group.getAttribute('class') === 'tape')).toHaveLength(1);
-    expect(() => printSheetSvg({ ...fit, model: { ...fit.model, speedFps: 160 } }, { tape: { from: 20, to: 100, widthMm: 40 } })).toThrow(FitInputError);
+    expect(() => printSheetSvg({ ...fit, model: { ...fit.model, speedFps: 160 } }, { tape: { from: 20, to: 100, widthMm: 40 } })).toThrow(
+      FitInputError,
+    );
   });
 });
 

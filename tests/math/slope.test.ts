@@ -1,7 +1,15 @@
 import { fitSight, predictMarkMm, slopeShot, levelRangeForMark, distanceToMetres, SLOPE_CAUTION } from '@/math';
 import { TRUE_MODEL, inputWith, marksOf } from './helpers';
 
-const fit = fitSight(inputWith(marksOf(TRUE_MODEL, [20, 40, 60]), { shots: [{ distance: 40, angleDeg: -30 }, { distance: 40, angleDeg: 30 }, { distance: 8, angleDeg: 20 }] }));
+const fit = fitSight(
+  inputWith(marksOf(TRUE_MODEL, [20, 40, 60]), {
+    shots: [
+      { distance: 40, angleDeg: -30 },
+      { distance: 40, angleDeg: 30 },
+      { distance: 8, angleDeg: 20 },
+    ],
+  }),
+);
 
 describe('slope shots', () => {
   it('give the slope mark, the level distance with the same mark, and the rifleman’s-rule distance', () => {

@@ -35,11 +35,16 @@ describe('tape SVG', () => {
       expect(Math.abs(offset - (layout.marginMm + marks[i] - lowest))).toBeLessThan(0.01);
     });
     // Against the fit's own predictions every 10 yd: tick spacing equals mark spacing.
-    const at = (distance: number) => numberAttribute(ticks.find((tick) => tick.getAttribute('data-distance') === String(distance))!, 'data-offset-mm');
+    const at = (distance: number) =>
+      numberAttribute(ticks.find((tick) => tick.getAttribute('data-distance') === String(distance))!, 'data-offset-mm');
     const predicted = (distance: number) => fit.marks.find((mark) => mark.distance === distance)!.markMm;
-    for (const distance of [30, 40, 50, 60, 70, 80, 90, 100]) expect(Math.abs(at(distance) - at(20) - (predicted(distance) - predicted(20)))).toBeLessThan(0.01);
+    for (const distance of [30, 40, 50, 60, 70, 80, 90, 100])
+      expect(Math.abs(at(distance) - at(20) - (predicted(distance) - predicted(20)))).toBeLessThan(0.01);
     // The height covers every tick with its margins.
-    expect(numberAttribute(root, 'height') || Number(root.getAttribute('height')!.replace('mm', ''))).toBeCloseTo(2 * layout.marginMm + Math.max(...marks) - lowest, 3);
+    expect(numberAttribute(root, 'height') || Number(root.getAttribute('height')!.replace('mm', ''))).toBeCloseTo(
+      2 * layout.marginMm + Math.max(...marks) - lowest,
+      3,
+    );
   });
 
   it('has longer ticks and numerals every 5 and 10, numerals at least 1.6 mm tall', () => {
@@ -82,7 +87,11 @@ describe('tape SVG', () => {
     const metres = ticksOf(tapeSvg(fit, { from: 20, to: 90, unit: 'm' }));
     expect(metres).toHaveLength(71);
     const marks = metres.map((tick) => predictMarkMm(fit.model, metresToYards(Number(tick.getAttribute('data-distance')))));
-    metres.forEach((tick, i) => expect(Math.abs(numberAttribute(tick, 'data-offset-mm') - numberAttribute(metres[0], 'data-offset-mm') - (marks[i] - marks[0]))).toBeLessThan(0.01));
+    metres.forEach((tick, i) =>
+      expect(
+        Math.abs(numberAttribute(tick, 'data-offset-mm') - numberAttribute(metres[0], 'data-offset-mm') - (marks[i] - marks[0])),
+      ).toBeLessThan(0.01),
+    );
     const half = ticksOf(tapeSvg(fit, { from: 20, to: 30, step: 0.5 }));
     expect(half.map((tick) => Number(tick.getAttribute('data-distance')))).toEqual(Array.from({ length: 21 }, (_, i) => 20 + i / 2));
   });

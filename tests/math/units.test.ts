@@ -1,8 +1,27 @@
 import * as math from 'mathjs';
 import {
-  FOOT_POUND_J, GRAIN_KG, INCH_MM, POUND_FORCE_N, SLUG_KG, STANDARD_GRAVITY_MPS2, YARD_M,
-  distanceToMetres, fpsToMps, grainsToGrams, grainsToKg, gramsToGrains, inchesToMm, lengthToMm, metresToDistance,
-  metresToYards, mmToInches, mpsToFps, yardsToMetres, degToRad, radToDeg, celsiusToKelvin,
+  FOOT_POUND_J,
+  GRAIN_KG,
+  INCH_MM,
+  POUND_FORCE_N,
+  SLUG_KG,
+  STANDARD_GRAVITY_MPS2,
+  YARD_M,
+  distanceToMetres,
+  fpsToMps,
+  grainsToGrams,
+  grainsToKg,
+  gramsToGrains,
+  inchesToMm,
+  lengthToMm,
+  metresToDistance,
+  metresToYards,
+  mmToInches,
+  mpsToFps,
+  yardsToMetres,
+  degToRad,
+  radToDeg,
+  celsiusToKelvin,
 } from '@/math/units';
 
 // Reference: mathjs 14 unit definitions (international yard and pound, 1959;

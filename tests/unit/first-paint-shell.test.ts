@@ -7,7 +7,8 @@ import { readPalette } from '@/server/tools/web-pwa';
 
 const root = path.resolve(__dirname, '../..');
 // Expo's "single" output page, cut down to the part the shell is put beside.
-const page = '<!DOCTYPE html><html lang="en"><head><title>Pinwright</title></head><body><div id="root"></div><script src="/entry.js" defer></script></body></html>';
+const page =
+  '<!DOCTYPE html><html lang="en"><head><title>Pinwright</title></head><body><div id="root"></div><script src="/entry.js" defer></script></body></html>';
 
 function writePage(html: string): string {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'pinwright-shell-'));

@@ -4,8 +4,13 @@ import { camSystems, restKinds } from '@/shared/setup-measures';
 // The rules are trade practice with no published source (written from memory);
 // these tests pin down the table's behaviour for every case the set-up can name.
 const hands: Hand[] = ['right', 'left'];
-const ids = (tear: Tear, hand: Hand, rest: (typeof restKinds)[number] | null, cam: (typeof camSystems)[number] | null, lengthMm: number | null = 20) =>
-  suggestNext({ tear, lengthMm, hand, rest, cam }).lines.map((line) => line.ruleId);
+const ids = (
+  tear: Tear,
+  hand: Hand,
+  rest: (typeof restKinds)[number] | null,
+  cam: (typeof camSystems)[number] | null,
+  lengthMm: number | null = 20,
+) => suggestNext({ tear, lengthMm, hand, rest, cam }).lines.map((line) => line.ruleId);
 
 describe('paper-tune diagnosis table (shared/paper-tune-rules.ts)', () => {
   test('every rule names its source', () => {
@@ -23,8 +28,9 @@ describe('paper-tune diagnosis table (shared/paper-tune-rules.ts)', () => {
   });
 
   // Every tear × hand × rest kind × cam system.
-  const cases: Array<[Tear, Hand, (typeof restKinds)[number], (typeof camSystems)[number]]> = [];
-  for (const tear of tearValues) for (const hand of hands) for (const rest of restKinds) for (const cam of camSystems) cases.push([tear, hand, rest, cam]);
+  const cases: [Tear, Hand, (typeof restKinds)[number], (typeof camSystems)[number]][] = [];
+  for (const tear of tearValues)
+    for (const hand of hands) for (const rest of restKinds) for (const cam of camSystems) cases.push([tear, hand, rest, cam]);
 
   test.each(cases)('%s tear, %s hand, %s rest, %s cams', (tear, hand, rest, cam) => {
     const suggestion = suggestNext({ tear, lengthMm: 20, hand, rest, cam });
@@ -76,7 +82,8 @@ describe('paper-tune diagnosis table (shared/paper-tune-rules.ts)', () => {
   });
 
   test('step size follows the tear length (12 mm ≈ 1/2 in is small; from memory)', () => {
-    const words = (lengthMm: number) => suggestNext({ tear: 'up', lengthMm, hand: 'right', rest: 'blade', cam: 'single' }).lines.find((l) => l.ruleId === 'step-size')!.words;
+    const words = (lengthMm: number) =>
+      suggestNext({ tear: 'up', lengthMm, hand: 'right', rest: 'blade', cam: 'single' }).lines.find((l) => l.ruleId === 'step-size')!.words;
     expect(words(12)).toMatch(/1\/32 in/);
     expect(words(12.1)).toMatch(/1\/16 in/);
   });

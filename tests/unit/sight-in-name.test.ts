@@ -10,7 +10,7 @@ const older = { id: 9, date: '2026-11-20', placeLabel: '', buildId: 2, createdAt
 
 describe('sightInName', () => {
   it('names a lone sight-in by day, place and build, without a time', () => {
-    expect(sightInName(older, { builds, siblings: [older, morning] , timeZone: 'UTC' })).toBe('20 Nov 2026 · Practice light');
+    expect(sightInName(older, { builds, siblings: [older, morning], timeZone: 'UTC' })).toBe('20 Nov 2026 · Practice light');
     expect(sightInName(morning, { builds, siblings: [morning, older], timeZone: 'UTC' })).toBe('2 Dec 2026 · Larch Hollow range · Elk 415');
   });
 

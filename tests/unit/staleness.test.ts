@@ -1,8 +1,21 @@
-import { changeIsAfter, fitStaleness, impactChangeKinds, movesImpact, sheetNote, type FitFacts, type ImpactChange } from '@/shared/staleness';
+import {
+  changeIsAfter,
+  fitStaleness,
+  impactChangeKinds,
+  movesImpact,
+  sheetNote,
+  type FitFacts,
+  type ImpactChange,
+} from '@/shared/staleness';
 import { bowChangeKinds } from '@/shared/level-status';
 
 const fit = (id: number, date: string, savedAt: string, buildId = 1): FitFacts => ({ id, buildId, date, createdAt: new Date(savedAt) });
-const change = (id: number | string, kind: ImpactChange['kind'], at: string, buildId?: number): ImpactChange => ({ id, kind, at: new Date(at), buildId });
+const change = (id: number | string, kind: ImpactChange['kind'], at: string, buildId?: number): ImpactChange => ({
+  id,
+  kind,
+  at: new Date(at),
+  buildId,
+});
 
 describe('the staleness rule (shared/staleness.ts)', () => {
   const first = fit(1, '2026-11-20', '2026-11-20T18:00:00Z');
@@ -26,7 +39,9 @@ describe('the staleness rule (shared/staleness.ts)', () => {
   });
 
   test('"other" changes are not counted', () => {
-    expect(fitStaleness({ fit: first, fits: [first], changes: [change(9, 'other', '2026-12-01T10:00:00Z')], confirmations: [] }).state).toBe('current');
+    expect(
+      fitStaleness({ fit: first, fits: [first], changes: [change(9, 'other', '2026-12-01T10:00:00Z')], confirmations: [] }).state,
+    ).toBe('current');
   });
 
   test('a change before the sight-in does not count; on the same day, the moment it was saved decides', () => {
@@ -41,7 +56,11 @@ describe('the staleness rule (shared/staleness.ts)', () => {
   });
 
   test('names the first change and counts the rest', () => {
-    const changes = [change(3, 'rest', '2026-12-02T09:00:00Z'), change(2, 'peep', '2026-11-28T09:00:00Z'), change(4, 'string', '2026-12-02T10:00:00Z')];
+    const changes = [
+      change(3, 'rest', '2026-12-02T09:00:00Z'),
+      change(2, 'peep', '2026-11-28T09:00:00Z'),
+      change(4, 'string', '2026-12-02T10:00:00Z'),
+    ];
     const result = fitStaleness({ fit: first, fits: [first], changes, confirmations: [] });
     expect(result.reason).toBe('Peep moved on 28 Nov 2026 (and 2 more changes), after this sight-in: confirm the marks at the range.');
     expect(result.changeIds).toEqual([2, 3, 4]);
@@ -69,19 +88,26 @@ describe('the staleness rule (shared/staleness.ts)', () => {
     expect(result.state).toBe('confirm');
     expect(result.changeIds).toEqual([10]);
     // Another sight-in's confirmation does not count for this one.
-    expect(fitStaleness({ fit: first, fits: [first], changes: [peep], confirmations: [{ sightInId: 2, at: new Date('2026-12-01T15:00:00Z') }] }).state).toBe('confirm');
+    expect(
+      fitStaleness({ fit: first, fits: [first], changes: [peep], confirmations: [{ sightInId: 2, at: new Date('2026-12-01T15:00:00Z') }] })
+        .state,
+    ).toBe('confirm');
   });
 
   test('an arrow build edit counts for that build only', () => {
     const edit = change('build-1', 'build', '2026-12-01T10:00:00Z', 1);
-    expect(fitStaleness({ fit: first, fits: [first], changes: [edit], confirmations: [] }).reason).toMatch(/^Arrow build edited on 1 Dec 2026/);
+    expect(fitStaleness({ fit: first, fits: [first], changes: [edit], confirmations: [] }).reason).toMatch(
+      /^Arrow build edited on 1 Dec 2026/,
+    );
     const other = fit(2, '2026-11-20', '2026-11-20T18:00:00Z', 2);
     expect(fitStaleness({ fit: other, fits: [first, other], changes: [edit], confirmations: [] }).state).toBe('current');
   });
 
   test('the printed sheet note', () => {
     const stale = fitStaleness({ fit: first, fits: [first], changes: [change(9, 'rest', '2026-12-01T10:00:00Z')], confirmations: [] });
-    expect(sheetNote(stale)).toBe('CONFIRM AT THE RANGE — Rest changed on 1 Dec 2026, after this sight-in: confirm the marks at the range.');
+    expect(sheetNote(stale)).toBe(
+      'CONFIRM AT THE RANGE — Rest changed on 1 Dec 2026, after this sight-in: confirm the marks at the range.',
+    );
     expect(sheetNote(fitStaleness({ fit: first, fits: [first], changes: [], confirmations: [] }))).toBeNull();
   });
 });

@@ -24,12 +24,38 @@ const close = (actual: number | undefined, expected: number, digits = 9) => expe
 
 describe('unit defaults from the first choice', () => {
   it('yards bring inches, feet, °F, fps and grains; metres bring mm, m, °C, m/s and grains', () => {
-    expect(imperial).toEqual({ distanceUnit: 'yd', lengthUnit: 'in', altitudeUnit: 'ft', temperatureUnit: 'F', speedUnit: 'fps', massUnit: 'gr' });
-    expect(metric).toEqual({ distanceUnit: 'm', lengthUnit: 'mm', altitudeUnit: 'm', temperatureUnit: 'C', speedUnit: 'mps', massUnit: 'gr' });
+    expect(imperial).toEqual({
+      distanceUnit: 'yd',
+      lengthUnit: 'in',
+      altitudeUnit: 'ft',
+      temperatureUnit: 'F',
+      speedUnit: 'fps',
+      massUnit: 'gr',
+    });
+    expect(metric).toEqual({
+      distanceUnit: 'm',
+      lengthUnit: 'mm',
+      altitudeUnit: 'm',
+      temperatureUnit: 'C',
+      speedUnit: 'mps',
+      massUnit: 'gr',
+    });
   });
   it('names the shown unit of each quantity', () => {
-    expect((['length', 'altitude', 'temperature', 'speed', 'mass'] as Quantity[]).map((q) => shownUnit(q, imperial))).toEqual(['in', 'ft', '°F', 'fps', 'gr']);
-    expect((['length', 'altitude', 'temperature', 'speed', 'mass'] as Quantity[]).map((q) => shownUnit(q, metric))).toEqual(['mm', 'm', '°C', 'm/s', 'gr']);
+    expect((['length', 'altitude', 'temperature', 'speed', 'mass'] as Quantity[]).map((q) => shownUnit(q, imperial))).toEqual([
+      'in',
+      'ft',
+      '°F',
+      'fps',
+      'gr',
+    ]);
+    expect((['length', 'altitude', 'temperature', 'speed', 'mass'] as Quantity[]).map((q) => shownUnit(q, metric))).toEqual([
+      'mm',
+      'm',
+      '°C',
+      'm/s',
+      'gr',
+    ]);
   });
 });
 
@@ -54,10 +80,15 @@ describe('exact factors (international yard and pound agreement, 1959; °F = °C
   it('round trips: stored → shown → stored gives the value back, for every quantity and either choice', () => {
     const quantities: Quantity[] = ['length', 'altitude', 'temperature', 'speed', 'mass'];
     fc.assert(
-      fc.property(fc.constantFrom(...quantities), fc.constantFrom(imperial, metric, { ...metric, massUnit: 'g' as const }), fc.double({ min: -5000, max: 5000, noNaN: true }), (quantity, units, stored) => {
-        const back = toStored(fromStored(stored, quantity, units), quantity, units);
-        expect(Math.abs(back - stored)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(stored)));
-      }),
+      fc.property(
+        fc.constantFrom(...quantities),
+        fc.constantFrom(imperial, metric, { ...metric, massUnit: 'g' as const }),
+        fc.double({ min: -5000, max: 5000, noNaN: true }),
+        (quantity, units, stored) => {
+          const back = toStored(fromStored(stored, quantity, units), quantity, units);
+          expect(Math.abs(back - stored)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(stored)));
+        },
+      ),
     );
   });
   it('round trips through the input text to the input’s rounding (1/1000 in = 0.0254 mm)', () => {
@@ -75,7 +106,14 @@ describe('typed values', () => {
   it('"28.5" for a yards archer is 28.5 in = 723.9 mm, a draw length the bow schema accepts', () => {
     const drawLengthMm = parseQuantity('28.5', 'length', imperial).value;
     close(drawLengthMm, 723.9);
-    const base = { nickname: 'Test', hand: 'right', drawWeightLb: 60, sightKind: 'single-pin-slider', sightRadiusMm: 840, peepHeightMm: 110 };
+    const base = {
+      nickname: 'Test',
+      hand: 'right',
+      drawWeightLb: 60,
+      sightKind: 'single-pin-slider',
+      sightRadiusMm: 840,
+      peepHeightMm: 110,
+    };
     expect(bowInputSchema.safeParse({ ...base, drawLengthMm }).success).toBe(true);
   });
   it('a unit typed after the number wins over the field’s: "28.5 in" in a mm field, "724 mm" in an inch field', () => {
@@ -151,7 +189,9 @@ describe('limits stated in the shown unit', () => {
     expect(messageInUnits('Point weight must be at most 500 gr', { massUnit: 'g' })).toBe('Point weight must be at most 32.3 g');
   });
   it('leaves distances alone when asked to convert lengths only', () => {
-    expect(messageInUnits('Marks must be at most 150 m apart; tape width 40 mm', imperial, ['length'])).toBe('Marks must be at most 150 m apart; tape width 1.57 in');
+    expect(messageInUnits('Marks must be at most 150 m apart; tape width 40 mm', imperial, ['length'])).toBe(
+      'Marks must be at most 150 m apart; tape width 1.57 in',
+    );
   });
 });
 
@@ -162,12 +202,17 @@ describe('dates as typed', () => {
     expect(parseDateText('', 'MDY').error).toBe('Enter the date');
   });
   it('12/02/2026 is read in the locale’s order, and the note says how', () => {
-    expect(parseDateText('12/02/2026', 'MDY')).toEqual({ iso: '2026-12-02', note: 'Read as 2 December 2026 (month first); if you meant 12 February 2026, enter it as YYYY-MM-DD' });
+    expect(parseDateText('12/02/2026', 'MDY')).toEqual({
+      iso: '2026-12-02',
+      note: 'Read as 2 December 2026 (month first); if you meant 12 February 2026, enter it as YYYY-MM-DD',
+    });
     expect(parseDateText('12/02/2026', 'DMY').iso).toBe('2026-02-12');
     expect(parseDateText('02.12.26', 'DMY').iso).toBe('2026-12-02');
   });
   it('without a known order a two-way date is refused with both readings', () => {
-    expect(parseDateText('12/02/2026', null).error).toBe('12/02/2026 could be 12 February 2026 or 2 December 2026: enter it as YYYY-MM-DD or pick it');
+    expect(parseDateText('12/02/2026', null).error).toBe(
+      '12/02/2026 could be 12 February 2026 or 2 December 2026: enter it as YYYY-MM-DD or pick it',
+    );
   });
   it('a date with only one reading is read that way whatever the locale', () => {
     expect(parseDateText('31/12/2026', 'MDY')).toEqual({ iso: '2026-12-31' });
