@@ -11,7 +11,7 @@ export type ApiResponseType = 'json' | 'text' | 'blob';
 
 export interface ApiFetchOptions<T> {
   method?: ApiMethod;
-  /** Sent as JSON. */
+  /** Sent as JSON; a FormData (a file upload) is sent as multipart form data. */
   body?: unknown;
   /** When given, the response body is parsed with it (a mismatch throws ApiError "bad_response"). */
   schema?: ZodType<T, ZodTypeDef, unknown>;
@@ -41,6 +41,7 @@ const statusCodes: Record<number, string> = {
   403: 'forbidden',
   404: 'not_found',
   409: 'conflict',
+  413: 'too_large',
   429: 'rate_limited',
 };
 
@@ -50,6 +51,7 @@ const statusMessages: Record<string, string> = {
   forbidden: 'You do not have access to that.',
   not_found: 'That was not found.',
   conflict: 'That clashes with something already saved.',
+  too_large: 'That file is too large to send.',
   rate_limited: 'Too many tries. Wait a minute, then try again.',
   server_error: 'Something went wrong on our side. Try again in a moment.',
 };
@@ -89,7 +91,9 @@ export async function apiFetch<T = unknown>(path: string, options: ApiFetchOptio
   const method = options.method ?? 'GET';
   const responseType = options.responseType ?? 'json';
   const headers: Record<string, string> = { Accept: responseType === 'json' ? 'application/json' : '*/*', ...options.headers };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  const multipart = typeof FormData !== 'undefined' && options.body instanceof FormData;
+  // The browser writes a multipart body's Content-Type itself (with its boundary).
+  if (options.body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
   if (method !== 'GET') headers[csrfHeader] = '1';
 
   let res: Response;
@@ -98,7 +102,7 @@ export async function apiFetch<T = unknown>(path: string, options: ApiFetchOptio
       method,
       headers,
       credentials: 'same-origin',
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.body === undefined ? undefined : multipart ? (options.body as FormData) : JSON.stringify(options.body),
       signal: options.signal,
     });
   } catch (cause) {

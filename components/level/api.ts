@@ -1,7 +1,7 @@
 import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 
-import { ApiError, apiFetch, csrfHeader } from '@/components/api/client';
+import { ApiError, apiFetch } from '@/components/api/client';
 import { bowKeys } from '@/components/bows/api';
 import { sendOrKeep } from '@/components/offline/send-or-keep';
 import {
@@ -253,33 +253,23 @@ export function useReadiness(bowId: number | undefined) {
 }
 
 /**
- * Uploads a step's photo as multipart form data (apiFetch sends JSON only),
- * with the CSRF header and the server's error shape turned into an ApiError.
+ * Uploads a step's photo as multipart form data through apiFetch (CSRF header,
+ * the server's error shape as an ApiError); the server's limit is 5 MB.
  * Example: `await uploadStepPhoto(12, 'second-axis', file)` → { id, url, mimeType, sizeBytes }
  */
 export async function uploadStepPhoto(checkId: number, step: LevelStepKey, file: Blob, fileName = 'photo'): Promise<Photo> {
   const body = new FormData();
   body.append('photo', file, fileName);
-  let res: Response;
   try {
-    res = await fetch(`/api/checks/${checkId}/steps/${step}/photo`, {
-      method: 'POST',
-      body,
-      credentials: 'same-origin',
-      headers: { Accept: 'application/json', [csrfHeader]: '1' },
-    });
-  } catch {
-    throw new ApiError(0, 'network', 'Cannot reach Pinwright. Check your connection and try again.');
+    const answer = await apiFetch(`/api/checks/${checkId}/steps/${step}/photo`, { method: 'POST', body, schema: photoResponseSchema });
+    return answer.photo;
+  } catch (error) {
+    // A proxy may refuse a large body before the server can answer in its own words.
+    if (error instanceof ApiError && error.status === 413 && error.code === 'too_large') {
+      throw new ApiError(413, 'too_large', 'The photo is larger than 5 MB.');
+    }
+    throw error;
   }
-  const payload = (await res.json().catch(() => null)) as { error?: { code?: string; message?: string } } | null;
-  if (!res.ok) {
-    const message =
-      payload?.error?.message ?? (res.status === 413 ? 'The photo is larger than 5 MB.' : `The upload failed (HTTP ${res.status}).`);
-    throw new ApiError(res.status, payload?.error?.code ?? 'error', message);
-  }
-  const parsed = photoResponseSchema.safeParse(payload);
-  if (!parsed.success) throw new ApiError(res.status, 'bad_response', 'The server sent an answer we could not read.');
-  return parsed.data.photo;
 }
 
 /** Uploads (or replaces) a step's photo and refreshes the check. */

@@ -50,6 +50,26 @@ describe('apiFetch', () => {
     expect(error.fields).toEqual({ email: 'Enter a valid e-mail address' });
   });
 
+  it('sends a FormData body as it is (multipart, the browser sets its Content-Type), with the CSRF header', async () => {
+    const fetchMock = mockFetch();
+    fetchMock.mockResolvedValue(jsonResponse(201, { photo: { id: 1 } }));
+    const body = new FormData();
+    body.append('photo', new Blob(['x'], { type: 'image/jpeg' }), 'step.jpg');
+    await apiFetch('/api/checks/3/steps/second-axis/photo', { method: 'POST', body });
+    const [, init] = fetchMock.mock.calls[0];
+    expect(init.body).toBe(body);
+    expect(init.headers['Content-Type']).toBeUndefined();
+    expect(init.headers['X-Pinwright-Csrf']).toBe('1');
+  });
+
+  it('names a too-large upload refused without a JSON body', async () => {
+    const fetchMock = mockFetch();
+    fetchMock.mockResolvedValue(jsonResponse(413));
+    const error = await failure(apiFetch('/api/checks/3/steps/second-axis/photo', { method: 'POST', body: new FormData() }));
+    expect(error.code).toBe('too_large');
+    expect(error.message).toBe('That file is too large to send.');
+  });
+
   it('names a failure without a JSON body by its status', async () => {
     const fetchMock = mockFetch();
     fetchMock.mockResolvedValue(jsonResponse(429));
