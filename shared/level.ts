@@ -249,36 +249,37 @@ export const changeListResponseSchema = z.object({ changes: z.array(bowChangeSch
 export const changeResponseSchema = z.object({ change: bowChangeSchema, level: levelSummarySchema });
 export const photoResponseSchema = z.object({ photo: photoSchema });
 
+/** A sight-in's marks as Before a trip lists them (each shot at the range, so confirmed). */
+export const tripMarksSchema = z.object({
+  sightInId: z.number().int(),
+  date: z.string(),
+  placeLabel: z.string(),
+  marks: z.array(z.object({ distance: z.number(), unit: distanceUnitSchema, scaleMm: z.number() })),
+  longestDistance: z.number().nullable(),
+  longestUnit: distanceUnitSchema.nullable(),
+});
+
+/** A saved tape as Before a trip lists it, with the sight-in it was printed from. */
+export const tripTapeSchema = z.object({
+  id: z.number().int(),
+  sightInId: z.number().int(),
+  sightInDate: z.string(),
+  fromDistance: z.number(),
+  toDistance: z.number(),
+  unit: distanceUnitSchema,
+  label: z.string(),
+  savedAt: z.string(),
+  fromLatestSightIn: z.boolean(),
+});
+
 /** GET /api/bows/:bowId/readiness: what to know before a trip, on one page. */
 export const tripReadinessSchema = z.object({
   bow: z.object({ id: z.number().int(), nickname: z.string(), sightDescription: z.string() }),
   level: levelSummarySchema,
   /** The latest sight-in's marks (each shot at the range), or null without a sight-in. */
-  marks: z
-    .object({
-      sightInId: z.number().int(),
-      date: z.string(),
-      placeLabel: z.string(),
-      buildName: z.string().nullable(),
-      marks: z.array(z.object({ distance: z.number(), unit: distanceUnitSchema, scaleMm: z.number() })),
-      longestDistance: z.number().nullable(),
-      longestUnit: distanceUnitSchema.nullable(),
-    })
-    .nullable(),
+  marks: tripMarksSchema.extend({ buildName: z.string().nullable() }).nullable(),
   /** The most recently saved tape and the sight-in it was printed from. */
-  tape: z
-    .object({
-      id: z.number().int(),
-      sightInId: z.number().int(),
-      sightInDate: z.string(),
-      fromDistance: z.number(),
-      toDistance: z.number(),
-      unit: distanceUnitSchema,
-      label: z.string(),
-      savedAt: z.string(),
-      fromLatestSightIn: z.boolean(),
-    })
-    .nullable(),
+  tape: tripTapeSchema.nullable(),
   /** Plain sentences: what to look at before leaving. */
   warnings: z.array(z.string()),
   generatedAt: z.string(),

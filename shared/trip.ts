@@ -1,38 +1,18 @@
 import { z } from 'zod';
-import { distanceUnitSchema } from './common';
-import { tripReadinessSchema } from './level';
+import { tripMarksSchema, tripReadinessSchema, tripTapeSchema } from './level';
 
 /** One arrow build's part of Before a trip: its latest sight-in, its latest tape (from its own sight-ins only) and what to look at. */
 export const tripBuildSchema = z.object({
   build: z.object({ id: z.number().int(), name: z.string() }),
   /** The build's latest sight-in (each mark shot at the range, so confirmed), or null when it has none. */
-  marks: z
-    .object({
-      sightInId: z.number().int(),
+  marks: tripMarksSchema
+    .extend({
       /** The sight-in's name (shared/sight-in-name.ts). */
       name: z.string(),
-      date: z.string(),
-      placeLabel: z.string(),
-      marks: z.array(z.object({ distance: z.number(), unit: distanceUnitSchema, scaleMm: z.number() })),
-      longestDistance: z.number().nullable(),
-      longestUnit: distanceUnitSchema.nullable(),
     })
     .nullable(),
   /** The last saved tape of the newest of this build's sight-ins that has one. */
-  tape: z
-    .object({
-      id: z.number().int(),
-      sightInId: z.number().int(),
-      sightInName: z.string(),
-      sightInDate: z.string(),
-      fromDistance: z.number(),
-      toDistance: z.number(),
-      unit: distanceUnitSchema,
-      label: z.string(),
-      savedAt: z.string(),
-      fromLatestSightIn: z.boolean(),
-    })
-    .nullable(),
+  tape: tripTapeSchema.extend({ sightInName: z.string() }).nullable(),
   warnings: z.array(z.string()),
 });
 
