@@ -3,7 +3,8 @@ import { ScrollView, StyleSheet, View, type LayoutChangeEvent } from 'react-nati
 
 import { formatFixed, formatSigned } from '@/components/compare/format';
 import { Text } from '@/components/ui/text';
-import { colors, fonts, radii, space } from '@/components/theme';
+import { colors, fonts, space } from '@/components/theme';
+import { tableStyles } from '@/components/ui/table-styles';
 import type { FieldCardData } from '@/shared/field-card';
 
 const angleColumn = 56;
@@ -96,11 +97,7 @@ export function SlopeTable({ card }: { card: FieldCardData }) {
 }
 
 const styles = StyleSheet.create({
-  scroll: { flexGrow: 1 },
-  table: { flexGrow: 1, borderRadius: radii.md, overflow: 'hidden', borderWidth: 1, borderColor: colors.line },
-  row: { flexDirection: 'row', alignItems: 'center', paddingVertical: space.xs, paddingHorizontal: space.xs, gap: space.xs },
-  head: { backgroundColor: colors.sunken, paddingVertical: space.sm },
-  stripe: { backgroundColor: colors.surface },
+  ...tableStyles,
   angle: { width: angleColumn - space.xs },
   cell: { flex: 1, minWidth: distanceColumn - space.xs, alignItems: 'center', gap: 0 },
   centre: { textAlign: 'center' },

@@ -5,7 +5,8 @@ import { formatFixed } from '@/components/compare/format';
 import { Banner } from '@/components/ui/banner';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { Text } from '@/components/ui/text';
-import { colors, fonts, radii, space } from '@/components/theme';
+import { colors, fonts, space } from '@/components/theme';
+import { tableStyles } from '@/components/ui/table-styles';
 import type { FieldCardData } from '@/shared/field-card';
 
 const speedColumn = 56;
@@ -82,11 +83,7 @@ export function WindTable({ card }: { card: FieldCardData }) {
 
 const styles = StyleSheet.create({
   section: { gap: space.md, marginTop: space.lg },
-  scroll: { flexGrow: 1 },
-  table: { flexGrow: 1, borderRadius: radii.md, overflow: 'hidden', borderWidth: 1, borderColor: colors.line },
-  row: { flexDirection: 'row', alignItems: 'center', paddingVertical: space.xs, paddingHorizontal: space.xs, gap: space.xs },
-  head: { backgroundColor: colors.sunken, paddingVertical: space.sm },
-  stripe: { backgroundColor: colors.surface },
+  ...tableStyles,
   speed: { width: speedColumn - space.xs },
   cell: { flex: 1, minWidth: distanceColumn - space.xs, alignItems: 'center' },
   centre: { textAlign: 'center' },

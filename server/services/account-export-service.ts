@@ -10,19 +10,7 @@
  */
 import { Op } from 'sequelize';
 import { Bow, BowChange, LevelCheck, LevelStep, Photo, Tape, type User } from '@/server/models';
-import { exportBowJson, type ExportFile } from '@/server/services/export-service';
-
-/** "Marit Holm" → "marit-holm" (file names). */
-function slug(text: string): string {
-  return (
-    text
-      .normalize('NFKD')
-      .replace(/[^\w\s-]/g, '')
-      .trim()
-      .toLowerCase()
-      .replace(/[\s_-]+/g, '-') || 'account'
-  );
-}
+import { exportBowJson, slug, type ExportFile } from '@/server/services/export-service';
 
 /** A row as stored, without the keys that only tie it to rows shown around it. */
 const plainRow = (row: { get: (options: { plain: true }) => object }, drop: readonly string[] = []) =>
@@ -66,6 +54,6 @@ export async function exportAccountJson(user: User, now = new Date()): Promise<E
   return {
     body: `${JSON.stringify(document, null, 2)}\n`,
     contentType: 'application/json; charset=utf-8',
-    fileName: `pinwright-${slug(user.name)}-everything.json`,
+    fileName: `pinwright-${slug(user.name, 'account')}-everything.json`,
   };
 }

@@ -29,15 +29,18 @@ import { tapeQuerySchema, type TapeQuery } from '@/shared/tape';
 
 export type ExportFile = { body: string | Buffer; contentType: string; fileName: string };
 
-/** "Ridge slider #2" → "ridge-slider-2" (file names). */
-function slug(text: string): string {
+/**
+ * A name as a file-name part; `fallback` when nothing of it is left.
+ * Example: slug('Ridge slider #2') → 'ridge-slider-2'; slug('Marit Holm', 'account') → 'marit-holm'
+ */
+export function slug(text: string, fallback = 'bow'): string {
   return (
     text
       .normalize('NFKD')
       .replace(/[^\w\s-]/g, '')
       .trim()
       .toLowerCase()
-      .replace(/[\s_-]+/g, '-') || 'bow'
+      .replace(/[\s_-]+/g, '-') || fallback
   );
 }
 
