@@ -1,6 +1,6 @@
 import { z } from 'zod';
 
-import { lengthTextToMm, textToNumber } from '@/components/forms/form-numbers';
+import { lengthTextToMm, quantityTextToStored, textToNumber } from '@/components/forms/form-numbers';
 import type { DistanceUnit, LengthUnit } from '@/shared/auth';
 import { sheetInputSchema, type FitInput, type SheetInput } from '@/shared/fit';
 
@@ -55,12 +55,16 @@ export const tryFormDefaults: TryFormText = {
 
 /**
  * The form's text → the math core's fit input (the CLI's and /api/try/fit's input, exactly).
+ * The arrow's weight reads grains and its speed fps unless the visitor types
+ * another unit after the number ("27 g", "85 m/s"); the tape width reads mm
+ * unless typed otherwise ("0.5 in"), as every other form does (shared/units.ts).
  * Example: tryFitInput({ …, sightRadius: '33', lengthUnit: 'in', nearReading: '12.4', … }).sight.radiusMm → 838.2
+ *          tryFitInput({ …, speedFps: '85 m/s', … }).arrow.speedFps → 278.87…
  */
 export function tryFitInput(text: TryFormText): FitInput {
-  const massGr = textToNumber(text.arrowGr);
+  const massGr = quantityTextToStored(text.arrowGr, 'mass', { massUnit: 'gr' });
   const diameterMm = lengthTextToMm(text.diameter, text.lengthUnit);
-  const speedFps = textToNumber(text.speedFps);
+  const speedFps = quantityTextToStored(text.speedFps, 'speed', { speedUnit: 'fps' });
   const arrow: FitInput['arrow'] = {
     massGr: massGr ?? ASSUMED_ARROW.massGr,
     diameterMm: diameterMm ?? ASSUMED_ARROW.diameterMm,
@@ -87,7 +91,7 @@ export function trySheetInput(text: TryFormText): SheetInput {
     tape: {
       from: textToNumber(text.tapeFrom) as number,
       to: textToNumber(text.tapeTo) as number,
-      widthMm: textToNumber(text.tapeWidthMm) as number,
+      widthMm: quantityTextToStored(text.tapeWidthMm, 'length', { lengthUnit: 'mm' }) as number,
       step: 1,
     },
     paper: text.paper,

@@ -4,7 +4,7 @@ import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
 import { FieldGrid } from '@/components/forms/field-grid';
-import { textToNumber } from '@/components/forms/form-numbers';
+import { quantityTextToStored, textToNumber } from '@/components/forms/form-numbers';
 import { textFormResolver } from '@/components/forms/text-form-resolver';
 import { TRY_SHEET_STORAGE_KEY } from '@/components/print/try-sheet';
 import { FitWarnings } from '@/components/sight-ins/fit-warnings';
@@ -74,7 +74,7 @@ function outcomeOf(text: TryFormText): Outcome {
     const tape = tapeLayout(attempt.fit.model, {
       from: textToNumber(text.tapeFrom),
       to: textToNumber(text.tapeTo),
-      widthMm: textToNumber(text.tapeWidthMm),
+      widthMm: quantityTextToStored(text.tapeWidthMm, 'length', { lengthUnit: 'mm' }),
       step: 1,
     });
     return { live: { state: 'fit', fit: attempt.fit, marks, sign: 1 }, tape, tapeProblem: null };
@@ -200,9 +200,9 @@ export function TryScreen() {
           description={`Left empty, a ${ASSUMED_ARROW.massGr} gr arrow on a ${ASSUMED_ARROW.diameterMm} mm shaft is assumed; it changes the long-range marks a little.`}
         />
         <FieldGrid minWidth={140}>
-          <FormField control={control} name="arrowGr" label="Weight" unit="gr" numeric />
+          <FormField control={control} name="arrowGr" label="Weight" hint="Or type grams: 27 g" unit="gr" numeric />
           <FormField control={control} name="diameter" label="Diameter" unit={unit} numeric />
-          <FormField control={control} name="speedFps" label="Speed" hint="Chronographed" unit="fps" numeric />
+          <FormField control={control} name="speedFps" label="Speed" hint="Chronographed; or type 85 m/s" unit="fps" numeric />
         </FieldGrid>
       </Card>
     </View>
