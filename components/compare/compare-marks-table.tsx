@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { ScrollView, StyleSheet, View, type LayoutChangeEvent } from 'react-native';
+import { Platform, ScrollView, StyleSheet, View, type LayoutChangeEvent, type TextStyle } from 'react-native';
 
 import { buildStyle } from '@/components/compare/build-styles';
 import { formatFixed, formatSigned } from '@/components/compare/format';
@@ -11,10 +11,33 @@ const distanceColumn = 56;
 const buildColumn = 84;
 
 /**
+ * The distance column stays in view while the builds scroll sideways (CSS
+ * position: sticky on the web; React Native's types know only absolute,
+ * relative and static, so the value is widened through string). Held, it
+ * reaches over the row's padding and the gap to the first build (padding
+ * inside, negative margin outside) so that its ground hides what scrolls under.
+ */
+const stickyStart: TextStyle | null =
+  Platform.OS === 'web'
+    ? {
+        position: 'sticky' as string as TextStyle['position'],
+        left: 0,
+        zIndex: 1,
+        alignSelf: 'stretch',
+        width: distanceColumn + space.sm,
+        marginLeft: -space.sm,
+        paddingLeft: space.sm,
+        marginRight: -space.sm,
+        paddingRight: space.sm,
+      }
+    : null;
+
+/**
  * Marks by distance: each build's fitted mark, and for the others the
  * difference from the reference build (the first) in mm and in distance (how
  * far along the reference build's tape that mark sits, from the local slope
- * of its curve). Scrolls sideways on a narrow phone with four builds.
+ * of its curve). Scrolls sideways on a narrow phone with four builds, the
+ * distance column fixed at the left.
  * Example: `<CompareMarksTable comparison={data.comparison} />`
  */
 export function CompareMarksTable({ comparison }: { comparison: BuildComparison }) {
@@ -24,17 +47,20 @@ export function CompareMarksTable({ comparison }: { comparison: BuildComparison 
   const [roomWidth, setRoomWidth] = useState(0);
   const onLayout = (event: LayoutChangeEvent) => setRoomWidth(Math.floor(event.nativeEvent.layout.width));
   const minWidth = distanceColumn + buildColumn * comparison.builds.length;
+  // Only a table wider than its room scrolls, and only then is the distance column held.
+  const held = roomWidth > 0 && minWidth > roomWidth ? stickyStart : null;
   return (
     <View style={styles.box}>
       <ScrollView horizontal contentContainerStyle={styles.scroll} onLayout={onLayout}>
         <View
-          style={[styles.table, { width: Math.max(minWidth, roomWidth) }]}
+          // A held column needs the scroll view as its nearest clipping box, so the table does not clip then.
+          style={[styles.table, { width: Math.max(minWidth, roomWidth) }, held && styles.unclipped]}
           role="table"
           aria-label="Marks by distance"
           testID="compare-marks"
         >
           <View style={[styles.row, styles.head]} role="row">
-            <Text variant="label" style={styles.distance} role="columnheader">
+            <Text variant="label" style={[styles.distance, held, held && styles.headStart]} role="columnheader">
               {unit}
             </Text>
             {comparison.builds.map((build, index) => (
@@ -56,7 +82,7 @@ export function CompareMarksTable({ comparison }: { comparison: BuildComparison 
               role="row"
               testID={`compare-row-${row.distance}`}
             >
-              <Text variant="numeral" style={styles.distance} role="rowheader">
+              <Text variant="numeral" style={[styles.distance, held, held && styles.bodyStart]} role="rowheader">
                 {formatFixed(row.distance, 0)}
               </Text>
               {row.marks.map((mark, index) => (
@@ -89,6 +115,10 @@ const styles = StyleSheet.create({
   head: { backgroundColor: colors.sunken, alignItems: 'flex-end', paddingVertical: space.sm },
   stripe: { backgroundColor: colors.surface },
   distance: { width: distanceColumn - space.sm },
+  // Opaque behind the sticky column, so the builds scroll under it.
+  unclipped: { overflow: 'visible' },
+  headStart: { backgroundColor: colors.sunken },
+  bodyStart: { backgroundColor: colors.surface },
   cell: { flex: 1, minWidth: buildColumn - space.sm, gap: 0 },
   swatch: { width: 24, height: 4, borderRadius: 2 },
 });

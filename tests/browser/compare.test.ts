@@ -8,6 +8,7 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { User } from '@/server/models';
 import { seedBows } from '@/server/seed/bows';
+import { buildBody, knownMarks } from '../api/bow-fixtures';
 import {
   DESKTOP,
   PHONE,
@@ -129,3 +130,47 @@ for (const size of [PHONE, DESKTOP]) {
     await context.close();
   }, 120_000);
 }
+
+it('keeps the distance column in view while four builds scroll sideways on a phone (390x844)', async () => {
+  const { context, page } = await newPage(stack, PHONE);
+  const { bowId } = await archerWithDemoBows(context);
+  const headers = { 'X-Pinwright-Csrf': '1' };
+  // Two more sighted builds (invented), so four are compared.
+  const ids: number[] = [];
+  for (const [name, pointGr] of [
+    ['Heavy point test', 150],
+    ['Light point test', 75],
+  ] as const) {
+    const made = await context.request.post(`${stack.baseUrl}/api/bows/${bowId}/builds`, { headers, data: buildBody({ name, pointGr }) });
+    expect(made.status()).toBe(201);
+    const buildId = (await made.json()).build.id as number;
+    const sighted = await context.request.post(`${stack.baseUrl}/api/bows/${bowId}/sight-ins`, {
+      headers,
+      data: { buildId, date: '2026-11-20', placeLabel: 'Test lane', marks: knownMarks([20, 40, 60]) },
+    });
+    expect(sighted.status()).toBe(201);
+    ids.push(buildId);
+  }
+  const builds = (await (await context.request.get(`${stack.baseUrl}/api/bows/${bowId}`)).json()).bow.builds as { id: number }[];
+  await page.goto(`/bows/${bowId}/compare?builds=${builds.map((build) => build.id).join(',')}`);
+  const table = page.getByTestId('compare-marks');
+  await table.waitFor();
+  expect(await table.locator('[role="columnheader"]').count()).toBe(5); // the distance column and four builds
+  const cell = page.getByTestId('compare-row-40').locator('[role="rowheader"]');
+  const before = (await cell.boundingBox())!;
+  // Scroll the table sideways as far as it goes: the builds move, the distance stays put.
+  const moved = await table.evaluate((node) => {
+    const scroller = node.parentElement!.parentElement!;
+    scroller.scrollLeft = scroller.scrollWidth;
+    return scroller.scrollLeft;
+  });
+  expect(moved).toBeGreaterThan(0);
+  await page.waitForTimeout(100);
+  const after = (await cell.boundingBox())!;
+  expect(Math.abs(after.x - before.x)).toBeLessThanOrEqual(1); // held over the table's 1 px border
+  expect(await cell.textContent()).toBe('40');
+  await table.scrollIntoViewIfNeeded();
+  await viewportShot(page, 'compare-four-builds-scrolled');
+  expect(pageErrors(page)).toEqual([]);
+  await context.close();
+}, 120_000);
