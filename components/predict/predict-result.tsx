@@ -84,10 +84,10 @@ export function PredictResult({ result, bowName, tapeWidthMm, tapeHref, sheetHre
         {prediction.virtualMass ? (
           <Text variant="small" tone="soft">
             The bow’s fit: {formatFixed(prediction.virtualMass.energyJ, 1)} J shared with a virtual mass of{' '}
-            {formatFixed(prediction.virtualMass.virtualMassGr, 0)} gr of limbs and string (speed = √(2E / (arrow + virtual mass))).{' '}
+            {mass(prediction.virtualMass.virtualMassGr)} of limbs and string (speed = √(2E / (arrow + virtual mass))).{' '}
             {result.chronographed.length === 2
               ? 'Two builds fit it exactly; a third chronographed build would check it.'
-              : `The chronographed builds sit ${formatFixed(prediction.virtualMass.rmsFps, 1)} fps (RMS) off it.`}
+              : `The chronographed builds sit ${formatQuantity(prediction.virtualMass.rmsFps, 'speed', units, 1)} (RMS) off it.`}
           </Text>
         ) : null}
         <Text variant="small" tone="soft">
