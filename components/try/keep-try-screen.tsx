@@ -6,7 +6,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { apiFetch, isApiError } from '@/components/api/client';
 import { FieldGrid } from '@/components/forms/field-grid';
-import { lengthTextToMm, textToNumber } from '@/components/forms/form-numbers';
+import { lengthTextToMm, quantityTextToStored, textToNumber } from '@/components/forms/form-numbers';
 import { clearTryCarry, loadTryCarry } from '@/components/try/try-carry';
 import type { TryFormText } from '@/components/try/try-form-values';
 import { Banner } from '@/components/ui/banner';
@@ -147,7 +147,8 @@ function KeepTryForm({ carried }: { carried: TryFormText }) {
       sightKind: 'single-pin-slider',
       sightRadiusMm: lengthTextToMm(text.sightRadius, unit),
       peepHeightMm: lengthTextToMm(text.peepHeight, unit),
-      tapeWidthMm: textToNumber(carried.tapeWidthMm),
+      // As on the try page: mm, grains and fps unless a unit was typed after the number (0.5 in, 27 g, 85 m/s).
+      tapeWidthMm: quantityTextToStored(carried.tapeWidthMm, 'length', { lengthUnit: 'mm' }),
       notes: '',
     });
     const build = buildInputSchema.safeParse({
@@ -156,8 +157,8 @@ function KeepTryForm({ carried }: { carried: TryFormText }) {
       grainsPerInch: textToNumber(text.grainsPerInch),
       cutLengthMm: lengthTextToMm(text.cutLength, unit),
       diameterMm: lengthTextToMm(text.diameter, unit),
-      pointGr: textToNumber(text.pointGr),
-      speedFps: textToNumber(text.speedFps) ?? null,
+      pointGr: quantityTextToStored(text.pointGr, 'mass', { massUnit: 'gr' }),
+      speedFps: quantityTextToStored(text.speedFps, 'speed', { speedUnit: 'fps' }) ?? null,
     });
     const sightIn = sightInInputSchema.safeParse({
       buildId: 1,
