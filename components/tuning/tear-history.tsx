@@ -1,10 +1,12 @@
 import { StyleSheet, View } from 'react-native';
 import Svg, { Circle, G, Line, Rect, Text as SvgText } from 'react-native-svg';
 
+import { useUnits } from '@/components/account/use-units';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/theme';
 import { tearNames, tearVector } from '@/shared/paper-tune-rules';
 import type { PaperTuneShot } from '@/shared/paper-tune';
+import { formatQuantity, shownUnit } from '@/shared/units';
 
 /** Tears this long (mm) or longer are drawn at full length. */
 const fullLengthMm = 50;
@@ -17,10 +19,13 @@ const cell = 64;
  * Example: `<TearHistory shots={run.shots} />`
  */
 export function TearHistory({ shots }: { shots: readonly PaperTuneShot[] }) {
+  // Tear lengths in the archer's length unit: "1.00 in" or "25 mm".
+  const units = useUnits();
+  const length = (mm: number) => formatQuantity(mm, 'length', units, shownUnit('length', units) === 'in' ? 2 : 0);
   if (shots.length === 0) return null;
   const width = shots.length * (cell + 8);
   const words = shots
-    .map((shot) => `${shot.position + 1}: ${tearNames[shot.tear].toLowerCase()}${shot.lengthMm ? ` ${Math.round(shot.lengthMm)} mm` : ''}`)
+    .map((shot) => `${shot.position + 1}: ${tearNames[shot.tear].toLowerCase()}${shot.lengthMm ? ` ${length(shot.lengthMm)}` : ''}`)
     .join('; ');
   return (
     <View style={styles.wrap} testID="tear-history">
@@ -49,7 +54,7 @@ export function TearHistory({ shots }: { shots: readonly PaperTuneShot[] }) {
                 ) : null}
                 <Circle cx={x0 + half} cy={half} r={5} fill={tone} />
                 <SvgText x={x0 + half} y={cell + 16} fontSize={13} fontFamily={fonts.numeral} fill={colors.inkSoft} textAnchor="middle">
-                  {`${shot.position + 1}${shot.lengthMm ? ` · ${Math.round(shot.lengthMm)} mm` : ' · clean'}`}
+                  {`${shot.position + 1}${shot.lengthMm ? ` · ${length(shot.lengthMm)}` : ' · clean'}`}
                 </SvgText>
               </G>
             );
