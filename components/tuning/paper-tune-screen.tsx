@@ -5,7 +5,7 @@ import { useUnits } from '@/components/account/use-units';
 import { useMe } from '@/components/auth/api';
 import { useBow } from '@/components/bows/api';
 import { formatDay } from '@/components/bows/readiness-words';
-import { textToNumber } from '@/components/forms/form-numbers';
+import { formatLength, optionalQuantityTextToStored, textToNumber } from '@/components/forms/form-numbers';
 import { useAddShot, useEndRun, useRun, useSetup } from '@/components/tuning/api';
 import { TearDiagram } from '@/components/tuning/tear-diagram';
 import { TearHistory } from '@/components/tuning/tear-history';
@@ -30,7 +30,7 @@ import {
   type PaperTuneRun,
   type TuneAdjustmentKind,
 } from '@/shared/paper-tune';
-import { formatQuantity, messageInUnits, parseQuantity, shownUnit } from '@/shared/units';
+import { messageInUnits, shownUnit } from '@/shared/units';
 import { suggestNext, tearNames, type Tear } from '@/shared/paper-tune-rules';
 import type { CamSystem, RestKind } from '@/shared/setup-measures';
 
@@ -51,14 +51,10 @@ function ShotForm({ run }: { run: PaperTuneRun }) {
   const [errors, setErrors] = useState<ShotErrors>({});
 
   const submit = () => {
-    const typedLength = tear === 'clean' ? { value: undefined } : parseQuantity(length, 'length', units);
-    if (typedLength.error !== undefined) {
-      setErrors({ lengthMm: `Tear length ${typedLength.error}` });
-      return;
-    }
     const parsed = paperTuneShotInputSchema.safeParse({
       tear,
-      lengthMm: typedLength.value ?? null,
+      // Unreadable text is NaN, which the schema names ("Tear length must be a number").
+      lengthMm: tear === 'clean' ? null : optionalQuantityTextToStored(length, 'length', units),
       arrows: textToNumber(arrows) ?? 1,
       note,
       changedBefore: first ? 'none' : changed,
@@ -178,7 +174,7 @@ function EndButtons({ run }: { run: PaperTuneRun }) {
 export function PaperTuneScreen({ runId }: { runId: number }) {
   const me = useMe();
   const units = useUnits();
-  const lengthUnits = shownUnit('length', units);
+  const lengthUnit = units?.lengthUnit ?? 'mm';
   const run = useRun(runId);
   const bow = useBow(run.data?.bowId);
   const setup = useSetup(run.data?.bowId);
@@ -238,7 +234,7 @@ export function PaperTuneScreen({ runId }: { runId: number }) {
         <View style={styles.list}>
           {data.shots.map((shot) => (
             <Text key={shot.id} variant="small" testID={`shot-${shot.position + 1}`}>
-              {`Shot ${shot.position + 1}: ${tearNames[shot.tear]}${shot.lengthMm ? `, ${formatQuantity(shot.lengthMm, 'length', units, lengthUnits === 'in' ? 2 : 0)}` : ''} · ${shot.arrows} ${shot.arrows === 1 ? 'arrow' : 'arrows'}`}
+              {`Shot ${shot.position + 1}: ${tearNames[shot.tear]}${shot.lengthMm ? `, ${formatLength(shot.lengthMm, lengthUnit)}` : ''} · ${shot.arrows} ${shot.arrows === 1 ? 'arrow' : 'arrows'}`}
               {shot.changedBefore !== 'none'
                 ? ` · changed before: ${tuneAdjustmentNames[shot.changedBefore].toLowerCase()}${shot.changeNote ? ` (${shot.changeNote})` : ''}`
                 : ''}

@@ -2,11 +2,11 @@ import { StyleSheet, View } from 'react-native';
 import Svg, { Circle, G, Line, Rect, Text as SvgText } from 'react-native-svg';
 
 import { useUnits } from '@/components/account/use-units';
+import { formatLength } from '@/components/forms/form-numbers';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/theme';
 import { tearNames, tearVector } from '@/shared/paper-tune-rules';
 import type { PaperTuneShot } from '@/shared/paper-tune';
-import { formatQuantity, shownUnit } from '@/shared/units';
 
 /** Tears this long (mm) or longer are drawn at full length. */
 const fullLengthMm = 50;
@@ -21,7 +21,7 @@ const cell = 64;
 export function TearHistory({ shots }: { shots: readonly PaperTuneShot[] }) {
   // Tear lengths in the archer's length unit: "1.00 in" or "25 mm".
   const units = useUnits();
-  const length = (mm: number) => formatQuantity(mm, 'length', units, shownUnit('length', units) === 'in' ? 2 : 0);
+  const length = (mm: number) => formatLength(mm, units?.lengthUnit ?? 'mm');
   if (shots.length === 0) return null;
   const width = shots.length * (cell + 8);
   const words = shots
