@@ -9,6 +9,7 @@
  *   { builds: [{ id: 3, name: 'Elk heavy' }], siblings, timeZone: 'UTC' })
  *   → '2 Dec 2026, 14:05 UTC · Larch Hollow range · Elk heavy' (when a sibling is of 2 Dec 2026 too)
  */
+import { calendarDayWords } from './day-words';
 
 /** What naming a sight-in needs: its day, place, build and when it was recorded. */
 export interface NameableSightIn {
@@ -34,9 +35,7 @@ export interface SightInNameOptions {
 
 /** "2 Dec 2026" from "2026-12-02" (a calendar date: no zone shift). */
 export function sightInDay(isoDate: string): string {
-  const date = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
-  if (Number.isNaN(date.getTime())) return isoDate;
-  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+  return calendarDayWords(isoDate);
 }
 
 /** "14:05" (24-hour) of an ISO time in `timeZone`, or '' when it is not a time. */

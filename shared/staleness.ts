@@ -1,5 +1,6 @@
 import type { BowChangeKind } from './level-status';
 import { bowChangeLabels } from './level-status';
+import { dayWordsOf } from './day-words';
 
 /**
  * One staleness rule for fits and tapes, used by the server (readiness, the
@@ -100,7 +101,7 @@ const label = (change: ImpactChange) => (change.kind === 'build' ? 'Arrow build 
 
 /** "1 Dec 2026" (UTC). */
 export function stalenessDay(at: Date): string {
-  return at.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+  return dayWordsOf(at);
 }
 
 /**

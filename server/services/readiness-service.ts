@@ -14,18 +14,12 @@ import { levelSummaryForBows } from '@/server/services/level-service';
 import { stalenessForBows } from '@/server/services/staleness-service';
 import type { TripBuild, TripByBuild } from '@/shared/trip';
 import { sightInName } from '@/shared/sight-in-name';
+import { calendarDayWords } from '@/shared/day-words';
 
 /** Distances compared in metres (math/units, exact). */
 const inMetres = distanceToMetres;
 
 type StoredWarning = { code?: string; distance?: number; message?: string };
-
-/** "24 Oct 2026" from "2026-10-24" (a calendar date, no zone shift). */
-function dayWords(isoDate: string): string {
-  const date = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
-  if (Number.isNaN(date.getTime())) return isoDate;
-  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
-}
 
 function listWords(items: string[]): string {
   return items.length <= 1 ? items.join('') : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
@@ -102,10 +96,10 @@ async function buildPart(
     // this build's latest sight-in (or after the sight-in of its tape) means confirming at the range.
     const staleness = (await stalenessForBows([bowId])).get(bowId);
     const ofLatest = staleness?.bySightIn.get(latest.id);
-    if (ofLatest?.state === 'confirm') warnings.push(`Latest sight-in (${dayWords(latest.date)}): ${ofLatest.reason}`);
+    if (ofLatest?.state === 'confirm') warnings.push(`Latest sight-in (${calendarDayWords(latest.date)}): ${ofLatest.reason}`);
     if (tapeRow && tapeSightIn && tapeSightIn.id !== latest.id) {
       const ofTape = staleness?.bySightIn.get(tapeSightIn.id);
-      if (ofTape?.state === 'confirm') warnings.push(`Saved tape (${dayWords(tapeSightIn.date)}): ${ofTape.reason}`);
+      if (ofTape?.state === 'confirm') warnings.push(`Saved tape (${calendarDayWords(tapeSightIn.date)}): ${ofTape.reason}`);
     }
     const span =
       tapeRow && tapeRow.sightInId === latest.id && tapeRow.unit === ((latest.fit as { distanceUnit?: string })?.distanceUnit ?? 'yd')
