@@ -5,7 +5,7 @@
 import type { Server } from 'node:http';
 import { createApp } from './app';
 import { config } from './config';
-import { sequelize } from './db';
+import { closeDatabase, sequelize } from './db';
 import { migrate } from './migrations';
 
 export async function startServer({ port = config.port, host = config.host } = {}): Promise<{
@@ -23,7 +23,7 @@ export async function startServer({ port = config.port, host = config.host } = {
     await new Promise<void>((resolve) => server.close(() => resolve()));
     server.closeAllConnections?.();
     app.locals.sessionStore?.stopExpiringSessions?.();
-    await sequelize.close();
+    await closeDatabase();
   };
   return { server, close };
 }

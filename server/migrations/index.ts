@@ -34,6 +34,7 @@ import * as m0056 from './0056-arrow-fliers';
 import * as m0057 from './0057-range-confirmations';
 import * as m0058 from './0058-setup-sight-radius';
 import * as m0075 from './0075-sight-sessions-warning-count';
+import * as m0090 from './0090-bow-read-revisions';
 import { sightInRenames } from './0080-sight-in-names';
 
 type Step = { up: (p: { context: QueryInterface }) => Promise<void>; down: (p: { context: QueryInterface }) => Promise<void> };
@@ -69,6 +70,7 @@ export const migrations: [string, Step][] = [
   ['0058-setup-sight-radius', m0058],
   ['0075-sight-sessions-warning-count', m0075],
   ...sightInRenames,
+  ['0090-bow-read-revisions', m0090],
 ];
 
 export function migrator(sequelize: Sequelize) {

@@ -5,15 +5,15 @@
  * changes, level checks and the last complete check's steps, range
  * confirmations, who added what), and whether the asking account may read it
  * (bow-access.ts's read rule, `readableBowSql`).
- * Eight plain indexed SELECTs sent at once on one connection in one read-only
- * snapshot, no model instances. (One statement with JSON arrays, the first
+ * Eight plain indexed SELECTs sent as one multi-statement query in one
+ * read-only snapshot, no model instances. (One statement with JSON arrays, the first
  * rewrite, cost MariaDB about 1.7 ms a bow mostly writing doubles and dates
  * into JSON; plain rows cost it a fraction of that: tests/benchmarks/api-read.ts.)
  * The services then build the same answers as before from these rows.
  *
  * Example: const [facts] = await readBowFacts({ bowId: 12 }, user.id); facts?.canRead → true for its owner
  */
-import { sequelize } from '@/server/db';
+import { bowReadPool } from '@/server/db';
 import { YARD_M } from '@/math/units/constants';
 import { readableBowSql } from './bow-access';
 
@@ -156,14 +156,8 @@ export type BowFacts = {
   confirmations: { sightInId: number; confirmedAt: Date }[];
 };
 
-/** A row as the connector returns it (typed by Sequelize's parsers: DATETIME → Date, DATE → text). */
+/** A row as the connector returns it (dates as text, UTC; bow-read pool in server/db.ts). */
 type Row = Record<string, unknown>;
-
-type Connection = { query(sql: string, values?: unknown[]): Promise<Row[]> };
-type Pool = {
-  getConnection(options: { type: 'read' | 'write'; useMaster?: boolean }): Promise<Connection>;
-  releaseConnection(connection: Connection): Promise<void>;
-};
 
 /**
  * The statements of one read, each a plain indexed SELECT of one table (with
@@ -180,7 +174,7 @@ function statements(scope: string): { key: keyof RawRows; sql: string }[] {
   b.sight_radius_mm AS sightRadiusMm, b.peep_height_mm AS peepHeightMm, b.scale_direction AS scaleDirection, b.tape_width_mm AS tapeWidthMm,
   b.pin_distances AS pinDistances, b.pin_distance_unit AS pinDistanceUnit, b.notes, b.created_at AS createdAt, b.updated_at AS updatedAt,
   owner.name AS ownerName, (b.user_id = ?) AS owner,
-  ${readableBowSql} AS canRead
+  ${readableBowSql} AS canRead, b.revision, (SELECT revision FROM read_revisions WHERE name = 'user-names') AS namesRevision
 FROM bows b JOIN users owner ON owner.id = b.user_id WHERE ${scope}`,
     },
     {
@@ -254,27 +248,28 @@ type RawRows = {
 
 /**
  * Runs the statements for the bow (`bow`) or the account (`account`) with id
- * `scope` on one pooled connection, pipelined (the connector sends them
- * without waiting for each answer), inside one read-only transaction so they
- * all see the same snapshot (InnoDB REPEATABLE READ): a sight-in deleted
+ * `scope` as one multi-statement query on the bow-read pool (server/db.ts):
+ * one write, one round trip. They run inside one read-only transaction so
+ * they all see the same snapshot (InnoDB REPEATABLE READ): a sight-in deleted
  * mid-read cannot leave its bow with a sight-in but no marks.
  */
 async function readRows(which: keyof typeof reads, scope: number, askerId: number): Promise<RawRows> {
-  const pool = sequelize.connectionManager as unknown as Pool;
-  const connection = await pool.getConnection({ type: 'read', useMaster: true });
+  const connection = await bowReadPool().getConnection();
   try {
     const list = reads[which];
-    const begun = connection.query('START TRANSACTION WITH CONSISTENT SNAPSHOT, READ ONLY');
-    const answers = list.map((statement, index) =>
-      connection.query(statement.sql, index === 0 ? [askerId, askerId, askerId, scope] : [scope]),
-    );
-    const ended = connection.query('COMMIT'); // sent after the reads; runs whether or not one of them failed
-    const settled = await Promise.allSettled([begun, ...answers, ended]);
-    const failed = settled.find((result): result is PromiseRejectedResult => result.status === 'rejected');
-    if (failed) throw failed.reason;
+    const sql = ['START TRANSACTION WITH CONSISTENT SNAPSHOT, READ ONLY', ...list.map((statement) => statement.sql), 'COMMIT'].join(';\n');
+    const values = list.flatMap((_, index) => (index === 0 ? [askerId, askerId, askerId, scope] : [scope]));
+    let answers: Row[][];
+    try {
+      answers = (await connection.query(sql, values)) as Row[][];
+    } catch (error) {
+      // A statement failed: the ones after it, COMMIT included, never ran.
+      await connection.query('ROLLBACK').catch(() => {});
+      throw error;
+    }
     const rows = { steps: [] as Row[] } as RawRows;
     list.forEach((statement, index) => {
-      rows[statement.key] = [...(settled[index + 1] as PromiseFulfilledResult<Row[]>).value];
+      rows[statement.key] = [...answers[index + 1]];
     });
     // A check's steps came as extra rows of that check: one check each, the steps apart.
     const checks = new Map<number, Row>();
@@ -286,7 +281,7 @@ async function readRows(which: keyof typeof reads, scope: number, askerId: numbe
     rows.checks = [...checks.values()];
     return rows;
   } finally {
-    await pool.releaseConnection(connection);
+    await connection.release();
   }
 }
 
@@ -437,12 +432,9 @@ function toFacts(row: Row, child: (key: Exclude<keyof RawRows, 'bows'>) => Row[]
   };
 }
 
-/**
- * The facts of one bow (`{ bowId }`) or of every bow of an account
- * (`{ userId }`), oldest bow first, as seen by the account `askerId`.
- */
-export async function readBowFacts(which: { bowId: number } | { userId: number }, askerId: number): Promise<BowFacts[]> {
-  const rows = 'bowId' in which ? await readRows('bow', which.bowId, askerId) : await readRows('account', which.userId, askerId);
+/** The facts read afresh from the database, with the revisions they were read at. */
+async function freshFacts(which: keyof typeof reads, scope: number, askerId: number): Promise<{ facts: BowFacts[]; revisions: Revisions }> {
+  const rows = await readRows(which, scope, askerId);
   const bowOfSightIn = new Map(rows.sightIns.map((s) => [s.id as number, s.bowId as number]));
   const bowOfCheck = new Map(rows.checks.map((c) => [c.id as number, c.bowId as number]));
   const ofBow = (row: Row) => row.bowId as number;
@@ -457,7 +449,107 @@ export async function readBowFacts(which: { bowId: number } | { userId: number }
     steps: byBow(rows.steps, (row) => bowOfCheck.get(row.checkId as number)),
     confirmations: byBow(rows.confirmations, ofSightIn),
   };
-  return rows.bows
-    .sort((x, y) => (x.id as number) - (y.id as number))
-    .map((row) => ordered(toFacts(row, (key) => groups[key].get(row.id as number) ?? [])));
+  rows.bows.sort((x, y) => (x.id as number) - (y.id as number));
+  return {
+    facts: rows.bows.map((row) => ordered(toFacts(row, (key) => groups[key].get(row.id as number) ?? []))),
+    revisions: revisionsOf(rows.bows),
+  };
+}
+
+/**
+ * The read cache. A bow read's rows change only when `bows.revision` of one
+ * of its bows, or the account-names revision, goes up: MariaDB's triggers
+ * raise them in the same transaction as every write the read shows
+ * (migration 0090). So a read first asks for those revisions alone (one
+ * small indexed statement), and when they are the ones the cached facts
+ * were read at, in the same snapshot, it answers from the cache. Who may
+ * read (owner, active share) is asked afresh every time and never cached;
+ * what depends on today (readiness, staleness, level age) is worked out from
+ * the facts on every request by the services, as before.
+ *
+ * PINWRIGHT_BOW_READ_CACHE=off reads afresh every time (npm run bench measures
+ * both side by side). With PINWRIGHT_CHECK_READ_CACHE=1 (the test runs) every answer from the
+ * cache is also read afresh and compared, and a difference is an error: the
+ * API, property and browser tests then prove that no write path leaves it stale.
+ */
+type Revisions = { key: string; access: Map<number, { owner: boolean; canRead: boolean }> };
+
+function revisionsOf(rows: Row[]): Revisions {
+  const names = rows.length ? Number(rows[0].namesRevision) : 0;
+  return {
+    key: `${names}|${rows.map((row) => `${row.id}:${row.revision}`).join(',')}`,
+    access: new Map(rows.map((row) => [row.id as number, { owner: Number(row.owner) === 1, canRead: Number(row.canRead) === 1 }])),
+  };
+}
+
+const revisionSql = (scope: string) => `SELECT b.id, b.revision, (b.user_id = ?) AS owner, ${readableBowSql} AS canRead,
+  (SELECT revision FROM read_revisions WHERE name = 'user-names') AS namesRevision
+FROM bows b WHERE ${scope} ORDER BY b.id`;
+const revisionReads = { bow: revisionSql('b.id = ?'), account: revisionSql('b.user_id = ?') };
+
+async function currentRevisions(which: keyof typeof reads, scope: number, askerId: number): Promise<Revisions> {
+  const connection = await bowReadPool().getConnection();
+  try {
+    return revisionsOf([...((await connection.query(revisionReads[which], [askerId, askerId, askerId, scope])) as Row[])]);
+  } finally {
+    await connection.release();
+  }
+}
+
+/** Least recently used first; a few kB an entry. */
+const cache = new Map<string, { revisionKey: string; facts: readonly BowFacts[] }>();
+const CACHE_ENTRIES = 500;
+
+function deepFreeze<T>(value: T): T {
+  if (value && typeof value === 'object' && !Object.isFrozen(value)) {
+    Object.freeze(value);
+    for (const inner of Object.values(value)) deepFreeze(inner);
+  }
+  return value;
+}
+
+/** The cached facts with who may read them as of now (the arrays shared, frozen). */
+function withAccess(facts: readonly BowFacts[], access: Revisions['access']): BowFacts[] {
+  return facts.map((fact) => ({ ...fact, ...(access.get(fact.bow.id) ?? { owner: false, canRead: false }) }));
+}
+
+/**
+ * The facts of one bow (`{ bowId }`) or of every bow of an account
+ * (`{ userId }`), oldest bow first, as seen by the account `askerId`.
+ * The lists are frozen: they may be shared with other reads.
+ */
+export async function readBowFacts(which: { bowId: number } | { userId: number }, askerId: number): Promise<BowFacts[]> {
+  const [kind, scope] = 'bowId' in which ? (['bow', which.bowId] as const) : (['account', which.userId] as const);
+  const key = `${kind}:${scope}`;
+  const useCache = process.env.PINWRIGHT_BOW_READ_CACHE !== 'off'; // off: the bench's side-by-side "without" figures
+  const cached = useCache ? cache.get(key) : undefined;
+  if (cached) {
+    const now = await currentRevisions(kind, scope, askerId);
+    if (now.key === cached.revisionKey) {
+      cache.delete(key);
+      cache.set(key, cached);
+      const facts = withAccess(cached.facts, now.access);
+      if (process.env.PINWRIGHT_CHECK_READ_CACHE === '1') await checkAgainstFresh(kind, scope, askerId, facts, cached.revisionKey);
+      return facts;
+    }
+  }
+  const fresh = await freshFacts(kind, scope, askerId);
+  if (useCache && fresh.facts.length) {
+    cache.delete(key);
+    cache.set(key, { revisionKey: fresh.revisions.key, facts: deepFreeze(fresh.facts) });
+    if (cache.size > CACHE_ENTRIES) cache.delete(cache.keys().next().value!);
+  }
+  return fresh.facts;
+}
+
+async function checkAgainstFresh(kind: keyof typeof reads, scope: number, askerId: number, facts: BowFacts[], revisionKey: string) {
+  const fresh = await freshFacts(kind, scope, askerId);
+  // A write between the two reads raises a revision too: only at equal revisions is a difference a stale cache.
+  if (fresh.revisions.key === revisionKey && JSON.stringify(fresh.facts) !== JSON.stringify(facts))
+    throw new Error(`the bow read's cache is stale for ${kind} ${scope} (a write that raised no revision: see migration 0090)`);
+}
+
+/** Forgets every cached read (tests). */
+export function clearBowReadCache(): void {
+  cache.clear();
 }

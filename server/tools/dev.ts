@@ -18,7 +18,7 @@ async function main() {
   const root = path.resolve(__dirname, '../..');
   const db = await startLocalDatabase();
   await createDatabase(db, config.db.name);
-  const { sequelize } = await import('@/server/db');
+  const { closeDatabase, sequelize } = await import('@/server/db');
   await (await import('@/server/migrations')).migrate(sequelize);
   const { seedDemo, demoAccounts } = await import('@/server/seed/demo');
   await seedDemo();
@@ -76,7 +76,7 @@ async function main() {
     metro.kill('SIGTERM');
     await smtp?.close();
     server.close();
-    await sequelize.close().catch(() => {});
+    await closeDatabase().catch(() => {});
     await db.stop();
     process.exit(0);
   };

@@ -34,6 +34,8 @@ export async function runJestOnScratchDatabase(options: ScratchRunOptions): Prom
   const dbName = `${options.prefix}_${Date.now().toString(36)}_${process.pid}`;
   process.env.DB_NAME = dbName;
   process.env.NODE_ENV = 'test';
+  // Every answer from the bow read's cache is checked against a fresh read (server/services/bow-read.ts).
+  process.env.PINWRIGHT_CHECK_READ_CACHE ??= '1';
   // Imported only now: config reads DB_NAME when it is first loaded.
   const { startLocalDatabase, createDatabase, dropDatabase } = await import('./database');
   const db = await startLocalDatabase(options.quiet ? () => {} : console.log);

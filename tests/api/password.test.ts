@@ -172,8 +172,8 @@ describe('the development mail reader', () => {
         // eslint-disable-next-line @typescript-eslint/no-require-imports -- jest.isolateModules needs a require inside the callback
         const { createApp } = require('@/server/app');
         // eslint-disable-next-line @typescript-eslint/no-require-imports -- as above
-        const { sequelize } = require('@/server/db');
-        production = { app: createApp({ sessionExpiryTimer: false }), close: () => sequelize.close() };
+        const { closeDatabase } = require('@/server/db');
+        production = { app: createApp({ sessionExpiryTimer: false }), close: () => closeDatabase() };
       });
     } finally {
       process.env.NODE_ENV = saved.NODE_ENV;

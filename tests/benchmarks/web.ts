@@ -228,7 +228,7 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
   let server: Server | undefined;
   try {
     await createDatabase(db, dbName);
-    const { sequelize } = await import('@/server/db');
+    const { closeDatabase, sequelize } = await import('@/server/db');
     await (await import('@/server/migrations')).migrate(sequelize);
     const { seedDemo, demoAccounts } = await import('@/server/seed/demo');
     await seedDemo();
@@ -282,7 +282,7 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
         );
       }
     }
-    await sequelize.close();
+    await closeDatabase();
   } finally {
     if (server) {
       server.closeAllConnections();

@@ -5,7 +5,7 @@
 import request from 'supertest';
 import type { Express } from 'express';
 import { createApp } from '@/server/app';
-import { sequelize } from '@/server/db';
+import { closeDatabase } from '@/server/db';
 
 export const CSRF = { 'X-Pinwright-Csrf': '1' };
 
@@ -34,5 +34,5 @@ export async function signedInAgent(app: Express, overrides: { name?: string; em
 }
 
 export async function closeDb() {
-  await sequelize.close();
+  await closeDatabase();
 }
