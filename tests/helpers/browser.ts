@@ -9,7 +9,7 @@ import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { createApp } from '@/server/app';
-import { sequelize } from '@/server/db';
+import { closeDatabase } from '@/server/db';
 import { uniqueEmail } from './api';
 
 export const PHONE = { width: 390, height: 844 };
@@ -17,6 +17,21 @@ export const DESKTOP = { width: 1280, height: 800 };
 export const SCREENSHOT_DIR = path.resolve(__dirname, '../artifacts/screenshots');
 
 export type Stack = { baseUrl: string; browser: Browser; close: () => Promise<void> };
+
+/** How the tests launch Debian's Chromium (also for a persistent profile: chromium.launchPersistentContext). */
+export const chromiumOptions = {
+  executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
+  headless: true,
+  args: [
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-quic',
+    '--no-first-run',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--disable-sync',
+  ],
+};
 
 /** Start the app on 127.0.0.1 (free port) and a headless Chromium. */
 export async function startStack(): Promise<Stack> {
@@ -28,19 +43,7 @@ export async function startStack(): Promise<Stack> {
     const s = app.listen(0, '127.0.0.1', () => resolve(s));
   });
   const { port } = server.address() as AddressInfo;
-  const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
+  const browser = await chromium.launch(chromiumOptions);
   return {
     baseUrl: `http://127.0.0.1:${port}`,
     browser,
@@ -48,7 +51,7 @@ export async function startStack(): Promise<Stack> {
       await browser.close();
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
-      await sequelize.close();
+      await closeDatabase();
     },
   };
 }
