@@ -12,7 +12,7 @@ import { borders, colors, radii, space } from '@/components/theme';
 /** "at 11:42" today, "on 1 Dec at 11:42" another day (the device's clock and language). */
 export function seenAt(time: number, now = Date.now()): string {
   const date = new Date(time);
-  const clock = date.toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' });
+  const clock = date.toLocaleTimeString(undefined, { hour: 'numeric', minute: '2-digit' });
   if (new Date(now).toDateString() === date.toDateString()) return `at ${clock}`;
   return `on ${date.toLocaleDateString(undefined, { day: 'numeric', month: 'short' })} at ${clock}`;
 }
