@@ -1,6 +1,6 @@
 import { useState, type ReactNode } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
-import { Image, StyleSheet, View } from 'react-native';
+import { Image, Pressable, StyleSheet, View } from 'react-native';
 
 import { textFormResolver } from '@/components/forms/text-form-resolver';
 import { useRemoveStepPhoto, useSaveCheck, useUploadStepPhoto } from '@/components/level/api';
@@ -21,7 +21,7 @@ import { levelStepKeys, readingUnitLabels, type LevelCheck, type LevelStepKey, t
 
 const unitOptions = (Object.keys(readingUnitLabels) as ReadingUnit[]).map((value) => ({ value, label: readingUnitLabels[value] }));
 
-function Guidance({ stepKey }: { stepKey: LevelStepKey }) {
+function Guidance({ stepKey, folded }: { stepKey: LevelStepKey; folded: boolean }) {
   const guide = stepGuides[stepKey];
   const rows: [string, string][] = [
     ['Set up', guide.setUp],
@@ -31,14 +31,33 @@ function Guidance({ stepKey }: { stepKey: LevelStepKey }) {
   ];
   return (
     <View style={styles.guide}>
-      {rows.map(([title, body]) => (
-        <View key={title} style={styles.guideRow}>
-          <Text variant="label">{title}</Text>
-          <Text>{body}</Text>
-        </View>
-      ))}
+      {folded
+        ? null
+        : rows.map(([title, body]) => (
+            <View key={title} style={styles.guideRow}>
+              <Text variant="label">{title}</Text>
+              <Text>{body}</Text>
+            </View>
+          ))}
       {guide.caution ? <Banner tone="caution">{guide.caution}</Banner> : null}
     </View>
+  );
+}
+
+/** A tap-wide row that shows or folds a part of the step (48 px or more tall). */
+function FoldToggle({ open, label, onPress, testID }: { open: boolean; label: string; onPress: () => void; testID: string }) {
+  return (
+    <Pressable
+      role="button"
+      aria-expanded={open}
+      onPress={onPress}
+      style={({ pressed }) => [styles.toggle, pressed && styles.togglePressed]}
+      testID={testID}
+    >
+      <Text variant="label" tone="signal">
+        {open ? '▾' : '▸'} {label}
+      </Text>
+    </Pressable>
   );
 }
 
@@ -64,6 +83,13 @@ export interface StepPanelProps {
  * level means and what to adjust, then the result buttons, an optional reading,
  * the adjustment note and a photo. Saves the step (and completes the check when
  * `completes`).
+ *
+ * On a phone (not `sideBySide`) the step is compact, for one hand at the
+ * bench or the range: the diagram, then the result buttons and the save button
+ * close under it; the how-to words and the reading, note and photo are each
+ * folded behind a tap. The extras open by themselves when they hold something
+ * saved, when "adjusted" asks what was adjusted, or when one of them has an
+ * error to show; a step's own caution is never folded.
  * Example: `<StepPanel check={check} stepKey="second-axis" editable submitLabel="Save and continue" onSaved={next} />`
  */
 export function StepPanel({
@@ -89,6 +115,13 @@ export function StepPanel({
     defaultValues: stepTextFrom(saved, stepKey),
   });
   const result = useWatch({ control, name: 'result' });
+  const compact = !sideBySide;
+  const [guideOpen, setGuideOpen] = useState(!compact);
+  const hasExtras = !!saved && (saved.reading !== null || saved.adjustment !== '' || saved.photo !== null);
+  const [extrasOpen, setExtrasOpen] = useState(!compact || hasExtras);
+  const extrasNeeded =
+    result === 'adjusted' || !!formState.errors.reading || !!formState.errors.readingUnit || !!formState.errors.adjustment || !!photoError;
+  const showExtras = extrasOpen || extrasNeeded;
 
   const submit = handleSubmit((entry) => {
     setGeneral(null);
@@ -124,56 +157,68 @@ export function StepPanel({
           <ResultButtons value={field.value} onChange={field.onChange} error={fieldState.error?.message} testID={stepKey} />
         )}
       />
-      <View style={styles.readingRow}>
-        <View style={styles.readingField}>
+      {compact ? (
+        <FoldToggle
+          open={showExtras}
+          label={showExtras ? 'Reading, note and photo' : 'Add a reading, note or photo'}
+          onPress={() => setExtrasOpen(!showExtras)}
+          testID={`${stepKey}-extras`}
+        />
+      ) : null}
+      {showExtras ? (
+        <>
+          <View style={styles.readingRow}>
+            <View style={styles.readingField}>
+              <FormField
+                control={control}
+                name="reading"
+                label="Reading (optional)"
+                hint="Bubble or plumb offset, or degrees"
+                numeric
+                testID={`${stepKey}-reading`}
+              />
+            </View>
+            <View style={styles.readingUnit}>
+              <Controller
+                control={control}
+                name="readingUnit"
+                render={({ field, fieldState }) => (
+                  <SegmentedControl
+                    size="large"
+                    label="Unit"
+                    options={unitOptions}
+                    value={field.value}
+                    onChange={field.onChange}
+                    error={fieldState.error?.message}
+                  />
+                )}
+              />
+            </View>
+          </View>
           <FormField
             control={control}
-            name="reading"
-            label="Reading (optional)"
-            hint="Bubble or plumb offset, or degrees"
-            numeric
-            testID={`${stepKey}-reading`}
+            name="adjustment"
+            label={result === 'adjusted' ? 'What you adjusted' : 'Adjustment or note (optional)'}
+            hint={result === 'adjusted' ? `E.g. “${guide.adjustExample}”` : undefined}
+            multiline
+            testID={`${stepKey}-adjustment`}
           />
-        </View>
-        <View style={styles.readingUnit}>
-          <Controller
-            control={control}
-            name="readingUnit"
-            render={({ field, fieldState }) => (
-              <SegmentedControl
-                size="large"
-                label="Unit"
-                options={unitOptions}
-                value={field.value}
-                onChange={field.onChange}
-                error={fieldState.error?.message}
-              />
-            )}
+          <PhotoPicker
+            photo={saved?.photo ?? null}
+            pending={upload.isPending || removePhoto.isPending}
+            error={photoError}
+            testID={`${stepKey}-photo`}
+            onPick={(file, fileName) => {
+              setPhotoError(null);
+              upload.mutate({ step: stepKey, file, fileName }, { onError: (error) => setPhotoError(error.message) });
+            }}
+            onRemove={() => {
+              setPhotoError(null);
+              removePhoto.mutate(stepKey, { onError: (error) => setPhotoError(error.message) });
+            }}
           />
-        </View>
-      </View>
-      <FormField
-        control={control}
-        name="adjustment"
-        label={result === 'adjusted' ? 'What you adjusted' : 'Adjustment or note (optional)'}
-        hint={result === 'adjusted' ? `E.g. “${guide.adjustExample}”` : undefined}
-        multiline
-        testID={`${stepKey}-adjustment`}
-      />
-      <PhotoPicker
-        photo={saved?.photo ?? null}
-        pending={upload.isPending || removePhoto.isPending}
-        error={photoError}
-        testID={`${stepKey}-photo`}
-        onPick={(file, fileName) => {
-          setPhotoError(null);
-          upload.mutate({ step: stepKey, file, fileName }, { onError: (error) => setPhotoError(error.message) });
-        }}
-        onRemove={() => {
-          setPhotoError(null);
-          removePhoto.mutate(stepKey, { onError: (error) => setPhotoError(error.message) });
-        }}
-      />
+        </>
+      ) : null}
       {general ? (
         <Banner tone="error" title="Not saved">
           {general}
@@ -206,7 +251,15 @@ export function StepPanel({
           <LevelDiagram step={stepKey} />
         </View>
         <View style={[styles.words, sideBySide && styles.wordsSide]}>
-          <Guidance stepKey={stepKey} />
+          {compact ? (
+            <FoldToggle
+              open={guideOpen}
+              label={guideOpen ? 'How to check this step' : 'How to check this step: set up, look at, adjust'}
+              onPress={() => setGuideOpen(!guideOpen)}
+              testID={`${stepKey}-how`}
+            />
+          ) : null}
+          <Guidance stepKey={stepKey} folded={!guideOpen} />
         </View>
       </View>
       {readOnly}
@@ -263,6 +316,8 @@ const styles = StyleSheet.create({
   words: {},
   wordsSide: { flex: 1, minWidth: 0 },
   guide: { gap: space.md },
+  toggle: { minHeight: 48, justifyContent: 'center', alignSelf: 'flex-start', paddingRight: space.md },
+  togglePressed: { opacity: 0.6 },
   guideRow: { gap: space.xxs },
   form: { gap: space.lg, paddingTop: space.md, borderTopWidth: borders.hairline, borderTopColor: colors.line },
   readingRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },

@@ -103,6 +103,12 @@ it('walks a check on a phone, resumes it midway, logs a string change and sees t
   await stepHeading(page, 'Set-up').waitFor();
   await page.getByTestId('level-caution').waitFor();
   await page.getByTestId('diagram-setup').waitFor();
+  // Compact on a phone: the how-to words one tap away (the step's caution stays).
+  expect(await page.getByText('Level means', { exact: true }).count()).toBe(0);
+  await page.getByTestId('setup-how').click();
+  await page.getByText('Level means', { exact: true }).waitFor();
+  await screenshot(page, 'check-step-1-how');
+  await page.getByTestId('setup-how').click();
   await screenshot(page, 'check-step-1');
 
   // Saving without a result says so, and stays on the step.
@@ -121,8 +127,10 @@ it('walks a check on a phone, resumes it midway, logs a string change and sees t
   await screenshot(page, 'check-step-2-adjusted');
   await page.getByTestId('first-axis-save').click();
 
-  // Second axis: a photo of the bubble, then pass.
+  // Second axis: a photo of the bubble (the extras folded on a phone, one tap away), then pass.
   await stepHeading(page, 'Second axis').waitFor();
+  expect(await page.getByTestId('second-axis-reading').count()).toBe(0);
+  await page.getByTestId('second-axis-extras').click();
   await page.getByTestId('second-axis-photo-input').setInputFiles({ name: 'bubble.png', mimeType: 'image/png', buffer: png() });
   await page.getByTestId('second-axis-photo-image').waitFor();
   await choose(page, 'second-axis', 'pass');
@@ -139,6 +147,18 @@ it('walks a check on a phone, resumes it midway, logs a string change and sees t
   await page.waitForURL(checkUrl);
   await stepHeading(page, 'Third axis').waitFor();
   await screenshot(page, 'check-resumed');
+  // One-handed: with the how-to and the extras folded, the four results and the save button sit in one screen
+  // (scrolled to the results, all in view above the 64 px tab bar), each at least 48 px tall.
+  await page.getByTestId('third-axis-result-pass').scrollIntoViewIfNeeded();
+  const targets = ['pass', 'adjusted', 'fail', 'skipped']
+    .map((result) => `third-axis-result-${result}`)
+    .concat('third-axis-extras', 'third-axis-save');
+  for (const id of targets) {
+    const box = (await page.getByTestId(id).boundingBox())!;
+    expect(box.y).toBeGreaterThanOrEqual(56); // below the app bar
+    expect(box.y + box.height).toBeLessThanOrEqual(PHONE.height - 64);
+    expect(box.height).toBeGreaterThanOrEqual(48);
+  }
   // What was saved before leaving is still there.
   await page.getByTestId('strip-first-axis').click();
   await stepHeading(page, 'First axis').waitFor();
