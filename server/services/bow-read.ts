@@ -534,8 +534,8 @@ export async function readBowFacts(which: { bowId: number } | { userId: number }
     }
   }
   const fresh = await freshFacts(kind, scope, askerId);
+  cache.delete(key);
   if (useCache && fresh.facts.length) {
-    cache.delete(key);
     cache.set(key, { revisionKey: fresh.revisions.key, facts: deepFreeze(fresh.facts) });
     if (cache.size > CACHE_ENTRIES) cache.delete(cache.keys().next().value!);
   }
@@ -547,9 +547,4 @@ async function checkAgainstFresh(kind: keyof typeof reads, scope: number, askerI
   // A write between the two reads raises a revision too: only at equal revisions is a difference a stale cache.
   if (fresh.revisions.key === revisionKey && JSON.stringify(fresh.facts) !== JSON.stringify(facts))
     throw new Error(`the bow read's cache is stale for ${kind} ${scope} (a write that raised no revision: see migration 0090)`);
-}
-
-/** Forgets every cached read (tests). */
-export function clearBowReadCache(): void {
-  cache.clear();
 }
