@@ -122,6 +122,8 @@ export function StepPanel({
   const extrasNeeded =
     result === 'adjusted' || !!formState.errors.reading || !!formState.errors.readingUnit || !!formState.errors.adjustment || !!photoError;
   const showExtras = extrasOpen || extrasNeeded;
+  const [reading, adjustment] = useWatch({ control, name: ['reading', 'adjustment'] });
+  const extrasFilled = reading.trim() !== '' || adjustment.trim() !== '' || !!saved?.photo;
 
   const submit = handleSubmit((entry) => {
     setGeneral(null);
@@ -160,7 +162,9 @@ export function StepPanel({
       {compact ? (
         <FoldToggle
           open={showExtras}
-          label={showExtras ? 'Reading, note and photo' : 'Add a reading, note or photo'}
+          label={
+            showExtras ? 'Reading, note and photo' : extrasFilled ? 'Reading, note and photo (filled in)' : 'Add a reading, note or photo'
+          }
           onPress={() => setExtrasOpen(!showExtras)}
           testID={`${stepKey}-extras`}
         />

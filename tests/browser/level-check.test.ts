@@ -135,6 +135,10 @@ it('walks a check on a phone, resumes it midway, logs a string change and sees t
   await page.getByTestId('second-axis-photo-image').waitFor();
   await choose(page, 'second-axis', 'pass');
   await screenshot(page, 'check-step-3-photo');
+  // Folded again, the extras keep what was added and the fold says so.
+  await page.getByTestId('second-axis-extras').click();
+  await page.getByTestId('second-axis-extras').getByText('▸ Reading, note and photo (filled in)').waitFor();
+  expect(await page.getByTestId('second-axis-photo-image').count()).toBe(0);
   await page.getByTestId('second-axis-save').click();
   await stepHeading(page, 'Third axis').waitFor();
 
