@@ -22,6 +22,7 @@ import os from 'node:os';
 import path from 'node:path';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { chromiumOptions } from '../helpers/chromium';
 
 const root = path.resolve(__dirname, '../..');
 const CHROME = process.env.CHROME_PATH || process.env.CHROMIUM_PATH || '/usr/bin/chromium';
@@ -51,19 +52,7 @@ async function coldLoad(baseUrl: string): Promise<ColdLoad> {
   // Service-worker requests reach the context's request events only with this set (playwright-core 1.55).
   process.env.PW_EXPERIMENTAL_SERVICE_WORKER_NETWORK_EVENTS = '1';
   const { chromium } = await import('playwright-core');
-  const browser = await chromium.launch({
-    executablePath: CHROME,
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-quic',
-      '--no-first-run',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-    ],
-  });
+  const browser = await chromium.launch({ ...chromiumOptions, executablePath: CHROME });
   try {
     const context = await browser.newContext({ viewport: { width: 390, height: 844 } });
     const page = await context.newPage();

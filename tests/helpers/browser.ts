@@ -11,27 +11,15 @@ import { chromium, type Browser, type BrowserContext, type Page } from 'playwrig
 import { createApp } from '@/server/app';
 import { closeDatabase } from '@/server/db';
 import { uniqueEmail } from './api';
+import { chromiumOptions } from './chromium';
+
+export { chromiumOptions };
 
 export const PHONE = { width: 390, height: 844 };
 export const DESKTOP = { width: 1280, height: 800 };
 export const SCREENSHOT_DIR = path.resolve(__dirname, '../artifacts/screenshots');
 
 export type Stack = { baseUrl: string; browser: Browser; close: () => Promise<void> };
-
-/** How the tests launch Debian's Chromium (also for a persistent profile: chromium.launchPersistentContext). */
-export const chromiumOptions = {
-  executablePath: process.env.CHROMIUM_PATH || '/usr/bin/chromium',
-  headless: true,
-  args: [
-    '--no-sandbox',
-    '--disable-gpu',
-    '--disable-quic',
-    '--no-first-run',
-    '--disable-background-networking',
-    '--disable-component-update',
-    '--disable-sync',
-  ],
-};
 
 /** Start the app on 127.0.0.1 (free port) and a headless Chromium. */
 export async function startStack(): Promise<Stack> {
