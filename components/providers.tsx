@@ -1,5 +1,4 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
-import { useFonts } from 'expo-font';
 import { ThemeProvider, type Theme as NavigationTheme, DefaultTheme } from 'expo-router';
 import { useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
@@ -9,14 +8,6 @@ import { reportNoNetwork } from '@/components/offline/connectivity';
 import { OfflineNotice } from '@/components/offline/offline-notice';
 import { OfflineProvider } from '@/components/offline/offline-provider';
 import { colors, fonts } from '@/components/theme';
-
-// The web subsets (assets/fonts/web/README.md); the full fonts are the server's, for tapes and PDFs.
-const fontFiles = {
-  AtkinsonHyperlegible_400Regular: require('@/assets/fonts/web/AtkinsonHyperlegible_400Regular.ttf'),
-  AtkinsonHyperlegible_700Bold: require('@/assets/fonts/web/AtkinsonHyperlegible_700Bold.ttf'),
-  BarlowCondensed_500Medium: require('@/assets/fonts/web/BarlowCondensed_500Medium.ttf'),
-  BarlowCondensed_600SemiBold: require('@/assets/fonts/web/BarlowCondensed_600SemiBold.ttf'),
-};
 
 const navigationTheme: NavigationTheme = {
   ...DefaultTheme,
@@ -66,26 +57,21 @@ export function createQueryClient(): QueryClient {
 /**
  * Everything the app needs above the router's screens: one QueryClient (its
  * cache kept on the device per account, and the outbox of offline writes:
- * components/offline), the fonts, and the navigation theme in Pinwright's
- * colours. Renders a plain paper-coloured view until the fonts are ready (or
- * have failed: then the CSS fallback faces are used) and the device's cache
- * is restored. The offline notice and the outbox sit above every screen.
+ * components/offline) and the navigation theme in Pinwright's colours. The
+ * fonts are the page's own (@font-face rules and preloads written into
+ * index.html by server/tools/web-pwa.ts), so nothing here waits for them.
+ * The offline notice and the outbox sit above every screen.
  */
 export function Providers({ children }: { children: ReactNode }) {
   const [queryClient] = useState(createQueryClient);
-  const [fontsLoaded, fontError] = useFonts(fontFiles);
 
   return (
     <QueryClientProvider client={queryClient}>
       <OfflineProvider queryClient={queryClient}>
         <ThemeProvider value={navigationTheme}>
           <View style={styles.root}>
-            {fontsLoaded || fontError ? (
-              <>
-                <OfflineNotice />
-                <View style={styles.screens}>{children}</View>
-              </>
-            ) : null}
+            <OfflineNotice />
+            <View style={styles.screens}>{children}</View>
           </View>
         </ThemeProvider>
       </OfflineProvider>

@@ -70,7 +70,7 @@ export const colors = {
   focus: '#1F5F99',
 } as const;
 
-/** Font family names as registered by useFonts in providers.tsx (one family per face). */
+/** Font family names, one per face, as the web build's @font-face rules name them (WEB_FONTS in server/tools/web-pwa.ts). */
 export type FontName =
   | 'AtkinsonHyperlegible_400Regular'
   | 'AtkinsonHyperlegible_700Bold'

@@ -95,7 +95,7 @@ export function webStatic(webDir: string) {
       return send(req, res, next, file, HASHED.test(file) ? IMMUTABLE : REVALIDATE);
     }
     // A build file that is not here (an old page asking for a chunk of a previous build).
-    if (/^\/(_expo|assets)\//.test(relative) || /\.(js|css|map|ttf|png)$/.test(relative)) return next();
+    if (/^\/(_expo|assets)\//.test(relative) || /\.(js|css|map|ttf|woff2|png)$/.test(relative)) return next();
     if (!isFile(indexHtml)) return next();
     return send(req, res, next, indexHtml, REVALIDATE);
   };

@@ -8,8 +8,11 @@
  *     and a 180 px apple-touch-icon;
  *  2. manifest.webmanifest (name, short name, icons, display standalone,
  *     theme and background colours read from components/theme.ts);
- *  3. index.html gets the manifest, icon and theme-color links (the "single"
- *     web output writes Expo's own page, not app/+html.tsx);
+ *  3. the web fonts (assets/fonts/web/*.woff2) copied in under content-hashed
+ *     names; index.html gets their @font-face rules, a preload for the two
+ *     faces of words the first screen shows, and the manifest, icon and
+ *     theme-color links (the "single" web output writes Expo's own page, not
+ *     app/+html.tsx);
  *  4. sw.js, a Workbox 7 service worker (workbox-build generateSW) that
  *     precaches the shell, every script, font and icon, answers navigations
  *     with index.html (never /api: the data is the app's own IndexedDB
@@ -17,6 +20,7 @@
  *  5. every compressible file precompressed beside itself (.br at brotli
  *     quality 11, .gz at gzip level 9), served by server/web-static.ts.
  */
+import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { promisify } from 'node:util';
@@ -105,21 +109,50 @@ export function manifest(palette: Palette) {
   };
 }
 
-/** Adds the manifest, icon and theme-colour tags to dist/index.html (once). */
-function linkHead(dist: string, palette: Palette): void {
+/**
+ * The web fonts, one family per face, named as components/theme.ts names them.
+ * The faces of words are preloaded: they arrive beside the script, so the
+ * first screen's text shows in its own face with no swap. The numeral faces
+ * are fetched on first use (the sign-in screen has none), and
+ * `font-display: swap` shows a number in the fallback face until then.
+ */
+export const WEB_FONTS = [
+  { family: 'AtkinsonHyperlegible_400Regular', preload: true },
+  { family: 'AtkinsonHyperlegible_700Bold', preload: true },
+  { family: 'BarlowCondensed_500Medium', preload: false },
+  { family: 'BarlowCondensed_600SemiBold', preload: false },
+] as const;
+
+/** Copies assets/fonts/web/<family>.woff2 to dist/assets/fonts/<family>.<md5>.woff2; returns each one's URL. */
+function copyFonts(root: string, dist: string): { family: string; href: string; preload: boolean }[] {
+  const out = path.join(dist, 'assets', 'fonts');
+  fs.mkdirSync(out, { recursive: true });
+  return WEB_FONTS.map(({ family, preload }) => {
+    const source = path.join(root, 'assets', 'fonts', 'web', `${family}.woff2`);
+    const bytes = fs.readFileSync(source);
+    const name = `${family}.${crypto.createHash('md5').update(bytes).digest('hex')}.woff2`;
+    fs.writeFileSync(path.join(out, name), bytes);
+    return { family, href: `/assets/fonts/${name}`, preload };
+  });
+}
+
+/** Adds the fonts, the manifest, icon and theme-colour tags to dist/index.html (once). */
+function linkHead(root: string, dist: string, palette: Palette): void {
   const file = path.join(dist, 'index.html');
   let html = fs.readFileSync(file, 'utf8');
   if (html.includes(MANIFEST)) return;
-  // The fonts the first screen waits for (providers.tsx): fetched beside the script, not after it.
-  const fontDir = path.join(dist, 'assets');
-  const fonts = fs.existsSync(fontDir) ? listFiles(fontDir).filter((file) => /\.(ttf|otf|woff2)$/.test(file)) : [];
-  const preloads = fonts.map((file) => {
-    const href = `/${path.relative(dist, file).split(path.sep).join('/')}`;
-    const type = `font/${path.extname(file).slice(1)}`;
-    return `<link rel="preload" href="${href}" as="font" type="${type}" crossorigin />`;
-  });
+  const fonts = copyFonts(root, dist);
+  const faces = fonts
+    .map(
+      ({ family, href, preload }) =>
+        `@font-face{font-family:"${family}";src:url("${href}") format("woff2");font-display:${preload ? 'block' : 'swap'}}`,
+    )
+    .join('\n');
   const tags = [
-    ...preloads,
+    ...fonts
+      .filter((font) => font.preload)
+      .map(({ href }) => `<link rel="preload" href="${href}" as="font" type="font/woff2" crossorigin />`),
+    `<style>${faces}</style>`,
     `<link rel="manifest" href="/${MANIFEST}" />`,
     '<link rel="apple-touch-icon" href="/icons/apple-touch-icon.png" />',
     `<meta name="theme-color" content="${palette.slate}" />`,
@@ -193,7 +226,7 @@ export async function finishWebExport(root: string, log: (line: string) => void 
   const palette = readPalette(root);
   await writeIcons(dist, palette);
   fs.writeFileSync(path.join(dist, MANIFEST), `${JSON.stringify(manifest(palette), null, 2)}\n`);
-  linkHead(dist, palette);
+  linkHead(root, dist, palette);
   const sw = await writeServiceWorker(dist);
   log(`  service worker: ${sw.count} files precached (${Math.round(sw.size / 1024)} KB before compression)`);
   const packed = await precompress(dist);

@@ -147,11 +147,28 @@ it('sends brotli where accepted, else gzip, with the right types and cache heade
   }
   // A build file that is not there is a 404, never index.html run as a script.
   expect((await get('/_expo/static/js/web/entry-00000000000000000000000000000000.js', 'br')).status).toBe(404);
-  // Fonts travel compressed too.
-  const font = /href="(\/assets\/[^"]+\.ttf)"/.exec(fs.readFileSync(path.join(copy, 'index.html'), 'utf8'))?.[1];
-  expect(font).toBeDefined(); // index.html preloads the fonts
-  const fontRes = await get(font!, 'br');
-  expect([fontRes.headers.get('content-type'), fontRes.headers.get('content-encoding')]).toEqual(['font/ttf', 'br']);
+  // Fonts are WOFF2 (compressed inside, so sent as they are), hashed and cached for a year.
+  const html = fs.readFileSync(path.join(copy, 'index.html'), 'utf8');
+  const preloaded = [...html.matchAll(/<link rel="preload" href="([^"]+)" as="font" type="font\/woff2"/g)].map((m) => m[1]);
+  expect(preloaded.map((href) => path.basename(href).split('.')[0]).sort()).toEqual([
+    'AtkinsonHyperlegible_400Regular',
+    'AtkinsonHyperlegible_700Bold',
+  ]); // the faces of words; the numeral faces load on first use
+  expect(html.match(/@font-face\{/g)).toHaveLength(4);
+  for (const href of preloaded) {
+    const fontRes = await get(href, 'br');
+    expect([fontRes.status, fontRes.headers.get('content-type'), fontRes.headers.get('content-encoding')]).toEqual([
+      200,
+      'font/woff2',
+      null,
+    ]);
+    expect(fontRes.headers.get('cache-control')).toBe('public, max-age=31536000, immutable');
+    expect(
+      Buffer.from(await fontRes.arrayBuffer())
+        .subarray(0, 4)
+        .toString('latin1'),
+    ).toBe('wOF2');
+  }
 
   // The API: compressed on the fly (compression middleware) when the body is worth it.
   const sheet = await fetch(`${base}/api/try/sheet.svg`, {
@@ -181,6 +198,12 @@ it('opens the sign-in page with no network after one visit', async () => {
   await page.reload();
   await page.getByLabel('E-mail').waitFor({ timeout: 15_000 });
   await page.getByRole('button', { name: 'Sign in' }).waitFor();
+  // The faces of words come from the worker's precache too, not the fallback faces.
+  const faces = await page.evaluate(async () => {
+    await document.fonts.ready;
+    return [...document.fonts].filter((face) => face.status === 'loaded').map((face) => face.family.replace(/"/g, ''));
+  });
+  expect(faces).toEqual(expect.arrayContaining(['AtkinsonHyperlegible_400Regular', 'AtkinsonHyperlegible_700Bold']));
   await screenshot(page, 'offline-sign-in');
   // Another of the app's routes, never visited, still opens (navigation falls back to the app shell).
   await page.goto(`${base}/forgot-password`);
