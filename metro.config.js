@@ -7,11 +7,22 @@ const { getDefaultConfig } = require('expo/metro-config');
 const config = getDefaultConfig(__dirname);
 const zodV4CoreStub = path.resolve(__dirname, 'components/shell/zod-v4-core-stub.js');
 const resolversDir = `${path.sep}@hookform${path.sep}resolvers${path.sep}`;
+const expoRouterSlim = path.resolve(__dirname, 'components/shell/expo-router-slim.ts');
+const ownCode = ['app', 'components', 'shared', 'math'].map((dir) => path.resolve(__dirname, dir) + path.sep);
 const upstream = config.resolver.resolveRequest;
 
 config.resolver.resolveRequest = (context, moduleName, platform) => {
   if (moduleName === 'zod/v4/core' && context.originModulePath.includes(resolversDir)) {
     return { type: 'sourceFile', filePath: zodV4CoreStub };
+  }
+  // Our own imports of 'expo-router' take only the names we use (see expo-router-slim.ts).
+  if (
+    moduleName === 'expo-router' &&
+    platform === 'web' &&
+    context.originModulePath !== expoRouterSlim &&
+    ownCode.some((dir) => context.originModulePath.startsWith(dir))
+  ) {
+    return { type: 'sourceFile', filePath: expoRouterSlim };
   }
   return (upstream ?? context.resolveRequest)(context, moduleName, platform);
 };
