@@ -1,6 +1,7 @@
-// Expo's default Metro config, plus one redirect that keeps the web bundle small:
+// Expo's default Metro config, plus two redirects that keep the web bundle small:
 // @hookform/resolvers' zod resolver imports `zod/v4/core` for zod 4 schemas; ours
-// are zod 3, so that import is answered by a stub (components/shell/zod-v4-core-stub.js).
+// are zod 3, so that import is answered by a stub (components/shell/zod-v4-core-stub.js);
+// and our own imports of 'expo-router' get only the names we use (expo-router-slim.ts).
 const path = require('node:path');
 const { getDefaultConfig } = require('expo/metro-config');
 

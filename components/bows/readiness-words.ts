@@ -1,5 +1,6 @@
 import type { Readiness } from '@/components/ui/readiness-badge';
 import type { BowReadiness } from '@/shared/bow';
+import { calendarDayWords } from '@/shared/day-words';
 import { levelSummarySchema, type LevelSummary } from '@/shared/level';
 import type { SightInFitSummary } from '@/shared/sight-in';
 
@@ -17,11 +18,9 @@ export interface ReadinessWords {
  */
 export const tightFitRmsMm = 0.3;
 
-/** "4 Oct 2026" from "2026-10-04" (the date as entered, no time zone shift). */
+/** "4 Oct 2026" from "2026-10-04" (the date as entered, no time zone shift), with the one shared formatter. */
 export function formatDay(isoDate: string): string {
-  const date = new Date(`${isoDate.slice(0, 10)}T00:00:00Z`);
-  if (Number.isNaN(date.getTime())) return isoDate;
-  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', timeZone: 'UTC' });
+  return calendarDayWords(isoDate);
 }
 
 /**

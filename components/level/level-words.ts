@@ -33,15 +33,25 @@ export const levelStateLabels: Record<LevelState, string> = {
 export function formatWhen(iso: string): string {
   const date = new Date(iso);
   if (Number.isNaN(date.getTime())) return iso;
-  return date.toLocaleString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
+  return whenFormat.format(date);
 }
 
 /** "2 Dec 2026" in the device's time zone. */
 export function formatDate(iso: string): string {
   const date = new Date(iso);
   if (Number.isNaN(date.getTime())) return iso;
-  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+  return dateFormat.format(date);
 }
+
+// Made once: toLocaleString builds a new Intl formatter on every call (a profile of the Bench's first render).
+const whenFormat = new Intl.DateTimeFormat('en-GB', {
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  hour: '2-digit',
+  minute: '2-digit',
+});
+const dateFormat = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 
 /** Today's date as YYYY-MM-DD in the device's time zone (for the change form's default). */
 export function todayIso(now = new Date()): string {
