@@ -2,6 +2,7 @@
 // @hookform/resolvers' zod resolver imports `zod/v4/core` for zod 4 schemas; ours
 // are zod 3, so that import is answered by a stub (components/shell/zod-v4-core-stub.js);
 // and our own imports of 'expo-router' get only the names we use (expo-router-slim.ts).
+const fs = require('node:fs');
 const path = require('node:path');
 const { getDefaultConfig } = require('expo/metro-config');
 
@@ -34,6 +35,22 @@ const upstreamTransformOptions = config.transformer.getTransformOptions;
 config.transformer.getTransformOptions = async (...args) => {
   const options = await upstreamTransformOptions(...args);
   return { ...options, transform: { ...options.transform, inlineRequires: true } };
+};
+
+// With PINWRIGHT_MODULE_IDS=<file>, the export writes which module id each source file got,
+// so server/tools/start-up-modules.ts can name the start-up modules in the built entry script.
+const upstreamModuleIdFactory = config.serializer.createModuleIdFactory;
+config.serializer.createModuleIdFactory = () => {
+  const idOf = upstreamModuleIdFactory();
+  const out = process.env.PINWRIGHT_MODULE_IDS;
+  if (!out) return idOf;
+  const ids = new Map();
+  process.once('exit', () => fs.writeFileSync(out, JSON.stringify(Object.fromEntries(ids))));
+  return (modulePath) => {
+    const id = idOf(modulePath);
+    ids.set(modulePath, id);
+    return id;
+  };
 };
 
 module.exports = config;

@@ -6,6 +6,7 @@
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
+import { sliceStartUp } from './start-up-modules';
 import { finishWebExport, readPalette } from './web-pwa';
 
 const SOURCES = [
@@ -19,6 +20,8 @@ const SOURCES = [
   'package-lock.json',
   'metro.config.js',
   'server/tools/web-pwa.ts',
+  'server/tools/start-up-modules.ts',
+  'server/tools/start-up-modules.json',
 ];
 
 function newestMtime(target: string): number {
@@ -28,6 +31,11 @@ function newestMtime(target: string): number {
   let newest = stat.mtimeMs;
   for (const entry of fs.readdirSync(target)) newest = Math.max(newest, newestMtime(path.join(target, entry)));
   return newest;
+}
+
+/** Where the last export's module ids are kept (see PINWRIGHT_MODULE_IDS in metro.config.js). */
+export function moduleIdsFile(root: string): string {
+  return path.join(root, 'node_modules', '.cache', 'pinwright', 'web-module-ids.json');
 }
 
 export function webExportIsStale(root: string): boolean {
@@ -41,13 +49,25 @@ export async function exportWeb(root: string, log: (line: string) => void = cons
   log('Building the web app (expo export --platform web)… this takes about a minute the first time.');
   const started = Date.now();
   const stampStart = new Date();
+  // metro.config.js writes here which module id each source file got (read by sliceStartUp
+  // and by record-start-up-modules.ts).
+  const idsFile = moduleIdsFile(root);
+  fs.mkdirSync(path.dirname(idsFile), { recursive: true });
+  fs.rmSync(idsFile, { force: true });
   await new Promise<void>((resolve, reject) => {
     const child = spawn(
       process.execPath,
       [path.join(root, 'node_modules/expo/bin/cli'), 'export', '--platform', 'web', '--output-dir', 'dist'],
       {
         cwd: root,
-        env: { ...process.env, EXPO_NO_TELEMETRY: '1', EXPO_OFFLINE: '1', EXPO_UNSTABLE_HEADLESS: '1', CI: '1' },
+        env: {
+          ...process.env,
+          EXPO_NO_TELEMETRY: '1',
+          EXPO_OFFLINE: '1',
+          EXPO_UNSTABLE_HEADLESS: '1',
+          CI: '1',
+          PINWRIGHT_MODULE_IDS: idsFile,
+        },
         stdio: ['ignore', 'pipe', 'pipe'],
       },
     );
@@ -62,6 +82,8 @@ export async function exportWeb(root: string, log: (line: string) => void = cons
     child.on('exit', (code) => (code === 0 ? resolve() : reject(new Error(`expo export failed (exit ${code}):\n${output.slice(-4000)}`))));
   });
   addFirstPaintShell(path.join(root, 'dist', 'index.html'), readPalette(root));
+  const sliced = sliceStartUp(root, idsFile);
+  log(`  start-up: ${sliced.modules} of ${sliced.listed} listed modules run in short slices before the first render`);
   await finishWebExport(root, log);
   const stamp = path.join(root, 'dist', '.built-at');
   fs.writeFileSync(stamp, stampStart.toISOString());

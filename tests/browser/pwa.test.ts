@@ -16,6 +16,7 @@ import type { AddressInfo } from 'node:net';
 import sharp from 'sharp';
 import type { Page } from 'playwright-core';
 import { createApp } from '@/server/app';
+import { START_UP_LIST } from '@/server/tools/start-up-modules';
 import { readPalette } from '@/server/tools/web-pwa';
 import { DESKTOP, PHONE, newPage, pageErrors, screenshot, stackForFile } from '../helpers/browser';
 
@@ -116,6 +117,20 @@ it('serves a valid web app manifest with icons that load at their stated sizes',
   expect(url).toBe(`${base}/manifest.webmanifest`);
   expect(errors).toEqual([]);
   await context.close();
+});
+
+it('runs the start-up modules in slices before the first render, under a name that is the hash of the script', () => {
+  const script = entryScript();
+  const code = fs.readFileSync(path.join(copy, script), 'utf8');
+  // The script is rewritten after Metro wrote it (server/tools/start-up-modules.ts); a year's immutable
+  // caching is only safe if its name still changes with its content.
+  expect(script).toContain(`entry-${crypto.createHash('md5').update(code).digest('hex')}.js`);
+  const loader = /\n\(function\(ids,main\)\{.*\}\)\((\[[\d,]*\]),(\d+)\);\n$/.exec(code);
+  expect(loader).not.toBeNull();
+  const ids = JSON.parse(loader![1]) as number[];
+  const listed = JSON.parse(fs.readFileSync(START_UP_LIST, 'utf8')) as string[];
+  expect(ids.length).toBeGreaterThan(listed.length * 0.9);
+  expect(ids).not.toContain(Number(loader![2]));
 });
 
 it('sends brotli where accepted, else gzip, with the right types and cache headers', async () => {

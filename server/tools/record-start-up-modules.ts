@@ -1,0 +1,124 @@
+/**
+ * Records which modules of the web app's entry script run on a cold start, in
+ * the order they run, and writes them to start-up-modules.json (read at export
+ * by start-up-modules.ts). Run it after a change that moves what the first
+ * screens load: `npx tsx server/tools/record-start-up-modules.ts`.
+ *
+ * It builds the export, copies it, undoes the start-up slicing in the copy and
+ * adds a line that notes each module as it runs, serves the copy with a
+ * scratch database and the demo data, then opens, in headless Chromium at
+ * 390×844, the sign-in page signed out and the Bench signed in as the demo
+ * archer. The modules of both, sign-in's first, make the list.
+ */
+import fs from 'node:fs';
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import os from 'node:os';
+import path from 'node:path';
+import { chromiumOptions } from '../../tests/helpers/chromium';
+import { listName, START_UP_LIST } from './start-up-modules';
+import { exportWeb, moduleIdsFile } from './web-export';
+
+const root = path.resolve(__dirname, '../..');
+
+/** Modules whose running mounts the app: they stay last, where Metro runs them. */
+const MOUNTS_THE_APP = ['node_modules/expo-router/entry.js', 'node_modules/expo-router/entry-classic.js'];
+
+/** An entry script that runs as Metro wrote it and notes, in globalThis.__startUpOrder, each module as it starts. */
+export function recordingEntry(code: string): string {
+  const unsliced = code.replace(/\n\(function\(ids,main\)\{.*\}\)\(\[[\d,]*\],(\d+)\);\n$/, '\n__r($1);\n');
+  const firstModule = unsliced.indexOf('\n__d(');
+  if (firstModule < 0) throw new Error('no Metro module definitions found in the entry script');
+  const recorder =
+    'globalThis.__startUpOrder=[];var __pwDefine=__d;__d=function(f,id,deps){' +
+    'return __pwDefine(function(){globalThis.__startUpOrder.push(id);return f.apply(this,arguments)},id,deps)};';
+  return `${unsliced.slice(0, firstModule)}\n${recorder}${unsliced.slice(firstModule)}`;
+}
+
+async function main() {
+  await exportWeb(root);
+  const idsByPath = JSON.parse(fs.readFileSync(moduleIdsFile(root), 'utf8')) as Record<string, number>;
+  const pathById = new Map(Object.entries(idsByPath).map(([file, id]) => [id, listName(root, file)]));
+
+  const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'pinwright-record-'));
+  fs.cpSync(path.join(root, 'dist'), webDir, { recursive: true });
+  const src = /src="(\/_expo\/static\/js\/web\/entry-[0-9a-f]+\.js)"/.exec(fs.readFileSync(path.join(webDir, 'index.html'), 'utf8'))?.[1];
+  if (!src) throw new Error('no entry script in dist/index.html');
+  const entry = path.join(webDir, src);
+  fs.writeFileSync(entry, recordingEntry(fs.readFileSync(entry, 'utf8')));
+  for (const twin of ['.br', '.gz']) fs.rmSync(entry + twin, { force: true });
+
+  const dbName = `pinwright_record_${Date.now().toString(36)}`;
+  process.env.DB_NAME = dbName;
+  process.env.NODE_ENV ||= 'test';
+  const { startLocalDatabase, createDatabase, dropDatabase } = await import('./database');
+  const db = await startLocalDatabase(() => {});
+  let server: Server | undefined;
+  try {
+    await createDatabase(db, dbName);
+    const { closeDatabase, sequelize } = await import('../db');
+    await (await import('../migrations')).migrate(sequelize);
+    const { seedDemo, demoAccounts } = await import('../seed/demo');
+    await seedDemo();
+    const { createApp } = await import('../app');
+    const app = createApp({ sessionExpiryTimer: false, webDir });
+    server = await new Promise<Server>((resolve) => {
+      const s = app.listen(0, '127.0.0.1', () => resolve(s));
+    });
+    const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+    const archer = demoAccounts.find((a) => a.role === 'archer')!;
+    const { chromium } = await import('playwright-core');
+    const browser = await chromium.launch(chromiumOptions);
+    const order: number[] = [];
+    try {
+      for (const [name, url, signedIn, ready] of [
+        ['sign-in page', '/sign-in', false, /Sign in/],
+        ['Bench', '/', true, /Your bows/],
+      ] as const) {
+        const context = await browser.newContext({ viewport: { width: 390, height: 844 }, serviceWorkers: 'block' });
+        if (signedIn) {
+          const res = await context.request.post(`${baseUrl}/api/auth/sign-in`, {
+            headers: { 'X-Pinwright-Csrf': '1' },
+            data: { email: archer.email, password: archer.password },
+          });
+          if (!res.ok()) throw new Error(`demo sign-in failed: ${res.status()}`);
+        }
+        const page = await context.newPage();
+        await page.goto(baseUrl + url);
+        await page.getByText(ready).first().waitFor({ timeout: 30_000 });
+        await page.waitForTimeout(2000); // let the first screen's queries settle
+        const seen = (await page.evaluate(() => (globalThis as { __startUpOrder?: number[] }).__startUpOrder)) ?? [];
+        console.log(`${name}: ${seen.length} modules ran`);
+        for (const id of seen) if (!order.includes(id)) order.push(id);
+        await context.close();
+      }
+    } finally {
+      await browser.close();
+    }
+    const list = order
+      .map((id) => pathById.get(id))
+      // Real files and Metro's stable virtual modules; not the app folder's context module, whose name changes with every route added.
+      .filter(
+        (file): file is string =>
+          !!file && !MOUNTS_THE_APP.includes(file) && (file.startsWith('\0') || fs.existsSync(path.join(root, file))),
+      );
+    fs.writeFileSync(START_UP_LIST, `${JSON.stringify(list, null, 2)}\n`);
+    console.log(`${list.length} modules written to ${path.relative(root, START_UP_LIST)}; run the export again to use them.`);
+    await closeDatabase();
+  } finally {
+    if (server) {
+      server.closeAllConnections();
+      await new Promise<void>((resolve) => server!.close(() => resolve()));
+    }
+    await dropDatabase(db, dbName).catch(() => {});
+    await db.stop();
+    fs.rmSync(webDir, { recursive: true, force: true });
+  }
+}
+
+if (require.main === module) {
+  main().catch((error) => {
+    console.error(error);
+    process.exitCode = 1;
+  });
+}
