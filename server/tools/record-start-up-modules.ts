@@ -5,7 +5,7 @@
  * screens load: `npx tsx server/tools/record-start-up-modules.ts`.
  *
  * It builds the export, copies it, undoes the start-up slicing in the copy and
- * adds a line that notes each module as it runs, serves the copy with a
+ * adds a line that notes each module as it finishes, serves the copy with a
  * scratch database and the demo data, then opens, in headless Chromium at
  * 390×844, the sign-in page signed out and the Bench signed in as the demo
  * archer. The modules of both, sign-in's first, make the list.
@@ -24,14 +24,26 @@ const root = path.resolve(__dirname, '../..');
 /** Modules whose running mounts the app: they stay last, where Metro runs them. */
 const MOUNTS_THE_APP = ['node_modules/expo-router/entry.js', 'node_modules/expo-router/entry-classic.js'];
 
-/** An entry script that runs as Metro wrote it and notes, in globalThis.__startUpOrder, each module as it starts. */
+/**
+ * An entry script that runs as Metro wrote it and notes, in
+ * globalThis.__startUpOrder, each module as it finishes: a module after the
+ * modules its top level needed, so that running the list in order gives each
+ * one little work of its own. A module that, while it ran, required one still
+ * running (a require cycle) is noted in globalThis.__startUpCycles with the
+ * modules between them; those are left to run inside the cycle's first module,
+ * as they do without the list, so each sees the same half-made exports.
+ */
 export function recordingEntry(code: string): string {
   const unsliced = code.replace(/\n\(function\(ids,main\)\{.*\}\)\(\[[\d,]*\],(\d+)\);\n$/, '\n__r($1);\n');
   const firstModule = unsliced.indexOf('\n__d(');
   if (firstModule < 0) throw new Error('no Metro module definitions found in the entry script');
   const recorder =
-    'globalThis.__startUpOrder=[];var __pwDefine=__d;__d=function(f,id,deps){' +
-    'return __pwDefine(function(){globalThis.__startUpOrder.push(id);return f.apply(this,arguments)},id,deps)};';
+    '(function(){var define=__d,stack=[],order=globalThis.__startUpOrder=[],cycles=globalThis.__startUpCycles=[];' +
+    'function guard(req){return Object.assign(function(id){var k=stack.indexOf(id);' +
+    'if(k>=0)for(var j=k+1;j<stack.length;j++)cycles.push(stack[j]);return req.apply(this,arguments)},req)}' +
+    '__d=function(f,id,deps){return define(function(){var args=Array.prototype.slice.call(arguments);' +
+    'args[1]=guard(args[1]);args[2]=guard(args[2]);args[3]=guard(args[3]);stack.push(id);' +
+    'try{return f.apply(this,args)}finally{stack.pop();order.push(id)}},id,deps)}})();';
   return `${unsliced.slice(0, firstModule)}\n${recorder}${unsliced.slice(firstModule)}`;
 }
 
@@ -70,6 +82,7 @@ async function main() {
     const { chromium } = await import('playwright-core');
     const browser = await chromium.launch(chromiumOptions);
     const order: number[] = [];
+    const inCycle = new Set<number>();
     try {
       for (const [name, url, signedIn, ready] of [
         ['sign-in page', '/sign-in', false, /Sign in/],
@@ -87,8 +100,12 @@ async function main() {
         await page.goto(baseUrl + url);
         await page.getByText(ready).first().waitFor({ timeout: 30_000 });
         await page.waitForTimeout(2000); // let the first screen's queries settle
-        const seen = (await page.evaluate(() => (globalThis as { __startUpOrder?: number[] }).__startUpOrder)) ?? [];
-        console.log(`${name}: ${seen.length} modules ran`);
+        const { seen, cycles } = await page.evaluate(() => {
+          const g = globalThis as { __startUpOrder?: number[]; __startUpCycles?: number[] };
+          return { seen: g.__startUpOrder ?? [], cycles: g.__startUpCycles ?? [] };
+        });
+        console.log(`${name}: ${seen.length} modules ran, ${new Set(cycles).size} of them inside a require cycle`);
+        for (const id of cycles) inCycle.add(id);
         for (const id of seen) if (!order.includes(id)) order.push(id);
         await context.close();
       }
@@ -96,6 +113,7 @@ async function main() {
       await browser.close();
     }
     const list = order
+      .filter((id) => !inCycle.has(id))
       .map((id) => pathById.get(id))
       // Real files and Metro's stable virtual modules; not the app folder's context module, whose name changes with every route added.
       .filter(

@@ -102,14 +102,33 @@ it('takes the listed modules this build defines, in list order, once each', () =
   expect(listName(root, path.join(root, 'app/_layout.tsx'))).toBe('app/_layout.tsx');
 });
 
-it('records on the script as Metro wrote it, noting each module as it starts', async () => {
-  const code = bundle([0, 1, 2, 3], 0);
-  const recording = recordingEntry(withSlicedStartUp(code, [3, 1, 2]));
+/** Module `id` requires `needs` at its top level, then notes itself; Metro passes require as the 2nd argument. */
+function graph(modules: [number, number[]][], main: number): string {
+  const lines = modules.map(
+    ([id, needs]) => `__d(function(g,r,i,a,m,e,d){${needs.map((n) => `r(${n});`).join('')}ran.push(${id})},${id},[]);`,
+  );
+  return ['var ran=[];', RUNTIME.replace('m.f()', 'm.f(null,__r,__r,__r)'), ...lines, `__r(${main});`, ''].join('\n');
+}
+
+it('records on the script as Metro wrote it, noting each module when it finishes and the ones inside a require cycle', () => {
+  // 0 is the entry: it needs 1, which needs 2 and 3; 3 needs 4, which needs 3 again (a cycle).
+  const code = graph(
+    [
+      [0, [1]],
+      [1, [2, 3]],
+      [2, []],
+      [3, [4]],
+      [4, [3]],
+    ],
+    0,
+  );
+  const recording = recordingEntry(withSlicedStartUp(code, [2, 1]));
   expect(recording).toContain('\n__r(0);\n');
   expect(recording).not.toContain('function(ids,main)');
-  const context = vm.createContext({ clock: { t: 0 } });
+  const context = vm.createContext({});
   vm.runInContext(recording, context);
-  expect(vm.runInContext('globalThis.__startUpOrder', context)).toEqual([0]);
+  expect(vm.runInContext('globalThis.__startUpOrder', context)).toEqual([2, 4, 3, 1, 0]);
+  expect(vm.runInContext('globalThis.__startUpCycles', context)).toEqual([4]);
 });
 
 it('keeps a list of modules that exist, without the ones that mount the app', () => {
