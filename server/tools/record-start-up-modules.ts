@@ -1,21 +1,23 @@
 /**
- * Records which modules of the web app's entry script run on a cold start, in
- * the order they run, and writes them to start-up-modules.json (read at export
- * by start-up-modules.ts). Run it after a change that moves what the first
+ * Records which modules of the web app's entry script run on a cold start
+ * before the first screen shows, in the order they finish, and writes them to
+ * start-up-modules.json (read at export by start-up-modules.ts). Run it after a change that moves what the first
  * screens load: `npx tsx server/tools/record-start-up-modules.ts`.
  *
  * It builds the export, copies it, undoes the start-up slicing in the copy and
  * adds a line that notes each module as it finishes, serves the copy with a
  * scratch database and the demo data, then opens, in headless Chromium at
  * 390×844, the sign-in page signed out and the Bench signed in as the demo
- * archer. The modules of both, sign-in's first, make the list.
+ * archer. The modules both had run by the time their screen showed make the
+ * list; a module only one of them needs, or one that runs after the screen
+ * shows, is left to run where it is first used, so it does not hold back the
+ * other screen.
  */
 import fs from 'node:fs';
-import type { Server } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { chromiumOptions } from '../../tests/helpers/chromium';
+import { withDemoApp } from './demo-app';
 import { listName, START_UP_LIST } from './start-up-modules';
 import { exportWeb, moduleIdsFile } from './web-export';
 
@@ -60,76 +62,55 @@ async function main() {
   fs.writeFileSync(entry, recordingEntry(fs.readFileSync(entry, 'utf8')));
   for (const twin of ['.br', '.gz']) fs.rmSync(entry + twin, { force: true });
 
-  const dbName = `pinwright_record_${Date.now().toString(36)}`;
-  process.env.DB_NAME = dbName;
-  process.env.NODE_ENV ||= 'test';
-  const { startLocalDatabase, createDatabase, dropDatabase } = await import('./database');
-  const db = await startLocalDatabase(() => {});
-  let server: Server | undefined;
   try {
-    await createDatabase(db, dbName);
-    const { closeDatabase, sequelize } = await import('../db');
-    await (await import('../migrations')).migrate(sequelize);
-    const { seedDemo, demoAccounts } = await import('../seed/demo');
-    await seedDemo();
-    const { createApp } = await import('../app');
-    const app = createApp({ sessionExpiryTimer: false, webDir });
-    server = await new Promise<Server>((resolve) => {
-      const s = app.listen(0, '127.0.0.1', () => resolve(s));
-    });
-    const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-    const archer = demoAccounts.find((a) => a.role === 'archer')!;
-    const { chromium } = await import('playwright-core');
-    const browser = await chromium.launch(chromiumOptions);
-    const order: number[] = [];
-    const inCycle = new Set<number>();
-    try {
-      for (const [name, url, signedIn, ready] of [
-        ['sign-in page', '/sign-in', false, /Sign in/],
-        ['Bench', '/', true, /Your bows/],
-      ] as const) {
-        const context = await browser.newContext({ viewport: { width: 390, height: 844 }, serviceWorkers: 'block' });
-        if (signedIn) {
-          const res = await context.request.post(`${baseUrl}/api/auth/sign-in`, {
-            headers: { 'X-Pinwright-Csrf': '1' },
-            data: { email: archer.email, password: archer.password },
+    await withDemoApp('pinwright_record', webDir, async ({ baseUrl, demoAccounts }) => {
+      const archer = demoAccounts.find((a) => a.role === 'archer')!;
+      const { chromium } = await import('playwright-core');
+      const browser = await chromium.launch(chromiumOptions);
+      const runs: number[][] = [];
+      const inCycle = new Set<number>();
+      try {
+        for (const [name, url, signedIn, ready] of [
+          ['sign-in page', '/sign-in', false, /Forgot your password/],
+          ['Bench', '/', true, /Your bows/],
+        ] as const) {
+          const context = await browser.newContext({ viewport: { width: 390, height: 844 }, serviceWorkers: 'block' });
+          if (signedIn) {
+            const res = await context.request.post(`${baseUrl}/api/auth/sign-in`, {
+              headers: { 'X-Pinwright-Csrf': '1' },
+              data: { email: archer.email, password: archer.password },
+            });
+            if (!res.ok()) throw new Error(`demo sign-in failed: ${res.status()}`);
+          }
+          const page = await context.newPage();
+          await page.goto(baseUrl + url);
+          await page.getByText(ready).first().waitFor({ timeout: 30_000 });
+          // What had run by the time the screen showed: what ran later must not hold the screen back.
+          const { seen, cycles } = await page.evaluate(() => {
+            const g = globalThis as { __startUpOrder?: number[]; __startUpCycles?: number[] };
+            return { seen: [...(g.__startUpOrder ?? [])], cycles: [...(g.__startUpCycles ?? [])] };
           });
-          if (!res.ok()) throw new Error(`demo sign-in failed: ${res.status()}`);
+          console.log(`${name}: ${seen.length} modules ran before it showed, ${new Set(cycles).size} of them inside a require cycle`);
+          for (const id of cycles) inCycle.add(id);
+          runs.push(seen);
+          await context.close();
         }
-        const page = await context.newPage();
-        await page.goto(baseUrl + url);
-        await page.getByText(ready).first().waitFor({ timeout: 30_000 });
-        await page.waitForTimeout(2000); // let the first screen's queries settle
-        const { seen, cycles } = await page.evaluate(() => {
-          const g = globalThis as { __startUpOrder?: number[]; __startUpCycles?: number[] };
-          return { seen: g.__startUpOrder ?? [], cycles: g.__startUpCycles ?? [] };
-        });
-        console.log(`${name}: ${seen.length} modules ran, ${new Set(cycles).size} of them inside a require cycle`);
-        for (const id of cycles) inCycle.add(id);
-        for (const id of seen) if (!order.includes(id)) order.push(id);
-        await context.close();
+      } finally {
+        await browser.close();
       }
-    } finally {
-      await browser.close();
-    }
-    const list = order
-      .filter((id) => !inCycle.has(id))
-      .map((id) => pathById.get(id))
-      // Real files and Metro's stable virtual modules; not the app folder's context module, whose name changes with every route added.
-      .filter(
-        (file): file is string =>
-          !!file && !MOUNTS_THE_APP.includes(file) && (file.startsWith('\0') || fs.existsSync(path.join(root, file))),
-      );
-    fs.writeFileSync(START_UP_LIST, `${JSON.stringify(list, null, 2)}\n`);
-    console.log(`${list.length} modules written to ${path.relative(root, START_UP_LIST)}; run the export again to use them.`);
-    await closeDatabase();
+      // Only what both first screens needed: a module one screen alone needs runs where it is first used.
+      const list = runs[0]
+        .filter((id) => runs.every((run) => run.includes(id)) && !inCycle.has(id))
+        .map((id) => pathById.get(id))
+        // Real files and Metro's stable virtual modules; not the app folder's context module, whose name changes with every route added.
+        .filter(
+          (file): file is string =>
+            !!file && !MOUNTS_THE_APP.includes(file) && (file.startsWith('\0') || fs.existsSync(path.join(root, file))),
+        );
+      fs.writeFileSync(START_UP_LIST, `${JSON.stringify(list, null, 2)}\n`);
+      console.log(`${list.length} modules written to ${path.relative(root, START_UP_LIST)}; run the export again to use them.`);
+    });
   } finally {
-    if (server) {
-      server.closeAllConnections();
-      await new Promise<void>((resolve) => server!.close(() => resolve()));
-    }
-    await dropDatabase(db, dbName).catch(() => {});
-    await db.stop();
     fs.rmSync(webDir, { recursive: true, force: true });
   }
 }

@@ -28,6 +28,7 @@ import os from 'node:os';
 import path from 'node:path';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { withDemoApp } from '@/server/tools/demo-app';
 import { chromiumOptions } from '../helpers/chromium';
 
 const root = path.resolve(__dirname, '../..');
@@ -251,33 +252,13 @@ const kb = (bytes: number) => `${Math.round(bytes / 1024).toLocaleString('en')} 
 const verdict = (ok: boolean) => (ok ? 'met' : 'NOT met');
 
 export async function runWebBench(options: { lighthouse?: boolean } = {}): Promise<void> {
-  const dbName = `pinwright_bench_${Date.now().toString(36)}_${process.pid}`;
-  process.env.DB_NAME = dbName;
-  process.env.NODE_ENV ||= 'test';
   // WEB_DIR=<dir> measures an export kept elsewhere (e.g. a copy of dist/ before a change) as it is, unbuilt.
   const webDir = process.env.WEB_DIR ? path.resolve(process.env.WEB_DIR) : path.join(root, 'dist');
   if (!process.env.WEB_DIR) {
     const { exportWebIfStale } = await import('@/server/tools/web-export');
     await exportWebIfStale(root);
   }
-  const { config } = await import('@/server/config');
-  if (config.db.name !== dbName) throw new Error('the web bench must set DB_NAME before server/config.ts is first loaded');
-  const { startLocalDatabase, createDatabase, dropDatabase } = await import('@/server/tools/database');
-  const db = await startLocalDatabase(() => {});
-  let server: Server | undefined;
-  try {
-    await createDatabase(db, dbName);
-    const { closeDatabase, sequelize } = await import('@/server/db');
-    await (await import('@/server/migrations')).migrate(sequelize);
-    const { seedDemo, demoAccounts } = await import('@/server/seed/demo');
-    await seedDemo();
-    const { createApp } = await import('@/server/app');
-    const app = createApp({ sessionExpiryTimer: false, webDir });
-    server = await new Promise<Server>((resolve) => {
-      const s = app.listen(0, '127.0.0.1', () => resolve(s));
-    });
-    const baseUrl = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-
+  await withDemoApp('pinwright_bench', webDir, async ({ baseUrl, demoAccounts }) => {
     const cold = await coldLoad(baseUrl);
     console.log('\nweb: cold load at 390×844, emulated slow 4G (150 ms, 1.6/0.75 Mbit/s)');
     console.log(
@@ -340,15 +321,7 @@ export async function runWebBench(options: { lighthouse?: boolean } = {}): Promi
         );
       }
     }
-    await closeDatabase();
-  } finally {
-    if (server) {
-      server.closeAllConnections();
-      await new Promise<void>((resolve) => server!.close(() => resolve()));
-    }
-    await dropDatabase(db, dbName).catch(() => {});
-    await db.stop();
-  }
+  });
 }
 
 if (require.main === module) {
