@@ -1,5 +1,37 @@
 // Expo's own Babel preset: needed by Metro for the web export and by jest-expo for component tests.
+const path = require('node:path');
+
+// In Metro's web builds only (not jest's), expo-router's own compiled files get
+// components/shell/router-stand-ins/react-native-web-used.js for `require("react-native")`:
+// the react-native names they read, without every component react-native-web has.
+// Metro's resolver cannot do this, because Expo answers 'react-native' with react-native-web's
+// index before any project resolver runs, so the request is rewritten in the file. The plugin
+// lives here rather than in its own file because Metro's transform cache follows this file.
+const reactNativeUsed = path.join(__dirname, 'components/shell/router-stand-ins/react-native-web-used.js');
+const reactNativeRequests = new Set(['react-native', 'react-native-web', 'react-native-web/dist/index']);
+const routerFile = /[\\/]node_modules[\\/]expo-router[\\/]build[\\/]/;
+
+function routerReactNativeUsed({ types: t }) {
+  return {
+    name: 'pinwright-router-react-native-used',
+    visitor: {
+      CallExpression(callPath, state) {
+        // Expo's Metro transformer names the project root; jest-expo, which also calls itself
+        // 'metro', does not.
+        const caller = state.file.opts.caller;
+        if (!caller || caller.name !== 'metro' || caller.platform !== 'web' || !caller.projectRoot) return;
+        if (!routerFile.test(state.filename || '')) return;
+        const { callee, arguments: args } = callPath.node;
+        if (!t.isIdentifier(callee, { name: 'require' }) || args.length !== 1) return;
+        // babel-preset-expo may already have renamed the request to react-native-web's index.
+        if (!t.isStringLiteral(args[0]) || !reactNativeRequests.has(args[0].value)) return;
+        callPath.node.arguments = [t.stringLiteral(reactNativeUsed)];
+      },
+    },
+  };
+}
+
 module.exports = function (api) {
   api.cache(true);
-  return { presets: ['babel-preset-expo'] };
+  return { presets: ['babel-preset-expo'], plugins: [routerReactNativeUsed] };
 };

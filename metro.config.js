@@ -1,7 +1,10 @@
-// Expo's default Metro config, plus two redirects that keep the web bundle small:
+// Expo's default Metro config, plus redirects that keep the web bundle small:
 // @hookform/resolvers' zod resolver imports `zod/v4/core` for zod 4 schemas; ours
 // are zod 3, so that import is answered by a stub (components/shell/zod-v4-core-stub.js);
-// and our own imports of 'expo-router' get only the names we use (expo-router-slim.ts).
+// our own imports of 'expo-router' get only the names we use (expo-router-slim.ts);
+// and three expo-router internals a web build of this app never runs get small
+// stand-ins (components/shell/router-stand-ins/, each file says why; babel.config.js
+// does the same for expo-router's view of react-native, which no resolver can reach).
 const fs = require('node:fs');
 const path = require('node:path');
 const { getDefaultConfig } = require('expo/metro-config');
@@ -13,9 +16,21 @@ const expoRouterSlim = path.resolve(__dirname, 'components/shell/expo-router-sli
 const ownCode = ['app', 'components', 'shared', 'math'].map((dir) => path.resolve(__dirname, dir) + path.sep);
 const upstream = config.resolver.resolveRequest;
 
+const routerBuild = path.join('node_modules', 'expo-router', 'build') + path.sep;
+const standInsDir = path.resolve(__dirname, 'components/shell/router-stand-ins');
+const routerStandIns = require('./components/shell/router-stand-ins/table').map(([from, request, to]) => ({
+  from: routerBuild + path.normalize(from),
+  request,
+  to: path.join(standInsDir, to),
+}));
+
 config.resolver.resolveRequest = (context, moduleName, platform) => {
   if (moduleName === 'zod/v4/core' && context.originModulePath.includes(resolversDir)) {
     return { type: 'sourceFile', filePath: zodV4CoreStub };
+  }
+  if (platform === 'web') {
+    const standIn = routerStandIns.find(({ from, request }) => request === moduleName && context.originModulePath.endsWith(from));
+    if (standIn) return { type: 'sourceFile', filePath: standIn.to };
   }
   // Our own imports of 'expo-router' take only the names we use (see expo-router-slim.ts).
   if (

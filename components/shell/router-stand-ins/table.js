@@ -1,0 +1,12 @@
+/**
+ * Which expo-router internals the web build answers with a stand-in from this
+ * folder (read by metro.config.js, checked by tests/unit/router-stand-ins.test.ts):
+ * [file inside expo-router/build that makes the request, the request, stand-in file here].
+ */
+module.exports = [
+  ['views/Toast.js', '../react-navigation/bottom-tabs', 'bottom-tab-bar-height.js'],
+  ['views/ErrorBoundary.js', '../react-navigation/bottom-tabs', 'bottom-tab-bar-height.js'],
+  ['ExpoRoot.js', './views/Sitemap', 'sitemap.js'],
+  ['getRoutes.js', './views/Sitemap', 'sitemap.js'],
+  ['ExpoRoot.js', './screensFeatureFlags', 'screens-feature-flags.js'],
+];

@@ -1,0 +1,121 @@
+/**
+ * The web build gives expo-router's own files small stand-ins for parts of
+ * themselves and of react-native that Pinwright never runs
+ * (components/shell/router-stand-ins/, metro.config.js, babel.config.js).
+ * A stand-in that lacks something its importer reads would break the web app
+ * only at run time, so these checks read expo-router's installed files: each
+ * redirect must still match a real request, each importer may read only what
+ * the stand-in gives, and every react-native name any expo-router file reads
+ * must be kept.
+ */
+import { transformFileSync } from '@babel/core';
+import fs from 'node:fs';
+import { createRequire } from 'node:module';
+import path from 'node:path';
+
+const root = path.resolve(__dirname, '../..');
+// The stand-ins are plain CommonJS files, loaded the way Metro's bundle loads them.
+const load = createRequire(__filename);
+const routerBuild = path.join(root, 'node_modules/expo-router/build');
+const standIns = path.join(root, 'components/shell/router-stand-ins');
+const table: [string, string, string][] = load(path.join(standIns, 'table.js'));
+const reactNativeUsed: { keptNames: string[]; leftOutNames: string[] } & Record<string, unknown> = load(
+  path.join(standIns, 'react-native-web-used.js'),
+);
+
+function files(dir: string): string[] {
+  return fs.readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {
+    const full = path.join(dir, entry.name);
+    return entry.isDirectory() ? files(full) : entry.name.endsWith('.js') ? [full] : [];
+  });
+}
+
+/** Names read as `<binding>.<name>` where the file binds `require(request)` to a variable, or destructured from it. */
+function namesRead(text: string, request: string): string[] {
+  const quoted = request.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&');
+  const destructured = [...text.matchAll(new RegExp(`\\{([\\w\\s,]+)\\} = require\\(["']${quoted}["']\\)`, 'g'))].flatMap((m) =>
+    m[1].split(',').map((name) => name.trim()),
+  );
+  const bindings = [
+    ...text.matchAll(new RegExp(`(?:const|var|let) (\\w+) = (?:__importStar\\(|__importDefault\\()?require\\(["']${quoted}["']\\)`, 'g')),
+  ].map((m) => m[1]);
+  return [
+    ...destructured,
+    ...bindings.flatMap((binding) => [...text.matchAll(new RegExp(`\\b${binding}\\.(\\w+)`, 'g'))].map((m) => m[1])),
+  ];
+}
+
+describe('stand-ins for expo-router internals', () => {
+  it.each(table)('%s still requires %s, and reads only what %s gives', (from, request, to) => {
+    const text = fs.readFileSync(path.join(routerBuild, from), 'utf8');
+    expect(text).toMatch(new RegExp(`require\\(["']${request.replace(/[./]/g, '\\$&')}["']\\)`));
+    const standIn = load(path.join(standIns, to));
+    const read = new Set(namesRead(text, request));
+    expect(read.size).toBeGreaterThan(0); // the scan finds the use at all
+    expect([...read].filter((name) => standIn[name] === undefined)).toEqual([]);
+  });
+
+  it('hands Toast and ErrorBoundary the tab navigator’s own height context, not a copy', () => {
+    const real = load(path.join(routerBuild, 'react-navigation/bottom-tabs/utils/BottomTabBarHeightContext.js'));
+    expect(load(path.join(standIns, 'bottom-tab-bar-height.js')).BottomTabBarHeightContext).toBe(real.BottomTabBarHeightContext);
+  });
+
+  it('turns the generated sitemap route off, since its stand-in refuses to render', () => {
+    const appJson = JSON.parse(fs.readFileSync(path.join(root, 'app.json'), 'utf8'));
+    expect(appJson.expo.plugins).toContainEqual(['expo-router', { sitemap: false }]);
+    expect(() => load(path.join(standIns, 'sitemap.js')).Sitemap()).toThrow(/turned off/);
+  });
+});
+
+describe("expo-router's view of react-native", () => {
+  const index = fs.readFileSync(path.join(root, 'node_modules/react-native-web/dist/index.js'), 'utf8');
+  const exported = [...index.matchAll(/export \{ default as (\w+) \} from '\.\/exports\/\w+'/g)].map((m) => m[1]);
+
+  it('sorts every name react-native-web exports into kept or left out, once', () => {
+    expect(exported.length).toBeGreaterThan(50); // the scan reads the index at all
+    const sorted = [...reactNativeUsed.keptNames, ...reactNativeUsed.leftOutNames];
+    expect(new Set(sorted).size).toBe(sorted.length);
+    expect([...sorted].sort()).toEqual([...exported].sort());
+  });
+
+  it('keeps every react-native name any expo-router file reads on the web', () => {
+    const routerFiles = files(routerBuild).filter((file) => !/\.(ios|android|native)\.js$/.test(file));
+    const read = new Set(routerFiles.flatMap((file) => namesRead(fs.readFileSync(file, 'utf8'), 'react-native')));
+    expect(read.has('Platform') && read.has('Animated')).toBe(true); // the scan finds the uses at all
+    // PlatformColor is read on native paths only; react-native-web has none, so it stays undefined.
+    expect([...read].filter((name) => !reactNativeUsed.keptNames.includes(name) && name !== 'PlatformColor')).toEqual([]);
+  });
+
+  it("loads each kept name from react-native-web's own module of that name", () => {
+    const text = fs.readFileSync(path.join(standIns, 'react-native-web-used.js'), 'utf8');
+    for (const name of reactNativeUsed.keptNames) {
+      expect(text).toContain(`${name}: () => require('react-native-web/dist/exports/${name}').default`);
+      expect(fs.existsSync(path.join(root, `node_modules/react-native-web/dist/exports/${name}/index.js`))).toBe(true);
+    }
+  });
+
+  it('throws, naming the name, when something reads one left out, and never lists those', () => {
+    expect(() => reactNativeUsed.Switch).toThrow(/Switch is left out/);
+    expect(Object.keys(reactNativeUsed)).not.toContain('Switch');
+    expect(Object.keys(reactNativeUsed)).toContain('View');
+  });
+
+  const transform = (file: string, caller: Record<string, unknown>) =>
+    transformFileSync(file, { cwd: root, configFile: path.join(root, 'babel.config.js'), babelrc: false, caller: caller as never })?.code ??
+    '';
+  const expoRoot = path.join(routerBuild, 'ExpoRoot.js');
+  const metroWeb = { name: 'metro', bundler: 'metro', platform: 'web', projectRoot: root, isDev: false };
+
+  it("points expo-router's require of react-native at the stand-in in Metro's web build only", () => {
+    expect(transform(expoRoot, metroWeb)).toContain(`require("${path.join(standIns, 'react-native-web-used.js')}")`);
+    // jest-expo also calls itself 'metro' but names no project root; native builds keep react-native.
+    expect(transform(expoRoot, { name: 'metro', bundler: 'metro', platform: 'web' })).not.toContain('react-native-web-used');
+    expect(transform(expoRoot, { ...metroWeb, platform: 'ios' })).not.toContain('react-native-web-used');
+  });
+
+  it('leaves files outside expo-router alone', () => {
+    const other = path.join(root, 'node_modules/react-native-safe-area-context/lib/commonjs/index.js');
+    const file = fs.existsSync(other) ? other : path.join(root, 'components/shell/mark.tsx');
+    expect(transform(file, metroWeb)).not.toContain('react-native-web-used');
+  });
+});
