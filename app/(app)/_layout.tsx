@@ -1,6 +1,9 @@
-import { Redirect, Slot } from 'expo-router';
+import { useQueryClient } from '@tanstack/react-query';
+import { Redirect, Slot, usePathname } from 'expo-router';
+import { useEffect } from 'react';
 
 import { useMe } from '@/components/auth/api';
+import { fetchHomeBows, homeKeys } from '@/components/home/api';
 import { AppShell } from '@/components/shell/app-shell';
 import { ErrorView } from '@/components/ui/error-view';
 import { LoadingView } from '@/components/ui/loading-view';
@@ -11,6 +14,7 @@ export const unstable_settings = { initialRouteName: 'index' };
 // renders only the page in front, so pages left behind leave nothing in the DOM.
 export default function SignedInLayout() {
   const me = useMe();
+  useBenchAlongsideSignInCheck(me.isPending);
   if (me.isPending) return <LoadingView label="Opening your bench…" />;
   if (me.isError) {
     return (
@@ -28,4 +32,19 @@ export default function SignedInLayout() {
       <Slot />
     </AppShell>
   );
+}
+
+/**
+ * On a cold load of the Bench, its bow list is asked for alongside the sign-in
+ * check instead of after it: one round trip before the Bench shows, not two.
+ * Signed out, that one request is refused (401) and the page moves to sign-in.
+ */
+function useBenchAlongsideSignInCheck(checking: boolean) {
+  const pathname = usePathname();
+  const queryClient = useQueryClient();
+  useEffect(() => {
+    if (checking && pathname === '/') void queryClient.prefetchQuery({ queryKey: homeKeys.bows, queryFn: fetchHomeBows });
+    // Only when the layout first mounts: later visits to the Bench fetch as usual.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
 }

@@ -3,9 +3,10 @@
  * (server/tools/web-export.ts) shows the name and what Pinwright is for while
  * the script is still on its way, and goes once the app has rendered its
  * first screen (components/shell/first-screen.tsx), leaving the real form
- * usable.
+ * usable. A cold load of the Bench asks for its bows alongside the sign-in
+ * check, not after it (app/(app)/_layout.tsx).
  */
-import { DESKTOP, PHONE, newPage, pageErrors, screenshot, stackForFile } from '../helpers/browser';
+import { DESKTOP, PHONE, newPage, pageErrors, screenshot, signUpInContext, stackForFile } from '../helpers/browser';
 
 const stack = stackForFile();
 
@@ -41,6 +42,48 @@ describe.each([
       await email.fill('someone@example.com');
       expect(await email.inputValue()).toBe('someone@example.com');
       await screenshot(page, `first-paint-after-${label}`);
+      expect(pageErrors(page)).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  }, 60_000);
+});
+
+describe('first data of the Bench', () => {
+  it('asks for the bows while the sign-in check is still unanswered, and shows the Bench', async () => {
+    const { context, page } = await newPage(stack, PHONE);
+    try {
+      await signUpInContext(context, stack.baseUrl);
+      // Hold the sign-in check's answer until the bow list has been asked for (or 15 s pass).
+      let bowsAsked: () => void = () => {};
+      const asked = new Promise<boolean>((resolve) => {
+        bowsAsked = () => resolve(true);
+        setTimeout(() => resolve(false), 15_000);
+      });
+      let askedBeforeAnswer: boolean | undefined;
+      page.on('request', (request) => {
+        if (new URL(request.url()).pathname === '/api/bows') bowsAsked();
+      });
+      await page.route('**/api/me', async (route) => {
+        askedBeforeAnswer ??= await asked;
+        await route.continue();
+      });
+      await page.goto('/');
+      await page.getByText('No bows on your bench yet').waitFor({ timeout: 30_000 });
+      expect(askedBeforeAnswer).toBe(true);
+      expect(pageErrors(page)).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  }, 60_000);
+
+  it('signed out, moves from the Bench to sign-in without an error', async () => {
+    const { context, page } = await newPage(stack, PHONE);
+    try {
+      await page.goto('/');
+      await page.getByLabel('E-mail').first().waitFor({ timeout: 30_000 });
+      expect(new URL(page.url()).pathname).toBe('/sign-in');
+      expect(await page.getByText(/could not/i).count()).toBe(0);
       expect(pageErrors(page)).toEqual([]);
     } finally {
       await context.close();
