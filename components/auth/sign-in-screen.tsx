@@ -1,5 +1,6 @@
 import { AuthFrame } from '@/components/auth/auth-frame';
 import { SignInForm } from '@/components/auth/sign-in-form';
+import { PRODUCT_LEAD } from '@/components/shell/product-lead';
 import { Button } from '@/components/ui/button';
 import { TextLink } from '@/components/ui/text-link';
 import { ScreenTitle } from '@/components/ui/screen-title';
@@ -11,7 +12,7 @@ export function SignInScreen() {
       <ScreenTitle name="Sign in" />
       <AuthFrame
         title="Sign in"
-        lead="Pinwright turns a few marks sighted in at the range into a sight tape for every distance, printed true to size, and keeps your bow's set-up, level checks and tapes in one place."
+        lead={PRODUCT_LEAD}
         footer={
           <>
             <TextLink href="/forgot-password" label="Forgot your password?" />

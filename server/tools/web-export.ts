@@ -6,6 +6,7 @@
 import { spawn } from 'node:child_process';
 import fs from 'node:fs';
 import path from 'node:path';
+import { PRODUCT_LEAD } from '../../components/shell/product-lead';
 import { sliceStartUp } from './start-up-modules';
 import { finishWebExport, readPalette } from './web-pwa';
 
@@ -95,14 +96,18 @@ const SHELL_ID = 'pw-first-paint';
 
 /**
  * Puts a small static first screen into the exported page, beside
- * `<div id="root">`: the name, what Pinwright is for in one sentence and
- * "Opening…", in the theme's colours and the system font, covering the page,
+ * `<div id="root">`: the name, what Pinwright does (the sign-in page's own
+ * lead, components/shell/product-lead.ts) and "Opening…", in the theme's
+ * colours and the system font, covering the page,
  * so something true shows as soon as the page arrives instead of after the
  * 300 KB script has downloaded and run. No form, no link. The app removes it
  * once its first screen has rendered (components/shell/first-screen.tsx).
  * Runs before web-pwa.ts, so the service worker's copy of index.html and its
  * .br/.gz twins include it. Idempotent.
  */
+const escapeHtml = (text: string) =>
+  text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
+
 export function addFirstPaintShell(indexHtml: string, colors: Record<string, string>): void {
   const html = fs.readFileSync(indexHtml, 'utf8');
   if (html.includes(`id="${SHELL_ID}"`)) return;
@@ -114,7 +119,7 @@ export function addFirstPaintShell(indexHtml: string, colors: Record<string, str
     `font-family:system-ui,-apple-system,'Segoe UI',Roboto,sans-serif;text-align:center">` +
     `<p style="margin:0;font-size:28px;line-height:34px;font-weight:700;letter-spacing:0.3px">Pinwright</p>` +
     `<p style="margin:0;max-width:360px;font-size:17px;line-height:26px;color:${colors.inkSoft}">` +
-    `Sight tapes, sight-ins and level checks for compound bows.</p>` +
+    `${escapeHtml(PRODUCT_LEAD)}</p>` +
     `<p role="status" style="margin:0;font-size:15px;line-height:22px;color:${colors.inkSoft}">Opening…</p></div>`;
   const withShell = html.replace('<div id="root"></div>', `<div id="root"></div>${shell}`);
   if (withShell === html) throw new Error('dist/index.html has no empty <div id="root"></div> to put the first-paint shell beside');

@@ -6,6 +6,7 @@
  * usable. A cold load of the Bench asks for its bows alongside the sign-in
  * check, not after it (app/(app)/_layout.tsx).
  */
+import { PRODUCT_LEAD } from '@/components/shell/product-lead';
 import { DESKTOP, PHONE, newPage, pageErrors, screenshot, signUpInContext, stackForFile } from '../helpers/browser';
 
 const stack = stackForFile();
@@ -29,7 +30,7 @@ describe.each([
       const shell = page.locator('#pw-first-paint');
       await shell.waitFor({ state: 'visible' });
       expect(await shell.getByText('Pinwright', { exact: true }).isVisible()).toBe(true);
-      expect(await shell.getByText('Sight tapes, sight-ins and level checks for compound bows.').isVisible()).toBe(true);
+      expect(await shell.getByText(PRODUCT_LEAD).isVisible()).toBe(true);
       expect(await shell.getByRole('status').textContent()).toBe('Opening…');
       expect(await page.locator('form, input').count()).toBe(0);
       await screenshot(page, `first-paint-shell-${label}`);

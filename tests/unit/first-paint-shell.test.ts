@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 
+import { PRODUCT_LEAD } from '@/components/shell/product-lead';
 import { addFirstPaintShell } from '@/server/tools/web-export';
 import { readPalette } from '@/server/tools/web-pwa';
 
@@ -20,14 +21,15 @@ function writePage(html: string): string {
 describe('the first-paint shell of the exported page (server/tools/web-export.ts)', () => {
   const palette = readPalette(root);
 
-  it('puts the name, one sentence and "Opening…" beside #root, in the theme colours, with no form or link', () => {
+  it('puts the name, the product’s lead and "Opening…" beside #root, in the theme colours, with no form or link', () => {
     const file = writePage(page);
     addFirstPaintShell(file, palette);
     const html = fs.readFileSync(file, 'utf8');
     expect(html).toContain('<div id="root"></div><div id="pw-first-paint"');
     const shell = html.slice(html.indexOf('<div id="pw-first-paint"'), html.indexOf('<script'));
     expect(shell).toContain('>Pinwright</p>');
-    expect(shell).toContain('Sight tapes, sight-ins and level checks for compound bows.');
+    // The sign-in page's own lead, so the first text shown is the text that stays.
+    expect(shell).toContain(PRODUCT_LEAD.replace("'", '&#39;'));
     expect(shell).toContain('role="status"');
     expect(shell).toContain(`background:${palette.paper}`);
     expect(shell).toContain(`color:${palette.ink}`);
