@@ -2,7 +2,7 @@
 // @hookform/resolvers' zod resolver imports `zod/v4/core` for zod 4 schemas; ours
 // are zod 3, so that import is answered by a stub (components/shell/zod-v4-core-stub.js);
 // our own imports of 'expo-router' get only the names we use (expo-router-slim.ts);
-// and three expo-router internals a web build of this app never runs get small
+// and expo-router internals a web build of this app never runs get small
 // stand-ins (components/shell/router-stand-ins/, each file says why; babel.config.js
 // does the same for expo-router's view of react-native, which no resolver can reach).
 const fs = require('node:fs');

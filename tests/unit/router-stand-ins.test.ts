@@ -23,10 +23,10 @@ const reactNativeUsed: { keptNames: string[]; leftOutNames: string[] } & Record<
   path.join(standIns, 'react-native-web-used.js'),
 );
 
-function files(dir: string): string[] {
+function files(dir: string, name = /\.js$/): string[] {
   return fs.readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {
     const full = path.join(dir, entry.name);
-    return entry.isDirectory() ? files(full) : entry.name.endsWith('.js') ? [full] : [];
+    return entry.isDirectory() ? files(full, name) : name.test(entry.name) ? [full] : [];
   });
 }
 
@@ -52,12 +52,23 @@ describe('stand-ins for expo-router internals', () => {
     const standIn = load(path.join(standIns, to));
     const read = new Set(namesRead(text, request));
     expect(read.size).toBeGreaterThan(0); // the scan finds the use at all
-    expect([...read].filter((name) => standIn[name] === undefined)).toEqual([]);
+    expect([...read].filter((name) => !(name in standIn))).toEqual([]);
   });
 
   it('hands Toast and ErrorBoundary the tab navigator’s own height context, not a copy', () => {
     const real = load(path.join(routerBuild, 'react-navigation/bottom-tabs/utils/BottomTabBarHeightContext.js'));
     expect(load(path.join(standIns, 'bottom-tab-bar-height.js')).BottomTabBarHeightContext).toBe(real.BottomTabBarHeightContext);
+  });
+
+  it('leaves the stack header out only while every stack of the app hides it', () => {
+    const layouts = files(path.join(root, 'app'), /_layout\.tsx$/);
+    const stacks = layouts.flatMap((file) => [...fs.readFileSync(file, 'utf8').matchAll(/<Stack\b[^>]*>/g)].map((m) => [file, m[0]]));
+    expect(stacks.length).toBeGreaterThan(0); // the scan finds the stacks at all
+    for (const [file, stack] of stacks)
+      expect([path.relative(root, file), stack]).toEqual([path.relative(root, file), expect.stringContaining('headerShown: false')]);
+    const { Header, HeaderBackButton } = load(path.join(standIns, 'stack-elements.js'));
+    expect(() => Header({})).toThrow(/headerShown: false/);
+    expect(() => HeaderBackButton({})).toThrow(/HeaderBackButton is left out/);
   });
 
   it('turns the generated sitemap route off, since its stand-in refuses to render', () => {

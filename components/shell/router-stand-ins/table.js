@@ -9,4 +9,5 @@ module.exports = [
   ['ExpoRoot.js', './views/Sitemap', 'sitemap.js'],
   ['getRoutes.js', './views/Sitemap', 'sitemap.js'],
   ['ExpoRoot.js', './screensFeatureFlags', 'screens-feature-flags.js'],
+  ['react-navigation/native-stack/views/NativeStackView.js', '../../elements', 'stack-elements.js'],
 ];
