@@ -94,20 +94,20 @@ export async function exportWeb(root: string, log: (line: string) => void = cons
 
 const SHELL_ID = 'pw-first-paint';
 
+const escapeHtml = (text: string) =>
+  text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
+
 /**
  * Puts a small static first screen into the exported page, beside
  * `<div id="root">`: the name, what Pinwright does (the sign-in page's own
  * lead, components/shell/product-lead.ts) and "Opening…", in the theme's
  * colours and the system font, covering the page,
  * so something true shows as soon as the page arrives instead of after the
- * 300 KB script has downloaded and run. No form, no link. The app removes it
+ * ~280 KB script has downloaded and run. No form, no link. The app removes it
  * once its first screen has rendered (components/shell/first-screen.tsx).
  * Runs before web-pwa.ts, so the service worker's copy of index.html and its
  * .br/.gz twins include it. Idempotent.
  */
-const escapeHtml = (text: string) =>
-  text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;').replace(/'/g, '&#39;');
-
 export function addFirstPaintShell(indexHtml: string, colors: Record<string, string>): void {
   const html = fs.readFileSync(indexHtml, 'utf8');
   if (html.includes(`id="${SHELL_ID}"`)) return;
