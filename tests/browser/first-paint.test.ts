@@ -57,9 +57,10 @@ describe('first data of the Bench', () => {
       await signUpInContext(context, stack.baseUrl);
       // Hold the sign-in check's answer until the bow list has been asked for (or 15 s pass).
       let bowsAsked: () => void = () => {};
+      let giveUp: ReturnType<typeof setTimeout> | undefined;
       const asked = new Promise<boolean>((resolve) => {
         bowsAsked = () => resolve(true);
-        setTimeout(() => resolve(false), 15_000);
+        giveUp = setTimeout(() => resolve(false), 15_000);
       });
       let askedBeforeAnswer: boolean | undefined;
       page.on('request', (request) => {
@@ -71,6 +72,7 @@ describe('first data of the Bench', () => {
       });
       await page.goto('/');
       await page.getByText('No bows on your bench yet').waitFor({ timeout: 30_000 });
+      clearTimeout(giveUp);
       expect(askedBeforeAnswer).toBe(true);
       expect(pageErrors(page)).toEqual([]);
     } finally {
