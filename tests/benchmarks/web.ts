@@ -130,7 +130,10 @@ function lighthouse(url: string, cookie?: string): Promise<LighthouseScores> {
       const report = JSON.parse(fs.readFileSync(out, 'utf8'));
       // PINWRIGHT_LH_KEEP=<dir> keeps each full report there, to read which audits cost the score.
       const keep = process.env.PINWRIGHT_LH_KEEP;
-      if (keep) fs.copyFileSync(out, path.join(keep, `lighthouse-${cookie ? 'bench' : 'sign-in'}.json`));
+      if (keep) {
+        fs.mkdirSync(keep, { recursive: true });
+        fs.copyFileSync(out, path.join(keep, `lighthouse-${cookie ? 'bench' : 'sign-in'}.json`));
+      }
       fs.rmSync(out, { force: true });
       const audits = report.audits as Record<
         string,
