@@ -1,13 +1,15 @@
 // Expo's own Babel preset: needed by Metro for the web export and by jest-expo for component tests.
-const path = require('node:path');
 
 // In Metro's web builds only (not jest's), expo-router's own compiled files get
 // components/shell/router-stand-ins/react-native-web-used.js for `require("react-native")`:
 // the react-native names they read, without every component react-native-web has.
 // Metro's resolver cannot do this, because Expo answers 'react-native' with react-native-web's
-// index before any project resolver runs, so the request is rewritten in the file. The plugin
-// lives here rather than in its own file because Metro's transform cache follows this file.
-const reactNativeUsed = path.join(__dirname, 'components/shell/router-stand-ins/react-native-web-used.js');
+// index before any project resolver runs, so the request is renamed in the file to
+// REACT_NATIVE_USED, which metro.config.js resolves to that stand-in. (A name, not the file's
+// absolute path: Metro's transform cache is shared by every checkout on a machine, and would
+// hand one checkout's path to another.) The plugin lives here rather than in its own file
+// because Metro's transform cache follows this file.
+const REACT_NATIVE_USED = 'pinwright-router-stand-in/react-native-web-used';
 const reactNativeRequests = new Set(['react-native', 'react-native-web', 'react-native-web/dist/index']);
 const routerFile = /[\\/]node_modules[\\/]expo-router[\\/]build[\\/]/;
 
@@ -25,7 +27,7 @@ function routerReactNativeUsed({ types: t }) {
         if (!t.isIdentifier(callee, { name: 'require' }) || args.length !== 1) return;
         // babel-preset-expo may already have renamed the request to react-native-web's index.
         if (!t.isStringLiteral(args[0]) || !reactNativeRequests.has(args[0].value)) return;
-        callPath.node.arguments = [t.stringLiteral(reactNativeUsed)];
+        callPath.node.arguments = [t.stringLiteral(REACT_NATIVE_USED)];
       },
     },
   };
@@ -35,3 +37,4 @@ module.exports = function (api) {
   api.cache(true);
   return { presets: ['babel-preset-expo'], plugins: [routerReactNativeUsed] };
 };
+module.exports.REACT_NATIVE_USED = REACT_NATIVE_USED;

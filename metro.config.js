@@ -16,6 +16,7 @@ const expoRouterSlim = path.resolve(__dirname, 'components/shell/expo-router-sli
 const ownCode = ['app', 'components', 'shared', 'math'].map((dir) => path.resolve(__dirname, dir) + path.sep);
 const upstream = config.resolver.resolveRequest;
 
+const { REACT_NATIVE_USED } = require('./babel.config');
 const routerBuild = path.join('node_modules', 'expo-router', 'build') + path.sep;
 const standInsDir = path.resolve(__dirname, 'components/shell/router-stand-ins');
 const routerStandIns = require('./components/shell/router-stand-ins/table').map(([from, request, to]) => ({
@@ -29,6 +30,8 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
     return { type: 'sourceFile', filePath: zodV4CoreStub };
   }
   if (platform === 'web') {
+    // expo-router's `require("react-native")`, renamed by babel.config.js.
+    if (moduleName === REACT_NATIVE_USED) return { type: 'sourceFile', filePath: path.join(standInsDir, 'react-native-web-used.js') };
     const standIn = routerStandIns.find(({ from, request }) => request === moduleName && context.originModulePath.endsWith(from));
     if (standIn) return { type: 'sourceFile', filePath: standIn.to };
   }

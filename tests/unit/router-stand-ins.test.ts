@@ -118,15 +118,20 @@ describe("expo-router's view of react-native", () => {
   const metroWeb = { name: 'metro', bundler: 'metro', platform: 'web', projectRoot: root, isDev: false };
 
   it("points expo-router's require of react-native at the stand-in in Metro's web build only", () => {
-    expect(transform(expoRoot, metroWeb)).toContain(`require("${path.join(standIns, 'react-native-web-used.js')}")`);
+    // A name metro.config.js resolves, not this checkout's path: Metro's transform cache is shared between checkouts.
+    expect(transform(expoRoot, metroWeb)).toContain('require("pinwright-router-stand-in/react-native-web-used")');
+    expect(transform(expoRoot, metroWeb)).not.toContain(root);
+    expect(fs.readFileSync(path.join(root, 'metro.config.js'), 'utf8')).toContain(
+      "if (moduleName === REACT_NATIVE_USED) return { type: 'sourceFile', filePath: path.join(standInsDir, 'react-native-web-used.js') }",
+    );
     // jest-expo also calls itself 'metro' but names no project root; native builds keep react-native.
-    expect(transform(expoRoot, { name: 'metro', bundler: 'metro', platform: 'web' })).not.toContain('react-native-web-used');
-    expect(transform(expoRoot, { ...metroWeb, platform: 'ios' })).not.toContain('react-native-web-used');
+    expect(transform(expoRoot, { name: 'metro', bundler: 'metro', platform: 'web' })).not.toContain('pinwright-router-stand-in');
+    expect(transform(expoRoot, { ...metroWeb, platform: 'ios' })).not.toContain('pinwright-router-stand-in');
   });
 
   it('leaves files outside expo-router alone', () => {
     const other = path.join(root, 'node_modules/react-native-safe-area-context/lib/commonjs/index.js');
     const file = fs.existsSync(other) ? other : path.join(root, 'components/shell/mark.tsx');
-    expect(transform(file, metroWeb)).not.toContain('react-native-web-used');
+    expect(transform(file, metroWeb)).not.toContain('pinwright-router-stand-in');
   });
 });
