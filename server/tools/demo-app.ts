@@ -20,9 +20,12 @@ export async function withDemoApp<T>(prefix: string, webDir: string, run: (app: 
   const { startLocalDatabase, createDatabase, dropDatabase } = await import('./database');
   const db = await startLocalDatabase(() => {});
   let server: Server | undefined;
+  let closeDatabase: (() => Promise<void>) | undefined;
   try {
     await createDatabase(db, dbName);
-    const { closeDatabase, sequelize } = await import('../db');
+    const dbModule = await import('../db');
+    closeDatabase = dbModule.closeDatabase;
+    const { sequelize } = dbModule;
     await (await import('../migrations')).migrate(sequelize);
     const { seedDemo, demoAccounts } = await import('../seed/demo');
     await seedDemo();
@@ -31,14 +34,14 @@ export async function withDemoApp<T>(prefix: string, webDir: string, run: (app: 
     server = await new Promise<Server>((resolve) => {
       const s = app.listen(0, '127.0.0.1', () => resolve(s));
     });
-    const result = await run({ baseUrl: `http://127.0.0.1:${(server.address() as AddressInfo).port}`, demoAccounts });
-    await closeDatabase();
-    return result;
+    return await run({ baseUrl: `http://127.0.0.1:${(server.address() as AddressInfo).port}`, demoAccounts });
   } finally {
     if (server) {
       server.closeAllConnections();
       await new Promise<void>((resolve) => server!.close(() => resolve()));
     }
+    // Also when `run` failed: an open pool would try to reconnect to the stopped server and crash.
+    await closeDatabase?.().catch(() => {});
     await dropDatabase(db, dbName).catch(() => {});
     await db.stop();
   }

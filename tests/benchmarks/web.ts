@@ -127,31 +127,39 @@ function lighthouse(url: string, cookie?: string): Promise<LighthouseScores> {
     child.stderr.on('data', (c) => (err += c.toString()));
     child.on('exit', (code) => {
       if (code !== 0 || !fs.existsSync(out)) return reject(new Error(`lighthouse failed (${code}): ${err.slice(-2000)}`));
-      const report = JSON.parse(fs.readFileSync(out, 'utf8'));
-      // PINWRIGHT_LH_KEEP=<dir> keeps each full report there, to read which audits cost the score.
-      const keep = process.env.PINWRIGHT_LH_KEEP;
-      if (keep) {
-        fs.mkdirSync(keep, { recursive: true });
-        fs.copyFileSync(out, path.join(keep, `lighthouse-${cookie ? 'bench' : 'sign-in'}.json`));
+      // Inside an event handler a throw would end the process before the scratch database is
+      // dropped and MariaDB stopped (withDemoApp's finally), so any failure here rejects instead.
+      try {
+        resolve(readReport(out, cookie));
+      } catch (failure) {
+        reject(failure);
       }
-      fs.rmSync(out, { force: true });
-      const audits = report.audits as Record<
-        string,
-        { score: number | null; numericValue?: number; scoreDisplayMode: string; title: string }
-      >;
-      const a11yRefs = report.categories.accessibility.auditRefs as { id: string; weight: number }[];
-      resolve({
-        performance: Math.round(report.categories.performance.score * 100),
-        accessibility: Math.round(report.categories.accessibility.score * 100),
-        fcpMs: audits['first-contentful-paint']?.numericValue ?? NaN,
-        lcpMs: audits['largest-contentful-paint']?.numericValue ?? NaN,
-        tbtMs: audits['total-blocking-time']?.numericValue ?? NaN,
-        siMs: audits['speed-index']?.numericValue ?? NaN,
-        cls: audits['cumulative-layout-shift']?.numericValue ?? NaN,
-        failing: a11yRefs.filter((r) => r.weight > 0 && audits[r.id]?.score === 0).map((r) => r.id),
-      });
     });
   });
+}
+
+/** Scores and timings from Lighthouse's JSON report at `out` (then removed). */
+function readReport(out: string, cookie?: string): LighthouseScores {
+  const report = JSON.parse(fs.readFileSync(out, 'utf8'));
+  // PINWRIGHT_LH_KEEP=<dir> keeps each full report there, to read which audits cost the score.
+  const keep = process.env.PINWRIGHT_LH_KEEP;
+  if (keep) {
+    fs.mkdirSync(keep, { recursive: true });
+    fs.copyFileSync(out, path.join(keep, `lighthouse-${cookie ? 'bench' : 'sign-in'}.json`));
+  }
+  fs.rmSync(out, { force: true });
+  const audits = report.audits as Record<string, { score: number | null; numericValue?: number; scoreDisplayMode: string; title: string }>;
+  const a11yRefs = report.categories.accessibility.auditRefs as { id: string; weight: number }[];
+  return {
+    performance: Math.round(report.categories.performance.score * 100),
+    accessibility: Math.round(report.categories.accessibility.score * 100),
+    fcpMs: audits['first-contentful-paint']?.numericValue ?? NaN,
+    lcpMs: audits['largest-contentful-paint']?.numericValue ?? NaN,
+    tbtMs: audits['total-blocking-time']?.numericValue ?? NaN,
+    siMs: audits['speed-index']?.numericValue ?? NaN,
+    cls: audits['cumulative-layout-shift']?.numericValue ?? NaN,
+    failing: a11yRefs.filter((r) => r.weight > 0 && audits[r.id]?.score === 0).map((r) => r.id),
+  };
 }
 
 export type StaticRun = { name: string; requestsPerSec: number; p50Ms: number; p99Ms: number; bytesPerResponse: number };
