@@ -1,4 +1,4 @@
-import Svg, { Path, Rect } from 'react-native-svg';
+import { Svg, Path, Rect } from '@/components/ui/svg-shapes';
 
 import type { IconProps } from '@/components/ui/icons';
 import { colors } from '@/components/theme';

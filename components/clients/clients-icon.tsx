@@ -1,4 +1,4 @@
-import Svg, { Circle, Path } from 'react-native-svg';
+import { Svg, Circle, Path } from '@/components/ui/svg-shapes';
 
 import type { IconProps } from '@/components/ui/icons';
 import { colors } from '@/components/theme';

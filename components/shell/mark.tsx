@@ -1,4 +1,4 @@
-import Svg, { Circle, Line } from 'react-native-svg';
+import { Svg, Circle, Line } from '@/components/ui/svg-shapes';
 
 import { colors } from '@/components/theme';
 

@@ -1,4 +1,4 @@
-import Svg, { Circle, Line, Path, Rect } from 'react-native-svg';
+import { Svg, Circle, Line, Path, Rect } from '@/components/ui/svg-shapes';
 
 import { colors } from '@/components/theme';
 
