@@ -19,6 +19,7 @@ const upstream = config.resolver.resolveRequest;
 const { REACT_NATIVE_USED } = require('./babel.config');
 const routerBuild = path.join('node_modules', 'expo-router', 'build') + path.sep;
 const standInsDir = path.resolve(__dirname, 'components/shell/router-stand-ins');
+const styleValidator = path.join('node_modules', 'react-native-web', 'dist', 'exports', 'StyleSheet', 'validate.js');
 const routerStandIns = require('./components/shell/router-stand-ins/table').map(([from, request, to]) => ({
   from: routerBuild + path.normalize(from),
   request,
@@ -34,6 +35,10 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
     if (moduleName === REACT_NATIVE_USED) return { type: 'sourceFile', filePath: path.join(standInsDir, 'react-native-web-used.js') };
     const standIn = routerStandIns.find(({ from, request }) => request === moduleName && context.originModulePath.endsWith(from));
     if (standIn) return { type: 'sourceFile', filePath: standIn.to };
+    // react-native-web checks styles in development only; production never calls this parser.
+    if (!context.dev && moduleName === 'postcss-value-parser' && context.originModulePath.endsWith(styleValidator)) {
+      return { type: 'sourceFile', filePath: path.join(standInsDir, 'style-validation.js') };
+    }
   }
   // Our own imports of 'expo-router' take only the names we use (see expo-router-slim.ts).
   if (

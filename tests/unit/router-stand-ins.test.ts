@@ -30,7 +30,7 @@ function files(dir: string, name = /\.js$/): string[] {
   });
 }
 
-/** Names read as `<binding>.<name>` where the file binds `require(request)` to a variable, or destructured from it. */
+/** Names read as `<binding>.<name>` where the file binds `require(request)` to a variable, destructured from it, or read straight off it. */
 function namesRead(text: string, request: string): string[] {
   const quoted = request.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&');
   const destructured = [...text.matchAll(new RegExp(`\\{([\\w\\s,]+)\\} = require\\(["']${quoted}["']\\)`, 'g'))].flatMap((m) =>
@@ -39,10 +39,32 @@ function namesRead(text: string, request: string): string[] {
   const bindings = [
     ...text.matchAll(new RegExp(`(?:const|var|let) (\\w+) = (?:__importStar\\(|__importDefault\\()?require\\(["']${quoted}["']\\)`, 'g')),
   ].map((m) => m[1]);
+  const direct = [...text.matchAll(new RegExp(`require\\(["']${quoted}["']\\)\\.(\\w+)`, 'g'))].map((m) => m[1]);
   return [
     ...destructured,
+    ...direct,
     ...bindings.flatMap((binding) => [...text.matchAll(new RegExp(`\\b${binding}\\.(\\w+)`, 'g'))].map((m) => m[1])),
   ];
+}
+
+/** Names a compiled CommonJS file exports (`exports.X =` or `Object.defineProperty(exports, "X"`). */
+function namesExported(file: string): string[] {
+  const text = fs.readFileSync(file, 'utf8');
+  const names = [...text.matchAll(/exports\.(\w+) = (?!void 0)/g), ...text.matchAll(/Object\.defineProperty\(exports, "(\w+)"/g)].map(
+    (m) => m[1],
+  );
+  return [...new Set(names)].filter((name) => name !== '__esModule');
+}
+
+/** What a file reads of `require(request)`: the names it uses, or, where it re-exports the lot (`__exportStar`), every name the request exports. */
+function namesReadOf(from: string, request: string): string[] {
+  const text = fs.readFileSync(path.join(routerBuild, from), 'utf8');
+  const quoted = request.replace(/[./]/g, '\\$&');
+  if (new RegExp(`__exportStar\\(require\\(["']${quoted}["']\\), exports\\)`).test(text)) {
+    const target = path.join(routerBuild, path.dirname(from), request);
+    return namesExported(fs.existsSync(`${target}.js`) ? `${target}.js` : path.join(target, 'index.js'));
+  }
+  return namesRead(text, request);
 }
 
 describe('stand-ins for expo-router internals', () => {
@@ -50,7 +72,7 @@ describe('stand-ins for expo-router internals', () => {
     const text = fs.readFileSync(path.join(routerBuild, from), 'utf8');
     expect(text).toMatch(new RegExp(`require\\(["']${request.replace(/[./]/g, '\\$&')}["']\\)`));
     const standIn = load(path.join(standIns, to));
-    const read = new Set(namesRead(text, request));
+    const read = new Set(namesReadOf(from, request));
     expect(read.size).toBeGreaterThan(0); // the scan finds the use at all
     expect([...read].filter((name) => !(name in standIn))).toEqual([]);
   });
@@ -75,6 +97,58 @@ describe('stand-ins for expo-router internals', () => {
     const appJson = JSON.parse(fs.readFileSync(path.join(root, 'app.json'), 'utf8'));
     expect(appJson.expo.plugins).toContainEqual(['expo-router', { sitemap: false }]);
     expect(() => load(path.join(standIns, 'sitemap.js')).Sitemap()).toThrow(/turned off/);
+  });
+});
+
+describe('parts of expo-router the app never uses', () => {
+  const ownFiles = ['app', 'components'].flatMap((dir) => files(path.join(root, dir), /\.tsx?$/));
+  const uses = (pattern: RegExp) =>
+    ownFiles.filter((file) => pattern.test(fs.readFileSync(file, 'utf8'))).map((file) => path.relative(root, file));
+
+  it('finds the app’s own files at all', () => {
+    expect(ownFiles.length).toBeGreaterThan(100);
+    expect(uses(/\bStack\.Screen\b/).length).toBeGreaterThan(0);
+  });
+
+  it('leaves out the stack toolbar and Stack.Title while no screen uses them', () => {
+    expect(uses(/\bStack\.(Toolbar|Title)\b|StackToolbar/)).toEqual([]);
+    const toolbar = load(path.join(standIns, 'stack-toolbar.js'));
+    expect(() => toolbar.StackToolbar({})).toThrow(/StackToolbar is left out .*stack-toolbar\.js/);
+    expect(() => toolbar.convertChildrenToString('x')).toThrow(/left out/);
+  });
+
+  it('answers "not a native tab trigger" while the app imports no native tabs', () => {
+    expect(uses(/native-tabs|NativeTabs/)).toEqual([]);
+    const trigger = load(path.join(standIns, 'native-tab-trigger.js'));
+    expect(trigger.isNativeTabTrigger({ type: 'div', props: {} }, '/')).toBe(false);
+    expect(() => trigger.convertTabPropsToOptions({})).toThrow(/left out/);
+  });
+
+  it('leaves out the link preview while no link has one', () => {
+    expect(uses(/\bLink\.(Preview|Menu|Trigger)\b/)).toEqual([]);
+    expect(() => load(path.join(standIns, 'href-preview.js')).HrefPreview({ href: '/' })).toThrow(/no Link\.Preview/);
+  });
+});
+
+describe('the not-found view and the style checker', () => {
+  it('shows the app’s own not-found screen where the router would show its built-in one', () => {
+    const standIn = fs.readFileSync(path.join(standIns, 'unmatched.js'), 'utf8');
+    expect(standIn).toContain("require('../../ui/not-found-screen').NotFoundScreen");
+    expect(fs.readFileSync(path.join(root, 'components/ui/not-found-screen.tsx'), 'utf8')).toContain('export function NotFoundScreen()');
+    expect(fs.readFileSync(path.join(root, 'app/+not-found.tsx'), 'utf8')).toContain('<NotFoundScreen />');
+    expect(typeof load(path.join(standIns, 'unmatched.js')).Unmatched).toBe('function');
+  });
+
+  it('leaves react-native-web’s CSS value parser out of production builds only, where its checker never runs', () => {
+    const styleSheet = fs.readFileSync(path.join(root, 'node_modules/react-native-web/dist/exports/StyleSheet/index.js'), 'utf8');
+    expect(styleSheet).toMatch(/if \(process\.env\.NODE_ENV !== 'production'\) \{\s*validate\(styleObj\);/);
+    expect(styleSheet.match(/\bvalidate\(/g)).toHaveLength(1); // called nowhere else
+    const validator = fs.readFileSync(path.join(root, 'node_modules/react-native-web/dist/exports/StyleSheet/validate.js'), 'utf8');
+    expect(validator).toContain("import valueParser from 'postcss-value-parser'");
+    expect(fs.readFileSync(path.join(root, 'metro.config.js'), 'utf8')).toContain(
+      "if (!context.dev && moduleName === 'postcss-value-parser' && context.originModulePath.endsWith(styleValidator))",
+    );
+    expect(() => load(path.join(standIns, 'style-validation.js'))('a b')).toThrow(/development only/);
   });
 });
 

@@ -8,15 +8,7 @@
  * out. The rest is react-navigation's own code. Should a header ever be
  * drawn, it throws, saying why, rather than leave a blank.
  */
-function leftOut(name) {
-  function LeftOut() {
-    throw new Error(
-      `The stack's ${name} is left out of the web build: set headerShown: false (see components/shell/router-stand-ins/stack-elements.js)`,
-    );
-  }
-  LeftOut.displayName = `LeftOut(${name})`;
-  return LeftOut;
-}
+const leftOut = require('./left-out');
 
 // Each read on first use, so this file loads without react-native (as in the unit test).
 const kept = {
@@ -27,5 +19,5 @@ const kept = {
   useHeaderHeight: () => require('expo-router/build/react-navigation/elements/Header/useHeaderHeight').useHeaderHeight,
 };
 for (const [name, load] of Object.entries(kept)) Object.defineProperty(exports, name, { enumerable: true, get: load });
-exports.Header = leftOut('Header');
-exports.HeaderBackButton = leftOut('HeaderBackButton');
+exports.Header = leftOut('Header', 'stack-elements.js', 'set headerShown: false');
+exports.HeaderBackButton = leftOut('HeaderBackButton', 'stack-elements.js', 'set headerShown: false');

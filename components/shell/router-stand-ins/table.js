@@ -10,4 +10,12 @@ module.exports = [
   ['getRoutes.js', './views/Sitemap', 'sitemap.js'],
   ['ExpoRoot.js', './screensFeatureFlags', 'screens-feature-flags.js'],
   ['react-navigation/native-stack/views/NativeStackView.js', '../../elements', 'stack-elements.js'],
+  ['head/ExpoHead.js', '../../vendor/react-helmet-async/lib', 'head-title.js'],
+  ['layouts/stack-utils/index.js', './toolbar', 'stack-toolbar.js'],
+  ['layouts/stack-utils/StackScreen.js', './toolbar', 'stack-toolbar.js'],
+  ['layouts/stack-utils/StackTitle.js', './toolbar/shared', 'stack-toolbar.js'],
+  ['layouts/withLayoutContext.js', '../native-tabs/NativeTabTrigger', 'native-tab-trigger.js'],
+  ['link/elements.js', './preview/HrefPreview', 'href-preview.js'],
+  ['getRoutes.js', './views/Unmatched', 'unmatched.js'],
+  ['views/RootUnmatched.js', './Unmatched', 'unmatched.js'],
 ];
