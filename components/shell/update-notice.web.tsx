@@ -1,7 +1,8 @@
 import { useEffect, useRef, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { Workbox } from 'workbox-window';
+import type { Workbox } from 'workbox-window';
 
+import { loadWorkbox } from '@/components/shell/load-workbox';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { useWide } from '@/components/ui/use-wide';
@@ -29,25 +30,36 @@ export function UpdateNotice() {
 
   useEffect(() => {
     if (__DEV__ || typeof navigator === 'undefined' || !('serviceWorker' in navigator)) return;
-    const wb = new Workbox(SERVICE_WORKER_URL);
-    wb.addEventListener('waiting', () => setWaiting(wb));
-    // The new worker is in charge: load the page again, all from the new version.
-    wb.addEventListener('controlling', () => {
-      if (asked.current) window.location.reload();
-    });
+    let wb: Workbox | null = null;
+    let gone = false;
     const register = () => {
-      wb.register().catch(() => {
-        /* no service worker (private window, blocked): the app still works online */
-      });
+      // workbox-window is fetched only now (see load-workbox.ts); the service worker
+      // precaches its file like every other script.
+      loadWorkbox()
+        .then(({ Workbox }) => {
+          if (gone) return;
+          const worker = new Workbox(SERVICE_WORKER_URL);
+          wb = worker;
+          worker.addEventListener('waiting', () => setWaiting(worker));
+          // The new worker is in charge: load the page again, all from the new version.
+          worker.addEventListener('controlling', () => {
+            if (asked.current) window.location.reload();
+          });
+          return worker.register();
+        })
+        .catch(() => {
+          /* no service worker (private window, blocked, file not reached): the app still works online */
+        });
     };
     const check = () => {
-      if (document.visibilityState === 'visible') wb.update().catch(() => {});
+      if (wb && document.visibilityState === 'visible') wb.update().catch(() => {});
     };
     if (document.readyState === 'complete') register();
     else window.addEventListener('load', register, { once: true });
     document.addEventListener('visibilitychange', check);
     const timer = setInterval(check, CHECK_EVERY_MS);
     return () => {
+      gone = true;
       window.removeEventListener('load', register);
       document.removeEventListener('visibilitychange', check);
       clearInterval(timer);

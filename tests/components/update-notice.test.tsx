@@ -25,7 +25,10 @@ class MockWorkbox {
     for (const listener of this.listeners.get(type) ?? []) listener({ type });
   }
 }
-jest.mock('workbox-window', () => ({ Workbox: jest.fn((url: string) => new MockWorkbox(url)) }));
+// The notice fetches workbox-window after the page has loaded (load-workbox.ts).
+jest.mock('@/components/shell/load-workbox', () => ({
+  loadWorkbox: jest.fn(async () => ({ Workbox: jest.fn((url: string) => new MockWorkbox(url)) })),
+}));
 
 const reload = jest.fn();
 beforeAll(() => {
@@ -36,13 +39,19 @@ beforeAll(() => {
 afterAll(() => {
   (globalThis as { __DEV__?: boolean }).__DEV__ = true;
 });
+/** Renders the notice and lets its deferred import of workbox-window settle. */
+async function renderNotice() {
+  render(<UpdateNotice />);
+  await act(async () => {});
+}
+
 beforeEach(() => {
   mockWorkboxes.length = 0;
   reload.mockClear();
 });
 
-it('registers /sw.js once the page has loaded and shows nothing while no update waits', () => {
-  render(<UpdateNotice />);
+it('registers /sw.js once the page has loaded, fetching workbox-window only then, and shows nothing while no update waits', async () => {
+  await renderNotice();
   expect(mockWorkboxes).toHaveLength(1);
   expect(mockWorkboxes[0].url).toBe('/sw.js');
   // jsdom's document is already "complete": registration happens at once.
@@ -50,9 +59,9 @@ it('registers /sw.js once the page has loaded and shows nothing while no update 
   expect(screen.queryByTestId('update-notice')).toBeNull();
 });
 
-it('shows the notice when a new worker waits, and Reload hands over before reloading', () => {
+it('shows the notice when a new worker waits, and Reload hands over before reloading', async () => {
   jest.useFakeTimers();
-  render(<UpdateNotice />);
+  await renderNotice();
   const wb = mockWorkboxes[0];
   // A worker taking control before the archer asked (first install) reloads nothing.
   act(() => wb.emit('controlling'));
@@ -70,9 +79,9 @@ it('shows the notice when a new worker waits, and Reload hands over before reloa
   jest.useRealTimers();
 });
 
-it('reloads anyway when the hand-over is not reported within 3 s', () => {
+it('reloads anyway when the hand-over is not reported within 3 s', async () => {
   jest.useFakeTimers();
-  render(<UpdateNotice />);
+  await renderNotice();
   act(() => mockWorkboxes[0].emit('waiting'));
   fireEvent.click(screen.getByRole('button', { name: 'Reload for the new version' }));
   act(() => jest.advanceTimersByTime(2999));
