@@ -7,6 +7,7 @@
  * check, not after it (app/(app)/_layout.tsx).
  */
 import { PRODUCT_LEAD } from '@/components/shell/product-lead';
+import type { Page } from 'playwright-core';
 import { DESKTOP, PHONE, newPage, pageErrors, screenshot, signUpInContext, stackForFile } from '../helpers/browser';
 
 const stack = stackForFile();
@@ -92,4 +93,40 @@ describe('first data of the Bench', () => {
       await context.close();
     }
   }, 60_000);
+});
+
+/** Waits up to 10 s for the tab's title, then states what it is. */
+async function expectTitle(page: Page, title: string) {
+  await page.waitForFunction((wanted) => document.title === wanted, title, { timeout: 10_000 }).catch(() => undefined);
+  expect(await page.title()).toBe(title);
+}
+
+describe('tab titles and unknown addresses', () => {
+  it('names the page in the tab, back to the earlier name on going back, and shows our own page for an address that matches none', async () => {
+    const { context, page } = await newPage(stack, PHONE);
+    try {
+      await page.goto('/sign-in');
+      await page.getByLabel('E-mail').first().waitFor({ timeout: 30_000 });
+      await expectTitle(page, 'Sign in · Pinwright');
+
+      await page.goto('/no-such-page');
+      await page.getByText('There is no page here').waitFor({ timeout: 30_000 });
+      await expectTitle(page, 'Page not found · Pinwright');
+
+      await signUpInContext(context, stack.baseUrl);
+      await page.goto('/');
+      await page.getByText('No bows on your bench yet').waitFor({ timeout: 30_000 });
+      await expectTitle(page, 'Bench · Pinwright');
+      // Within the app, not a new page load: the Bench's title must come back on going back.
+      await page.getByRole('link', { name: 'Account' }).first().click();
+      await page.getByRole('heading', { name: 'Account' }).first().waitFor({ timeout: 30_000 });
+      await expectTitle(page, 'Account · Pinwright');
+      await page.goBack();
+      await page.getByText('No bows on your bench yet').waitFor({ timeout: 30_000 });
+      await expectTitle(page, 'Bench · Pinwright');
+      expect(pageErrors(page)).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  }, 90_000);
 });
