@@ -14,8 +14,8 @@ export const SERVICE_WORKER_URL = '/sw.js';
 const CHECK_EVERY_MS = 60 * 60 * 1000;
 
 /**
- * Registers the service worker (once the page has loaded, so it never competes
- * with the first screen) and, when a new deployment's worker is installed and
+ * Registers the service worker (once the page has loaded and the browser is
+ * idle, so it never competes with the first screen) and, when a new deployment's worker is installed and
  * waiting, shows a quiet "A new version is ready — Reload" notice. Reload asks
  * the waiting worker to take over and loads the page again from it, so a page
  * never runs old and new files together. Shown on every page; nothing in
@@ -54,13 +54,24 @@ export function UpdateNotice() {
     const check = () => {
       if (wb && document.visibilityState === 'visible') wb.update().catch(() => {});
     };
-    if (document.readyState === 'complete') register();
-    else window.addEventListener('load', register, { once: true });
+    // After the load event, at the browser's first idle moment: fetching and starting
+    // the worker then never competes with the first screen being drawn.
+    let idle: number | undefined;
+    const whenIdle = () => {
+      idle =
+        typeof requestIdleCallback === 'function' ? requestIdleCallback(register, { timeout: 5000 }) : window.setTimeout(register, 1000);
+    };
+    if (document.readyState === 'complete') whenIdle();
+    else window.addEventListener('load', whenIdle, { once: true });
     document.addEventListener('visibilitychange', check);
     const timer = setInterval(check, CHECK_EVERY_MS);
     return () => {
       gone = true;
-      window.removeEventListener('load', register);
+      window.removeEventListener('load', whenIdle);
+      if (idle !== undefined) {
+        if (typeof cancelIdleCallback === 'function') cancelIdleCallback(idle);
+        else window.clearTimeout(idle);
+      }
       document.removeEventListener('visibilitychange', check);
       clearInterval(timer);
     };

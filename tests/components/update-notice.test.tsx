@@ -6,6 +6,7 @@
  */
 import { act, fireEvent, render, screen } from '@testing-library/react';
 
+import { loadWorkbox } from '@/components/shell/load-workbox';
 import { UpdateNotice } from '@/components/shell/update-notice.web';
 
 type Listener = (event?: unknown) => void;
@@ -39,28 +40,42 @@ beforeAll(() => {
 afterAll(() => {
   (globalThis as { __DEV__?: boolean }).__DEV__ = true;
 });
-/** Renders the notice and lets its deferred import of workbox-window settle. */
+/** Renders the notice, lets the browser be idle (jsdom has no requestIdleCallback: 1 s) and the import of workbox-window settle. */
 async function renderNotice() {
   render(<UpdateNotice />);
-  await act(async () => {});
+  await act(async () => {
+    jest.advanceTimersByTime(1000);
+  });
 }
 
 beforeEach(() => {
+  jest.useFakeTimers();
+  jest.mocked(loadWorkbox).mockClear();
   mockWorkboxes.length = 0;
   reload.mockClear();
 });
+afterEach(() => {
+  jest.useRealTimers();
+});
 
-it('registers /sw.js once the page has loaded, fetching workbox-window only then, and shows nothing while no update waits', async () => {
-  await renderNotice();
+it('registers /sw.js once the page has loaded and the browser is idle, fetching workbox-window only then, and shows nothing while no update waits', async () => {
+  // jsdom's document is already "complete": only the idle moment is waited for.
+  render(<UpdateNotice />);
+  await act(async () => {
+    jest.advanceTimersByTime(999);
+  });
+  expect(loadWorkbox).not.toHaveBeenCalled();
+  await act(async () => {
+    jest.advanceTimersByTime(1);
+  });
+  expect(loadWorkbox).toHaveBeenCalledTimes(1);
   expect(mockWorkboxes).toHaveLength(1);
   expect(mockWorkboxes[0].url).toBe('/sw.js');
-  // jsdom's document is already "complete": registration happens at once.
   expect(mockWorkboxes[0].register).toHaveBeenCalledTimes(1);
   expect(screen.queryByTestId('update-notice')).toBeNull();
 });
 
 it('shows the notice when a new worker waits, and Reload hands over before reloading', async () => {
-  jest.useFakeTimers();
   await renderNotice();
   const wb = mockWorkboxes[0];
   // A worker taking control before the archer asked (first install) reloads nothing.
@@ -76,11 +91,9 @@ it('shows the notice when a new worker waits, and Reload hands over before reloa
   expect(reload).not.toHaveBeenCalled();
   act(() => wb.emit('controlling'));
   expect(reload).toHaveBeenCalledTimes(1);
-  jest.useRealTimers();
 });
 
 it('reloads anyway when the hand-over is not reported within 3 s', async () => {
-  jest.useFakeTimers();
   await renderNotice();
   act(() => mockWorkboxes[0].emit('waiting'));
   fireEvent.click(screen.getByRole('button', { name: 'Reload for the new version' }));
@@ -88,5 +101,4 @@ it('reloads anyway when the hand-over is not reported within 3 s', async () => {
   expect(reload).not.toHaveBeenCalled();
   act(() => jest.advanceTimersByTime(1));
   expect(reload).toHaveBeenCalledTimes(1);
-  jest.useRealTimers();
 });
