@@ -1,6 +1,6 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { Redirect, Slot, usePathname } from 'expo-router';
-import { useEffect } from 'react';
+import { useDeferredValue, useEffect } from 'react';
 
 import { useMe } from '@/components/auth/api';
 import { fetchHomeBows, homeKeys } from '@/components/home/api';
@@ -15,7 +15,12 @@ export const unstable_settings = { initialRouteName: 'index' };
 export default function SignedInLayout() {
   const me = useMe();
   useBenchAlongsideSignInCheck(me.isPending);
-  if (me.isPending) return <LoadingView label="Opening your bench…" />;
+  // The check's answer comes as an urgent update (React Query reads its cache with
+  // useSyncExternalStore), which would draw the whole shell and page behind it in one
+  // block of the main thread. Deferred, React draws them in short slices between which
+  // the page stays responsive, and keeps "Opening…" meanwhile (React docs, useDeferredValue).
+  const answered = useDeferredValue(!me.isPending);
+  if (me.isPending || !answered) return <LoadingView label="Opening your bench…" />;
   if (me.isError) {
     return (
       <ErrorView

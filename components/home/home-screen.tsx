@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useDeferredValue, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { useMe } from '@/components/auth/api';
@@ -33,8 +33,10 @@ export function HomeScreen() {
   const me = useMe();
   const wide = useWide();
   const [carried] = useState(loadTryCarry);
+  // Bows that arrive after the page is up are drawn in slices, not one block (see app/(app)/_layout.tsx).
+  const loaded = useDeferredValue(!bows.isPending);
 
-  if (bows.isPending) {
+  if (bows.isPending || !loaded) {
     return (
       <>
         {title}
