@@ -13,7 +13,6 @@ export { useLocalSearchParams, usePathname, useRouter } from 'expo-router/build/
 export { Slot } from 'expo-router/build/views/Navigator';
 export { Stack } from 'expo-router/build/layouts/Stack';
 export { Link, Redirect } from 'expo-router/build/link/Link';
-export { ErrorBoundary } from 'expo-router/build/views/ErrorBoundary';
 export { useIsFocused } from 'expo-router/build/useIsFocused';
 export { DefaultTheme } from 'expo-router/build/react-navigation/native/theming/DefaultTheme';
 export { ThemeProvider } from 'expo-router/build/react-navigation/core/theming/ThemeProvider';

@@ -130,3 +130,34 @@ describe('tab titles and unknown addresses', () => {
     }
   }, 90_000);
 });
+
+describe('a screen whose code cannot be fetched', () => {
+  it('says so plainly, and Try again opens that screen once the signal is back', async () => {
+    // No service worker: it would keep the screens' code and answer for the network.
+    const context = await stack.browser.newContext({ viewport: PHONE, baseURL: stack.baseUrl, serviceWorkers: 'block' });
+    const page = await context.newPage();
+    const problems: string[] = [];
+    page.on('pageerror', (err) => problems.push(String(err)));
+    try {
+      await signUpInContext(context, stack.baseUrl);
+      let signal = false;
+      await page.route(/\/_expo\/static\/js\/web\/workshop-screens-[0-9a-f]{32}\.js$/, (route) =>
+        signal ? route.continue() : route.abort('internetdisconnected'),
+      );
+      await page.goto('/');
+      await page.getByText('No bows on your bench yet').waitFor({ timeout: 30_000 });
+      await page.getByRole('link', { name: 'Account' }).first().click();
+      await page.getByText('This page could not be opened').waitFor({ timeout: 30_000 });
+      expect(await page.getByText('Pinwright could not fetch this page. Check your signal, then try again.').isVisible()).toBe(true);
+      await screenshot(page, 'screen-code-unreachable');
+      signal = true;
+      await page.getByRole('button', { name: 'Try again' }).click();
+      await page.getByRole('heading', { name: 'Account' }).first().waitFor({ timeout: 30_000 });
+      expect(new URL(page.url()).pathname).toBe('/account');
+      expect(await page.getByText('This page could not be opened').count()).toBe(0);
+      expect(problems).toEqual([]);
+    } finally {
+      await context.close();
+    }
+  }, 90_000);
+});
