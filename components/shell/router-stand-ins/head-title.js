@@ -2,8 +2,8 @@
  * Stands in for the document-head library that expo-router bundles, where its
  * Head component (expo-router/head) imports it (metro.config.js). Pinwright's
  * only use of Head is the browser tab's title (components/ui/screen-title.tsx),
- * so this sets `document.title` and nothing else, in about 40 lines instead of
- * the library's ~12 KB (minified). Like the library, the Head mounted last wins, and when
+ * so this sets `document.title` and nothing else, in a few dozen lines instead
+ * of the library's ~12 KB (minified). Like the library, the Head mounted last wins, and when
  * it goes the one before it shows again. Anything but a <title> throws, naming
  * this file, rather than be dropped without a word.
  */
