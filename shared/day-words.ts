@@ -5,9 +5,8 @@
  * Written out by hand rather than with Intl.DateTimeFormat: a page's first
  * Intl date formatter loads the locale's data, about 100 ms on a phone-speed
  * CPU (Chromium at 4× CPU throttling), and the Bench's bow cards were where it
- * happened, inside their first render. tests/shared/day-words.test.ts checks
- * this against Intl's en-GB output day by day. (The server gains too: a new
- * formatter per call was about a tenth of the bow list's time under load.)
+ * happened, inside their first render. tests/unit/day-words.test.ts checks
+ * this against Intl's en-GB output day by day.
  *
  * Example: dayWordsOf(new Date('2026-12-01T10:00Z')) → '1 Dec 2026'; calendarDayWords('2026-10-24') → '24 Oct 2026'
  */
