@@ -18,8 +18,9 @@ const CHECK_EVERY_MS = 60 * 60 * 1000;
  * idle, so it never competes with the first screen) and, when a new
  * deployment's worker is installed and waiting, shows a quiet "A new version
  * is ready — Reload" notice. Reload asks the waiting worker to take over and
- * loads the page again from it, so a page never runs old and new files together. Shown on every page; nothing in
- * development (the Expo dev server has no service worker).
+ * loads the page again from it, so a page never runs old and new files
+ * together. Shown on every page; nothing in development (the Expo dev server
+ * has no service worker).
  * Example: `<UpdateNotice />` once, beside the router's stack.
  */
 export function UpdateNotice() {
