@@ -1,3 +1,4 @@
+import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useRef, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { Workbox } from 'workbox-window';
@@ -10,12 +11,21 @@ import { colors, layout, radii, space } from '@/components/theme';
 
 /** The service worker written at export time (server/tools/web-pwa.ts). */
 export const SERVICE_WORKER_URL = '/sw.js';
+/**
+ * How long the page's own requests (the sign-in check, the bow list: React
+ * Query's fetches and saves) must have been settled before the worker is
+ * fetched and started: its precache then does not share a weak signal with them.
+ */
+const QUIET_MS = 1000;
+/** Started anyway after this long, should the page never go quiet (a hung request). */
+const AT_LATEST_MS = 15_000;
 /** How often an open page asks whether a new version was deployed. */
 const CHECK_EVERY_MS = 60 * 60 * 1000;
 
 /**
- * Registers the service worker (once the page has loaded and the browser is
- * idle, so it never competes with the first screen) and, when a new
+ * Registers the service worker (once the page has loaded, its own requests
+ * have settled and the browser is idle, so it never competes with the first
+ * screen or its data) and, when a new
  * deployment's worker is installed and waiting, shows a quiet "A new version
  * is ready — Reload" notice. Reload asks the waiting worker to take over and
  * loads the page again from it, so a page never runs old and new files
@@ -28,6 +38,7 @@ export function UpdateNotice() {
   const [reloading, setReloading] = useState(false);
   const asked = useRef(false);
   const wide = useWide();
+  const queryClient = useQueryClient();
 
   useEffect(() => {
     if (__DEV__ || typeof navigator === 'undefined' || !('serviceWorker' in navigator)) return;
@@ -55,20 +66,41 @@ export function UpdateNotice() {
     const check = () => {
       if (wb && document.visibilityState === 'visible') wb.update().catch(() => {});
     };
-    // After the load event, at the browser's first idle moment: fetching and starting
-    // the worker then never competes with the first screen being drawn.
+    // After the load event, once the page's own requests have been settled for
+    // QUIET_MS, at the browser's next idle moment.
     let idle: number | undefined;
-    const whenIdle = () => {
+    let quiet: ReturnType<typeof setTimeout> | undefined;
+    let latest: ReturnType<typeof setTimeout> | undefined;
+    const unwatch: (() => void)[] = [];
+    let started = false;
+    const start = () => {
+      if (started) return;
+      started = true;
+      unwatch.forEach((stop) => stop());
+      clearTimeout(quiet);
+      clearTimeout(latest);
       idle =
         typeof requestIdleCallback === 'function' ? requestIdleCallback(register, { timeout: 5000 }) : window.setTimeout(register, 1000);
     };
-    if (document.readyState === 'complete') whenIdle();
-    else window.addEventListener('load', whenIdle, { once: true });
+    const settle = () => {
+      clearTimeout(quiet);
+      if (queryClient.isFetching() + queryClient.isMutating() === 0) quiet = setTimeout(start, QUIET_MS);
+    };
+    const watch = () => {
+      unwatch.push(queryClient.getQueryCache().subscribe(settle), queryClient.getMutationCache().subscribe(settle));
+      latest = setTimeout(start, AT_LATEST_MS);
+      settle();
+    };
+    if (document.readyState === 'complete') watch();
+    else window.addEventListener('load', watch, { once: true });
     document.addEventListener('visibilitychange', check);
     const timer = setInterval(check, CHECK_EVERY_MS);
     return () => {
       gone = true;
-      window.removeEventListener('load', whenIdle);
+      window.removeEventListener('load', watch);
+      unwatch.forEach((stop) => stop());
+      clearTimeout(quiet);
+      clearTimeout(latest);
       if (idle !== undefined) {
         if (typeof cancelIdleCallback === 'function') cancelIdleCallback(idle);
         else window.clearTimeout(idle);
@@ -76,7 +108,7 @@ export function UpdateNotice() {
       document.removeEventListener('visibilitychange', check);
       clearInterval(timer);
     };
-  }, []);
+  }, [queryClient]);
 
   if (!waiting) return null;
   const reload = () => {

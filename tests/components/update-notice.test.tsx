@@ -4,6 +4,7 @@
  * and reloads once it has. workbox-window is replaced by a fake that lets the
  * test play the browser's part.
  */
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { act, fireEvent, render, screen } from '@testing-library/react';
 
 import { loadWorkbox } from '@/components/shell/load-workbox';
@@ -40,11 +41,21 @@ beforeAll(() => {
 afterAll(() => {
   (globalThis as { __DEV__?: boolean }).__DEV__ = true;
 });
-/** Renders the notice, lets the browser be idle (jsdom has no requestIdleCallback: 1 s) and the import of workbox-window settle. */
+/** The notice inside a query client, as in the app (it waits for the page's own requests). */
+function renderWithQueries(queryClient = new QueryClient()) {
+  render(
+    <QueryClientProvider client={queryClient}>
+      <UpdateNotice />
+    </QueryClientProvider>,
+  );
+  return queryClient;
+}
+
+/** Renders the notice, lets the page be quiet (1 s) and the browser idle (jsdom has no requestIdleCallback: 1 s), and the import settle. */
 async function renderNotice() {
-  render(<UpdateNotice />);
+  renderWithQueries();
   await act(async () => {
-    jest.advanceTimersByTime(1000);
+    jest.advanceTimersByTime(2000);
   });
 }
 
@@ -58,11 +69,11 @@ afterEach(() => {
   jest.useRealTimers();
 });
 
-it('registers /sw.js once the page has loaded and the browser is idle, fetching workbox-window only then, and shows nothing while no update waits', async () => {
-  // jsdom's document is already "complete": only the idle moment is waited for.
-  render(<UpdateNotice />);
+it('registers /sw.js once the page has loaded, its requests are settled and the browser is idle, fetching workbox-window only then', async () => {
+  // jsdom's document is already "complete": 1 s of quiet, then the idle moment (1 s without requestIdleCallback).
+  renderWithQueries();
   await act(async () => {
-    jest.advanceTimersByTime(999);
+    jest.advanceTimersByTime(1999);
   });
   expect(loadWorkbox).not.toHaveBeenCalled();
   await act(async () => {
@@ -73,6 +84,42 @@ it('registers /sw.js once the page has loaded and the browser is idle, fetching 
   expect(mockWorkboxes[0].url).toBe('/sw.js');
   expect(mockWorkboxes[0].register).toHaveBeenCalledTimes(1);
   expect(screen.queryByTestId('update-notice')).toBeNull();
+});
+
+it('waits while the page’s own requests are out, so the worker’s downloads do not share a weak signal with them', async () => {
+  const queryClient = new QueryClient();
+  let answer: (value: string) => void = () => {};
+  void queryClient.fetchQuery({ queryKey: ['me'], queryFn: () => new Promise<string>((resolve) => (answer = resolve)) });
+  renderWithQueries(queryClient);
+  await act(async () => {
+    jest.advanceTimersByTime(10_000);
+  });
+  expect(loadWorkbox).not.toHaveBeenCalled();
+  await act(async () => {
+    answer('archer');
+  });
+  await act(async () => {
+    jest.advanceTimersByTime(1999);
+  });
+  expect(loadWorkbox).not.toHaveBeenCalled();
+  await act(async () => {
+    jest.advanceTimersByTime(1);
+  });
+  expect(loadWorkbox).toHaveBeenCalledTimes(1);
+});
+
+it('starts the worker after 15 s even if a request never ends', async () => {
+  const queryClient = new QueryClient();
+  void queryClient.fetchQuery({ queryKey: ['hung'], queryFn: () => new Promise<string>(() => {}) });
+  renderWithQueries(queryClient);
+  await act(async () => {
+    jest.advanceTimersByTime(15_999);
+  });
+  expect(loadWorkbox).not.toHaveBeenCalled();
+  await act(async () => {
+    jest.advanceTimersByTime(1);
+  });
+  expect(loadWorkbox).toHaveBeenCalledTimes(1);
 });
 
 it('shows the notice when a new worker waits, and Reload hands over before reloading', async () => {
