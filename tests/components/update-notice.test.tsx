@@ -41,6 +41,13 @@ beforeAll(() => {
 afterAll(() => {
   (globalThis as { __DEV__?: boolean }).__DEV__ = true;
 });
+/** Lets `ms` of fake time pass, and the promises it sets off settle. */
+async function pass(ms: number) {
+  await act(async () => {
+    jest.advanceTimersByTime(ms);
+  });
+}
+
 /** The notice inside a query client, as in the app (it waits for the page's own requests). */
 function renderWithQueries(queryClient = new QueryClient()) {
   render(
@@ -54,9 +61,7 @@ function renderWithQueries(queryClient = new QueryClient()) {
 /** Renders the notice, lets the page be quiet (1 s) and the browser idle (jsdom has no requestIdleCallback: 1 s), and the import settle. */
 async function renderNotice() {
   renderWithQueries();
-  await act(async () => {
-    jest.advanceTimersByTime(2000);
-  });
+  await pass(2000);
 }
 
 beforeEach(() => {
@@ -72,13 +77,9 @@ afterEach(() => {
 it('registers /sw.js once the page has loaded, its requests are settled and the browser is idle, fetching workbox-window only then', async () => {
   // jsdom's document is already "complete": 1 s of quiet, then the idle moment (1 s without requestIdleCallback).
   renderWithQueries();
-  await act(async () => {
-    jest.advanceTimersByTime(1999);
-  });
+  await pass(1999);
   expect(loadWorkbox).not.toHaveBeenCalled();
-  await act(async () => {
-    jest.advanceTimersByTime(1);
-  });
+  await pass(1);
   expect(loadWorkbox).toHaveBeenCalledTimes(1);
   expect(mockWorkboxes).toHaveLength(1);
   expect(mockWorkboxes[0].url).toBe('/sw.js');
@@ -91,34 +92,25 @@ it('waits while the page’s own requests are out, so the worker’s downloads d
   let answer: (value: string) => void = () => {};
   void queryClient.fetchQuery({ queryKey: ['me'], queryFn: () => new Promise<string>((resolve) => (answer = resolve)) });
   renderWithQueries(queryClient);
-  await act(async () => {
-    jest.advanceTimersByTime(10_000);
-  });
+  await pass(10_000);
   expect(loadWorkbox).not.toHaveBeenCalled();
   await act(async () => {
     answer('archer');
   });
-  await act(async () => {
-    jest.advanceTimersByTime(1999);
-  });
+  await pass(1999);
   expect(loadWorkbox).not.toHaveBeenCalled();
-  await act(async () => {
-    jest.advanceTimersByTime(1);
-  });
+  await pass(1);
   expect(loadWorkbox).toHaveBeenCalledTimes(1);
 });
 
 it('starts the worker after 15 s even if a request never ends', async () => {
+  // 15 s cap, then the idle moment (1 s in jsdom, which has no requestIdleCallback).
   const queryClient = new QueryClient();
   void queryClient.fetchQuery({ queryKey: ['hung'], queryFn: () => new Promise<string>(() => {}) });
   renderWithQueries(queryClient);
-  await act(async () => {
-    jest.advanceTimersByTime(15_999);
-  });
+  await pass(15_999);
   expect(loadWorkbox).not.toHaveBeenCalled();
-  await act(async () => {
-    jest.advanceTimersByTime(1);
-  });
+  await pass(1);
   expect(loadWorkbox).toHaveBeenCalledTimes(1);
 });
 
