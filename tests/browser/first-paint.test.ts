@@ -131,10 +131,13 @@ describe('tab titles and unknown addresses', () => {
   }, 90_000);
 });
 
-describe('a screen whose code cannot be fetched', () => {
+describe.each([
+  ['phone', PHONE],
+  ['desktop', DESKTOP],
+])('a screen whose code cannot be fetched (%s)', (label, size) => {
   it('says so plainly, and Try again opens that screen once the signal is back', async () => {
     // No service worker: it would keep the screens' code and answer for the network.
-    const context = await stack.browser.newContext({ viewport: PHONE, baseURL: stack.baseUrl, serviceWorkers: 'block' });
+    const context = await stack.browser.newContext({ viewport: size, baseURL: stack.baseUrl, serviceWorkers: 'block' });
     const page = await context.newPage();
     const problems: string[] = [];
     page.on('pageerror', (err) => problems.push(String(err)));
@@ -149,7 +152,7 @@ describe('a screen whose code cannot be fetched', () => {
       await page.getByRole('link', { name: 'Account' }).first().click();
       await page.getByText('This page could not be opened').waitFor({ timeout: 30_000 });
       expect(await page.getByText('Pinwright could not fetch this page. Check your signal, then try again.').isVisible()).toBe(true);
-      await screenshot(page, 'screen-code-unreachable');
+      await screenshot(page, `screen-code-unreachable-${label}`);
       signal = true;
       await page.getByRole('button', { name: 'Try again' }).click();
       await page.getByRole('heading', { name: 'Account' }).first().waitFor({ timeout: 30_000 });
