@@ -18,4 +18,5 @@ module.exports = [
   ['link/elements.js', './preview/HrefPreview', 'href-preview.js'],
   ['getRoutes.js', './views/Unmatched', 'unmatched.js'],
   ['views/RootUnmatched.js', './Unmatched', 'unmatched.js'],
+  ['link/linking.js', '../fork/getStateFromPath', 'route-lookup-memo.js'],
 ];
