@@ -43,12 +43,17 @@ export default function SignedInLayout() {
  * On a cold load of the Bench, its bow list is asked for alongside the sign-in
  * check instead of after it: one round trip before the Bench shows, not two.
  * Signed out, that one request is refused (401) and the page moves to sign-in.
+ * It is asked for in a task of its own, a moment after the layout mounts: the
+ * bow list's schemas are built on first use, and together with the effects of
+ * the first commit that made one long task of the main thread.
  */
 function useBenchAlongsideSignInCheck(checking: boolean) {
   const pathname = usePathname();
   const queryClient = useQueryClient();
   useEffect(() => {
-    if (checking && pathname === '/') void queryClient.prefetchQuery({ queryKey: homeKeys.bows, queryFn: fetchHomeBows });
+    if (!(checking && pathname === '/')) return;
+    const later = setTimeout(() => void queryClient.prefetchQuery({ queryKey: homeKeys.bows, queryFn: fetchHomeBows }));
+    return () => clearTimeout(later);
     // Only when the layout first mounts: later visits to the Bench fetch as usual.
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);

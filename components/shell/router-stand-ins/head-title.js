@@ -14,7 +14,9 @@ let mounts = 0;
 
 function showNewest() {
   if (typeof document === 'undefined' || shown.length === 0) return;
-  document.title = shown.reduce((a, b) => (b.order > a.order ? b : a)).title;
+  const title = shown.reduce((a, b) => (b.order > a.order ? b : a)).title;
+  // Setting the same title again still tells the browser of a change; skip it.
+  if (document.title !== title) document.title = title;
 }
 
 function titleOf(children) {
