@@ -15,7 +15,7 @@ let mounts = 0;
 function showNewest() {
   if (typeof document === 'undefined' || shown.length === 0) return;
   const title = shown.reduce((a, b) => (b.order > a.order ? b : a)).title;
-  // Setting the same title again still tells the browser of a change; skip it.
+  // The setter replaces the <title>'s text even when it is the same (HTML standard, document.title), so skip that.
   if (document.title !== title) document.title = title;
 }
 

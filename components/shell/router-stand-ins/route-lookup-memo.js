@@ -7,7 +7,7 @@
  * which it tries routes depends on the segments on screen. So every call rebuilds,
  * checks and sorts the pattern of every route in the app. On a cold load the very
  * same lookup (same path, same route table, same segments) runs three or four
- * times, 1–15 ms each at 4× CPU slow-down, inside React's commits. The answer
+ * times, 1–15 ms each at 4× CPU slow-down, in the router's renders and effects. The answer
  * depends only on those three inputs, so this keeps the last KEEP answers under
  * all three and hands out a fresh deep copy of one each time: callers get a new
  * state object, as before, and one that changes it changes nothing kept.
