@@ -48,7 +48,7 @@ const routeTree = getRoutes(appContext(), {
 // As app.json sets it: no sitemap; the not-found route is kept.
 const table = getNavigationConfig(routeTree, true, { sitemap: false, notFound: true });
 
-/** Every page's address pattern, e.g. '/bows/[id]/tape', with groups left out as in a URL. */
+/** Every page's address pattern, e.g. '/sight-ins/[id]/tape', with groups left out as in a URL. */
 const patterns = appFiles()
   .filter((key) => !/(^|\/)(_layout|\+html|\+not-found)\.tsx$/.test(key))
   .map((key) =>
@@ -58,7 +58,7 @@ const patterns = appFiles()
       .replace(/^$/, '/'),
   );
 
-/** The segments a page puts on screen, e.g. ['(app)', 'bows', '[id]', 'tape']. */
+/** The segments a page puts on screen, e.g. ['(app)', 'sight-ins', '[id]', 'tape']. */
 const segmentSets = [
   [],
   ...appFiles()
@@ -141,8 +141,10 @@ describe('the memo around the router’s path-to-state lookup', () => {
       expect(spy).toHaveBeenCalledTimes(1);
 
       const broken = { screens: { home: { path: 'home', surplus: true } } };
+      spy.mockClear();
       expect(() => memo.getStateFromPath('/home', broken)).toThrow();
       expect(() => memo.getStateFromPath('/home', broken)).toThrow();
+      expect(spy).toHaveBeenCalledTimes(2); // the failure was not kept: the router was asked again
     } finally {
       spy.mockRestore();
     }
