@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { nameSchema, textSchema } from './common';
-import { personSchema } from './setup-measures';
+import { nameSchema, personSchema, textSchema } from './common';
 import { defaultToleranceGr } from './arrow-set-stats';
 
 /**

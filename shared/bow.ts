@@ -1,13 +1,11 @@
 import { z } from 'zod';
 import { distanceUnitSchema, measureSchema, nameSchema, optionalMeasureSchema, textSchema, timestampsSchema } from './common';
-import { buildSchema } from './build';
-import { sightInListItemSchema } from './sight-in';
-import { tapeSchema } from './tape';
 import { bowConfirmSchema } from './staleness-api';
 
 /**
  * Bow schemas: the create/update bodies (used by the bow form as its resolver
- * and by the server's validate()), and the shapes the API returns.
+ * and by the server's validate()), and the shapes the API returns (one bow's
+ * full record, with its builds, sight-ins and tapes, is in ./bow-detail).
  * Every length is in millimetres (convert inches at the form's edge:
  * 1 in = 25.4 mm exactly, international yard and pound, 1959).
  *
@@ -123,19 +121,6 @@ export const bowSummarySchema = bowSchema.extend({ readiness: bowReadinessSchema
 /** GET /api/bows → { bows: BowSummary[] } */
 export const bowListResponseSchema = z.object({ bows: z.array(bowSummarySchema) });
 
-/**
- * GET /api/bows/:id → { bow: BowDetail }: the bow with its builds, sight-ins
- * (newest first, with fit summaries) and tapes, and its owner's name (so a
- * technician it is shared with sees whose records they are).
- */
-export const bowDetailSchema = bowSummarySchema.extend({
-  /** The archer who owns the bow (User.name of `userId`). */
-  ownerName: z.string(),
-  builds: z.array(buildSchema),
-  sightIns: z.array(sightInListItemSchema),
-  tapes: z.array(tapeSchema),
-});
-
 export type Hand = z.infer<typeof handSchema>;
 export type SightKind = z.infer<typeof sightKindSchema>;
 export type ScaleDirection = z.infer<typeof scaleDirectionSchema>;
@@ -146,4 +131,3 @@ export type BowUpdate = z.infer<typeof bowUpdateSchema>;
 export type Bow = z.infer<typeof bowSchema>;
 export type BowReadiness = z.infer<typeof bowReadinessSchema>;
 export type BowSummary = z.infer<typeof bowSummarySchema>;
-export type BowDetail = z.infer<typeof bowDetailSchema>;

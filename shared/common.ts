@@ -110,4 +110,7 @@ export function refIdSchema(what: string) {
 /** Timestamps as the API sends them (ISO 8601 strings). */
 export const timestampsSchema = z.object({ createdAt: z.string(), updatedAt: z.string() });
 
+/** Who did something, as the API names them: a user's id and name. */
+export const personSchema = z.object({ id: z.number().int(), name: z.string() });
+
 export type IdParam = z.infer<typeof idParamSchema>;

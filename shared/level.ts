@@ -1,6 +1,7 @@
 import { z } from 'zod';
-import { distanceUnitSchema, isoDateSchema, maxRecordId, textSchema } from './common';
-import { bowChangeKinds, levelResults, levelStates, levelStepKeys, levelStepNames, type LevelStepKey } from './level-status';
+import { distanceUnitSchema, isoDateSchema, maxRecordId, personSchema, textSchema } from './common';
+import { levelResults, levelStepKeys, levelStepNames, type LevelStepKey } from './level-status';
+import { bowChangeKindSchema, bowChangeSchema, levelPlaceSchema, levelSummarySchema } from './level-summary';
 
 /**
  * Level-check schemas: starting and working a check step by step, logging a
@@ -15,9 +16,9 @@ import { bowChangeKinds, levelResults, levelStates, levelStepKeys, levelStepName
 
 export { bowChangeKinds, bowChangeLabels, levelStepKeys, levelStepNames, levelStates } from './level-status';
 export type { BowChangeKind, LevelResult, LevelState, LevelStepKey } from './level-status';
-
-/** Where a check was done: at the home bench (vise, levels, plumb line) or at the range. */
-export const levelPlaceSchema = z.enum(['bench', 'range'], { errorMap: () => ({ message: 'Choose bench or range' }) });
+// The Bench's cards need only these; they live in a module of their own so the Bench does not build every check schema.
+export { bowChangeKindSchema, bowChangeSchema, levelPlaceSchema, levelSummarySchema } from './level-summary';
+export type { BowChange, LevelPlace, LevelSummary } from './level-summary';
 
 export const levelStepKeySchema = z.enum(levelStepKeys, {
   errorMap: () => ({ message: 'Choose one of the steps: set-up, first axis, second axis, third axis or range' }),
@@ -127,13 +128,6 @@ export const stepPhotoParamsSchema = z.object({
   step: levelStepKeySchema,
 });
 
-export const bowChangeKindSchema = z.enum(bowChangeKinds, {
-  errorMap: () => ({
-    message:
-      'Choose what changed: string, cables, sight moved, sight re-mounted, rest, peep, arrows, nock height, D-loop, cams, sight radius or other',
-  }),
-});
-
 /** Body of POST /api/bows/:bowId/changes. `changedAt` is a full ISO 8601 timestamp with zone. */
 export const bowChangeInputSchema = z.object({
   kind: bowChangeKindSchema,
@@ -195,8 +189,6 @@ export const levelStepSchema = z.object({
   updatedAt: z.string(),
 });
 
-const personSchema = z.object({ id: z.number().int(), name: z.string() });
-
 export const levelCheckSchema = z.object({
   id: z.number().int(),
   bowId: z.number().int(),
@@ -208,39 +200,6 @@ export const levelCheckSchema = z.object({
   note: z.string(),
   /** In the order of levelStepKeys. */
   steps: z.array(levelStepSchema),
-});
-
-export const bowChangeSchema = z.object({
-  id: z.number().int(),
-  bowId: z.number().int(),
-  kind: bowChangeKindSchema,
-  changedAt: z.string(),
-  note: z.string(),
-  loggedBy: personSchema,
-  createdAt: z.string(),
-});
-
-/** A bow's level state and why: GET /api/bows/:bowId/level, and `readiness.level` in the bows responses. */
-export const levelSummarySchema = z.object({
-  state: z.enum(levelStates),
-  reason: z.string(),
-  /** The completed check the state rests on. */
-  lastCheck: z
-    .object({
-      id: z.number().int(),
-      place: levelPlaceSchema,
-      startedAt: z.string(),
-      completedAt: z.string(),
-      performedBy: personSchema,
-    })
-    .nullable(),
-  /** Changes logged after that check (all changes when never checked), oldest first. */
-  changesSince: z.array(bowChangeSchema),
-  /** An unfinished check to resume, if any. */
-  openCheckId: z.number().int().nullable(),
-  ageDays: z.number().int().nullable(),
-  maxAgeDays: z.number().int(),
-  rangeConfirmed: z.boolean(),
 });
 
 export const checkResponseSchema = z.object({ check: levelCheckSchema });
@@ -285,7 +244,6 @@ export const tripReadinessSchema = z.object({
   generatedAt: z.string(),
 });
 
-export type LevelPlace = z.infer<typeof levelPlaceSchema>;
 export type ReadingUnit = z.infer<typeof readingUnitSchema>;
 export type CheckStart = z.infer<typeof checkStartSchema>;
 export type StepUpdate = z.infer<typeof stepUpdateSchema>;
@@ -296,8 +254,6 @@ export type BowChangeFormValues = z.input<typeof bowChangeFormSchema>;
 export type Photo = z.infer<typeof photoSchema>;
 export type LevelStep = z.infer<typeof levelStepSchema>;
 export type LevelCheck = z.infer<typeof levelCheckSchema>;
-export type BowChange = z.infer<typeof bowChangeSchema>;
-export type LevelSummary = z.infer<typeof levelSummarySchema>;
 export type TripReadiness = z.infer<typeof tripReadinessSchema>;
 
 /** Position of a step in the check (0-based). */

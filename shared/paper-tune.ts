@@ -1,7 +1,6 @@
 import { z } from 'zod';
-import { distanceUnitSchema, isoDateSchema, measureSchema, textSchema } from './common';
+import { distanceUnitSchema, isoDateSchema, measureSchema, personSchema, textSchema } from './common';
 import { tearValues } from './paper-tune-rules';
-import { personSchema } from './setup-measures';
 
 /**
  * Paper-tune runs: a distance to the paper, then one entry per shot (the tear

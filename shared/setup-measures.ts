@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDateSchema, textSchema } from './common';
+import { isoDateSchema, personSchema, textSchema } from './common';
 
 /**
  * A bow's tuning set-up as a history of dated entries: centre shot, nock
@@ -231,8 +231,6 @@ export const setupEntryInputSchema = z
     if (spec.form === 'length') return { ...entry, choice: null };
     return entry;
   });
-
-export const personSchema = z.object({ id: z.number().int(), name: z.string() });
 
 /** An entry as the API returns it. */
 export const setupEntrySchema = z.object({

@@ -1,6 +1,5 @@
 import { z } from 'zod';
-import { textSchema } from './common';
-import { personSchema } from './setup-measures';
+import { personSchema, textSchema } from './common';
 
 /**
  * What the API sends about the staleness rule (shared/staleness.ts): the

@@ -23,7 +23,7 @@ import { Text } from '@/components/ui/text';
 import { colors, radii, space } from '@/components/theme';
 import { arrowSetInputSchema, arrowStatusNames, type Arrow, type ArrowSet, type SpinKind } from '@/shared/arrow-set';
 import { arrowSetStats, buildWeightCheck, defaultToleranceGr } from '@/shared/arrow-set-stats';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import { fromStored, shownUnit, type UnitsLike } from '@/shared/units';
 
 /** Decimals for arrow weights: 0.1 gr, 0.01 g (a grain is about 0.065 g). */

@@ -2,16 +2,8 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 
 import { apiFetch, type ApiError } from '@/components/api/client';
-import {
-  bowDetailSchema,
-  bowListResponseSchema,
-  bowSchema,
-  type Bow,
-  type BowDetail,
-  type BowInput,
-  type BowSummary,
-  type BowUpdate,
-} from '@/shared/bow';
+import { bowListResponseSchema, bowSchema, type Bow, type BowInput, type BowSummary, type BowUpdate } from '@/shared/bow';
+import { bowDetailSchema, type BowDetail } from '@/shared/bow-detail';
 
 /**
  * Query keys for bows. Every bow-related key starts with 'bows', so

@@ -18,7 +18,7 @@ import { ReadinessBadge } from '@/components/ui/readiness-badge';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { space } from '@/components/theme';
 import type { LengthUnit } from '@/shared/auth';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import type { Build } from '@/shared/build';
 import type { SightInListItem } from '@/shared/sight-in';
 import type { Tape } from '@/shared/tape';

@@ -27,7 +27,7 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { Text } from '@/components/ui/text';
 import { colors, radii, space } from '@/components/theme';
 import type { LengthUnit } from '@/shared/auth';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 
 /** Window width (px) from which the bow's lists and the selected record sit side by side. */
 export const bowSplitFrom = 900;

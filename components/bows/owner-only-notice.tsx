@@ -1,6 +1,6 @@
 import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 
 export interface OwnerOnlyNoticeProps {
   bow: Pick<BowDetail, 'id' | 'ownerName'>;

@@ -1,7 +1,7 @@
 import type { Readiness } from '@/components/ui/readiness-badge';
 import type { BowReadiness } from '@/shared/bow';
 import { calendarDayWords } from '@/shared/day-words';
-import { levelSummarySchema, type LevelSummary } from '@/shared/level';
+import { levelSummarySchema, type LevelSummary } from '@/shared/level-summary';
 import type { SightInFitSummary } from '@/shared/sight-in';
 
 /** A readiness state with the short word a badge shows and one plain sentence. */

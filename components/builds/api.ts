@@ -3,7 +3,7 @@ import { z } from 'zod';
 
 import { apiFetch, type ApiError } from '@/components/api/client';
 import { bowKeys, fetchBow } from '@/components/bows/api';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import { buildSchema, type Build, type BuildInput } from '@/shared/build';
 
 /** Query keys for arrow builds. */

@@ -25,7 +25,7 @@ import { SegmentedControl } from '@/components/ui/segmented-control';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { space } from '@/components/theme';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import { airInUnits, messageInUnits, shownUnit, storedToText } from '@/shared/units';
 
 /** Window width (px) from which the chart and the marks table sit side by side. */

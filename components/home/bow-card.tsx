@@ -7,7 +7,7 @@ import { ReadinessBadge } from '@/components/ui/readiness-badge';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/theme';
 import type { BowSummary } from '@/shared/bow';
-import { levelSummarySchema } from '@/shared/level';
+import { levelSummarySchema } from '@/shared/level-summary';
 
 const count = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 

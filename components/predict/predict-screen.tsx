@@ -30,7 +30,7 @@ import { useWide } from '@/components/ui/use-wide';
 import { space } from '@/components/theme';
 import type { LengthUnit } from '@/shared/auth';
 import { formatQuantity, shownUnit, type UnitsLike } from '@/shared/units';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import type { BuildInput } from '@/shared/build';
 import { sightInName, sightInNameParts } from '@/shared/sight-in-name';
 

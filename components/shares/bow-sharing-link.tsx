@@ -4,7 +4,7 @@ import { useBowRole } from '@/components/bows/use-bow-role';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { space } from '@/components/theme';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 
 export interface BowSharingLinkProps {
   /** The bow: its id, owner (userId) and owner's name. */

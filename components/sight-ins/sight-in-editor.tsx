@@ -36,7 +36,7 @@ import { SectionHeading } from '@/components/ui/section-heading';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/theme';
 import type { DistanceUnit } from '@/shared/auth';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import { checkMarks, type MarkCheckResult, type MarkProblem } from '@/shared/mark-checks';
 import type { SightIn, SightInInput } from '@/shared/sight-in';
 import { formatQuantity, shownUnit, storedToText } from '@/shared/units';

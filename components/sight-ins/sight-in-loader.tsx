@@ -9,7 +9,7 @@ import { LoadingView } from '@/components/ui/loading-view';
 import { NotFoundScreen } from '@/components/ui/not-found-screen';
 import { ScreenTitle } from '@/components/ui/screen-title';
 import type { User } from '@/shared/auth';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import type { SightIn } from '@/shared/sight-in';
 
 /** What a sight-in's screens draw from, once everything has loaded. */

@@ -31,7 +31,7 @@ import { isFitInputError } from '@/math/fit/fit-input-error';
 import type { SightModel } from '@/math/flight/sight-model';
 import { tapeLayout, type TapeLayout as MathTapeLayout } from '@/math/tape/tape-layout';
 import type { DistanceUnit, LengthUnit } from '@/shared/auth';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import type { SightIn } from '@/shared/sight-in';
 import { scaleSignOf } from '@/shared/sight-in-fit';
 import { tapeOptionsOf, type Tape, type TapeLayout } from '@/shared/tape';

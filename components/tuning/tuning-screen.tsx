@@ -23,7 +23,7 @@ import { TextField } from '@/components/ui/text-field';
 import { Text } from '@/components/ui/text';
 import { colors, radii, space } from '@/components/theme';
 import type { LengthUnit } from '@/shared/auth';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import { paperTuneStartSchema, runOutcomeNames } from '@/shared/paper-tune';
 import { setupMeasureKeys, setupMeasures, setupValueWords, type SetupEntry, type SetupMeasureKey } from '@/shared/setup-measures';
 

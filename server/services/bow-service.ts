@@ -7,15 +7,8 @@
 import { sequelize } from '@/server/db';
 import { ApiError, validationError } from '@/server/errors';
 import { ArrowBuild, Bow, BowChange, SightIn, Tape, User } from '@/server/models';
-import {
-  bowInputSchema,
-  type Bow as BowOut,
-  type BowDetail,
-  type BowInput,
-  type BowReadiness,
-  type BowSummary,
-  type BowUpdate,
-} from '@/shared/bow';
+import { bowInputSchema, type Bow as BowOut, type BowInput, type BowReadiness, type BowSummary, type BowUpdate } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import { buildOut } from './build-service';
 import { sightInListItems } from './sight-in-service';
 import { tapeOut } from './tape-service';

@@ -2,7 +2,8 @@ import request from 'supertest';
 import { Op } from 'sequelize';
 import { CSRF, closeDb, signedInAgent, testApp } from '../helpers/api';
 import { ArrowBuild, Bow, SightInMark, SightIn, Tape, User } from '@/server/models';
-import { bowListResponseSchema, bowDetailSchema } from '@/shared/bow';
+import { bowListResponseSchema } from '@/shared/bow';
+import { bowDetailSchema } from '@/shared/bow-detail';
 import { seedBows, demoBows } from '@/server/seed/bows';
 import { bowBody, bowWithSightIn } from './bow-fixtures';
 

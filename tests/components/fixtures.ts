@@ -1,4 +1,4 @@
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import type { Build } from '@/shared/build';
 
 const stamp = '2026-11-20T09:00:00.000Z';

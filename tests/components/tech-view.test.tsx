@@ -13,7 +13,7 @@ import { SightInScreen } from '@/components/sight-ins/sight-in-screen';
 import { TapeScreen } from '@/components/tapes/tape-screen';
 import { fitSight } from '@/math/fit/fit-sight';
 import type { User } from '@/shared/auth';
-import type { BowDetail } from '@/shared/bow';
+import type { BowDetail } from '@/shared/bow-detail';
 import { storedFitSchema, type SightIn } from '@/shared/sight-in';
 import { storedFitOf } from '@/shared/sight-in-fit';
 
