@@ -19,4 +19,5 @@ module.exports = [
   ['getRoutes.js', './views/Unmatched', 'unmatched.js'],
   ['views/RootUnmatched.js', './Unmatched', 'unmatched.js'],
   ['link/linking.js', '../fork/getStateFromPath', 'route-lookup-memo.js'],
+  ['fork/useLinking.js', './createMemoryHistory', 'same-entry-history.js'],
 ];
