@@ -33,8 +33,40 @@ function routerReactNativeUsed({ types: t }) {
   };
 }
 
+// Also in Metro's web builds only: expo-router's path lookup (fork/getStateFromPath.js, its
+// findInitialRoute) tells whether two route names are the same with
+// `a.localeCompare(b) !== 0`. Both names come from the same route table (the app's file
+// names), so that is an equality test, but a page's first localeCompare sets up the
+// locale's collation (ICU): 13–37 ms in Chromium, unthrottled, inside the render of the
+// first screen, and nothing else on the first screens compares strings by locale.
+// `a.localeCompare(b) !== 0` becomes `a !== b` there (and `=== 0` becomes `===`); a
+// localeCompare used for ordering is left alone. tests/components/router-name-equality.test.tsx
+// compares the lookup before and after on every route of the app.
+const routerLookupFile = /[\\/]node_modules[\\/]expo-router[\\/]build[\\/]fork[\\/]getStateFromPath\.js$/;
+
+function routerNameEquality({ types: t }) {
+  return {
+    name: 'pinwright-router-name-equality',
+    visitor: {
+      BinaryExpression(binaryPath, state) {
+        const caller = state.file.opts.caller;
+        if (!caller || caller.name !== 'metro' || caller.platform !== 'web' || !caller.projectRoot) return;
+        if (!routerLookupFile.test(state.filename || '')) return;
+        const { operator, left, right } = binaryPath.node;
+        if (operator !== '!==' && operator !== '===') return;
+        if (!t.isNumericLiteral(right, { value: 0 }) || !t.isCallExpression(left) || left.arguments.length !== 1) return;
+        const callee = left.callee;
+        if (!t.isMemberExpression(callee) || callee.computed || !t.isIdentifier(callee.property, { name: 'localeCompare' })) return;
+        if (!t.isExpression(left.arguments[0])) return;
+        binaryPath.replaceWith(t.binaryExpression(operator, callee.object, left.arguments[0]));
+      },
+    },
+  };
+}
+
 module.exports = function (api) {
   api.cache(true);
-  return { presets: ['babel-preset-expo'], plugins: [routerReactNativeUsed] };
+  return { presets: ['babel-preset-expo'], plugins: [routerReactNativeUsed, routerNameEquality] };
 };
 module.exports.REACT_NATIVE_USED = REACT_NATIVE_USED;
+module.exports.routerNameEquality = routerNameEquality;
