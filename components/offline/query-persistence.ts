@@ -1,5 +1,5 @@
 import { createAsyncStoragePersister } from '@tanstack/query-async-storage-persister';
-import { persistQueryClientRestore, persistQueryClientSubscribe, type Persister } from '@tanstack/react-query-persist-client';
+import { persistQueryClientRestore, persistQueryClientSave, type Persister } from '@tanstack/react-query-persist-client';
 import type { QueryClient } from '@tanstack/react-query';
 
 import { cacheDb, queriesKey } from '@/components/offline/device-store';
@@ -34,8 +34,8 @@ let current: AccountPersister | null = null;
 function persisterFor(userId: number, isClosed: () => boolean): Persister {
   return createAsyncStoragePersister({
     key: queriesKey(userId),
-    // Short: a page left right after its data arrived should still have it saved.
-    throttleTime: 100,
+    // Saves are already gathered by saveAfterChanges below.
+    throttleTime: 0,
     storage: {
       getItem: async (key) => (await cacheDb.get<string>(key)) ?? null,
       setItem: async (key, value) => {
@@ -46,6 +46,38 @@ function persisterFor(userId: number, isClosed: () => boolean): Persister {
       },
     },
   });
+}
+
+/** How long after a change to the cache it is saved. Short: a page left right after its data arrived should still have it saved. */
+export const saveDelayMs = 100;
+
+/**
+ * Calls `save` once, `delayMs` after the first of a run of changes to the
+ * query or mutation cache (an entry added, removed or updated), and again
+ * after the next change. The persist-client's own subscription
+ * (persistQueryClientSubscribe) copies the whole cache out (`dehydrate`) at
+ * every change, inside the task that made it: on a cold load of the Bench
+ * that was several copies, one of them in the task that receives the bow
+ * list. Here the copy is made once, in a task of its own, of the cache as it
+ * stands by then. Returns the unsubscribe, which also drops a pending save.
+ */
+export function saveAfterChanges(queryClient: QueryClient, save: () => void, delayMs = saveDelayMs): () => void {
+  let timer: ReturnType<typeof setTimeout> | undefined;
+  const changed = (event: { type: string }) => {
+    if (event.type !== 'added' && event.type !== 'removed' && event.type !== 'updated') return;
+    timer ??= setTimeout(() => {
+      timer = undefined;
+      save();
+    }, delayMs);
+  };
+  const unsubscribeQueries = queryClient.getQueryCache().subscribe(changed);
+  const unsubscribeMutations = queryClient.getMutationCache().subscribe(changed);
+  return () => {
+    unsubscribeQueries();
+    unsubscribeMutations();
+    if (timer !== undefined) clearTimeout(timer);
+    timer = undefined;
+  };
 }
 
 /** The account whose cache is being kept, if any. */
@@ -61,11 +93,15 @@ export async function keepCacheFor(queryClient: QueryClient, userId: number) {
     closed: false,
     unsubscribe: () => undefined,
   };
-  entry.unsubscribe = persistQueryClientSubscribe({
-    queryClient,
-    persister: entry.persister,
-    buster,
-    dehydrateOptions: { shouldDehydrateQuery: (query) => query.state.status === 'success' },
+  entry.unsubscribe = saveAfterChanges(queryClient, () => {
+    if (entry.closed) return;
+    // A save that fails (storage full, private mode) leaves the previous copy; the screens go on.
+    persistQueryClientSave({
+      queryClient,
+      persister: entry.persister,
+      buster,
+      dehydrateOptions: { shouldDehydrateQuery: (query) => query.state.status === 'success' },
+    }).catch(() => undefined);
   });
   current = entry;
   await cacheDb.set(accountKey, userId);

@@ -52,7 +52,7 @@ for (const size of [PHONE, DESKTOP]) {
     await page.goto('/account');
     await page.getByTestId('unit-lengthUnit').getByRole('radio', { name: 'Millimetres' }).click();
     await page.getByTestId('units-saved').waitFor();
-    // The device cache is written at most every 500 ms (components/offline/query-persistence.ts); reloading sooner would restore the old units.
+    // The device cache is saved 100 ms after a change (components/offline/query-persistence.ts); reloading sooner would restore the old units.
     await page.waitForTimeout(1200);
     await page.goto('/');
     await page
