@@ -43,8 +43,9 @@ async function run(code: string) {
   }
   const context = vm.createContext({ clock, MessageChannel: Channel, performance: { now: () => clock.t } });
   vm.runInContext(code, context);
+  const ranAtOnce = [...(vm.runInContext('ran', context) as number[])];
   for (let i = 0; i < 50; i++) await new Promise((resolve) => setImmediate(resolve));
-  return { ran: vm.runInContext('ran', context) as number[], posted };
+  return { ran: vm.runInContext('ran', context) as number[], posted, ranAtOnce };
 }
 
 it('finds the ids of the modules a Metro script defines', () => {
@@ -54,13 +55,15 @@ it('finds the ids of the modules a Metro script defines', () => {
 
 it('runs the listed modules in order, a few per task, then the main module last', async () => {
   const plain = await run(bundle([0, 1, 2, 3, 4, 5, 6, 7, 8, 9], 0));
-  expect(plain).toEqual({ ran: [0], posted: [] });
+  expect(plain).toEqual({ ran: [0], posted: [], ranAtOnce: [0] });
 
   const sliced = await run(withSlicedStartUp(bundle([0, 1, 2, 3, 4, 5, 6, 7, 8, 9], 0), [5, 3, 0, 1, 2, 4, 6, 7, 8]));
   expect(sliced.ran).toEqual([5, 3, 1, 2, 4, 6, 7, 8, 0]);
-  // 3 ms a module and SLICE_MS (8) a task: 3 modules, then a message, and so on.
+  // Nothing runs while the script itself is evaluated: the first slice waits for its own task.
+  expect(sliced.ranAtOnce).toEqual([]);
+  // 3 ms a module and SLICE_MS (8) a task: a message, 3 modules, a message, and so on.
   expect(SLICE_MS).toBe(8);
-  expect(sliced.posted).toEqual([9, 18]);
+  expect(sliced.posted).toEqual([0, 9, 18]);
 });
 
 it('goes on past a module that fails early, and leaves it to fail again where the app needs it', async () => {
